@@ -1,0 +1,60 @@
+import 'reflect-metadata';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { authRouter } from './auth/auth.router';
+import { csrfProtection } from './auth/csrf';
+import { passport } from './auth/passport';
+import { sessionMiddleware, type SessionStore } from './auth/session';
+import { config } from './core/config';
+import { AppError } from './core/errors';
+import { errorHandler } from './core/error-handler';
+import { logger } from './core/logger';
+import { healthRouter } from './health/health.router';
+import { usersRouter } from './users/users.router';
+
+export interface AppDeps {
+  sessionStore: SessionStore;
+}
+
+/** Builds the app without listening: tests drive it with supertest, main.ts serves it. */
+export function createApp({ sessionStore }: AppDeps): Express {
+  const c = config();
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', c.TRUST_PROXY ? 1 : false);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': null },
+      },
+      // HSTS on a plain-HTTP loopback address would pin browsers to HTTPS that is not there.
+      strictTransportSecurity: c.publicUrl.startsWith('https:'),
+    }),
+  );
+  if (c.NODE_ENV !== 'test') app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+
+  app.use('/api/health', healthRouter);
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(sessionMiddleware(sessionStore));
+  // CSRF before authentication: a forged request is refused before anyone's session is looked at.
+  api.use(csrfProtection);
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use('/auth', authRouter);
+  api.use('/users', usersRouter);
+  api.use((req, _res, next) => next(new AppError(404, 'not-found', `No API route ${req.method} ${req.path}.`)));
+  app.use('/api', api);
+
+  const staticDir = path.resolve(c.STATIC_DIR);
+  if (existsSync(path.join(staticDir, 'index.html'))) {
+    app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
+    app.get('/*splat', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,22 @@
+import type { EntityManager } from 'typeorm';
+import type { UserListQuery } from '../../shared/schemas/users';
+import { dataSource } from '../db/data-source';
+import { User } from './user.entity';
+
+const sortable = { username: 'u.username', displayName: 'u.displayName', role: 'u.role', createdAt: 'u.createdAt' } as const;
+
+export const usersRepository = {
+  findById: (id: number, manager: EntityManager = dataSource.manager) => manager.findOneBy(User, { id }),
+  findByUsername: (username: string) => dataSource.manager.findOneBy(User, { username }),
+
+  async list(q: UserListQuery): Promise<[User[], number]> {
+    const qb = dataSource.manager.createQueryBuilder(User, 'u');
+    if (q.role) qb.andWhere('u.role = :role', { role: q.role });
+    if (q.active) qb.andWhere('u.active = :active', { active: q.active === 'true' });
+    if (q.q) qb.andWhere('(u.username LIKE :q OR u.displayName LIKE :q)', { q: `%${q.q}%` });
+    const desc = q.sort?.startsWith('-') ?? false;
+    const key = (q.sort?.replace(/^-/, '') ?? 'username') as keyof typeof sortable;
+    qb.orderBy(sortable[key] ?? sortable.username, desc ? 'DESC' : 'ASC').addOrderBy('u.id', 'ASC');
+    return qb.skip((q.page - 1) * q.pageSize).take(q.pageSize).getManyAndCount();
+  },
+};

@@ -1,0 +1,76 @@
+import { z } from 'zod';
+
+export const roles = ['technician', 'supervisor', 'trainer', 'admin'] as const;
+export const roleSchema = z.enum(roles);
+export type Role = (typeof roles)[number];
+
+export const contaminants = [
+  'bacterial',
+  'trichoderma',
+  'penicillium',
+  'aspergillus',
+  'pin-mould',
+  'neurospora',
+  'cobweb',
+  'yeast',
+  'unknown',
+] as const;
+export const contaminantSchema = z.enum(contaminants);
+export type Contaminant = (typeof contaminants)[number];
+
+export const contaminantNames: Record<Contaminant, string> = {
+  bacterial: 'bacterial (wet spot)',
+  trichoderma: 'green mould (Trichoderma)',
+  penicillium: 'Penicillium',
+  aspergillus: 'Aspergillus',
+  'pin-mould': 'pin mould (Rhizopus / Mucor)',
+  neurospora: 'Neurospora',
+  cobweb: 'cobweb mould',
+  yeast: 'yeast',
+  unknown: 'unknown',
+};
+
+export const jarStatuses = ['incubating', 'colonised', 'contaminated', 'on-hold', 'discarded', 'released'] as const;
+export const jarStatusSchema = z.enum(jarStatuses);
+export type JarStatus = (typeof jarStatuses)[number];
+
+export const cultureStates = ['quarantined', 'released', 'retired'] as const;
+export const cultureStateSchema = z.enum(cultureStates);
+export type CultureState = (typeof cultureStates)[number];
+
+export const workspaces = ['still-air-box', 'flow-hood', 'open-bench'] as const;
+export const workspaceSchema = z.enum(workspaces);
+export type Workspace = (typeof workspaces)[number];
+
+export const incidentStatuses = ['open', 'in-review', 'closed'] as const;
+export const incidentStatusSchema = z.enum(incidentStatuses);
+export type IncidentStatus = (typeof incidentStatuses)[number];
+
+export const verdicts = ['pending', 'confirmed', 'ruled-out'] as const;
+export const verdictSchema = z.enum(verdicts);
+export type Verdict = (typeof verdicts)[number];
+
+export const stagesFound = ['incubation', 'after-shaking', 'grow-room', 'customer'] as const;
+export const stageFoundSchema = z.enum(stagesFound);
+export type StageFound = (typeof stagesFound)[number];
+
+/** The six Ms of the Ishikawa diagram (Ishikawa, Guide to Quality Control, 1968/1986). */
+export const causeCategories = ['people', 'machine', 'method', 'material', 'measurement', 'environment'] as const;
+export const causeCategorySchema = z.enum(causeCategories);
+export type CauseCategory = (typeof causeCategories)[number];
+
+/** Factor order is part of the causes sort contract (DESIGN.md §5). */
+export const factors = [
+  'grain',
+  'cookRun',
+  'cookMinutes',
+  'session',
+  'operator',
+  'culture',
+  'week',
+  'prepBatch',
+  'workspace',
+  'room',
+] as const;
+export const factorSchema = z.enum(factors);
+export type Factor = (typeof factors)[number];

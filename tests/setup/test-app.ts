@@ -1,0 +1,26 @@
+import type { Express } from 'express';
+import supertest from 'supertest';
+import { afterAll } from 'vitest';
+import { createApp } from '../../server/app';
+import { createSessionStore } from '../../server/auth/session';
+
+/** The real app over the worker's MariaDB; the session store is closed when the file ends. */
+export function createTestApp(): Express {
+  const store = createSessionStore();
+  afterAll(() => store.close());
+  return createApp({ sessionStore: store });
+}
+
+export type Agent = ReturnType<typeof supertest.agent>;
+
+/** A cookie-keeping client that carries a fresh CSRF token on every state-changing call. */
+export async function csrfAgent(app: Express): Promise<{ agent: Agent; token: () => string; refresh: () => Promise<void> }> {
+  const agent = supertest.agent(app);
+  let token = '';
+  const refresh = async () => {
+    const res = await agent.get('/api/auth/csrf').expect(200);
+    token = (res.body as { token: string }).token;
+  };
+  await refresh();
+  return { agent, token: () => token, refresh };
+}
