@@ -1,7 +1,58 @@
 import { AuditEvent } from '../audit/audit-event.entity';
 import { LoginFailure } from '../auth/login-failure.entity';
 import { SessionRecord } from '../auth/session-record.entity';
+import { CookRunReading } from '../cook-runs/cook-run-reading.entity';
+import { CookRun } from '../cook-runs/cook-run.entity';
+import { AgarTest } from '../cultures/agar-test.entity';
+import { Culture } from '../cultures/culture.entity';
+import { GrainLot } from '../grain/grain-lot.entity';
+import { Grain } from '../grain/grain.entity';
+import { PrepBatch } from '../grain/prep-batch.entity';
+import { CorrectiveAction } from '../incidents/corrective-action.entity';
+import { IncidentJar } from '../incidents/incident-jar.entity';
+import { IncidentPhoto } from '../incidents/incident-photo.entity';
+import { Incident } from '../incidents/incident.entity';
+import { JarEvent } from '../jars/jar-event.entity';
+import { Jar } from '../jars/jar.entity';
+import { Photo } from '../photos/photo.entity';
+import { IncidentStepLink } from '../procedures/incident-step-link.entity';
+import { ProcedureStep } from '../procedures/procedure-step.entity';
+import { ProcedureVersion } from '../procedures/procedure-version.entity';
+import { Procedure } from '../procedures/procedure.entity';
+import { InoculationSession } from '../sessions/inoculation-session.entity';
+import { SessionStepCheck } from '../sessions/session-step-check.entity';
+import { LabSettings } from '../settings/lab-settings.entity';
+import { RetrainingRequest } from '../training/retraining-request.entity';
+import { TrainingRecord } from '../training/training-record.entity';
 import { User } from '../users/user.entity';
 
 /** Listed as classes, not globs: Vitest and tsx both load them the same way. */
-export const entities = [User, SessionRecord, LoginFailure, AuditEvent];
+export const entities = [
+  User,
+  SessionRecord,
+  LoginFailure,
+  AuditEvent,
+  LabSettings,
+  Grain,
+  GrainLot,
+  PrepBatch,
+  CookRun,
+  CookRunReading,
+  Culture,
+  AgarTest,
+  InoculationSession,
+  SessionStepCheck,
+  Jar,
+  JarEvent,
+  Photo,
+  Incident,
+  IncidentJar,
+  IncidentPhoto,
+  CorrectiveAction,
+  Procedure,
+  ProcedureVersion,
+  ProcedureStep,
+  IncidentStepLink,
+  TrainingRecord,
+  RetrainingRequest,
+];

@@ -1,0 +1,59 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity({ name: 'cook_runs' })
+export class CookRun {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'varchar', length: 40, unique: true })
+  code: string;
+
+  @Column({ type: 'varchar', length: 80, nullable: true })
+  vessel: string | null;
+
+  @Column({ type: 'datetime', nullable: true })
+  startedAt: Date | null;
+
+  /** Local date of the run, for listing and filtering. */
+  @Index()
+  @Column({ type: 'date', nullable: true })
+  cookedOn: string | null;
+
+  @Column({ type: 'int' })
+  minutesAtPressure: number;
+
+  @Column({ type: 'double', nullable: true })
+  gaugeKPa: number | null;
+
+  @Column({ type: 'int', nullable: true })
+  ventingMinutes: number | null;
+
+  @Column({ type: 'int', default: 0 })
+  altitudeM: number;
+
+  /** 1 L jar, 2 L jar, 3 kg bag…: minutes at pressure mean nothing without it. */
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  container: string | null;
+
+  @Column({ type: 'int', nullable: true })
+  loadCount: number | null;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  operatorId: number | null;
+
+  @Column({ type: 'varchar', length: 120, nullable: true })
+  operatorName: string | null;
+
+  /** F0 in minutes, from the temperature log when there is one, else the upper-bound estimate. */
+  @Column({ type: 'double', nullable: true })
+  f0: number | null;
+
+  @Column({ type: 'enum', enum: ['log', 'estimate'], nullable: true })
+  f0Source: 'log' | 'estimate' | null;
+
+  @Column({ type: 'text', nullable: true })
+  notes: string | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  createdAt: Date;
+}

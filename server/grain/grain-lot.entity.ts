@@ -1,0 +1,23 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity({ name: 'grain_lots' })
+@Index(['grainId', 'supplierLotCode'], { unique: true })
+export class GrainLot {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @Column({ type: 'varchar', length: 80 })
+  supplierLotCode: string;
+
+  @Column({ type: 'date' })
+  receivedOn: string;
+
+  @Column({ type: 'text', nullable: true })
+  notes: string | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  createdAt: Date;
+}

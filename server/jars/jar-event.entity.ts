@@ -1,0 +1,57 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+export const jarEventTypes = ['check', 'shaken', 'moved', 'released', 'hold', 'discarded', 'status'] as const;
+export type JarEventType = (typeof jarEventTypes)[number];
+
+/** A jar's life after inoculation; a 'check' carries the colonisation percent. */
+@Entity({ name: 'jar_events' })
+@Index(['jarId', 'at'])
+export class JarEvent {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'int', unsigned: true })
+  jarId: number;
+
+  @Column({ type: 'enum', enum: jarEventTypes })
+  type: JarEventType;
+
+  @Column({ type: 'datetime' })
+  at: Date;
+
+  @Column({ type: 'date' })
+  onDate: string;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  byUserId: number | null;
+
+  @Column({ type: 'varchar', length: 120 })
+  byName: string;
+
+  @Column({ type: 'int', nullable: true })
+  percentColonised: number | null;
+
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  room: string | null;
+
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  shelf: string | null;
+
+  @Column({ type: 'enum', enum: ['grow-room', 'customer'], nullable: true })
+  releasedTo: 'grow-room' | 'customer' | null;
+
+  @Column({ type: 'varchar', length: 120, nullable: true })
+  releasedToWho: string | null;
+
+  @Column({ type: 'varchar', length: 20, nullable: true })
+  newStatus: string | null;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  photoId: number | null;
+
+  @Column({ type: 'text', nullable: true })
+  note: string | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  createdAt: Date;
+}

@@ -1,0 +1,74 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { jarStatuses, type JarStatus } from '../../shared/enums';
+
+@Entity({ name: 'jars' })
+@Index(['room', 'shelf'])
+export class Jar {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'varchar', length: 40, unique: true })
+  label: string;
+
+  /** Kept beside prepBatchId because imported history names the grain but no batch. */
+  @Index()
+  @Column({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @Index()
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  prepBatchId: number | null;
+
+  @Index()
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  cookRunId: number | null;
+
+  @Index()
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  sessionId: number | null;
+
+  /** Inoculum: a culture or a parent jar (grain-to-grain), never both. */
+  @Index()
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  cultureId: number | null;
+
+  @Index()
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  parentJarId: number | null;
+
+  @Column({ type: 'double', nullable: true })
+  inoculumMl: number | null;
+
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  room: string | null;
+
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  shelf: string | null;
+
+  @Column({ type: 'int', nullable: true })
+  shelfPosition: number | null;
+
+  @Index()
+  @Column({ type: 'enum', enum: jarStatuses, default: 'incubating' })
+  status: JarStatus;
+
+  @Column({ type: 'datetime' })
+  inoculatedAt: Date;
+
+  /** Local date in the lab's time zone: analysis periods and ISO weeks group on it. */
+  @Index()
+  @Column({ type: 'date' })
+  inoculatedOn: string;
+
+  @Column({ type: 'date', nullable: true })
+  colonisedOn: string | null;
+
+  @Column({ type: 'date', nullable: true })
+  endedOn: string | null;
+
+  @Column({ type: 'boolean', default: false })
+  imported: boolean;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  createdAt: Date;
+}

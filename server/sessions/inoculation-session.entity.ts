@@ -1,0 +1,39 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { workspaces, type Workspace } from '../../shared/enums';
+
+/** Table name avoids `sessions`, which holds sign-in sessions. */
+@Entity({ name: 'inoculation_sessions' })
+export class InoculationSession {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'varchar', length: 40, unique: true })
+  code: string;
+
+  /** Local date; imported history has no time of day. */
+  @Index()
+  @Column({ type: 'date' })
+  heldOn: string;
+
+  @Column({ type: 'datetime', nullable: true })
+  startedAt: Date | null;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  operatorId: number | null;
+
+  /** The user's name, or a staff name kept from imported history. */
+  @Column({ type: 'varchar', length: 120, nullable: true })
+  operatorName: string | null;
+
+  @Column({ type: 'enum', enum: workspaces, nullable: true })
+  workspace: Workspace | null;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  procedureVersionId: number | null;
+
+  @Column({ type: 'text', nullable: true })
+  notes: string | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  createdAt: Date;
+}

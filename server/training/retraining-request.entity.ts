@@ -1,0 +1,25 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+@Entity({ name: 'retraining_requests' })
+export class RetrainingRequest {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'int', unsigned: true })
+  userId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  procedureVersionId: number;
+
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  requestedById: number | null;
+
+  @Column({ type: 'text', nullable: true })
+  reason: string | null;
+
+  @Column({ type: 'datetime', nullable: true })
+  doneAt: Date | null;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  createdAt: Date;
+}

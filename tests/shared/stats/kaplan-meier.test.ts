@@ -1,0 +1,56 @@
+import { describe, it, expect } from 'vitest';
+import { kaplanMeier } from '../../../shared/stats/kaplan-meier';
+
+describe('kaplanMeier', () => {
+  // 6-MP arm of Freireich E.J. et al. (1963) as tabulated by Gehan E.A. (1965), Biometrika 52:203–223
+  // [data and page numbers from memory]; survival values as listed in TRADE.md §4. A trailing + means censored.
+  const raw = '6 6 6 6+ 7 9+ 10 10+ 11+ 13 16 17+ 19+ 20+ 22 23 25+ 32+ 32+ 34+ 35+'.split(' ');
+  const times = raw.map((t) => Number.parseInt(t, 10));
+  const events = raw.map((t) => !t.endsWith('+'));
+
+  it('reproduces the 6-MP survival curve and median 23', () => {
+    const { steps, median } = kaplanMeier(times, events);
+    const at = (t: number) => steps.find((s) => s.time === t)?.survival;
+    expect(at(6)).toBeCloseTo(0.8571, 4);
+    expect(at(7)).toBeCloseTo(0.8067, 4);
+    expect(at(10)).toBeCloseTo(0.7529, 4);
+    expect(at(13)).toBeCloseTo(0.6902, 4);
+    expect(at(16)).toBeCloseTo(0.6275, 4);
+    expect(at(22)).toBeCloseTo(0.5378, 4);
+    expect(at(23)).toBeCloseTo(0.4482, 4);
+    expect(median).toBe(23);
+  });
+
+  it('counts events before censorings at a tied time and keeps censor-only times as flat steps', () => {
+    const { steps } = kaplanMeier(times, events);
+    expect(steps[0]).toMatchObject({ time: 6, atRisk: 21, events: 3, censored: 1 });
+    expect(steps[0]?.survival).toBeCloseTo(18 / 21, 14);
+    const ten = steps.find((s) => s.time === 10);
+    expect(ten).toMatchObject({ atRisk: 15, events: 1, censored: 1 });
+    const nine = steps.find((s) => s.time === 9);
+    expect(nine).toMatchObject({ events: 0, censored: 1, survival: steps[1]?.survival });
+    expect(steps).toHaveLength(new Set(times).size);
+  });
+
+  it('takes the first time at which survival reaches exactly one half', () => {
+    expect(kaplanMeier([1, 2, 3, 4], [true, true, true, true]).median).toBe(2);
+    // 0.8 · 2/3 = 0.533 at 3 is still above one half; 0.267 at 4 is the first below.
+    expect(kaplanMeier([1, 2, 3, 4, 5], [true, false, true, true, true]).median).toBe(4);
+  });
+
+  it('gives no median when the curve stays above one half, and copes with empty input', () => {
+    expect(kaplanMeier([3, 5, 8], [true, false, false]).median).toBeNull();
+    expect(kaplanMeier([], [])).toEqual({ steps: [], median: null });
+  });
+
+  it('drops to 0 when the last jar at risk has the event', () => {
+    const { steps, median } = kaplanMeier([2, 4], [false, true]);
+    expect(steps[1]?.survival).toBe(0);
+    expect(median).toBe(4);
+  });
+
+  it('rejects mismatched lengths and non-finite times', () => {
+    expect(() => kaplanMeier([1, 2], [true])).toThrow(RangeError);
+    expect(() => kaplanMeier([Number.NaN], [true])).toThrow(RangeError);
+  });
+});
