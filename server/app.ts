@@ -53,7 +53,7 @@ export function createApp({ sessionStore }: AppDeps): Express {
   const staticDir = path.resolve(c.STATIC_DIR);
   if (existsSync(path.join(staticDir, 'index.html'))) {
     app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
-    app.get('/*splat', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
   }
   app.use(errorHandler);
   return app;

@@ -1,0 +1,59 @@
+import { useId } from 'react';
+import { pageSizes, type TableState } from '../../../lib/list-params';
+import { Button } from '../button';
+import { controlClasses } from '../field';
+
+interface PagerProps extends Omit<TableState, 'sort'> {
+  total: number;
+  onChange: (patch: Partial<TableState>) => void;
+}
+
+export function Pager({ page, pageSize, total, onChange }: PagerProps) {
+  const sizeId = useId();
+  const pageCount = Math.max(1, Math.ceil(total / pageSize));
+  const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
+  const last = Math.min(page * pageSize, total);
+
+  return (
+    <div className="no-print flex flex-col gap-3 border-t border-line px-4 py-3 sm:flex-row sm:items-center sm:justify-between">
+      <p aria-live="polite" className="text-muted">
+        {total === 0 ? 'No rows' : `Showing ${first}–${last} of ${total}`}
+      </p>
+      <div className="flex flex-wrap items-center gap-3">
+        <div className="flex items-center gap-2">
+          <label htmlFor={sizeId} className="whitespace-nowrap text-muted">
+            Rows per page
+          </label>
+          <select
+            id={sizeId}
+            value={pageSize}
+            onChange={(event) => onChange({ pageSize: Number(event.target.value), page: 1 })}
+            className={`${controlClasses} w-auto cursor-pointer`}
+          >
+            {pageSizes.map((size) => (
+              <option key={size} value={size}>
+                {size}
+              </option>
+            ))}
+          </select>
+        </div>
+        <div className="flex items-center gap-2">
+          <Button variant="secondary" icon="chevron-left" disabled={page <= 1} onClick={() => onChange({ page: page - 1 })}>
+            <span className="sr-only">Previous page</span>
+          </Button>
+          <span className="min-w-20 text-center tabular-nums">
+            Page {Math.min(page, pageCount)} of {pageCount}
+          </span>
+          <Button
+            variant="secondary"
+            icon="chevron-right"
+            disabled={page >= pageCount}
+            onClick={() => onChange({ page: page + 1 })}
+          >
+            <span className="sr-only">Next page</span>
+          </Button>
+        </div>
+      </div>
+    </div>
+  );
+}

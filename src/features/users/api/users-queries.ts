@@ -1,0 +1,40 @@
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { roleSchema, type Role } from '../../../../shared/enums';
+import { pageOf } from '../../../../shared/schemas/common';
+import { userSchema } from '../../../../shared/schemas/users';
+import { api } from '../../../lib/api-client';
+import { readTableState, type TableState } from '../../../lib/list-params';
+
+export const userSortFields = ['username', 'displayName', 'role', 'createdAt'] as const;
+
+export interface UserFilters extends TableState {
+  role: Role | undefined;
+  active: 'true' | 'false' | undefined;
+  q: string | undefined;
+}
+
+/** The URL is the source of truth for the list; anything unreadable falls back to "no filter". */
+export function readUserFilters(params: URLSearchParams): UserFilters {
+  const role = roleSchema.safeParse(params.get('role'));
+  const active = params.get('active');
+  const q = params.get('q')?.trim();
+  return {
+    ...readTableState(params, userSortFields),
+    role: role.success ? role.data : undefined,
+    active: active === 'true' || active === 'false' ? active : undefined,
+    q: q ? q.slice(0, 64) : undefined,
+  };
+}
+
+const userPageSchema = pageOf(userSchema);
+
+export const usersQueries = {
+  all: ['users'] as const,
+  lists: () => [...usersQueries.all, 'list'] as const,
+  list: (filters: UserFilters) =>
+    queryOptions({
+      queryKey: [...usersQueries.lists(), filters] as const,
+      queryFn: ({ signal }) => api.get('/users', { query: { ...filters }, signal, schema: userPageSchema }),
+      placeholderData: keepPreviousData,
+    }),
+};
