@@ -1,9 +1,16 @@
 import type { Response } from 'express';
 
 /** RFC 4180 quoting; a leading =, +, - or @ is prefixed so spreadsheets do not run it as a formula. */
+function text(value: unknown): string {
+  if (value instanceof Date) return value.toISOString();
+  if (typeof value === 'string') return value;
+  if (typeof value === 'number' || typeof value === 'boolean' || typeof value === 'bigint') return value.toString();
+  return JSON.stringify(value) ?? '';
+}
+
 export function csvCell(value: unknown): string {
   if (value === null || value === undefined) return '';
-  let s = value instanceof Date ? value.toISOString() : String(value);
+  let s = text(value);
   if (/^[=+\-@]/.test(s) && !/^-?\d+(\.\d+)?$/.test(s)) s = `'${s}`;
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
