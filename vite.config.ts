@@ -22,8 +22,8 @@ export default defineConfig({
         test: {
           name: 'api',
           include: ['tests/server/**/*.test.ts'],
-          globalSetup: ['tests/setup/global-db.ts'],
-          setupFiles: ['tests/setup/worker-db.ts'],
+          globalSetup: ['tests/setup/global-db.ts', 'tests/setup/global-mail.ts'],
+          setupFiles: ['tests/setup/worker-mail.ts', 'tests/setup/worker-db.ts'],
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },
@@ -33,7 +33,7 @@ export default defineConfig({
         test: {
           name: 'e2e',
           include: ['tests/e2e/**/*.e2e.ts'],
-          globalSetup: ['tests/setup/global-db.ts', 'tests/setup/global-e2e.ts'],
+          globalSetup: ['tests/setup/global-db.ts', 'tests/setup/global-mail.ts', 'tests/setup/global-e2e.ts'],
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,

@@ -4,16 +4,19 @@ import { dataSource } from '../server/db/data-source';
 import { startServer } from '../server/main';
 import { loadDemoLab } from '../seed/demo-lab';
 import { startLocalDb } from './local-db';
+import { startLocalMailFake } from './local-mail';
 
 // npm start: the lab's own MariaDB → migrations → demo lab → app; Ctrl-C or SIGTERM stops all of it.
 const c = config();
 const db = await startLocalDb();
+const mail = await startLocalMailFake();
 let stopping = false;
 async function stop(code: number) {
   if (stopping) return;
   stopping = true;
   console.log('Stopping Asepta…');
   await running?.close().catch((e: unknown) => console.error(e));
+  await mail?.stop();
   await db.stop();
   console.log('Stopped.');
   process.exit(code);

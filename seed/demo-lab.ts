@@ -1,8 +1,16 @@
 import type { Actor } from '../server/audit/audit.service';
+import { config } from '../server/core/config';
+import { localDate } from '../server/core/local-time';
 import { dataSource } from '../server/db/data-source';
+import { importHistory } from '../server/imports/imports.service';
+import { Jar } from '../server/jars/jar.entity';
 import { User } from '../server/users/user.entity';
 import { createUser } from '../server/users/users.service';
+import { addPlanDetails } from './demo-details';
+import { planDemoHistory, planToCsv } from './demo-history';
+import { loadOpenIncidents } from './demo-incidents';
 import { demoAccounts, demoPassword } from './demo-people';
+import { loadDemoProcedures } from './demo-procedures';
 
 const seeder: Actor = { id: null, displayName: 'demo loader' };
 
@@ -14,5 +22,31 @@ export async function loadDemoLab(log: (line: string) => void = console.log): Pr
     await createUser(seeder, { ...account, password: demoPassword });
     created += 1;
   }
-  log(created ? `Demo lab: created ${created} accounts` : 'Demo lab: already loaded');
+  log(created ? `Demo lab: created ${created} accounts` : 'Demo lab: accounts present');
+  await loadDemoProcedures(log);
+  await loadDemoProduction(log);
+}
+
+/** Ten weeks of production ending today, imported as a lab would import its history; skipped once jars exist. */
+async function loadDemoProduction(log: (line: string) => void): Promise<void> {
+  if (await dataSource.manager.exists(Jar)) {
+    log('Demo lab: production already loaded');
+    return;
+  }
+  const timeZone = config().LAB_TIME_ZONE;
+  const today = localDate(new Date(), timeZone);
+  const plan = planDemoHistory(today);
+  const supervisor = await dataSource.manager.findOneBy(User, { username: 'supervisor' });
+  const actor: Actor = supervisor ? { id: supervisor.id, displayName: supervisor.displayName } : seeder;
+  const imported = await dataSource.transaction(async (m) => {
+    const outcome = await importHistory(actor, Buffer.from(planToCsv(plan)), m);
+    if (!outcome.ok) {
+      const first = outcome.errors.slice(0, 5).map((e) => `line ${e.line} ${e.column}: ${e.message}`);
+      throw new Error(`The demo history did not import:\n${first.join('\n')}`);
+    }
+    await addPlanDetails(m, plan, timeZone, today);
+    return outcome.result.imported;
+  });
+  log(`Demo lab: imported ${imported.jars} jars and ${imported.incidents} closed incidents`);
+  await loadOpenIncidents(plan, today, timeZone, log);
 }

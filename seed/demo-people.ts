@@ -9,3 +9,12 @@ export const demoAccounts: { username: string; displayName: string; role: Role; 
   { username: 'trainer', displayName: 'Maren Holloway', role: 'trainer', email: 'trainer@demo-lab.invalid' },
   { username: 'admin', displayName: 'Desmond Quarrie', role: 'admin', email: 'admin@demo-lab.invalid' },
 ];
+
+/** Who inoculates in the demo lab: the two demo users by display name, and staff without an account. */
+export const demoOperators = {
+  technician: 'Tamsin Oakridge',
+  supervisor: 'Ilario Penwick',
+  staff: ['Noor Halvey', 'Bexley Strand'],
+  /** A relief technician, behind the sloppy week (seed/planted-problems.ts). */
+  relief: 'Ferris Quell',
+} as const;

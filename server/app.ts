@@ -12,8 +12,23 @@ import { config } from './core/config';
 import { AppError } from './core/errors';
 import { errorHandler } from './core/error-handler';
 import { logger } from './core/logger';
+import { cookRunsRouter } from './cook-runs/cook-runs.router';
+import { culturesRouter } from './cultures/cultures.router';
+import { grainLotsRouter, grainsRouter, prepBatchesRouter } from './grain/grain.router';
+import { sessionsRouter } from './sessions/sessions.router';
 import { healthRouter } from './health/health.router';
+import { importsRouter } from './imports/imports.router';
+import { jarsRouter } from './jars/jars.router';
+import { lineageRouter } from './lineage/lineage.router';
+import { mailRouter } from './mail/mail.router';
+import { proceduresRouter } from './procedures/procedures.router';
+import { trainingRouter } from './training/training.router';
 import { usersRouter } from './users/users.router';
+import { incidentsRouter } from './incidents/incidents.router';
+import { correctiveActionsRouter } from './incidents/corrective-actions.router';
+import { photosRouter } from './photos/photos.router';
+import { analysisRouter } from './analysis/analysis.router';
+import { settingsRouter } from './settings/settings.router';
 
 export interface AppDeps {
   sessionStore: SessionStore;
@@ -47,6 +62,23 @@ export function createApp({ sessionStore }: AppDeps): Express {
   api.use(passport.session());
   api.use('/auth', authRouter);
   api.use('/users', usersRouter);
+  api.use('/grains', grainsRouter);
+  api.use('/grain-lots', grainLotsRouter);
+  api.use('/prep-batches', prepBatchesRouter);
+  api.use('/cook-runs', cookRunsRouter);
+  api.use('/cultures', culturesRouter);
+  api.use('/sessions', sessionsRouter);
+  api.use('/analysis', analysisRouter);
+  api.use('/settings', settingsRouter);
+  api.use('/jars', jarsRouter);
+  api.use('/lineage', lineageRouter);
+  api.use('/incidents', incidentsRouter);
+  api.use('/corrective-actions', correctiveActionsRouter);
+  api.use('/photos', photosRouter);
+  api.use('/imports', importsRouter);
+  api.use(proceduresRouter);
+  api.use(trainingRouter);
+  api.use('/mail', mailRouter);
   api.use((req, _res, next) => next(new AppError(404, 'not-found', `No API route ${req.method} ${req.path}.`)));
   app.use('/api', api);
 

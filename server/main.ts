@@ -5,6 +5,9 @@ import { createSessionStore } from './auth/session';
 import { config } from './core/config';
 import { logger } from './core/logger';
 import { dataSource } from './db/data-source';
+import { startDigestScheduler } from './mail/digest-scheduler';
+import { registerMailListeners } from './mail/mail-listeners';
+import { closeMailTransport } from './mail/mail-transport';
 
 export interface RunningServer {
   url: string;
@@ -12,12 +15,14 @@ export interface RunningServer {
 }
 
 /** Config → DataSource → migrations → app → listen; close() undoes it in reverse. */
-export async function startServer(options: { migrate?: boolean } = {}): Promise<RunningServer> {
+export async function startServer(options: { migrate?: boolean; digest?: boolean } = {}): Promise<RunningServer> {
   const c = config();
   if (!dataSource.isInitialized) await dataSource.initialize();
   if (options.migrate ?? true) await dataSource.runMigrations({ transaction: 'each' });
   const sessionStore = createSessionStore();
   const app = createApp({ sessionStore });
+  const stopMailListeners = registerMailListeners();
+  const digest = (options.digest ?? c.NODE_ENV !== 'test') ? startDigestScheduler() : undefined;
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(c.PORT, c.HOST, () => resolve(s)).once('error', reject);
   });
@@ -31,6 +36,9 @@ export async function startServer(options: { migrate?: boolean } = {}): Promise<
       const closed = new Promise<void>((resolve) => server.close(() => resolve()));
       server.closeAllConnections();
       await closed;
+      digest?.stop();
+      stopMailListeners();
+      closeMailTransport();
       await sessionStore.close();
       if (dataSource.isInitialized) await dataSource.destroy();
     },

@@ -14,6 +14,10 @@ import { IncidentPhoto } from '../incidents/incident-photo.entity';
 import { Incident } from '../incidents/incident.entity';
 import { JarEvent } from '../jars/jar-event.entity';
 import { Jar } from '../jars/jar.entity';
+import { ClusterAlert } from '../mail/cluster-alert.entity';
+import { DigestRun } from '../mail/digest-run.entity';
+import { MailPreference } from '../mail/mail-preference.entity';
+import { SentMail } from '../mail/sent-mail.entity';
 import { Photo } from '../photos/photo.entity';
 import { IncidentStepLink } from '../procedures/incident-step-link.entity';
 import { ProcedureStep } from '../procedures/procedure-step.entity';
@@ -55,4 +59,8 @@ export const entities = [
   IncidentStepLink,
   TrainingRecord,
   RetrainingRequest,
+  SentMail,
+  MailPreference,
+  ClusterAlert,
+  DigestRun,
 ];

@@ -1,4 +1,6 @@
 import type { EntityManager } from 'typeorm';
+import type { LabSettingsDto, UpdateLabSettingsInput } from '../../shared/schemas/settings';
+import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
 import { dataSource } from '../db/data-source';
 import { LabSettings } from './lab-settings.entity';
 
@@ -7,4 +9,31 @@ export async function getLabSettings(manager: EntityManager = dataSource.manager
   const row = await manager.findOneBy(LabSettings, { id: 1 });
   if (!row) throw new Error('lab_settings row 1 is missing: run the migrations');
   return row;
+}
+
+export const toLabSettingsDto = (s: LabSettings): LabSettingsDto => ({
+  cookBucketEdges: s.cookBucketEdges,
+  lethalityTarget: s.lethalityTarget,
+  observationWindowDays: s.observationWindowDays,
+  clusterIncidents: s.clusterIncidents,
+  clusterDays: s.clusterDays,
+  updatedAt: s.updatedAt.toISOString(),
+});
+
+export async function readLabSettings(): Promise<LabSettingsDto> {
+  return toLabSettingsDto(await getLabSettings());
+}
+
+export async function updateLabSettings(actor: Actor, input: UpdateLabSettingsInput): Promise<LabSettingsDto> {
+  return dataSource.transaction(async (m) => {
+    // Locked so two admins saving at once cannot interleave their audit trails.
+    const row = await m.findOne(LabSettings, { where: { id: 1 }, lock: { mode: 'pessimistic_write' } });
+    if (!row) throw new Error('lab_settings row 1 is missing: run the migrations');
+    const entries = diffEntries({ action: 'update', recordType: 'lab-settings', recordId: 1 }, row, input);
+    if (entries.length === 0) return toLabSettingsDto(row);
+    Object.assign(row, input);
+    await m.save(row);
+    await recordAudit(m, actor, entries);
+    return toLabSettingsDto(await getLabSettings(m));
+  });
 }

@@ -1,7 +1,7 @@
 import type { Role } from '../../shared/enums';
 import type { IconName } from '../components/ui/icon';
 import { paths } from './paths';
-import { access } from './roles';
+import { access, allRoles, productionRoles } from './roles';
 
 export interface NavItem {
   /** Stable key, also used for test ids. */
@@ -20,12 +20,134 @@ export interface NavItem {
 export const navigation: NavItem[] = [
   { id: 'home', label: 'Home', to: paths.home.to(), roles: access.home, icon: 'home', end: true },
   {
+    id: 'weekly-table',
+    label: 'This week',
+    to: paths.analysisWeekly.to(),
+    roles: access.weeklyTable,
+    icon: 'check',
+    description: 'The last twelve ISO weeks: jars, contamination and the p-chart, per grain and overall.',
+  },
+  {
+    id: 'analysis',
+    label: 'Analysis',
+    to: paths.analysisCauses.to(),
+    roles: access.analysis,
+    icon: 'search',
+    description: 'Likely causes, rates, cross-tables, colonisation time and cook lethality.',
+  },
+  {
     id: 'users',
     label: 'Users',
     to: paths.users.to(),
     roles: access.users,
     icon: 'users',
     description: 'Create accounts, change roles and deactivate people who have left.',
+  },
+  {
+    id: 'cook-runs',
+    label: 'Cook runs',
+    to: paths.cookRuns.to(),
+    roles: access.cookRuns,
+    description: 'Sterilisation cycles, temperature logs and each run’s lethality (F0).',
+  },
+  {
+    id: 'cultures',
+    label: 'Cultures',
+    to: paths.cultures.to(),
+    roles: access.cultures,
+    description: 'Syringes and liquid cultures: quarantine, release, agar tests.',
+  },
+  {
+    id: 'sessions',
+    label: 'Sessions',
+    to: paths.sessions.to(),
+    roles: access.sessions,
+    description: 'Inoculation sessions: who, where, and the checklist they followed.',
+  },
+  {
+    id: 'grain',
+    label: 'Grain',
+    to: paths.grain.to(),
+    roles: access.grain,
+    description: 'Grain lots as received and the prep batches soaked and simmered from them.',
+  },
+  {
+    id: 'jars',
+    label: 'Jars',
+    to: paths.jars.to(),
+    roles: allRoles,
+    description: 'Every jar with its status, place and story; labels, lineage and holds.',
+  },
+  {
+    id: 'shelf-walk',
+    label: 'Shelf walk',
+    to: paths.shelfWalk.to(),
+    roles: productionRoles.write,
+    description: 'Go along a shelf and mark each jar clean, colonised or shaken with one tap.',
+  },
+  {
+    id: 'flag-jar',
+    label: 'Flag a jar',
+    to: paths.flagJar.to(),
+    roles: access.flagJar,
+    icon: 'alert',
+    description: 'A jar has turned: record it with a photo in under half a minute.',
+  },
+  {
+    id: 'incidents',
+    label: 'Incidents',
+    to: paths.incidents.to(),
+    roles: access.incidents,
+    icon: 'inbox',
+    description: 'The incident register: review, verdicts, corrective actions and history.',
+    end: true,
+  },
+  {
+    id: 'history-import',
+    label: 'History import',
+    to: paths.historyImport.to(),
+    roles: access.historyImport,
+    description: 'Bring past production in from a spreadsheet: jars, cook runs, sessions, cultures and outcomes.',
+  },
+  {
+    id: 'procedures',
+    label: 'Procedures',
+    to: paths.procedures.to(),
+    roles: access.procedures,
+    icon: 'check',
+    description: 'The lab’s written methods, step by step, with the incidents linked to each step.',
+  },
+  {
+    id: 'training',
+    label: 'Training',
+    to: paths.training.to(),
+    roles: access.training,
+    icon: 'users',
+    description: 'Who is trained on the current version, their incidents, and retraining requests.',
+  },
+  {
+    id: 'sent-mail',
+    label: 'Sent mail',
+    to: paths.sentMail.to(),
+    roles: access.sentMail,
+    icon: 'inbox',
+    description: 'Every e-mail Asepta sent, and the weekly digest on demand.',
+  },
+  {
+    id: 'mail',
+    label: 'Mail',
+    to: paths.mailPreferences.to(),
+    roles: access.mailPreferences,
+    icon: 'info',
+    description: 'Choose which e-mails you get.',
+  },
+  {
+    id: 'lab-settings',
+    label: 'Lab settings',
+    to: paths.labSettings.to(),
+    roles: access.labSettings,
+    icon: 'info',
+    description: 'Cook-duration buckets, the lethality target, the observation window and alert thresholds.',
   },
   {
     id: 'account',

@@ -22,6 +22,27 @@ export const roleSummaries: Record<Role, string> = {
 /** Which roles may open each screen; navigation and route guards read the same list. */
 export const access = {
   home: allRoles,
+  analysis: allRoles,
+  weeklyTable: ['supervisor'],
+  labSettings: ['admin'],
   account: allRoles,
   users: ['admin'],
+  historyImport: ['supervisor', 'admin'],
+  cookRuns: allRoles,
+  cultures: allRoles,
+  sessions: allRoles,
+  grain: allRoles,
+  incidents: allRoles,
+  flagJar: ['technician', 'supervisor'],
+  procedures: allRoles,
+  training: ['supervisor', 'trainer', 'admin'],
+  mailPreferences: allRoles,
+  sentMail: ['admin'],
 } satisfies Record<string, readonly Role[]>;
+
+/** Who may write the production record; trainers read it (DESIGN.md §2). The server checks the same. */
+export const productionRoles: Record<'write' | 'changeCultureState' | 'addGrain', readonly Role[]> = {
+  write: ['technician', 'supervisor', 'admin'],
+  changeCultureState: ['supervisor', 'admin'],
+  addGrain: ['admin'],
+};

@@ -40,14 +40,25 @@ describe('signing in', () => {
   it('locks a username after ten failures while another user still signs in', async () => {
     const { context, page } = await newPage(browser(), desktop);
     const csrf = async () => ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+    // A user of its own: locking a demo account would lock it for every later browser test.
+    await signIn(page, 'admin');
+    await page.getByRole('navigation', { name: 'Main' }).first().waitFor();
+    const username = `lockout-${Date.now()}`;
+    const created = await page.request.post('/api/users', {
+      headers: { 'X-CSRF-Token': await csrf() },
+      data: { username, displayName: 'Lockout Check', role: 'technician', password: 'lockout-check-pass' },
+    });
+    expect(created.status()).toBe(201);
+    await page.request.post('/api/auth/logout', { headers: { 'X-CSRF-Token': await csrf() } });
+
     for (let i = 0; i < 10; i += 1) {
       const res = await page.request.post('/api/auth/login', {
         headers: { 'X-CSRF-Token': await csrf() },
-        data: { username: 'supervisor', password: `wrong-${i}` },
+        data: { username, password: `wrong-${i}` },
       });
       expect(res.status()).toBe(401);
     }
-    await signIn(page, 'supervisor');
+    await signIn(page, username, 'lockout-check-pass');
     await page.getByRole('alert').filter({ hasText: 'Too many failed sign-ins' }).waitFor();
 
     const other = await newPage(browser(), desktop);

@@ -8,6 +8,10 @@ export function applyTestEnv(port: number, database: string, extra: Record<strin
   const scratch = mkdtempSync(path.join(tmpdir(), 'asepta-test-files-'));
   Object.assign(process.env, {
     NODE_ENV: 'test',
+    // Fixed here: workers inherit the browser-test server's PORT and PUBLIC_URL from the main process.
+    HOST: '127.0.0.1',
+    PORT: '5180',
+    PUBLIC_URL: 'http://127.0.0.1:5180',
     DB_HOST: '127.0.0.1',
     DB_PORT: String(port),
     DB_NAME: database,

@@ -5,6 +5,7 @@ import { cautionFootnote, cautions } from '../../config/cautions';
 import { navigationFor } from '../../config/navigation';
 import { roleLabels, roleSummaries } from '../../config/roles';
 import { useCurrentUser } from '../../features/auth/api/use-me';
+import { WeeklyScreen } from '../../features/analysis/components/weekly-screen';
 import { formatLongDate, greeting, isoWeek } from '../../lib/format';
 
 export function HomeRoute() {
@@ -27,6 +28,12 @@ export function HomeRoute() {
           <p className="text-muted">{roleSummaries[me.role]}</p>
         </div>
       </section>
+
+      {me.role === 'supervisor' && (
+        <div className="mb-10">
+          <WeeklyScreen compact />
+        </div>
+      )}
 
       <section aria-labelledby="screens" className="mb-10">
         <h2 id="screens" className="mb-3 text-lg font-semibold">

@@ -1,0 +1,310 @@
+import type { Contaminant, Workspace } from '../shared/enums';
+import { addDays, isoWeekday, mondayOf } from './demo-calendar';
+import { demoCultures, regularCultures } from './demo-cultures';
+import { demoOperators } from './demo-people';
+import { plantedProblems as planted } from './planted-problems';
+import { seededRandom, type Random } from './prng';
+
+export type Container = '1 L jar' | '2 L jar' | '3 kg bag';
+
+export interface PlanRun {
+  code: string;
+  cookedOn: string;
+  minutes: number;
+  container: Container;
+  grain: string;
+  operator: string;
+}
+
+export interface PlanSession {
+  code: string;
+  heldOn: string;
+  operator: string;
+  workspace: Workspace;
+  startHour: number;
+}
+
+export interface PlanJar {
+  label: string;
+  run: PlanRun;
+  session: PlanSession;
+  culture: string;
+  /** Usually the run's grain; a mixed load holds jars of two. */
+  grain: string;
+  /** Grain-to-grain: the jar this one was inoculated from (its culture is then the chain's root). */
+  parent: PlanJar | null;
+  contaminant: Contaminant | null;
+  foundOn: string | null;
+  /** Days to full colonisation if it stays clean. */
+  colonisesIn: number;
+  /** Planted or a parent: left out of the background contamination draw. */
+  fixed: boolean;
+}
+
+export interface DemoPlan {
+  runs: PlanRun[];
+  sessions: PlanSession[];
+  jars: PlanJar[];
+}
+
+const grains = [
+  ['rye', 30],
+  ['sorghum', 20],
+  ['brown rice', 18],
+  ['millet', 14],
+  ['wheat', 13],
+  ['maize', 3],
+  ['oats', 2],
+] as const;
+const containers = [
+  ['1 L jar', 60],
+  ['2 L jar', 25],
+  ['3 kg bag', 15],
+] as const;
+/** Share of the other jars found contaminated so far: a few per cent is good practice (shared/TRADE.md §1). */
+const backgroundRate = 0.04;
+/** Days from inoculation to a visible contaminant, common practice (shared/TRADE.md §2). */
+const background: readonly (readonly [Contaminant, number, number, number])[] = [
+  ['trichoderma', 30, 5, 14],
+  ['penicillium', 20, 6, 14],
+  ['bacterial', 20, 2, 7],
+  ['pin-mould', 10, 2, 4],
+  ['aspergillus', 6, 6, 14],
+  ['yeast', 6, 2, 6],
+  ['cobweb', 5, 12, 20],
+  ['neurospora', 3, 1, 3],
+];
+
+function makeRun(rng: Random, cookedOn: string, over: Partial<PlanRun> = {}): PlanRun {
+  const container = rng.weighted(containers);
+  const minutes =
+    container === '1 L jar'
+      ? rng.weighted([
+          [90, 85],
+          [120, 15],
+        ] as const)
+      : container === '2 L jar'
+        ? 120
+        : rng.pick([150, 180]);
+  return {
+    code: '',
+    cookedOn,
+    minutes,
+    container,
+    grain: rng.weighted(grains),
+    operator: rng.weighted([
+      [demoOperators.technician, 3],
+      [demoOperators.supervisor, 1],
+    ] as const),
+    ...over,
+  };
+}
+
+/** Ten ISO weeks of invented production ending on `today`, with the planted problems built in. */
+export function planDemoHistory(today: string): DemoPlan {
+  const rng = seededRandom(0x2614_0931);
+  const monday = mondayOf(today);
+  const day = (weeksBack: number, weekday: number) => addDays(monday, -7 * weeksBack + weekday - 1);
+  const shortRunDay = day(planted.shortCookRun.weeksBeforeCurrent, 2);
+  const ferrisSloppy = [1, 3, 4].map((d) => day(planted.sloppyWeek.weeksBeforeCurrent, d));
+  const parentDay = day(9, 2);
+  const childDay = day(6, 3);
+  const grandchildDay = day(3, 2);
+  const forced = new Set([shortRunDay, ...ferrisSloppy, parentDay, childDay, grandchildDay]);
+
+  const runs: PlanRun[] = [];
+  const sessions: PlanSession[] = [];
+  const jars: PlanJar[] = [];
+  let shortRun: PlanRun | undefined;
+  const parents: PlanJar[] = [];
+  const children: PlanJar[] = [];
+
+  const addJar = (run: PlanRun, session: PlanSession, culture: string, over: Partial<PlanJar> = {}) => {
+    const c = demoCultures.find((x) => x.code === culture) ?? demoCultures[0]!;
+    const jar: PlanJar = {
+      label: '',
+      run,
+      session,
+      culture,
+      grain: run.grain,
+      parent: null,
+      contaminant: null,
+      foundOn: null,
+      colonisesIn: rng.int(...c.colonises) + (run.container === '3 kg bag' ? 4 : 0),
+      fixed: false,
+      ...over,
+    };
+    jars.push(jar);
+    return jar;
+  };
+
+  for (let d = day(9, 1); d <= today; d = addDays(d, 1)) {
+    if (isoWeekday(d) > 5 || (!forced.has(d) && rng.next() < 0.08)) continue;
+    const back = Math.round((Date.parse(monday) - Date.parse(mondayOf(d))) / (7 * 86_400_000));
+    const dayRuns = Array.from({ length: rng.next() < 0.45 ? 2 : 1 }, () => makeRun(rng, addDays(d, -1)));
+    runs.push(...dayRuns);
+    const pool = regularCultures.filter((c) => c.weeks.from >= back && c.weeks.to <= back).map((c) => c.code);
+    const staff = rng.shuffle([
+      demoOperators.technician,
+      demoOperators.technician,
+      demoOperators.supervisor,
+      ...demoOperators.staff,
+    ]);
+    const operators: string[] = [...new Set(staff)];
+    if (ferrisSloppy.includes(d)) operators.unshift(demoOperators.relief);
+    const count = d === shortRunDay ? planted.shortCookRun.sessions : rng.next() < 0.65 ? 2 : 1;
+    const daySessions = operators.slice(0, count).map((operator, i): PlanSession => ({
+      code: `IS-${d.replace(/-/g, '').slice(2)}-${'ABC'[i]}`,
+      heldOn: d,
+      operator,
+      workspace: operator === demoOperators.staff[1] ? 'still-air-box' : 'flow-hood',
+      startHour: i === 0 ? 9 : 14,
+    }));
+    sessions.push(...daySessions);
+    for (const session of daySessions) {
+      const sloppy = ferrisSloppy.includes(d) && session.operator === demoOperators.relief;
+      const cultures = rng.shuffle(pool).slice(0, rng.int(1, 2));
+      const n = sloppy ? planted.sloppyWeek.jars / planted.sloppyWeek.sessions : rng.int(7, 12);
+      for (let i = 0; i < n; i += 1)
+        addJar(dayRuns[i % dayRuns.length]!, session, cultures[i % cultures.length]!, { fixed: sloppy });
+    }
+    const first = daySessions[0]!;
+    if (d === shortRunDay) {
+      shortRun = makeRun(rng, addDays(d, -1), {
+        minutes: planted.shortCookRun.minutesAtPressure,
+        container: planted.shortCookRun.container,
+        grain: planted.shortCookRun.grains[0],
+      });
+      runs.push(shortRun);
+      const perSession = planted.shortCookRun.jars / planted.shortCookRun.sessions;
+      const runCultures = rng.shuffle(pool.filter((c) => c !== 'LC-0936'));
+      daySessions.forEach((s, i) => {
+        for (let k = 0; k < perSession; k += 1)
+          addJar(shortRun!, s, runCultures[i % runCultures.length]!, {
+            fixed: true,
+            grain: planted.shortCookRun.grains[k % planted.shortCookRun.grains.length],
+          });
+      });
+    }
+    if (d === parentDay)
+      for (let k = 0; k < 3; k += 1) parents.push(addJar(dayRuns[0]!, first, 'LC-0936', { fixed: true }));
+    if (d === childDay || d === grandchildDay) {
+      const bagRun = makeRun(rng, addDays(d, -1), {
+        container: '3 kg bag',
+        minutes: 180,
+        grain: d === childDay ? 'rye' : 'millet',
+      });
+      runs.push(bagRun);
+      const from = d === childDay ? parents : children.slice(0, 2);
+      const made = Array.from({ length: d === childDay ? 12 : 6 }, (_, k) =>
+        addJar(bagRun, first, 'LC-0936', { parent: from[k % from.length] ?? null, fixed: k < 2 && d === childDay }),
+      );
+      if (d === childDay) children.push(...made);
+    }
+  }
+
+  const weeksBack = (date: string) => Math.round((Date.parse(monday) - Date.parse(mondayOf(date))) / (7 * 86_400_000));
+  plantBadCulture(rng, jars, sessions, (s) => weeksBack(s.heldOn), shortRunDay);
+  contaminate(rng, today, jars, shortRun);
+  return finish(runs, sessions, jars, shortRun);
+}
+
+/** LC-0931 goes to five jars in each of eight sessions over four weeks, away from the other planted causes. */
+function plantBadCulture(
+  rng: Random,
+  jars: PlanJar[],
+  sessions: PlanSession[],
+  weeksBack: (s: PlanSession) => number,
+  shortRunDay: string,
+) {
+  const c = planted.badCulture;
+  const weeks = new Set(c.weeksBeforeCurrent as readonly number[]);
+  const eligible = sessions.filter(
+    (s) => weeks.has(weeksBack(s)) && s.operator !== demoOperators.relief && s.heldOn !== shortRunDay,
+  );
+  const chosen = rng.shuffle(eligible).slice(0, c.sessions);
+  const perSession = c.jars / c.sessions;
+  for (const s of chosen) {
+    const own = jars.filter((j) => j.session === s && !j.fixed && !j.parent).slice(0, perSession);
+    for (const j of own) Object.assign(j, { culture: c.code, fixed: true });
+  }
+}
+
+function contaminate(rng: Random, today: string, jars: PlanJar[], shortRun: PlanRun | undefined) {
+  const plant = (set: PlanJar[], count: number, kinds: Contaminant[], [lo, hi]: readonly [number, number]) => {
+    for (const j of rng.shuffle(set).slice(0, count)) {
+      j.contaminant = rng.pick(kinds);
+      j.foundOn = addDays(j.session.heldOn, rng.int(lo, hi));
+    }
+  };
+  const s = planted.shortCookRun;
+  const b = planted.badCulture;
+  const w = planted.sloppyWeek;
+  plant(
+    jars.filter((j) => j.run === shortRun),
+    s.contaminated,
+    s.contaminants,
+    s.daysToDetection,
+  );
+  plant(
+    jars.filter((j) => j.culture === b.code),
+    b.contaminated,
+    b.contaminants,
+    b.daysToDetection,
+  );
+  plant(
+    jars.filter((j) => j.fixed && j.session.operator === w.operator),
+    w.contaminated,
+    w.contaminants,
+    w.daysToDetection,
+  );
+  const others = jars.filter((j) => !j.fixed);
+  let left = Math.round(backgroundRate * others.length);
+  for (const j of rng.shuffle(others)) {
+    if (left === 0) break;
+    const [kind, , lo, hi] = rng.weighted(background.map((x) => [x, x[1]] as const));
+    const foundOn = addDays(j.session.heldOn, rng.int(lo, hi));
+    // A jar whose contaminant would show only after today is still clean on the shelf.
+    if (foundOn > today) continue;
+    Object.assign(j, { contaminant: kind, foundOn });
+    left -= 1;
+  }
+}
+
+/** Labels and codes in date order, numbered so the planted short run is CR-2614 in its natural place. */
+function finish(runs: PlanRun[], sessions: PlanSession[], jars: PlanJar[], shortRun: PlanRun | undefined): DemoPlan {
+  const ordered = [...runs].sort((a, b) => a.cookedOn.localeCompare(b.cookedOn));
+  const base = Number(planted.shortCookRun.code.slice(3)) - (shortRun ? ordered.indexOf(shortRun) : 0);
+  ordered.forEach((r, i) => (r.code = `CR-${base + i}`));
+  const byDate = [...jars].sort(
+    (a, b) => a.session.heldOn.localeCompare(b.session.heldOn) || a.session.code.localeCompare(b.session.code),
+  );
+  byDate.forEach((j, i) => (j.label = `J${String(i + 1).padStart(5, '0')}`));
+  return { runs: ordered, sessions, jars: byDate };
+}
+
+const cell = (v: string) => (/[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v);
+
+/** The plan as a history file, the same format a lab would upload. */
+export function planToCsv(plan: DemoPlan): string {
+  const header =
+    'jar_label,grain,cook_run,cook_minutes,inoculated_on,session,operator,culture,outcome,contaminant,found_on';
+  const lines = plan.jars.map((j) =>
+    [
+      j.label,
+      j.grain,
+      j.run.code,
+      String(j.run.minutes),
+      j.session.heldOn,
+      j.session.code,
+      j.session.operator,
+      j.culture,
+      j.contaminant ? 'contaminated' : 'clean',
+      j.contaminant ?? '',
+      j.foundOn ?? '',
+    ]
+      .map(cell)
+      .join(','),
+  );
+  return [header, ...lines].join('\n') + '\n';
+}

@@ -1,0 +1,72 @@
+import { Router, type Response } from 'express';
+import {
+  beforeAfterQuerySchema,
+  causesQuerySchema,
+  crosstabQuerySchema,
+  jarsBehindQuerySchema,
+  periodQuerySchema,
+  ratesQuerySchema,
+  type BeforeAfterQuery,
+  type CausesQuery,
+  type CrosstabQuery,
+  type JarsBehindQuery,
+  type PeriodQuery,
+  type RatesQuery,
+} from '../../shared/schemas/analysis';
+import { requireUser } from '../core/auth-guards';
+import { sendCsv } from '../core/csv';
+import { validate } from '../core/validate';
+import * as csv from './analysis.csv';
+import * as analysis from './analysis.service';
+
+export const analysisRouter = Router();
+
+// DESIGN.md §2: every role reads the analysis (technicians flag, supervisors review, trainers read everything).
+analysisRouter.use(requireUser);
+
+function answer<T>(res: Response, format: 'json' | 'csv', dto: T, toCsv: (d: T) => csv.CsvTable) {
+  if (format === 'json') return res.json(dto);
+  const t = toCsv(dto);
+  sendCsv(res, t.filename, t.header, t.rows);
+}
+
+const query = <T>(req: { query: unknown }) => req.query as T;
+
+analysisRouter.get('/rates', validate({ query: ratesQuerySchema }), async (req, res) => {
+  const q = query<RatesQuery>(req);
+  answer(res, q.format, await analysis.rates(q.by, q), csv.ratesCsv);
+});
+
+analysisRouter.get('/crosstab', validate({ query: crosstabQuerySchema }), async (req, res) => {
+  const q = query<CrosstabQuery>(req);
+  answer(res, q.format, await analysis.crosstab(q.rows, q.cols, q), csv.crosstabCsv);
+});
+
+analysisRouter.get('/causes', validate({ query: causesQuerySchema }), async (req, res) => {
+  const q = query<CausesQuery>(req);
+  answer(res, q.format, await analysis.causes(q, q.minJars), csv.causesCsv);
+});
+
+analysisRouter.get('/weekly', validate({ query: periodQuerySchema }), async (req, res) => {
+  const q = query<PeriodQuery>(req);
+  answer(res, q.format, await analysis.weeklyTable(q), csv.weeklyCsv);
+});
+
+analysisRouter.get('/colonisation', validate({ query: periodQuerySchema }), async (req, res) => {
+  const q = query<PeriodQuery>(req);
+  answer(res, q.format, await analysis.colonisation(q), csv.colonisationCsv);
+});
+
+analysisRouter.get('/lethality', validate({ query: periodQuerySchema }), async (req, res) => {
+  const q = query<PeriodQuery>(req);
+  answer(res, q.format, await analysis.lethality(q), csv.lethalityCsv);
+});
+
+analysisRouter.get('/before-after', validate({ query: beforeAfterQuerySchema }), async (req, res) => {
+  const q = query<BeforeAfterQuery>(req);
+  answer(res, q.format, await analysis.beforeAfter(q), csv.beforeAfterCsv);
+});
+
+analysisRouter.get('/jars', validate({ query: jarsBehindQuerySchema }), async (req, res) => {
+  res.json(await analysis.jarsBehind(query<JarsBehindQuery>(req)));
+});

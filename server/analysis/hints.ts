@@ -1,0 +1,143 @@
+import { contaminantNames, contaminants, factors, type Contaminant, type Factor } from '../../shared/enums';
+import type { FactorLevel } from '../../shared/schemas/analysis';
+
+/** What is known of a set of contaminated jars: days from inoculation to detection, and jars per contaminant. */
+export interface Detections {
+  days: number[];
+  contaminants: Partial<Record<Contaminant, number>>;
+}
+
+const CP = 'common practice';
+const STAMETS = 'Stamets & Chilton, The Mushroom Cultivator (1983)';
+
+/** The trade's pick-list profile of each contaminant (TRADE.md §2), with where each line comes from. */
+const profiles: Record<Contaminant, { pointsTo: string; basis: string }> = {
+  bacterial: {
+    pointsTo: 'endospores that survived the cook: under-sterilisation, over-wet or burst grain, no soak',
+    basis: `${CP}; ${STAMETS}, ch. XIII`,
+  },
+  trichoderma: { pointsTo: 'air or technique: open jars, ports, gloves, needle, hood', basis: CP },
+  penicillium: { pointsTo: 'air and people', basis: STAMETS },
+  aspergillus: { pointsTo: 'air and hygiene (and a health hazard)', basis: STAMETS },
+  'pin-mould': { pointsTo: 'over-wet grain, warm incubation, under-sterilisation', basis: CP },
+  neurospora: {
+    pointsTo: 'inadequate sterilisation or a lab infestation',
+    basis: 'trade knowledge recalled from memory, not yet checked against a source',
+  },
+  cobweb: { pointsTo: 'humidity and stagnant air', basis: CP },
+  yeast: { pointsTo: 'a contaminated culture or technique', basis: CP },
+  unknown: { pointsTo: 'nothing in particular until the organism is identified', basis: CP },
+};
+
+const sterilisationSide = new Set<Contaminant>(['bacterial', 'pin-mould', 'neurospora']);
+const airSide = new Set<Contaminant>(['trichoderma', 'penicillium', 'aspergillus', 'cobweb']);
+const EARLY_DAYS = 7;
+const LATE_DAYS = 15;
+
+export function median(values: number[]): number | null {
+  if (values.length === 0) return null;
+  const s = [...values].sort((a, b) => a - b);
+  const mid = Math.floor(s.length / 2);
+  return s.length % 2 ? (s[mid] ?? 0) : ((s[mid - 1] ?? 0) + (s[mid] ?? 0)) / 2;
+}
+
+function dominant(d: Detections): { contaminant: Contaminant; count: number } {
+  let best: Contaminant = 'unknown';
+  let count = -1;
+  for (const c of contaminants) {
+    const n = d.contaminants[c] ?? 0;
+    if (n > count) [best, count] = [c, n];
+  }
+  return { contaminant: best, count };
+}
+
+const factorWords: Record<Factor, string> = {
+  grain: 'this grain',
+  cookRun: 'this cook run',
+  cookMinutes: 'this cook-duration bucket',
+  session: 'this session',
+  operator: 'this operator',
+  culture: 'this culture',
+  week: 'this week',
+  prepBatch: 'this prep batch',
+  workspace: 'this workspace',
+  room: 'this room',
+};
+
+/**
+ * The attribution rules of thumb of the trade (TRADE.md §2, common practice): leads to check, never a verdict.
+ * Rule numbers follow that list.
+ */
+function lead(factor: Factor, contaminant: Contaminant, medianDays: number): string {
+  const early = medianDays <= EARLY_DAYS;
+  const late = medianDays >= LATE_DAYS;
+  const where = factorWords[factor];
+  if (late && (airSide.has(contaminant) || factor === 'room')) {
+    return `Late surface moulds point to the incubation room or a breached seal; check ${where}'s shelves and lids.`;
+  }
+  switch (factor) {
+    case 'cookRun':
+    case 'cookMinutes':
+    case 'prepBatch':
+    case 'grain':
+      if (early || sterilisationSide.has(contaminant)) {
+        return `Early contamination across ${where}'s jars points to the sterilisation cycle or the grain: time at pressure, venting, gauge, overloading, grain moisture.`;
+      }
+      return `Contamination in ${where} that is not early points less to the cook than to handling after it: compare sessions and cultures.`;
+    case 'culture':
+      return 'Contamination confined to one culture across cook runs and sessions points to the culture: test it on agar before using it again.';
+    case 'operator':
+    case 'session':
+    case 'workspace':
+      return `Contamination spread over ${where}'s jars across cook runs and cultures points to technique or the workspace: ports, gloves, needle flaming, hood or still-air box.`;
+    case 'room':
+      return 'Contamination gathered in one room points to the incubation conditions: temperature, air and cleanliness.';
+    case 'week':
+      return 'Contamination gathered in one week: look at what changed that week (a cook run, a culture, a person, the room).';
+  }
+}
+
+export interface Hint {
+  hint: string;
+  basis: string;
+}
+
+export function hintFor(factor: Factor, detections: Detections, confoundedWith: FactorLevel[]): Hint | null {
+  const n = detections.days.length;
+  if (n === 0) return null;
+  if (n === 1) {
+    return { hint: 'A single contaminated jar is weak evidence.', basis: CP };
+  }
+  const top = dominant(detections);
+  const days = median(detections.days) ?? 0;
+  const profile = profiles[top.contaminant];
+  const parts = [
+    lead(factor, top.contaminant, days),
+    `Mostly ${contaminantNames[top.contaminant]} (${top.count} of ${n}), found after a median of ${days} days; it usually points to ${profile.pointsTo}.`,
+  ];
+  const others = confoundedWith.filter((c) => c.factor !== factor);
+  if (others.length > 0) {
+    const names = others.map((c) => `${c.factor} ${c.level}`).join(', ');
+    parts.push(`Its jars are also almost all ${names}: the data cannot tell these apart.`);
+  }
+  const basis = profile.basis === CP ? CP : profile.basis.startsWith(CP) ? profile.basis : `${CP}; ${profile.basis}`;
+  return { hint: parts.join(' '), basis };
+}
+
+/** Reads the `days:contaminant,…` list the causes query builds for a combination's contaminated jars. */
+export function parseDetections(text: string | null): Detections {
+  const out: Detections = { days: [], contaminants: {} };
+  if (!text) return out;
+  for (const token of text.split(',')) {
+    const colon = token.indexOf(':');
+    const n = Number(token.slice(0, colon));
+    if (colon < 0 || !Number.isFinite(n)) continue;
+    const code = token.slice(colon + 1);
+    const contaminant = (contaminants as readonly string[]).includes(code) ? (code as Contaminant) : 'unknown';
+    out.days.push(n);
+    out.contaminants[contaminant] = (out.contaminants[contaminant] ?? 0) + 1;
+  }
+  return out;
+}
+
+export const factorIndex = (f: Factor) => factors.indexOf(f);

@@ -1,0 +1,233 @@
+import type { EntityManager } from 'typeorm';
+import type { Page } from '../../shared/schemas/common';
+import type {
+  CookRunDetailDto,
+  CookRunDto,
+  CookRunListQuery,
+  CookRunReadingsDto,
+  CreateCookRunValues,
+  UpdateCookRunInput,
+} from '../../shared/schemas/cook-runs';
+import { f0FromLog, lethalRate, type TemperatureSample } from '../../shared/stats/lethality';
+import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
+import { badRequest, conflict, notFound } from '../core/errors';
+import { localDate } from '../core/local-time';
+import { pageResult } from '../core/paging';
+import { dataSource } from '../db/data-source';
+import { getLabSettings } from '../settings/settings.service';
+import { estimatedF0 } from './cook-run-lethality';
+import { CookRun } from './cook-run.entity';
+import { cookRunsRepository } from './cook-runs.repository';
+import { toCookRunDto } from './cook-runs.mapper';
+
+const target = async () => (await getLabSettings()).lethalityTarget;
+
+export async function listCookRuns(q: CookRunListQuery): Promise<Page<CookRunDto>> {
+  const t = await target();
+  const [rows, total] = await cookRunsRepository.list(q, t);
+  return pageResult(
+    rows.map((r) => toCookRunDto(r, t)),
+    total,
+    q,
+  );
+}
+
+export async function exportCookRuns(q: CookRunListQuery): Promise<CookRunDto[]> {
+  const t = await target();
+  return (await cookRunsRepository.all(q, t)).map((r) => toCookRunDto(r, t));
+}
+
+export async function getCookRun(id: number): Promise<CookRunDetailDto> {
+  const run = await cookRunsRepository.findById(id);
+  if (!run) throw notFound('Cook run');
+  const [t, readingsCount] = await Promise.all([target(), cookRunsRepository.readingsCount(id)]);
+  return { ...toCookRunDto(run, t), readingsCount };
+}
+
+/** A user operator also keeps their name, so the record reads the same after the account is gone. */
+async function operatorFields(
+  m: EntityManager,
+  input: { operatorId?: number | null; operatorName?: string | null },
+): Promise<Pick<CookRun, 'operatorId' | 'operatorName'> | null> {
+  if (input.operatorId) {
+    const user = await cookRunsRepository.findActiveUser(input.operatorId, m);
+    if (!user)
+      throw badRequest('operatorId: no such active user', [{ path: 'operatorId', message: 'is not an active user' }]);
+    return { operatorId: user.id, operatorName: user.displayName };
+  }
+  if (input.operatorName) return { operatorId: null, operatorName: input.operatorName };
+  if (input.operatorId === null || input.operatorName === null) return { operatorId: null, operatorName: null };
+  return null;
+}
+
+async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
+  const clash = await cookRunsRepository.findByCode(code, m);
+  if (clash && clash.id !== exceptId) {
+    throw conflict(`Cook run ${code} already exists.`, [
+      { path: 'code', message: 'is already used by another cook run' },
+    ]);
+  }
+}
+
+/** Inside the caller's transaction, so other modules (the history import) create runs the same way. */
+export async function insertCookRun(m: EntityManager, actor: Actor, input: CreateCookRunValues): Promise<CookRun> {
+  await assertCodeFree(m, input.code);
+  const startedAt = input.startedAt ? new Date(input.startedAt) : null;
+  const cycle = {
+    minutesAtPressure: input.minutesAtPressure,
+    gaugeKPa: input.gaugeKPa ?? null,
+    altitudeM: input.altitudeM,
+  };
+  const run = await m.save(
+    m.create(CookRun, {
+      code: input.code,
+      vessel: input.vessel || null,
+      startedAt,
+      cookedOn: input.cookedOn ?? (startedAt ? localDate(startedAt) : null),
+      ...cycle,
+      ventingMinutes: input.ventingMinutes ?? null,
+      container: input.container,
+      loadCount: input.loadCount ?? null,
+      ...((await operatorFields(m, input)) ?? { operatorId: null, operatorName: null }),
+      f0: estimatedF0(cycle),
+      f0Source: 'estimate',
+      notes: input.notes || null,
+    }),
+  );
+  await recordAudit(m, actor, [
+    {
+      action: 'create',
+      recordType: 'cook-run',
+      recordId: run.id,
+      newValue: { code: run.code, minutesAtPressure: run.minutesAtPressure },
+    },
+  ]);
+  return run;
+}
+
+export async function createCookRun(actor: Actor, input: CreateCookRunValues): Promise<CookRunDetailDto> {
+  const run = await dataSource.transaction((m) => insertCookRun(m, actor, input));
+  return getCookRun(run.id);
+}
+
+export async function updateCookRun(actor: Actor, id: number, input: UpdateCookRunInput): Promise<CookRunDetailDto> {
+  await dataSource.transaction(async (m) => {
+    const run = await cookRunsRepository.findById(id, m);
+    if (!run) throw notFound('Cook run');
+    const { reason, startedAt, operatorId, operatorName, ...rest } = input;
+    if (rest.code !== undefined) await assertCodeFree(m, rest.code, id);
+    const changes: Partial<CookRun> = { ...rest, ...((await operatorFields(m, { operatorId, operatorName })) ?? {}) };
+    if (rest.vessel !== undefined) changes.vessel = rest.vessel || null;
+    if (rest.notes !== undefined) changes.notes = rest.notes || null;
+    if (startedAt !== undefined) {
+      changes.startedAt = startedAt ? new Date(startedAt) : null;
+      if (startedAt && rest.cookedOn === undefined) changes.cookedOn = localDate(new Date(startedAt));
+    }
+    if (changes.cookedOn === null && (changes.startedAt ?? run.startedAt) === null) {
+      throw badRequest('cookedOn: a run needs a date', [
+        { path: 'cookedOn', message: 'enter the date of the run or its start time' },
+      ]);
+    }
+    // A logged F0 stands on its own; the estimate follows the cycle it was computed from.
+    const cycleChanged = ['minutesAtPressure', 'gaugeKPa', 'altitudeM'].some((k) => k in rest);
+    if (run.f0Source !== 'log' && cycleChanged) {
+      changes.f0 = estimatedF0({ ...run, ...changes });
+      changes.f0Source = 'estimate';
+    }
+    const entries = diffEntries(
+      { action: 'update', recordType: 'cook-run', recordId: id, reason: reason ?? null },
+      run,
+      changes,
+    );
+    Object.assign(run, changes);
+    await m.save(run);
+    await recordAudit(m, actor, entries);
+  });
+  return getCookRun(id);
+}
+
+export async function getCookRunReadings(id: number): Promise<CookRunReadingsDto> {
+  const run = await cookRunsRepository.findById(id);
+  if (!run) throw notFound('Cook run');
+  const rows = await cookRunsRepository.readings(id);
+  return {
+    cookRunId: id,
+    f0: run.f0,
+    f0Source: run.f0Source,
+    readings: rows.map((r) => ({ minute: r.minute, celsius: r.celsius, lethalRate: lethalRate(r.celsius) })),
+  };
+}
+
+export async function assertCookRunExists(id: number): Promise<void> {
+  if (!(await cookRunsRepository.findById(id))) throw notFound('Cook run');
+}
+
+/** Replaces the whole log and its F0 in one transaction; a half-loaded log would give a wrong F0. */
+export async function replaceCookRunReadings(
+  actor: Actor,
+  id: number,
+  samples: TemperatureSample[],
+): Promise<CookRunDetailDto> {
+  await dataSource.transaction(async (m) => {
+    const run = await cookRunsRepository.findById(id, m);
+    if (!run) throw notFound('Cook run');
+    await cookRunsRepository.replaceReadings(m, id, samples);
+    const f0 = f0FromLog(samples);
+    await recordAudit(m, actor, [
+      {
+        action: 'readings',
+        recordType: 'cook-run',
+        recordId: id,
+        field: 'f0',
+        oldValue: run.f0,
+        newValue: f0,
+        reason: `temperature log of ${samples.length} readings`,
+      },
+      ...(run.f0Source === 'log'
+        ? []
+        : [
+            {
+              action: 'readings',
+              recordType: 'cook-run',
+              recordId: id,
+              field: 'f0Source',
+              oldValue: run.f0Source,
+              newValue: 'log',
+            },
+          ]),
+    ]);
+    await m.update(CookRun, { id }, { f0, f0Source: 'log' });
+  });
+  return getCookRun(id);
+}
+
+export async function removeCookRunReadings(actor: Actor, id: number): Promise<CookRunDetailDto> {
+  await dataSource.transaction(async (m) => {
+    const run = await cookRunsRepository.findById(id, m);
+    if (!run) throw notFound('Cook run');
+    if (run.f0Source !== 'log') throw notFound('Temperature log of this cook run');
+    await cookRunsRepository.replaceReadings(m, id, []);
+    const f0 = estimatedF0(run);
+    await recordAudit(m, actor, [
+      {
+        action: 'readings',
+        recordType: 'cook-run',
+        recordId: id,
+        field: 'f0',
+        oldValue: run.f0,
+        newValue: f0,
+        reason: 'temperature log removed',
+      },
+      {
+        action: 'readings',
+        recordType: 'cook-run',
+        recordId: id,
+        field: 'f0Source',
+        oldValue: 'log',
+        newValue: 'estimate',
+      },
+    ]);
+    await m.update(CookRun, { id }, { f0, f0Source: 'estimate' });
+  });
+  return getCookRun(id);
+}

@@ -1,0 +1,58 @@
+import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import type { PageQuery } from '../../shared/schemas/common';
+import type { CultureFilters, CultureListQuery } from '../../shared/schemas/cultures';
+import { applySortAndPage } from '../core/paging';
+import { dataSource } from '../db/data-source';
+import { Photo } from '../photos/photo.entity';
+import { AgarTest } from './agar-test.entity';
+import { Culture } from './culture.entity';
+
+const sortable = { code: 'c.code', preparedOn: 'c.preparedOn', state: 'c.state', species: 'c.species' };
+const exportChunk = 1000;
+
+function filtered(f: CultureFilters): SelectQueryBuilder<Culture> {
+  const qb = dataSource.manager.createQueryBuilder(Culture, 'c');
+  if (f.state) qb.andWhere('c.state = :state', { state: f.state });
+  if (f.q) qb.andWhere('(c.code LIKE :q OR c.species LIKE :q OR c.strain LIKE :q)', { q: `%${f.q}%` });
+  return qb;
+}
+
+export const culturesRepository = {
+  findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Culture, { id }),
+  findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(Culture, { code }),
+  byIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(Culture, { id: In(ids) }) : []),
+  children: (id: number) =>
+    dataSource.manager.find(Culture, { where: { parentCultureId: id }, order: { code: 'ASC' } }),
+  agarTests: (cultureId: number) =>
+    dataSource.manager.find(AgarTest, { where: { cultureId }, order: { testedOn: 'DESC', id: 'DESC' } }),
+  photoExists: async (id: number, m: EntityManager) => (await m.countBy(Photo, { id })) > 0,
+
+  list: (q: CultureListQuery): Promise<[Culture[], number]> =>
+    applySortAndPage(filtered(q), q, sortable, 'code', 'c.id').getManyAndCount(),
+
+  async all(q: CultureFilters & Pick<PageQuery, 'sort'>): Promise<Culture[]> {
+    const rows: Culture[] = [];
+    for (let page = 1; ; page += 1) {
+      const chunk = await applySortAndPage(
+        filtered(q),
+        { page, pageSize: exportChunk, sort: q.sort },
+        sortable,
+        'code',
+        'c.id',
+      ).getMany();
+      rows.push(...chunk);
+      if (chunk.length < exportChunk) return rows;
+    }
+  },
+
+  /** Ancestors of a culture, nearest first; bounded so a corrupt loop cannot hang a request. */
+  async ancestorIds(id: number, m: EntityManager): Promise<number[]> {
+    const seen: number[] = [];
+    let current = await m.findOneBy(Culture, { id });
+    while (current?.parentCultureId && seen.length < 100 && !seen.includes(current.parentCultureId)) {
+      seen.push(current.parentCultureId);
+      current = await m.findOneBy(Culture, { id: current.parentCultureId });
+    }
+    return seen;
+  },
+};

@@ -1,0 +1,209 @@
+import type { EntityManager } from 'typeorm';
+import type { Page } from '../../shared/schemas/common';
+import {
+  cultureTransitions,
+  type AgarTestDto,
+  type ChangeCultureStateInput,
+  type CreateAgarTestInput,
+  type CreateCultureInput,
+  type CultureDetailDto,
+  type CultureDto,
+  type CultureListQuery,
+  type UpdateCultureInput,
+} from '../../shared/schemas/cultures';
+import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
+import { badRequest, conflict, notFound } from '../core/errors';
+import { pageResult } from '../core/paging';
+import { dataSource } from '../db/data-source';
+import { AgarTest } from './agar-test.entity';
+import { Culture } from './culture.entity';
+import { culturesRepository } from './cultures.repository';
+import { toAgarTestDto, toCultureDto, toCultureSummaryDto } from './cultures.mapper';
+
+async function withParentCodes(rows: Culture[]): Promise<CultureDto[]> {
+  const parentIds = [...new Set(rows.map((c) => c.parentCultureId).filter((id): id is number => id !== null))];
+  const parents = new Map((await culturesRepository.byIds(parentIds)).map((p) => [p.id, p.code]));
+  return rows.map((c) => toCultureDto(c, c.parentCultureId ? (parents.get(c.parentCultureId) ?? null) : null));
+}
+
+export async function listCultures(q: CultureListQuery): Promise<Page<CultureDto>> {
+  const [rows, total] = await culturesRepository.list(q);
+  return pageResult(await withParentCodes(rows), total, q);
+}
+
+export async function exportCultures(q: CultureListQuery): Promise<CultureDto[]> {
+  return withParentCodes(await culturesRepository.all(q));
+}
+
+export async function getCulture(id: number): Promise<CultureDetailDto> {
+  const culture = await culturesRepository.findById(id);
+  if (!culture) throw notFound('Culture');
+  const [parent, children, tests] = await Promise.all([
+    culture.parentCultureId ? culturesRepository.findById(culture.parentCultureId) : null,
+    culturesRepository.children(id),
+    culturesRepository.agarTests(id),
+  ]);
+  return {
+    ...toCultureDto(culture, parent?.code ?? null),
+    parent: parent ? toCultureSummaryDto(parent) : null,
+    children: children.map(toCultureSummaryDto),
+    agarTests: tests.map(toAgarTestDto),
+    allowedStates: [...cultureTransitions[culture.state]],
+  };
+}
+
+/**
+ * For whoever makes jars from a culture: a warning to show (and keep) when the culture is not
+ * released, or null when it is.
+ */
+export async function cultureUseWarning(
+  cultureId: number,
+  m: EntityManager = dataSource.manager,
+): Promise<string | null> {
+  const culture = await culturesRepository.findById(cultureId, m);
+  if (!culture) throw notFound('Culture');
+  return culture.state === 'released' ? null : `Culture ${culture.code} is ${culture.state}, not released.`;
+}
+
+async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
+  const clash = await culturesRepository.findByCode(code, m);
+  if (clash && clash.id !== exceptId) {
+    throw conflict(`Culture ${code} already exists.`, [
+      { path: 'code', message: 'is already used by another culture' },
+    ]);
+  }
+}
+
+async function findParent(m: EntityManager, parentId: number): Promise<Culture> {
+  const parent = await culturesRepository.findById(parentId, m);
+  if (!parent)
+    throw badRequest('parentCultureId: no such culture', [
+      { path: 'parentCultureId', message: 'is not a recorded culture' },
+    ]);
+  return parent;
+}
+
+/** Inside the caller's transaction, so the history import creates cultures the same way. */
+export async function insertCulture(m: EntityManager, actor: Actor, input: CreateCultureInput): Promise<Culture> {
+  await assertCodeFree(m, input.code);
+  const parent = input.parentCultureId ? await findParent(m, input.parentCultureId) : null;
+  const generation = input.generation ?? (parent && parent.generation !== null ? parent.generation + 1 : null);
+  const culture = await m.save(
+    m.create(Culture, {
+      code: input.code,
+      species: input.species || null,
+      strain: input.strain || null,
+      preparedOn: input.preparedOn ?? null,
+      generation,
+      volumeMl: input.volumeMl ?? null,
+      parentCultureId: parent?.id ?? null,
+      state: 'quarantined',
+      notes: input.notes || null,
+    }),
+  );
+  await recordAudit(m, actor, [
+    {
+      action: 'create',
+      recordType: 'culture',
+      recordId: culture.id,
+      newValue: { code: culture.code, state: culture.state },
+    },
+  ]);
+  return culture;
+}
+
+export async function createCulture(actor: Actor, input: CreateCultureInput): Promise<CultureDetailDto> {
+  const culture = await dataSource.transaction((m) => insertCulture(m, actor, input));
+  return getCulture(culture.id);
+}
+
+export async function updateCulture(actor: Actor, id: number, input: UpdateCultureInput): Promise<CultureDetailDto> {
+  await dataSource.transaction(async (m) => {
+    const culture = await culturesRepository.findById(id, m);
+    if (!culture) throw notFound('Culture');
+    const { reason, ...changes } = input;
+    if (changes.code !== undefined) await assertCodeFree(m, changes.code, id);
+    if (changes.parentCultureId) {
+      await findParent(m, changes.parentCultureId);
+      const ancestors = await culturesRepository.ancestorIds(changes.parentCultureId, m);
+      if (changes.parentCultureId === id || ancestors.includes(id)) {
+        throw badRequest('parentCultureId: a culture cannot descend from itself', [
+          { path: 'parentCultureId', message: 'would make the culture its own ancestor' },
+        ]);
+      }
+    }
+    const normalised: Partial<Culture> = { ...changes };
+    for (const key of ['species', 'strain', 'notes'] as const) {
+      if (changes[key] !== undefined) normalised[key] = changes[key] || null;
+    }
+    const entries = diffEntries(
+      { action: 'update', recordType: 'culture', recordId: id, reason: reason ?? null },
+      culture,
+      normalised,
+    );
+    Object.assign(culture, normalised);
+    await m.save(culture);
+    await recordAudit(m, actor, entries);
+  });
+  return getCulture(id);
+}
+
+export async function changeCultureState(
+  actor: Actor,
+  id: number,
+  input: ChangeCultureStateInput,
+): Promise<CultureDetailDto> {
+  await dataSource.transaction(async (m) => {
+    const culture = await culturesRepository.findById(id, m);
+    if (!culture) throw notFound('Culture');
+    const allowed = cultureTransitions[culture.state];
+    if (!allowed.includes(input.state)) {
+      const next = allowed.length ? `it can go to ${allowed.join(' or ')}` : 'a retired culture stays retired';
+      throw conflict(`Culture ${culture.code} is ${culture.state}; ${next}.`, [
+        { path: 'state', message: `cannot change from ${culture.state} to ${input.state}` },
+      ]);
+    }
+    await recordAudit(m, actor, [
+      {
+        action: 'state',
+        recordType: 'culture',
+        recordId: id,
+        field: 'state',
+        oldValue: culture.state,
+        newValue: input.state,
+        reason: input.reason,
+      },
+    ]);
+    await m.update(Culture, { id }, { state: input.state });
+  });
+  return getCulture(id);
+}
+
+export async function addAgarTest(actor: Actor, cultureId: number, input: CreateAgarTestInput): Promise<AgarTestDto> {
+  return dataSource.transaction(async (m) => {
+    if (!(await culturesRepository.findById(cultureId, m))) throw notFound('Culture');
+    if (input.photoId && !(await culturesRepository.photoExists(input.photoId, m))) {
+      throw badRequest('photoId: no such photo', [{ path: 'photoId', message: 'is not an uploaded photo' }]);
+    }
+    const test = await m.save(
+      m.create(AgarTest, {
+        cultureId,
+        testedOn: input.testedOn,
+        result: input.result,
+        notes: input.notes || null,
+        photoId: input.photoId ?? null,
+        recordedById: actor.id,
+      }),
+    );
+    await recordAudit(m, actor, [
+      {
+        action: 'agar-test',
+        recordType: 'culture',
+        recordId: cultureId,
+        field: 'agarTest',
+        newValue: { id: test.id, testedOn: test.testedOn, result: test.result },
+      },
+    ]);
+    return toAgarTestDto(test);
+  });
+}

@@ -1,0 +1,67 @@
+import { In, type EntityManager } from 'typeorm';
+import {
+  grainLotSortFields,
+  prepBatchSortFields,
+  type GrainLotListQuery,
+  type PrepBatchListQuery,
+} from '../../shared/schemas/grain';
+import { applySortAndPage } from '../core/paging';
+import { dataSource } from '../db/data-source';
+import { GrainLot } from './grain-lot.entity';
+import { Grain } from './grain.entity';
+import { PrepBatch } from './prep-batch.entity';
+
+const lotSortable: Record<(typeof grainLotSortFields)[number], string> = {
+  receivedOn: 'l.receivedOn',
+  supplierLotCode: 'l.supplierLotCode',
+  createdAt: 'l.createdAt',
+};
+const batchSortable: Record<(typeof prepBatchSortFields)[number], string> = {
+  code: 'pb.code',
+  preparedOn: 'pb.preparedOn',
+  createdAt: 'pb.createdAt',
+};
+
+export const grainRepository = {
+  listGrains: () => dataSource.manager.find(Grain, { order: { name: 'ASC' } }),
+  findGrainById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { id }),
+  findGrainByName: (name: string, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { name }),
+  grainsByIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(Grain, { id: In(ids) }) : []),
+
+  findLotById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(GrainLot, { id }),
+  findLot: (grainId: number, supplierLotCode: string, m: EntityManager = dataSource.manager) =>
+    m.findOneBy(GrainLot, { grainId, supplierLotCode }),
+  lotsByIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(GrainLot, { id: In(ids) }) : []),
+
+  async listLots(q: GrainLotListQuery): Promise<[GrainLot[], number]> {
+    const qb = dataSource.manager.createQueryBuilder(GrainLot, 'l');
+    if (q.grainId) qb.andWhere('l.grainId = :grainId', { grainId: q.grainId });
+    if (q.q) qb.andWhere('l.supplierLotCode LIKE :q', { q: `%${q.q}%` });
+    return applySortAndPage(qb, q, lotSortable, '-receivedOn', 'l.id').getManyAndCount();
+  },
+
+  async batchCounts(lotIds: number[]): Promise<Map<number, number>> {
+    if (lotIds.length === 0) return new Map();
+    const rows = await dataSource.manager
+      .createQueryBuilder(PrepBatch, 'pb')
+      .select('pb.grainLotId', 'lotId')
+      .addSelect('COUNT(*)', 'n')
+      .where('pb.grainLotId IN (:...lotIds)', { lotIds })
+      .groupBy('pb.grainLotId')
+      .getRawMany<{ lotId: number; n: string }>();
+    return new Map(rows.map((r) => [Number(r.lotId), Number(r.n)]));
+  },
+
+  findBatchById: (id: number) => dataSource.manager.findOneBy(PrepBatch, { id }),
+  findBatchByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { code }),
+
+  async listBatches(q: PrepBatchListQuery, grainId: number | null): Promise<[PrepBatch[], number]> {
+    const qb = dataSource.manager.createQueryBuilder(PrepBatch, 'pb');
+    if (q.grainLotId) qb.andWhere('pb.grainLotId = :lotId', { lotId: q.grainLotId });
+    if (grainId !== null) {
+      qb.innerJoin(GrainLot, 'l', 'l.id = pb.grainLotId').andWhere('l.grainId = :grainId', { grainId });
+    }
+    if (q.q) qb.andWhere('pb.code LIKE :q', { q: `%${q.q}%` });
+    return applySortAndPage(qb, q, batchSortable, '-preparedOn', 'pb.id').getManyAndCount();
+  },
+};

@@ -1,0 +1,51 @@
+import type { Contaminant, IncidentStatus, StageFound, Verdict } from '../../shared/enums';
+import type { IncidentSeverity } from '../../shared/schemas/incidents';
+import { logger } from '../core/logger';
+
+export interface IncidentCreatedEvent {
+  id: number;
+  contaminant: Contaminant;
+  severity: IncidentSeverity;
+  stage: StageFound;
+  foundAt: string;
+  foundByName: string;
+  jarLabels: string[];
+}
+
+export interface IncidentReviewedEvent {
+  id: number;
+  by: string;
+  status: IncidentStatus;
+  verdict: Verdict;
+  voided: boolean;
+  changedFields: string[];
+}
+
+type Listener<E> = (event: E) => void | Promise<void>;
+
+function hookList<E>() {
+  const listeners = new Set<Listener<E>>();
+  return {
+    /** Returns an unsubscribe function. */
+    on: (listener: Listener<E>): (() => void) => {
+      listeners.add(listener);
+      return () => listeners.delete(listener);
+    },
+    /** Called after commit; a failing listener (mail down) never undoes or fails the request. */
+    emit: (event: E): void => {
+      for (const listener of listeners) {
+        void Promise.resolve()
+          .then(() => listener(event))
+          .catch((err: unknown) => logger.error({ err, incidentId: (event as { id?: number }).id }, 'incident listener failed'));
+      }
+    },
+  };
+}
+
+const created = hookList<IncidentCreatedEvent>();
+const reviewed = hookList<IncidentReviewedEvent>();
+
+export const onIncidentCreated = created.on;
+export const onIncidentReviewed = reviewed.on;
+export const emitIncidentCreated = created.emit;
+export const emitIncidentReviewed = reviewed.emit;

@@ -1,0 +1,77 @@
+import { In, type EntityManager } from 'typeorm';
+import { jarStatuses, type JarStatus } from '../../shared/enums';
+import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import { localDate } from '../core/local-time';
+import { JarEvent } from '../jars/jar-event.entity';
+import { Jar } from '../jars/jar.entity';
+import { jarIsContaminatedSql } from './live-incidents';
+
+/** Jars that have left the shelf keep their status: an incident on them is recorded, not re-shelved. */
+const flaggable: JarStatus[] = ['incubating', 'colonised', 'on-hold'];
+
+const isJarStatus = (s: string | null): s is JarStatus => s !== null && (jarStatuses as readonly string[]).includes(s);
+
+function impliedStatus(e: JarEvent, current: JarStatus): JarStatus {
+  if (isJarStatus(e.newStatus)) return e.newStatus;
+  if (e.type === 'hold') return 'on-hold';
+  if (e.type === 'discarded') return 'discarded';
+  if (e.type === 'released') return 'released';
+  return current;
+}
+
+/** Replays the jar's events to find the status it had before it last became contaminated. */
+export function statusBeforeContamination(jar: Pick<Jar, 'colonisedOn'>, events: JarEvent[]): JarStatus {
+  const ordered = [...events].sort((a, b) => a.at.getTime() - b.at.getTime() || a.id - b.id);
+  let status: JarStatus = 'incubating';
+  let before: JarStatus | undefined;
+  for (const e of ordered) {
+    const next = impliedStatus(e, status);
+    if (next === 'contaminated' && status !== 'contaminated') before = status;
+    status = next;
+  }
+  // Imported or older jars may carry colonisedOn without a status event for it.
+  if (before === undefined || before === 'incubating') return jar.colonisedOn ? 'colonised' : 'incubating';
+  return before;
+}
+
+/**
+ * Brings each jar's status in line with its live incidents, inside the caller's transaction:
+ * a jar with a live incident becomes contaminated; one whose last live incident was voided or
+ * ruled out gets back the status it had before. Each change is a jar event and an audit event.
+ */
+export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: number[], why: string): Promise<void> {
+  if (jarIds.length === 0) return;
+  const jars = await m.createQueryBuilder(Jar, 'j').setLock('pessimistic_write').whereInIds(jarIds).getMany();
+  const liveRows: { id: number }[] = await m
+    .createQueryBuilder()
+    .select('j.id', 'id')
+    .from(Jar, 'j')
+    .where('j.id IN (:...ids)', { ids: jarIds })
+    .andWhere(jarIsContaminatedSql('j.id'))
+    .getRawMany();
+  const live = new Set(liveRows.map((r) => Number(r.id)));
+  const events = await m.findBy(JarEvent, { jarId: In(jarIds) });
+  const now = new Date();
+  const audit: AuditEntry[] = [];
+  for (const jar of jars) {
+    let next: JarStatus | undefined;
+    if (live.has(jar.id) && flaggable.includes(jar.status)) next = 'contaminated';
+    if (!live.has(jar.id) && jar.status === 'contaminated') {
+      next = statusBeforeContamination(jar, events.filter((e) => e.jarId === jar.id));
+    }
+    if (!next || next === jar.status) continue;
+    await m.insert(JarEvent, {
+      jarId: jar.id,
+      type: 'status',
+      at: now,
+      onDate: localDate(now),
+      byUserId: actor.id,
+      byName: actor.displayName,
+      newStatus: next,
+      note: why,
+    });
+    await m.update(Jar, { id: jar.id }, { status: next });
+    audit.push({ action: 'status', recordType: 'jar', recordId: jar.id, field: 'status', oldValue: jar.status, newValue: next, reason: why });
+  }
+  await recordAudit(m, actor, audit);
+}

@@ -1,0 +1,36 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+
+export const clusterDimensions = ['cookRun', 'culture', 'session'] as const;
+export type ClusterDimension = (typeof clusterDimensions)[number];
+
+/** A cluster that was alerted; later incidents that extend it update the row instead of mailing again. */
+@Entity({ name: 'cluster_alerts' })
+@Index(['dimension', 'levelId', 'lastFoundOn'])
+export class ClusterAlert {
+  @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
+  id: number;
+
+  @Column({ type: 'enum', enum: clusterDimensions })
+  dimension: ClusterDimension;
+
+  @Column({ type: 'int', unsigned: true })
+  levelId: number;
+
+  @Column({ type: 'varchar', length: 40 })
+  levelCode: string;
+
+  @Column({ type: 'date' })
+  firstFoundOn: string;
+
+  @Column({ type: 'date' })
+  lastFoundOn: string;
+
+  @Column({ type: 'int' })
+  incidentCount: number;
+
+  @Column({ type: 'int', unsigned: true })
+  triggeredByIncidentId: number;
+
+  @CreateDateColumn({ type: 'datetime', precision: 6 })
+  alertedAt: Date;
+}

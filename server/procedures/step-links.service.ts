@@ -1,0 +1,66 @@
+import type { StepLinkDto, StepLinkInput } from '../../shared/schemas/procedures';
+import { recordAudit, type Actor } from '../audit/audit.service';
+import { conflict, notFound } from '../core/errors';
+import { dataSource } from '../db/data-source';
+import { Incident } from '../incidents/incident.entity';
+import { IncidentStepLink } from './incident-step-link.entity';
+import { stepLinksRepository } from './step-links.repository';
+
+async function requireIncident(id: number) {
+  const incident = await dataSource.manager.findOneBy(Incident, { id });
+  if (!incident) throw notFound('Incident');
+  return incident;
+}
+
+export async function listStepLinks(incidentId: number): Promise<StepLinkDto[]> {
+  await requireIncident(incidentId);
+  return stepLinksRepository.listForIncident(incidentId);
+}
+
+export async function linkStep(actor: Actor, incidentId: number, input: StepLinkInput): Promise<StepLinkDto> {
+  const incident = await requireIncident(incidentId);
+  if (incident.voided) throw conflict('This incident is voided; it cannot be linked to a step.');
+  const step = await stepLinksRepository.stepWithVersion(input.stepId);
+  if (!step) throw notFound('Procedure step');
+  if (await dataSource.manager.existsBy(IncidentStepLink, { incidentId, stepId: input.stepId })) {
+    throw conflict('This incident is already linked to that step.', [{ path: 'stepId', message: 'is already linked to this incident' }]);
+  }
+  const id = await dataSource.transaction(async (m) => {
+    const link = await m.save(
+      m.create(IncidentStepLink, { incidentId, stepId: input.stepId, linkedById: actor.id, linkedByName: actor.displayName, note: input.note }),
+    );
+    // Filed under the incident, so the incident's own history shows who blamed which step.
+    await recordAudit(m, actor, [
+      {
+        action: 'link-step',
+        recordType: 'incident',
+        recordId: incidentId,
+        field: 'procedureStep',
+        newValue: { linkId: link.id, stepId: step.id, procedure: step.procedureTitle, version: step.version, position: step.position },
+        reason: input.note,
+      },
+    ]);
+    return link.id;
+  });
+  const dto = await stepLinksRepository.findDto(id);
+  if (!dto) throw notFound('Step link');
+  return dto;
+}
+
+export async function unlinkStep(actor: Actor, linkId: number): Promise<void> {
+  await dataSource.transaction(async (m) => {
+    const link = await m.findOneBy(IncidentStepLink, { id: linkId });
+    if (!link) throw notFound('Step link');
+    const step = await stepLinksRepository.stepWithVersion(link.stepId, m);
+    await m.delete(IncidentStepLink, { id: linkId });
+    await recordAudit(m, actor, [
+      {
+        action: 'unlink-step',
+        recordType: 'incident',
+        recordId: link.incidentId,
+        field: 'procedureStep',
+        oldValue: { linkId, stepId: link.stepId, procedure: step?.procedureTitle, version: step?.version, position: step?.position, note: link.note },
+      },
+    ]);
+  });
+}

@@ -1,0 +1,29 @@
+import type { ChecklistRowDto, SessionDto } from '../../shared/schemas/sessions';
+import type { ProcedureStep } from '../procedures/procedure-step.entity';
+import type { InoculationSession } from './inoculation-session.entity';
+import type { SessionStepCheck } from './session-step-check.entity';
+
+export const toSessionDto = (s: InoculationSession): SessionDto => ({
+  id: s.id,
+  code: s.code,
+  heldOn: s.heldOn,
+  startedAt: s.startedAt ? s.startedAt.toISOString() : null,
+  operatorId: s.operatorId,
+  operatorName: s.operatorName,
+  workspace: s.workspace,
+  procedureVersionId: s.procedureVersionId,
+  notes: s.notes,
+  createdAt: s.createdAt.toISOString(),
+});
+
+/** Every step of the version, ticked or not, in the version's order. */
+export function toChecklist(steps: ProcedureStep[], checks: SessionStepCheck[]): ChecklistRowDto[] {
+  const done = new Map(checks.map((c) => [c.stepId, c.done]));
+  return steps.map((s) => ({
+    stepId: s.id,
+    position: s.position,
+    text: s.text,
+    caution: s.caution,
+    done: done.get(s.id) ?? null,
+  }));
+}

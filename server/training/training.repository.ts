@@ -1,0 +1,128 @@
+import type { EntityManager, SelectQueryBuilder } from 'typeorm';
+import type { RetrainRequestDto, RetrainRequestListQuery, TrainingRecordDto, TrainingRecordListQuery } from '../../shared/schemas/training';
+import { applySortAndPage } from '../core/paging';
+import { dataSource } from '../db/data-source';
+import { ProcedureVersion } from '../procedures/procedure-version.entity';
+import { User } from '../users/user.entity';
+import { RetrainingRequest } from './retraining-request.entity';
+import { TrainingRecord } from './training-record.entity';
+
+type Raw = Record<string, unknown>;
+const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
+const iso = (v: unknown) => (v === null || v === undefined ? null : new Date(v as string | Date).toISOString());
+const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
+
+const recordSortable = { trainedOn: 't.trainedOn', personName: 't.personName', createdAt: 't.createdAt' };
+const requestSortable = { createdAt: 'r.createdAt', doneAt: 'r.doneAt' };
+
+function recordQuery(m: EntityManager): SelectQueryBuilder<TrainingRecord> {
+  return m
+    .createQueryBuilder(TrainingRecord, 't')
+    .innerJoin(ProcedureVersion, 'v', 'v.id = t.procedureVersionId')
+    .select([
+      't.id AS id',
+      't.userId AS userId',
+      't.personName AS personName',
+      'v.procedureId AS procedureId',
+      'v.title AS procedureTitle',
+      't.procedureVersionId AS procedureVersionId',
+      'v.version AS version',
+      't.trainerId AS trainerId',
+      't.trainerName AS trainerName',
+      't.trainedOn AS trainedOn',
+      't.notes AS notes',
+      't.createdAt AS createdAt',
+    ]);
+}
+
+const toRecordDto = (r: Raw): TrainingRecordDto => ({
+  id: Number(r.id),
+  userId: n(r.userId),
+  personName: String(r.personName),
+  procedureId: Number(r.procedureId),
+  procedureTitle: String(r.procedureTitle),
+  procedureVersionId: Number(r.procedureVersionId),
+  version: Number(r.version),
+  trainerId: n(r.trainerId),
+  trainerName: String(r.trainerName),
+  trainedOn: day(r.trainedOn),
+  notes: (r.notes as string | null) ?? null,
+  createdAt: iso(r.createdAt) ?? '',
+});
+
+function requestQuery(m: EntityManager): SelectQueryBuilder<RetrainingRequest> {
+  return m
+    .createQueryBuilder(RetrainingRequest, 'r')
+    .innerJoin(ProcedureVersion, 'v', 'v.id = r.procedureVersionId')
+    .innerJoin(User, 'u', 'u.id = r.userId')
+    .leftJoin(User, 'rb', 'rb.id = r.requestedById')
+    .select([
+      'r.id AS id',
+      'r.userId AS userId',
+      'u.displayName AS userName',
+      'v.procedureId AS procedureId',
+      'v.title AS procedureTitle',
+      'r.procedureVersionId AS procedureVersionId',
+      'v.version AS version',
+      'r.requestedById AS requestedById',
+      'rb.displayName AS requestedByName',
+      'r.reason AS reason',
+      'r.doneAt AS doneAt',
+      'r.createdAt AS createdAt',
+    ]);
+}
+
+const toRequestDto = (r: Raw): RetrainRequestDto => ({
+  id: Number(r.id),
+  userId: Number(r.userId),
+  userName: String(r.userName),
+  procedureId: Number(r.procedureId),
+  procedureTitle: String(r.procedureTitle),
+  procedureVersionId: Number(r.procedureVersionId),
+  version: Number(r.version),
+  requestedById: n(r.requestedById),
+  requestedByName: (r.requestedByName as string | null) ?? null,
+  reason: (r.reason as string | null) ?? null,
+  doneAt: iso(r.doneAt),
+  createdAt: iso(r.createdAt) ?? '',
+});
+
+export const trainingRepository = {
+  async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], number]> {
+    const qb = recordQuery(dataSource.manager);
+    if (q.userId) qb.andWhere('t.userId = :userId', { userId: q.userId });
+    if (q.procedureId) qb.andWhere('v.procedureId = :procedureId', { procedureId: q.procedureId });
+    if (q.procedureVersionId) qb.andWhere('t.procedureVersionId = :pv', { pv: q.procedureVersionId });
+    const total = await qb.clone().getCount();
+    applySortAndPage(qb, q, recordSortable, '-trainedOn', 't.id');
+    return [(await qb.getRawMany<Raw>()).map(toRecordDto), total];
+  },
+
+  async findRecord(id: number): Promise<TrainingRecordDto | undefined> {
+    const row = await recordQuery(dataSource.manager).where('t.id = :id', { id }).getRawOne<Raw>();
+    return row ? toRecordDto(row) : undefined;
+  },
+
+  /** Open requests this training answers: the same procedure, at this version or an older one. */
+  openRequestsAnswered: (m: EntityManager, userId: number, procedureId: number, version: number) =>
+    m
+      .createQueryBuilder(RetrainingRequest, 'r')
+      .innerJoin(ProcedureVersion, 'v', 'v.id = r.procedureVersionId')
+      .where('r.userId = :userId AND r.doneAt IS NULL', { userId })
+      .andWhere('v.procedureId = :procedureId AND v.version <= :version', { procedureId, version })
+      .getMany(),
+
+  async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], number]> {
+    const qb = requestQuery(dataSource.manager);
+    if (q.userId) qb.andWhere('r.userId = :userId', { userId: q.userId });
+    if (q.open) qb.andWhere(q.open === 'true' ? 'r.doneAt IS NULL' : 'r.doneAt IS NOT NULL');
+    const total = await qb.clone().getCount();
+    applySortAndPage(qb, q, requestSortable, '-createdAt', 'r.id');
+    return [(await qb.getRawMany<Raw>()).map(toRequestDto), total];
+  },
+
+  async findRequest(id: number): Promise<RetrainRequestDto | undefined> {
+    const row = await requestQuery(dataSource.manager).where('r.id = :id', { id }).getRawOne<Raw>();
+    return row ? toRequestDto(row) : undefined;
+  },
+};

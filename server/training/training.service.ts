@@ -1,0 +1,118 @@
+import type { Page } from '../../shared/schemas/common';
+import type {
+  CreateRetrainRequestInput,
+  CreateTrainingRecordInput,
+  RetrainRequestDto,
+  RetrainRequestListQuery,
+  TrainingRecordDto,
+  TrainingRecordListQuery,
+} from '../../shared/schemas/training';
+import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import { notFound, unprocessable } from '../core/errors';
+import { pageResult } from '../core/paging';
+import { dataSource } from '../db/data-source';
+import { notifyRetrainRequested } from '../mail/retraining-mail.service';
+import { findVersion, getProcedureVersion } from '../procedures/procedures.service';
+import { User } from '../users/user.entity';
+import { RetrainingRequest } from './retraining-request.entity';
+import { TrainingRecord } from './training-record.entity';
+import { trainingRepository } from './training.repository';
+
+async function requirePerson(userId: number) {
+  const user = await dataSource.manager.findOneBy(User, { id: userId });
+  if (!user) throw notFound('User');
+  if (!user.active) throw unprocessable('That account is deactivated.', [{ path: 'userId', message: 'is a deactivated account' }]);
+  return user;
+}
+
+async function requireVersion(id: number) {
+  const version = await findVersion(id);
+  if (!version) throw notFound('Procedure version');
+  return version;
+}
+
+export async function listTrainingRecords(q: TrainingRecordListQuery): Promise<Page<TrainingRecordDto>> {
+  const [items, total] = await trainingRepository.listRecords(q);
+  return pageResult(items, total, q);
+}
+
+/** Records the training and closes the person's open retraining requests that it answers. */
+export async function createTrainingRecord(actor: Actor, input: CreateTrainingRecordInput): Promise<TrainingRecordDto> {
+  const person = await requirePerson(input.userId);
+  const version = await requireVersion(input.procedureVersionId);
+  const id = await dataSource.transaction(async (m) => {
+    const record = await m.save(
+      m.create(TrainingRecord, {
+        userId: person.id,
+        personName: person.displayName,
+        procedureVersionId: version.id,
+        trainerId: actor.id,
+        trainerName: actor.displayName,
+        trainedOn: input.trainedOn,
+        notes: input.notes,
+      }),
+    );
+    const answered = await trainingRepository.openRequestsAnswered(m, person.id, version.procedureId, version.version);
+    const now = new Date();
+    for (const r of answered) await m.update(RetrainingRequest, { id: r.id }, { doneAt: now });
+    const entries: AuditEntry[] = [
+      {
+        action: 'create',
+        recordType: 'training-record',
+        recordId: record.id,
+        newValue: { userId: person.id, procedureVersionId: version.id, version: version.version, trainedOn: input.trainedOn },
+      },
+      ...answered.map((r) => ({
+        action: 'close',
+        recordType: 'retraining-request',
+        recordId: r.id,
+        field: 'doneAt',
+        oldValue: null,
+        newValue: now,
+        reason: `answered by training record ${record.id}`,
+      })),
+    ];
+    await recordAudit(m, actor, entries);
+    return record.id;
+  });
+  const dto = await trainingRepository.findRecord(id);
+  if (!dto) throw notFound('Training record');
+  return dto;
+}
+
+export async function listRetrainRequests(q: RetrainRequestListQuery): Promise<Page<RetrainRequestDto>> {
+  const [items, total] = await trainingRepository.listRequests(q);
+  return pageResult(items, total, q);
+}
+
+export async function createRetrainRequest(actor: Actor, input: CreateRetrainRequestInput): Promise<RetrainRequestDto> {
+  const person = await requirePerson(input.userId);
+  const version = await requireVersion(input.procedureVersionId);
+  const id = await dataSource.transaction(async (m) => {
+    const request = await m.save(
+      m.create(RetrainingRequest, { userId: person.id, procedureVersionId: version.id, requestedById: actor.id, reason: input.reason }),
+    );
+    await recordAudit(m, actor, [
+      {
+        action: 'create',
+        recordType: 'retraining-request',
+        recordId: request.id,
+        newValue: { userId: person.id, procedureVersionId: version.id, version: version.version },
+        reason: input.reason,
+      },
+    ]);
+    return request.id;
+  });
+  const detail = await getProcedureVersion(version.id);
+  const mailed = await notifyRetrainRequested(person.id, {
+    requestedByName: actor.displayName,
+    reason: input.reason,
+    procedureTitle: detail.title,
+    version: detail.version,
+    procedureVersionId: detail.id,
+    steps: detail.steps,
+  });
+  const dto = await trainingRepository.findRequest(id);
+  if (!dto) throw notFound('Retraining request');
+  return { ...dto, mailed };
+}

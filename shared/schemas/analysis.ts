@@ -1,0 +1,233 @@
+import { z } from 'zod';
+import { factorSchema, type Factor } from '../enums';
+import { idSchema, localDateSchema } from './common';
+
+const formatSchema = z.enum(['json', 'csv']).default('json');
+
+const periodBase = z.object({ from: localDateSchema.optional(), to: localDateSchema.optional(), format: formatSchema });
+
+/** `to` before `from` is reported on `to`, the field a user would correct. */
+const inOrder = (q: { from?: string | undefined; to?: string | undefined }) => !q.from || !q.to || q.from <= q.to;
+const orderIssue = { path: ['to'], message: 'must not be before from' };
+
+export const periodQuerySchema = periodBase.refine((q) => inOrder(q), orderIssue);
+export type PeriodQuery = z.infer<typeof periodQuerySchema>;
+
+export const ratesQuerySchema = periodBase.extend({ by: factorSchema }).refine((q) => inOrder(q), orderIssue);
+export type RatesQuery = z.infer<typeof ratesQuerySchema>;
+
+export const crosstabQuerySchema = periodBase
+  .extend({ rows: factorSchema, cols: factorSchema })
+  .refine((q) => inOrder(q), orderIssue)
+  .refine((q) => q.rows !== q.cols, { path: ['cols'], message: 'must be a different factor from rows' });
+export type CrosstabQuery = z.infer<typeof crosstabQuerySchema>;
+
+export const causesQuerySchema = periodBase
+  .extend({ minJars: z.coerce.number().int().min(1).max(1_000_000).default(1) })
+  .refine((q) => inOrder(q), orderIssue);
+export type CausesQuery = z.infer<typeof causesQuerySchema>;
+
+export const beforeAfterQuerySchema = z.object({
+  actionId: idSchema,
+  /** Length of each period; by default the days elapsed since the action, at most 90. */
+  days: z.coerce.number().int().min(1).max(365).optional(),
+  format: formatSchema,
+});
+export type BeforeAfterQuery = z.infer<typeof beforeAfterQuerySchema>;
+
+export const jarsBehindQuerySchema = periodBase
+  .extend({
+    factor: factorSchema,
+    level: z.string().min(1, 'name the level').max(120),
+    only: z.enum(['all', 'contaminated', 'incubating']).default('all'),
+    page: z.coerce.number().int().min(1).default(1),
+    pageSize: z.coerce.number().int().min(1).max(200).default(50),
+  })
+  .refine((q) => inOrder(q), orderIssue);
+export type JarsBehindQuery = z.infer<typeof jarsBehindQuerySchema>;
+
+export type Interval = [number, number];
+
+export interface Tally {
+  jars: number;
+  contaminated: number;
+  incubating: number;
+  rate: number | null;
+  ci95: Interval;
+}
+
+export interface RateRow extends Tally {
+  level: string;
+}
+
+export interface RatesDto {
+  by: Factor;
+  from: string | null;
+  to: string | null;
+  overall: Tally;
+  /** Jars in the period without this attribute: left out of the rows. */
+  notRecorded: number;
+  rows: RateRow[];
+}
+
+export interface CrosstabCell extends Tally {
+  row: string;
+  col: string;
+}
+
+export interface CrosstabDto {
+  rowFactor: Factor;
+  colFactor: Factor;
+  rows: string[];
+  cols: string[];
+  cells: CrosstabCell[];
+}
+
+export interface FactorLevel {
+  factor: Factor;
+  level: string;
+}
+
+export interface CauseRow extends FactorLevel {
+  jars: number;
+  contaminated: number;
+  incubating: number;
+  restJars: number;
+  restContaminated: number;
+  rate: number;
+  restRate: number;
+  relativeRisk: number;
+  rr95: Interval;
+  pValue: number;
+  qValue: number;
+  confoundedWith: FactorLevel[];
+  hint: string | null;
+  /** Where the hint comes from: the trade's common practice, or a named source beside it. */
+  hintBasis: string | null;
+  /** Contaminant code → jars, over this level's contaminated jars. */
+  contaminants: Record<string, number>;
+  medianDaysToDetection: number | null;
+}
+
+export interface CausesDto {
+  from: string | null;
+  to: string | null;
+  minJars: number;
+  causes: CauseRow[];
+}
+
+export interface WeeklyGrain {
+  grain: string;
+  jars: number;
+  contaminated: number;
+  incubating: number;
+  rate: number;
+}
+
+export interface WeeklyRow {
+  week: string;
+  jars: number;
+  contaminated: number;
+  incubating: number;
+  rate: number;
+  ucl: number;
+  lcl: number;
+  outOfControl: boolean;
+  provisional: boolean;
+  grains: WeeklyGrain[];
+}
+
+export interface WeeklyDto {
+  from: string;
+  to: string;
+  pBar: number | null;
+  observationWindowDays: number;
+  weeks: WeeklyRow[];
+}
+
+export interface ColonisationCurve {
+  grain: string;
+  jars: number;
+  colonised: number;
+  censored: number;
+  medianDays: number | null;
+  steps: { day: number; atRisk: number; colonised: number; censored: number; stillColonising: number }[];
+}
+
+export interface ColonisationDto {
+  from: string | null;
+  to: string | null;
+  curves: ColonisationCurve[];
+}
+
+export interface LethalityRow {
+  cookRun: string;
+  cookedOn: string | null;
+  container: string | null;
+  minutesAtPressure: number;
+  gaugeKPa: number | null;
+  altitudeM: number;
+  f0: number | null;
+  /** log: from the temperature log; estimate: minutes at the steam temperature (an upper bound). */
+  f0Source: 'log' | 'estimate' | null;
+  /** The gauge was not recorded, so the estimate assumes the usual 15 psi set-point. */
+  assumedGauge: boolean;
+  belowTarget: boolean;
+  jars: number;
+  contaminated: number;
+  rate: number | null;
+}
+
+export interface LethalityDto {
+  from: string | null;
+  to: string | null;
+  target: number;
+  runs: LethalityRow[];
+}
+
+export interface PeriodCount {
+  from: string;
+  to: string;
+  jars: number;
+  contaminated: number;
+  incubating: number;
+  rate: number | null;
+  ci95: Interval;
+}
+
+export interface RateComparison {
+  /** after − before; negative means fewer contaminated jars after the action. */
+  difference: number | null;
+  ci95: [number | null, number | null];
+  pValue: number | null;
+}
+
+export interface BeforeAfterDto extends RateComparison {
+  actionId: number;
+  factor: Factor;
+  level: string;
+  pivot: string;
+  days: number;
+  before: PeriodCount;
+  after: PeriodCount;
+}
+
+export interface JarBehind {
+  id: number;
+  label: string;
+  inoculatedOn: string;
+  status: string;
+  contaminated: boolean;
+  incubating: boolean;
+  contaminant: string | null;
+  foundOn: string | null;
+}
+
+export interface JarsBehindDto {
+  factor: Factor;
+  level: string;
+  items: JarBehind[];
+  total: number;
+  page: number;
+  pageSize: number;
+}

@@ -1,0 +1,111 @@
+import { z } from 'zod';
+import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { registerCodeSchema } from './grain';
+
+export const f0Sources = ['log', 'estimate'] as const;
+export type F0Source = (typeof f0Sources)[number];
+
+/** How the screen names each source: the estimate ignores the lag of the jar centre behind the chamber. */
+export const f0SourceLabels: Record<F0Source, string> = {
+  log: 'from temperature log',
+  estimate: 'estimated upper bound',
+};
+
+/** 15 psi gauge, the usual set-point of a pressure cooker (TRADE.md §1, common practice). */
+export const defaultGaugeKPa = 103.4;
+
+export const cookRunSchema = z.object({
+  id: z.number().int(),
+  code: z.string(),
+  vessel: z.string().nullable(),
+  startedAt: z.string().nullable(),
+  cookedOn: z.string().nullable(),
+  minutesAtPressure: z.number().int(),
+  gaugeKPa: z.number().nullable(),
+  gaugePsi: z.number().nullable(),
+  ventingMinutes: z.number().int().nullable(),
+  altitudeM: z.number().int(),
+  container: z.string().nullable(),
+  loadCount: z.number().int().nullable(),
+  operatorId: z.number().int().nullable(),
+  operatorName: z.string().nullable(),
+  f0: z.number().nullable(),
+  f0Source: z.enum(f0Sources).nullable(),
+  f0Label: z.string().nullable(),
+  /** Saturated-steam temperature at the gauge pressure (or 103.4 kPa when none was read) and site altitude. */
+  sterilisingTemperatureC: z.number().nullable(),
+  lethalityTarget: z.number(),
+  lowLethality: z.boolean(),
+  notes: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type CookRunDto = z.infer<typeof cookRunSchema>;
+
+export const cookRunDetailSchema = cookRunSchema.extend({ readingsCount: z.number().int() });
+export type CookRunDetailDto = z.infer<typeof cookRunDetailSchema>;
+
+const cookRunFields = {
+  code: registerCodeSchema,
+  vessel: z.string().trim().max(80).nullish(),
+  startedAt: z.iso.datetime({ offset: true, error: 'must be a date and time such as 2026-03-01T09:30:00Z' }).nullish(),
+  cookedOn: localDateSchema.nullish(),
+  minutesAtPressure: z.number().int('must be whole minutes').min(1, 'must be at least 1 minute').max(600),
+  gaugeKPa: z.number().min(0, 'must not be negative').max(350, 'must be at most 350 kPa').nullish(),
+  ventingMinutes: z.number().int('must be whole minutes').min(0).max(120).nullish(),
+  altitudeM: z.number().int('must be whole metres').min(-500).max(5000),
+  container: z.string().trim().min(1).max(40),
+  loadCount: z.number().int().min(1).max(1000).nullish(),
+  operatorId: idSchema.nullish(),
+  operatorName: z.string().trim().min(1).max(120).nullish(),
+  notes: z.string().trim().max(4000).nullish(),
+};
+
+export const createCookRunSchema = z
+  .object({ ...cookRunFields, altitudeM: cookRunFields.altitudeM.default(0) })
+  .refine((v) => v.cookedOn || v.startedAt, {
+    path: ['cookedOn'],
+    message: 'enter the date of the run or its start time',
+  })
+  .refine((v) => !(v.operatorId && v.operatorName), {
+    path: ['operatorName'],
+    message: 'give either a user or a staff name, not both',
+  });
+export type CreateCookRunInput = z.input<typeof createCookRunSchema>;
+export type CreateCookRunValues = z.output<typeof createCookRunSchema>;
+
+export const updateCookRunSchema = z
+  .object({ ...cookRunFields, reason: z.string().trim().max(500).optional() })
+  .partial()
+  .refine((v) => !(v.operatorId && v.operatorName), {
+    path: ['operatorName'],
+    message: 'give either a user or a staff name, not both',
+  });
+export type UpdateCookRunInput = z.infer<typeof updateCookRunSchema>;
+
+export const cookRunSortFields = ['code', 'cookedOn', 'minutesAtPressure', 'f0', 'container'] as const;
+
+export const cookRunFiltersSchema = z.object({
+  q: z.string().trim().max(80).optional(),
+  container: z.string().trim().max(40).optional(),
+  from: localDateSchema.optional(),
+  to: localDateSchema.optional(),
+  lowLethality: z.enum(['true', 'false']).optional(),
+});
+export const cookRunListQuerySchema = pageQuerySchema.extend(cookRunFiltersSchema.shape);
+export type CookRunListQuery = z.infer<typeof cookRunListQuerySchema>;
+export type CookRunFilters = z.infer<typeof cookRunFiltersSchema>;
+
+export const cookRunReadingSchema = z.object({ minute: z.number(), celsius: z.number(), lethalRate: z.number() });
+export type CookRunReadingDto = z.infer<typeof cookRunReadingSchema>;
+
+export const cookRunReadingsSchema = z.object({
+  cookRunId: z.number().int(),
+  f0: z.number().nullable(),
+  f0Source: z.enum(f0Sources).nullable(),
+  readings: z.array(cookRunReadingSchema),
+});
+export type CookRunReadingsDto = z.infer<typeof cookRunReadingsSchema>;
+
+/** Column names a temperature log may use, compared case-insensitively. */
+export const readingMinuteHeaders = ['minute', 'minutes', 'elapsed_min'] as const;
+export const readingCelsiusHeaders = ['celsius', 'temp_c', 'temperature'] as const;

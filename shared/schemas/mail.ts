@@ -1,0 +1,69 @@
+import { z } from 'zod';
+import type { Role } from '../enums';
+import { pageQuerySchema } from './common';
+
+export const mailKinds = ['new-incident', 'cluster-alert', 'retraining', 'weekly-digest'] as const;
+export const mailKindSchema = z.enum(mailKinds);
+export type MailKind = (typeof mailKinds)[number];
+
+export const mailKindLabels: Record<MailKind, string> = {
+  'new-incident': 'A new incident is filed',
+  'cluster-alert': 'Several incidents share a cook run, culture or session',
+  retraining: 'You are asked to retrain on a procedure',
+  'weekly-digest': 'Monday digest with the weekly contamination table',
+};
+
+/** Who is sent each kind; a person can still turn a kind off for themselves. */
+export const mailAudience: Record<MailKind, readonly Role[] | 'addressee'> = {
+  'new-incident': ['supervisor'],
+  'cluster-alert': ['supervisor', 'trainer'],
+  retraining: 'addressee',
+  'weekly-digest': ['supervisor', 'trainer', 'admin'],
+};
+
+export const mailPreferencesSchema = z.object({
+  'new-incident': z.boolean(),
+  'cluster-alert': z.boolean(),
+  retraining: z.boolean(),
+  'weekly-digest': z.boolean(),
+});
+export type MailPreferencesDto = z.infer<typeof mailPreferencesSchema>;
+
+export const updateMailPreferencesSchema = mailPreferencesSchema
+  .partial()
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: 'name at least one kind of mail' });
+export type UpdateMailPreferencesInput = z.infer<typeof updateMailPreferencesSchema>;
+
+export const mailStatuses = ['sent', 'failed'] as const;
+export const mailStatusSchema = z.enum(mailStatuses);
+export type MailStatus = (typeof mailStatuses)[number];
+
+export const sentMailListQuerySchema = pageQuerySchema.extend({
+  kind: mailKindSchema.optional(),
+  status: mailStatusSchema.optional(),
+});
+export type SentMailListQuery = z.infer<typeof sentMailListQuerySchema>;
+
+export const sentMailSchema = z.object({
+  id: z.number().int(),
+  kind: mailKindSchema,
+  to: z.string(),
+  toUserId: z.number().int().nullable(),
+  subject: z.string(),
+  status: mailStatusSchema,
+  error: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type SentMailDto = z.infer<typeof sentMailSchema>;
+
+export const sentMailDetailSchema = sentMailSchema.extend({ text: z.string() });
+export type SentMailDetailDto = z.infer<typeof sentMailDetailSchema>;
+
+export const digestResultSchema = z.object({
+  week: z.string(),
+  sent: z.number().int(),
+  failed: z.number().int(),
+  skipped: z.boolean(),
+});
+export type DigestResultDto = z.infer<typeof digestResultSchema>;

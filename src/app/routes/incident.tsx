@@ -1,0 +1,16 @@
+import { useParams } from 'react-router';
+import { NotFound } from '../../components/errors/not-found';
+import { useCurrentUser } from '../../features/auth/api/use-me';
+import { IncidentDetail } from '../../features/incidents/components/incident-detail';
+
+export function IncidentRoute() {
+  const me = useCurrentUser();
+  const id = Number(useParams().id);
+  if (!Number.isInteger(id) || id < 1) return <NotFound />;
+  return (
+    <>
+      <title>{`Incident ${id} · Asepta`}</title>
+      <IncidentDetail id={id} me={me} />
+    </>
+  );
+}

@@ -1,0 +1,89 @@
+import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { factorSchema, type Factor } from '../../../../shared/enums';
+import type {
+  CausesDto,
+  ColonisationDto,
+  CrosstabDto,
+  JarsBehindDto,
+  LethalityDto,
+  RatesDto,
+  WeeklyDto,
+} from '../../../../shared/schemas/analysis';
+import { localDateSchema } from '../../../../shared/schemas/common';
+import { api, apiUrl } from '../../../lib/api-client';
+
+export interface Period {
+  from: string | undefined;
+  to: string | undefined;
+}
+
+/** from/to live in the URL; a value the server would refuse is dropped rather than sent. */
+export function readPeriod(params: URLSearchParams): Period {
+  const pick = (key: 'from' | 'to') => {
+    const parsed = localDateSchema.safeParse(params.get(key));
+    return parsed.success ? parsed.data : undefined;
+  };
+  const from = pick('from');
+  const to = pick('to');
+  return from && to && from > to ? { from, to: undefined } : { from, to };
+}
+
+export function readFactor(params: URLSearchParams, key: string, fallback: Factor): Factor {
+  const parsed = factorSchema.safeParse(params.get(key));
+  return parsed.success ? parsed.data : fallback;
+}
+
+export type JarsOnly = 'all' | 'contaminated' | 'incubating';
+
+/** The address of a table's CSV export: the same route and filters, answered as a file. */
+export const csvUrl = (path: string, query: Record<string, string | number | undefined>) =>
+  apiUrl(`/analysis/${path}`, { ...query, format: 'csv' });
+
+const get = <T>(path: string, query: Record<string, string | number | undefined>, signal: AbortSignal) =>
+  api.get<T>(`/analysis/${path}`, { query, signal });
+
+export const analysisQueries = {
+  all: ['analysis'] as const,
+  weekly: (p: Period) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'weekly', p] as const,
+      queryFn: ({ signal }) => get<WeeklyDto>('weekly', { ...p }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  rates: (by: Factor, p: Period) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'rates', by, p] as const,
+      queryFn: ({ signal }) => get<RatesDto>('rates', { by, ...p }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  crosstab: (rows: Factor, cols: Factor, p: Period) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'crosstab', rows, cols, p] as const,
+      queryFn: ({ signal }) => get<CrosstabDto>('crosstab', { rows, cols, ...p }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  causes: (p: Period, minJars: number) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'causes', p, minJars] as const,
+      queryFn: ({ signal }) => get<CausesDto>('causes', { ...p, minJars }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  colonisation: (p: Period) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'colonisation', p] as const,
+      queryFn: ({ signal }) => get<ColonisationDto>('colonisation', { ...p }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  lethality: (p: Period) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'lethality', p] as const,
+      queryFn: ({ signal }) => get<LethalityDto>('lethality', { ...p }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  jars: (factor: Factor, level: string, only: JarsOnly, p: Period, page: number) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'jars', factor, level, only, p, page] as const,
+      queryFn: ({ signal }) => get<JarsBehindDto>('jars', { factor, level, only, ...p, page, pageSize: 100 }, signal),
+      placeholderData: keepPreviousData,
+    }),
+};

@@ -1,0 +1,152 @@
+import type { ReactNode } from 'react';
+import { NavLink, useSearchParams } from 'react-router';
+import { buttonClasses } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { Notice } from '../../../components/ui/notice';
+import { Spinner } from '../../../components/ui/spinner';
+import { TextInput } from '../../../components/ui/text-input';
+import { paths } from '../../../config/paths';
+import { errorMessage } from '../../../lib/api-client';
+import { cx } from '../../../lib/cx';
+import { patchParams } from '../../../lib/list-params';
+import type { Period } from '../api/analysis-queries';
+
+const tabs = [
+  { label: 'Weekly table', to: paths.analysisWeekly.to },
+  { label: 'Likely causes', to: paths.analysisCauses.to },
+  { label: 'Rates', to: paths.analysisRates.to },
+  { label: 'Cross-table', to: paths.analysisCrosstab.to },
+  { label: 'Colonisation', to: paths.analysisColonisation.to },
+  { label: 'Cook lethality', to: paths.analysisLethality.to },
+] as const;
+
+/** The analysis screens share one period, so switching screens keeps it. */
+export function AnalysisTabs() {
+  const [params] = useSearchParams();
+  const keep = { from: params.get('from') ?? undefined, to: params.get('to') ?? undefined };
+  return (
+    <nav aria-label="Analysis screens" className="no-print mb-6 flex flex-wrap gap-2 border-b-2 border-line pb-3">
+      {tabs.map((t) => (
+        <NavLink
+          key={t.label}
+          to={t.to(keep)}
+          className={({ isActive }) =>
+            cx(
+              'rounded-md px-3 py-2 font-medium',
+              isActive ? 'bg-accent text-accent-fg' : 'text-accent hover:bg-accent-soft',
+            )
+          }
+        >
+          {t.label}
+        </NavLink>
+      ))}
+    </nav>
+  );
+}
+
+export function PeriodPicker({ period, children }: { period: Period; children?: ReactNode }) {
+  const [params, setParams] = useSearchParams();
+  const set = (key: 'from' | 'to', value: string) => setParams(patchParams(params, { [key]: value || undefined }));
+  return (
+    <div className="no-print mb-6 flex flex-wrap items-end gap-4">
+      <TextInput
+        type="date"
+        label="From"
+        hint="Jars inoculated on or after"
+        value={period.from ?? ''}
+        max={period.to}
+        onChange={(e) => set('from', e.target.value)}
+        className="w-44"
+      />
+      <TextInput
+        type="date"
+        label="To"
+        hint="…and on or before"
+        value={period.to ?? ''}
+        min={period.from}
+        onChange={(e) => set('to', e.target.value)}
+        className="w-44"
+      />
+      {children}
+    </div>
+  );
+}
+
+export function CsvLink({ href, label = 'Export CSV' }: { href: string; label?: string }) {
+  return (
+    <a href={href} download className={buttonClasses('secondary')}>
+      {label}
+    </a>
+  );
+}
+
+/** DESIGN.md §4.3: the screen says plainly what the numbers can and cannot show. */
+export function LeadNotProof() {
+  return (
+    <Notice tone="info" title="An association is a lead, not proof" className="mb-6">
+      <p>
+        A level with a high rate and a small q-value is worth checking first; it does not prove that level caused the
+        contamination. Jars from one run or one culture are not independent, so the p- and q-values are too small and
+        rank leads rather than measure certainty. Where two levels hold the same jars the data cannot tell them apart.
+      </p>
+    </Notice>
+  );
+}
+
+interface LoadStateProps {
+  isPending: boolean;
+  error: unknown;
+  onRetry: () => void;
+  isEmpty: boolean;
+  emptyTitle: string;
+  children: ReactNode;
+}
+
+/** Loading, failure and empty states shared by every analysis screen. */
+export function LoadState({ isPending, error, onRetry, isEmpty, emptyTitle, children }: LoadStateProps) {
+  if (isPending)
+    return (
+      <div className="flex justify-center py-16 text-accent">
+        <Spinner label="Counting jars" size={32} />
+      </div>
+    );
+  if (error) {
+    return (
+      <Notice tone="danger" title="The figures could not be loaded">
+        <p role="alert">{errorMessage(error)}</p>
+        <button type="button" className={cx(buttonClasses('secondary'), 'mt-3')} onClick={onRetry}>
+          Try again
+        </button>
+      </Notice>
+    );
+  }
+  if (isEmpty) {
+    return (
+      <EmptyState icon="search" title={emptyTitle}>
+        Choose a wider period, or record jars and incidents first.
+      </EmptyState>
+    );
+  }
+  return <>{children}</>;
+}
+
+export function Table({ caption, children, className }: { caption: string; children: ReactNode; className?: string }) {
+  return (
+    <div
+      role="region"
+      aria-label={caption}
+
+      className={cx('overflow-x-auto rounded-lg border-2 border-line bg-surface-raised', className)}
+    >
+      <table className="w-full border-collapse text-left">
+        <caption className="sr-only">{caption}</caption>
+        {children}
+      </table>
+    </div>
+  );
+}
+
+export const th = 'px-3 py-2 text-sm font-semibold whitespace-nowrap border-b-2 border-line';
+export const td = 'px-3 py-2 border-t border-line align-top';
+export const nowrap = 'whitespace-nowrap';
+export const num = 'text-right tabular-nums';

@@ -1,0 +1,112 @@
+import { useQuery } from '@tanstack/react-query';
+import { useSearchParams } from 'react-router';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Select } from '../../../components/ui/select';
+import { patchParams } from '../../../lib/list-params';
+import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
+import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
+import { factorLabels, factorOptions, interval, percent } from './labels';
+
+/** Two factors at once: a grid shaded by rate, with the counts in every cell. */
+export function CrosstabScreen() {
+  const [params, setParams] = useSearchParams();
+  const period = readPeriod(params);
+  const rows = readFactor(params, 'rows', 'grain');
+  const colsWanted = readFactor(params, 'cols', 'cookMinutes');
+  const cols = colsWanted === rows ? (rows === 'grain' ? 'cookMinutes' : 'grain') : colsWanted;
+  const table = useQuery(analysisQueries.crosstab(rows, cols, period));
+  const data = table.data;
+  const cells = new Map(data?.cells.map((c) => [`${c.row}\u0000${c.col}`, c]));
+  const top = Math.max(0.0001, ...(data?.cells.map((c) => c.rate ?? 0) ?? [0]));
+
+  return (
+    <>
+      <PageHeader
+        title="Cross-table"
+        description="Contamination for every pair of levels of two factors — for example grain against minutes at pressure."
+        actions={<CsvLink href={csvUrl('crosstab', { rows, cols, ...period })} />}
+      />
+      <AnalysisTabs />
+      <PeriodPicker period={period}>
+        <Select
+          label="Rows"
+          options={factorOptions}
+          value={rows}
+          onChange={(e) => setParams(patchParams(params, { rows: e.target.value }))}
+          className="w-56"
+        />
+        <Select
+          label="Columns"
+          options={factorOptions.filter((o) => o.value !== rows)}
+          value={cols}
+          onChange={(e) => setParams(patchParams(params, { cols: e.target.value }))}
+          className="w-56"
+        />
+      </PeriodPicker>
+      <LoadState
+        isPending={table.isPending}
+        error={table.error}
+        onRetry={() => void table.refetch()}
+        isEmpty={!data || data.cells.length === 0}
+        emptyTitle="No jars in this period record both factors."
+      >
+        {data && (
+          <>
+            <Table caption={`${factorLabels[rows]} by ${factorLabels[cols]}`}>
+              <thead>
+                <tr>
+                  <th scope="col" className={th}>
+                    {factorLabels[rows]} \ {factorLabels[cols]}
+                  </th>
+                  {data.cols.map((c) => (
+                    <th key={c} scope="col" className={`${th} ${num}`}>
+                      {c}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {data.rows.map((r) => (
+                  <tr key={r}>
+                    <th scope="row" className={`${td} font-semibold`}>
+                      {r}
+                    </th>
+                    {data.cols.map((c) => {
+                      const cell = cells.get(`${r}\u0000${c}`);
+                      if (!cell)
+                        return (
+                          <td key={c} className={`${td} ${num} text-muted`}>
+                            —
+                          </td>
+                        );
+                      // Shade by rate relative to the worst cell; text stays dark enough on every shade.
+                      const alpha = 0.08 + 0.6 * ((cell.rate ?? 0) / top);
+                      return (
+                        <td
+                          key={c}
+                          className={`${td} ${num}`}
+                          style={{ backgroundColor: `rgb(164 38 28 / ${alpha.toFixed(2)})` }}
+                          title={`95 % interval ${interval(cell.ci95)}`}
+                        >
+                          <span className="font-semibold">{percent(cell.rate)}</span>
+                          <span className="block text-sm">
+                            {cell.contaminated}/{cell.jars}
+                            {cell.incubating > 0 && ` · ${cell.incubating} incubating`}
+                          </span>
+                        </td>
+                      );
+                    })}
+                  </tr>
+                ))}
+              </tbody>
+            </Table>
+            <p className="mt-3 text-sm text-muted">
+              Each cell: rate, then contaminated of jars. Darker cells have higher rates; hover a cell for its 95 %
+              interval.
+            </p>
+          </>
+        )}
+      </LoadState>
+    </>
+  );
+}

@@ -1,0 +1,132 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link, useSearchParams } from 'react-router';
+import { contaminantNames, type Contaminant } from '../../../../shared/enums';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { PageHeader } from '../../../components/ui/page-header';
+import { paths } from '../../../config/paths';
+import { patchParams } from '../../../lib/list-params';
+import { analysisQueries, readFactor, readPeriod, type JarsOnly } from '../api/analysis-queries';
+import { AnalysisTabs, LoadState, Table, td, th } from './analysis-frame';
+import { factorLabels } from './labels';
+
+const onlyLabels: Record<JarsOnly, string> = {
+  all: 'All jars',
+  contaminated: 'Contaminated jars',
+  incubating: 'Incubating jars',
+};
+
+/** The jars behind a number on the analysis screens, each linking to its own page. */
+export function JarsBehindScreen() {
+  const [params, setParams] = useSearchParams();
+  const period = readPeriod(params);
+  const factor = readFactor(params, 'factor', 'grain');
+  const level = params.get('level') ?? '';
+  const onlyParam = params.get('only');
+  const only: JarsOnly = onlyParam === 'contaminated' || onlyParam === 'incubating' ? onlyParam : 'all';
+  const page = Math.max(1, Number(params.get('page')) || 1);
+  const jars = useQuery({ ...analysisQueries.jars(factor, level, only, period, page), enabled: level !== '' });
+  const data = jars.data;
+  const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
+
+  return (
+    <>
+      <PageHeader
+        title={`${onlyLabels[only]}: ${factorLabels[factor]} ${level}`}
+        description={`Inoculated ${period.from ?? 'from the start'} to ${period.to ?? 'today'}.`}
+      />
+      <AnalysisTabs />
+      <div className="no-print mb-4 flex flex-wrap gap-2">
+        {(Object.keys(onlyLabels) as JarsOnly[]).map((o) => (
+          <Button
+            key={o}
+            variant={o === only ? 'primary' : 'secondary'}
+            onClick={() => setParams(patchParams(params, { only: o }))}
+          >
+            {onlyLabels[o]}
+          </Button>
+        ))}
+      </div>
+      <LoadState
+        isPending={level !== '' && jars.isPending}
+        error={jars.error}
+        onRetry={() => void jars.refetch()}
+        isEmpty={!data || data.items.length === 0}
+        emptyTitle="No jars match."
+      >
+        {data && (
+          <>
+            <p className="mb-3 text-muted">{data.total} jars.</p>
+            <Table caption="Jars behind the number">
+              <thead>
+                <tr>
+                  <th scope="col" className={th}>
+                    Jar
+                  </th>
+                  <th scope="col" className={th}>
+                    Inoculated
+                  </th>
+                  <th scope="col" className={th}>
+                    Status
+                  </th>
+                  <th scope="col" className={th}>
+                    Contaminant
+                  </th>
+                  <th scope="col" className={th}>
+                    Found
+                  </th>
+                </tr>
+              </thead>
+              <tbody>
+                {data.items.map((j) => (
+                  <tr key={j.id}>
+                    <th scope="row" className={td}>
+                      <Link to={paths.jarPage.to(j.label)} className="font-semibold text-accent underline">
+                        {j.label}
+                      </Link>
+                    </th>
+                    <td className={td}>{j.inoculatedOn}</td>
+                    <td className={td}>
+                      {j.contaminated ? (
+                        <Badge tone="danger">contaminated</Badge>
+                      ) : j.incubating ? (
+                        <Badge tone="warn">incubating</Badge>
+                      ) : (
+                        j.status
+                      )}
+                    </td>
+                    <td className={td}>
+                      {j.contaminant ? (contaminantNames[j.contaminant as Contaminant] ?? j.contaminant) : '—'}
+                    </td>
+                    <td className={td}>{j.foundOn ?? '—'}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </Table>
+            {pages > 1 && (
+              <div className="no-print mt-4 flex items-center gap-3">
+                <Button
+                  variant="secondary"
+                  disabled={page <= 1}
+                  onClick={() => setParams(patchParams(params, { page: page - 1 }))}
+                >
+                  Previous
+                </Button>
+                <span>
+                  Page {page} of {pages}
+                </span>
+                <Button
+                  variant="secondary"
+                  disabled={page >= pages}
+                  onClick={() => setParams(patchParams(params, { page: page + 1 }))}
+                >
+                  Next
+                </Button>
+              </div>
+            )}
+          </>
+        )}
+      </LoadState>
+    </>
+  );
+}

@@ -1,0 +1,130 @@
+import { useQuery } from '@tanstack/react-query';
+import { useSearchParams } from 'react-router';
+import { Bar, BarChart, CartesianGrid, ErrorBar, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Select } from '../../../components/ui/select';
+import { patchParams } from '../../../lib/list-params';
+import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
+import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
+import { factorLabels, factorOptions, interval, percent } from './labels';
+
+const MAX_BARS = 40;
+
+/** Contamination rate per level of one factor, each with its Wilson 95 % interval. */
+export function RatesScreen() {
+  const [params, setParams] = useSearchParams();
+  const period = readPeriod(params);
+  const by = readFactor(params, 'by', 'grain');
+  const rates = useQuery(analysisQueries.rates(by, period));
+  const data = rates.data;
+  const bars = (data?.rows ?? []).slice(0, MAX_BARS).map((r) => ({
+    level: r.level,
+    rate: r.rate ?? 0,
+    whisker: [(r.rate ?? 0) - r.ci95[0], r.ci95[1] - (r.rate ?? 0)],
+  }));
+
+  return (
+    <>
+      <PageHeader
+        title="Contamination rates"
+        description="The share of jars that turned, per level of the factor you choose, with a 95 % interval (Wilson score)."
+        actions={<CsvLink href={csvUrl('rates', { by, ...period })} />}
+      />
+      <AnalysisTabs />
+      <PeriodPicker period={period}>
+        <Select
+          label="Factor"
+          options={factorOptions}
+          value={by}
+          onChange={(e) => setParams(patchParams(params, { by: e.target.value }))}
+          className="w-56"
+        />
+      </PeriodPicker>
+      <LoadState
+        isPending={rates.isPending}
+        error={rates.error}
+        onRetry={() => void rates.refetch()}
+        isEmpty={!data || data.rows.length === 0}
+        emptyTitle={`No jars in this period record a ${factorLabels[by].toLowerCase()}.`}
+      >
+        {data && (
+          <>
+            <figure className="mb-6 rounded-lg border-2 border-line bg-surface-raised p-4">
+              <figcaption className="mb-2 font-semibold">
+                Rate by {factorLabels[by].toLowerCase()}, whiskers at the 95 % interval
+                {data.rows.length > MAX_BARS && ` (first ${MAX_BARS} of ${data.rows.length} levels)`}
+              </figcaption>
+              <div className="h-72 w-full">
+                <ResponsiveContainer width="100%" height="100%">
+                  <BarChart data={bars} margin={{ top: 8, right: 16, bottom: 8, left: 8 }}>
+                    <CartesianGrid stroke="#d3dad6" strokeDasharray="3 3" />
+                    <XAxis dataKey="level" tick={{ fontSize: 12 }} />
+                    <YAxis tickFormatter={(v: number) => percent(v)} width={64} tick={{ fontSize: 12 }} />
+                    <Tooltip formatter={(v) => percent(Number(v))} />
+                    <Bar dataKey="rate" name="Rate" fill="#13627a" isAnimationActive={false}>
+                      <ErrorBar dataKey="whisker" width={6} stroke="#15201b" />
+                    </Bar>
+                  </BarChart>
+                </ResponsiveContainer>
+              </div>
+            </figure>
+            <Table caption={`Contamination rate by ${factorLabels[by].toLowerCase()}`}>
+              <thead>
+                <tr>
+                  <th scope="col" className={th}>
+                    {factorLabels[by]}
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Jars
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Contaminated
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Incubating
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Rate
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    95 % interval
+                  </th>
+                </tr>
+              </thead>
+              <tbody>
+                {data.rows.map((r) => (
+                  <tr key={r.level}>
+                    <th scope="row" className={`${td} font-semibold`}>
+                      {r.level}
+                    </th>
+                    <td className={`${td} ${num}`}>{r.jars}</td>
+                    <td className={`${td} ${num}`}>{r.contaminated}</td>
+                    <td className={`${td} ${num}`}>{r.incubating}</td>
+                    <td className={`${td} ${num} font-semibold`}>{percent(r.rate)}</td>
+                    <td className={`${td} ${num}`}>{interval(r.ci95)}</td>
+                  </tr>
+                ))}
+                <tr className="bg-surface-sunken">
+                  <th scope="row" className={`${td} font-semibold`}>
+                    All jars
+                  </th>
+                  <td className={`${td} ${num}`}>{data.overall.jars}</td>
+                  <td className={`${td} ${num}`}>{data.overall.contaminated}</td>
+                  <td className={`${td} ${num}`}>{data.overall.incubating}</td>
+                  <td className={`${td} ${num} font-semibold`}>{percent(data.overall.rate)}</td>
+                  <td className={`${td} ${num}`}>{interval(data.overall.ci95)}</td>
+                </tr>
+              </tbody>
+            </Table>
+            {data.notRecorded > 0 && (
+              <p className="mt-3 text-sm text-muted">
+                {data.notRecorded} jars in this period do not record a {factorLabels[by].toLowerCase()} and are left out
+                of the rows (they are in “All jars”).
+              </p>
+            )}
+          </>
+        )}
+      </LoadState>
+    </>
+  );
+}

@@ -1,0 +1,173 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link, useSearchParams } from 'react-router';
+import { Badge } from '../../../components/ui/badge';
+import { PageHeader } from '../../../components/ui/page-header';
+import { paths } from '../../../config/paths';
+import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
+import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, nowrap, num, td, th } from './analysis-frame';
+import { percent } from './labels';
+import { WeeklyChart } from './weekly-chart';
+import './weekly-print.css';
+
+/** The supervisor's home: the last twelve ISO weeks, overall and per grain, with the p-chart. */
+export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
+  const [params] = useSearchParams();
+  const period = compact ? { from: undefined, to: undefined } : readPeriod(params);
+  const weekly = useQuery(analysisQueries.weekly(period));
+  const data = weekly.data;
+  const grains = [...new Set(data?.weeks.flatMap((w) => w.grains.map((g) => g.grain)) ?? [])].sort();
+  const flagged = data?.weeks.filter((w) => w.outOfControl) ?? [];
+  // The settled weeks with the highest rates, so the worst ones lead even when none crosses its limit.
+  const worst = [...(data?.weeks.filter((w) => !w.provisional && w.contaminated > 0) ?? [])]
+    .sort((a, b) => b.rate - a.rate)
+    .slice(0, 3);
+
+  return (
+    <section aria-labelledby="weekly-title" className="weekly-print">
+      {compact ? (
+        <div className="mb-4 flex flex-wrap items-end justify-between gap-3">
+          <h2 id="weekly-title" className="text-xl font-semibold">
+            Contamination, week by week
+          </h2>
+          <Link to={paths.analysisWeekly.to()} className="font-medium text-accent underline">
+            Open the weekly table
+          </Link>
+        </div>
+      ) : (
+        <>
+          <PageHeader
+            title="Weekly table"
+            description="Jars by the ISO week they were inoculated in: how many, how many turned, and how many are still incubating."
+            actions={
+              <>
+                <button
+                  type="button"
+                  className="rounded-md border-2 border-line-strong px-4 py-2 font-semibold"
+                  onClick={() => window.print()}
+                >
+                  Print
+                </button>
+                <CsvLink href={csvUrl('weekly', { ...period })} />
+              </>
+            }
+          />
+          <h2 id="weekly-title" className="sr-only">
+            Weekly table
+          </h2>
+          <AnalysisTabs />
+          <PeriodPicker period={period} />
+        </>
+      )}
+      <LoadState
+        isPending={weekly.isPending}
+        error={weekly.error}
+        onRetry={() => void weekly.refetch()}
+        isEmpty={!data || data.weeks.length === 0}
+        emptyTitle="No jars were inoculated in these weeks."
+      >
+        {data && (
+          <>
+            <p className="mb-4 text-muted">
+              {data.from} to {data.to}. A week is provisional while it holds jars younger than{' '}
+              {data.observationWindowDays} days that have not turned.
+              {flagged.length > 0 && (
+                <strong className="ml-1 text-danger">Out of control: {flagged.map((w) => w.week).join(', ')}.</strong>
+              )}
+            </p>
+            {worst.length > 0 && (
+              <p className="mb-4" data-testid="worst-weeks">
+                <span className="font-semibold">Highest settled weeks: </span>
+                {worst.map((w) => `${w.week} (${percent(w.rate)}, ${w.contaminated} of ${w.jars})`).join(' · ')}
+              </p>
+            )}
+            {!compact && <WeeklyChart data={data} />}
+            <Table caption="Contamination per ISO week">
+              <thead>
+                <tr>
+                  <th scope="col" className={th}>
+                    Week
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Jars
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Contaminated
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Incubating
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Rate
+                  </th>
+                  <th scope="col" className={`${th} ${num}`}>
+                    Limits
+                  </th>
+                  <th scope="col" className={th}>
+                    Status
+                  </th>
+                  {grains.map((g) => (
+                    <th key={g} scope="col" className={`${th} ${num}`}>
+                      {g}
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {[...data.weeks].reverse().map((w) => (
+                  <tr
+                    key={w.week}
+                    data-testid={`week-${w.week}`}
+                    className={w.outOfControl ? 'bg-danger-soft' : undefined}
+                  >
+                    <th scope="row" className={`${td} ${nowrap} font-semibold`}>
+                      {w.week}
+                    </th>
+                    <td className={`${td} ${num}`}>{w.jars}</td>
+                    <td className={`${td} ${num}`}>{w.contaminated}</td>
+                    <td className={`${td} ${num}`}>{w.incubating}</td>
+                    <td className={`${td} ${num} font-semibold`}>{percent(w.rate)}</td>
+                    <td className={`${td} ${num} ${nowrap} text-muted`}>
+                      {percent(w.lcl)} – {percent(w.ucl)}
+                    </td>
+                    <td className={td}>
+                      {w.outOfControl ? (
+                        <Badge tone="danger">Out of control</Badge>
+                      ) : w.provisional ? (
+                        <Badge tone="warn">Provisional</Badge>
+                      ) : (
+                        <Badge tone="ok">In control</Badge>
+                      )}
+                    </td>
+                    {grains.map((g) => {
+                      const cell = w.grains.find((x) => x.grain === g);
+                      return (
+                        <td key={g} className={`${td} ${num}`}>
+                          {cell ? (
+                            <>
+                              {percent(cell.rate)}{' '}
+                              <span className="text-sm text-muted">
+                                ({cell.contaminated}/{cell.jars})
+                              </span>
+                            </>
+                          ) : (
+                            '—'
+                          )}
+                        </td>
+                      );
+                    })}
+                  </tr>
+                ))}
+              </tbody>
+            </Table>
+            {data.pBar !== null && (
+              <p className="mt-3 text-sm text-muted">
+                Centre line p̄ = {percent(data.pBar)} over the settled weeks; limits are p̄ ± 3·√(p̄(1 − p̄)/n) for each
+                week’s n, the lower one floored at 0 (Montgomery, Introduction to Statistical Quality Control, ch. 7).
+              </p>
+            )}
+          </>
+        )}
+      </LoadState>
+    </section>
+  );
+}

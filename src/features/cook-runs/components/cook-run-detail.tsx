@@ -1,0 +1,105 @@
+import { useQuery } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import { PageHeader } from '../../../components/ui/page-header';
+import { FullPageSpinner } from '../../../components/ui/spinner';
+import { paths } from '../../../config/paths';
+import { errorMessage } from '../../../lib/api-client';
+import { formatDate } from '../../../lib/format';
+import { cookRunsQueries } from '../api/cook-runs-queries';
+import { formatF0 } from './lethality-figure';
+import { PressureCaution } from './pressure-caution';
+import { ReadingsPanel } from './readings-panel';
+
+function Item({ term, children }: { term: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-0.5">
+      <dt className="text-sm text-muted">{term}</dt>
+      <dd className="font-medium">{children}</dd>
+    </div>
+  );
+}
+
+const orDash = (v: string | number | null) => (v === null || v === '' ? '—' : v);
+
+export function CookRunDetail({ id, canWrite }: { id: number; canWrite: boolean }) {
+  const detail = useQuery(cookRunsQueries.detail(id));
+  if (detail.isPending) return <FullPageSpinner label="Loading cook run" />;
+  if (detail.error) {
+    return (
+      <Notice
+        tone="danger"
+        title="The cook run could not be loaded."
+        action={
+          <Button variant="secondary" onClick={() => void detail.refetch()}>
+            Try again
+          </Button>
+        }
+      >
+        {errorMessage(detail.error)}
+      </Notice>
+    );
+  }
+  const run = detail.data;
+
+  return (
+    <>
+      <p className="no-print mb-2">
+        <Link to={paths.cookRuns.to()} className="text-accent underline-offset-2 hover:underline">
+          ← Cook runs
+        </Link>
+      </p>
+      <PageHeader title={`Cook run ${run.code}`} description={run.vessel ?? undefined} />
+      <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+        <div className="flex flex-col gap-6">
+          <section aria-label="Lethality" className="rounded-lg border border-line bg-surface-raised p-4">
+            <p className="text-3xl font-semibold tabular-nums">F0 {formatF0(run.f0)} min</p>
+            <p className="mt-1 font-medium">
+              {run.f0Source === 'log' ? 'From the temperature log' : 'Estimated upper bound'}
+            </p>
+            {run.f0Source !== 'log' && (
+              <p className="mt-1 text-muted">
+                Computed as if the whole hold were at {run.sterilisingTemperatureC?.toFixed(1)} °C, the temperature of
+                saturated steam at this gauge pressure and altitude. The centre of a jar heats more slowly than the
+                chamber, so the true F0 is lower.
+              </p>
+            )}
+            {run.lowLethality ? (
+              <Notice tone="danger" className="mt-3" title={`Below the lab’s target of F0 ${run.lethalityTarget}`}>
+                Jars from this run may not have been sterilised through. Watch them for early bacterial or pin-mould
+                growth.
+              </Notice>
+            ) : (
+              <p className="mt-2 text-sm text-muted">Lab target: F0 ≥ {run.lethalityTarget}.</p>
+            )}
+          </section>
+          <section aria-label="Cycle" className="rounded-lg border border-line bg-surface-raised p-4">
+            <dl className="grid gap-4 sm:grid-cols-3">
+              <Item term="Date">{run.cookedOn ? formatDate(run.cookedOn) : '—'}</Item>
+              <Item term="Start time">{run.startedAt ? new Date(run.startedAt).toLocaleString() : '—'}</Item>
+              <Item term="Container">{orDash(run.container)}</Item>
+              <Item term="Minutes at pressure">{run.minutesAtPressure}</Item>
+              <Item term="Gauge">
+                {run.gaugeKPa === null
+                  ? 'not read (103.4 kPa assumed)'
+                  : `${run.gaugeKPa.toFixed(1)} kPa · ${run.gaugePsi?.toFixed(2)} psi`}
+              </Item>
+              <Item term="Steam temperature">{run.sterilisingTemperatureC?.toFixed(1)} °C</Item>
+              <Item term="Venting minutes">{orDash(run.ventingMinutes)}</Item>
+              <Item term="Site altitude">{run.altitudeM} m</Item>
+              <Item term="Load count">{orDash(run.loadCount)}</Item>
+              <Item term="Operator">{orDash(run.operatorName)}</Item>
+            </dl>
+            {run.notes && <p className="mt-4 whitespace-pre-line">{run.notes}</p>}
+          </section>
+          <ReadingsPanel run={run} canWrite={canWrite} />
+        </div>
+        <aside>
+          <PressureCaution />
+        </aside>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,112 @@
+import { useState } from 'react';
+import { createActionSchema, updateActionSchema, type CorrectiveActionDto } from '../../../../shared/schemas/incidents';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { applyServerErrors, Form } from '../../../components/ui/form';
+import { TextInput } from '../../../components/ui/text-input';
+import { useToast } from '../../../components/ui/toast';
+import { formatDate } from '../../../lib/format';
+import { useCreateAction, useUpdateAction } from '../api/use-incident-mutations';
+import { NotesField } from './notes-field';
+
+const today = () => new Date().toLocaleDateString('en-CA');
+
+function CompleteForm({ action, onDone }: { action: CorrectiveActionDto; onDone: () => void }) {
+  const update = useUpdateAction();
+  return (
+    <Form
+      schema={updateActionSchema}
+      className="mt-2 gap-3 rounded-md bg-surface-sunken p-3"
+      options={{ defaultValues: { doneOn: today(), verification: '' } }}
+      onSubmit={(values, { setError }) =>
+        update.mutateAsync({ id: action.id, ...values }).then(onDone, (error: unknown) => applyServerErrors(error, setError, ['doneOn', 'verification']))
+      }
+    >
+      {({ register, formState: { errors, isSubmitting } }) => (
+        <>
+          <TextInput label="Done on" type="date" error={errors.doneOn?.message} {...register('doneOn')} />
+          <NotesField label="How was the fix verified?" hint="For example: gauge checked against a reference; next three runs clean." error={errors.verification?.message} {...register('verification')} />
+          <div className="flex gap-2">
+            <Button type="submit" pending={isSubmitting}>
+              Mark done
+            </Button>
+            <Button variant="secondary" onClick={onDone}>
+              Cancel
+            </Button>
+          </div>
+        </>
+      )}
+    </Form>
+  );
+}
+
+function AddActionForm({ incidentId }: { incidentId: number }) {
+  const create = useCreateAction(incidentId);
+  const toast = useToast();
+  const [formKey, setFormKey] = useState(0);
+  return (
+    <Form
+      key={formKey}
+      schema={createActionSchema}
+      className="gap-3 no-print"
+      onSubmit={(values, { setError }) =>
+        create.mutateAsync(values).then(
+          () => {
+            toast.success('Corrective action added.');
+            setFormKey((k) => k + 1);
+          },
+          (error: unknown) => applyServerErrors(error, setError, ['what', 'ownerName', 'dueOn']),
+        )
+      }
+    >
+      {({ register, formState: { errors, isSubmitting } }) => (
+        <>
+          <NotesField label="What will be done" error={errors.what?.message} {...register('what')} />
+          <div className="grid gap-3 sm:grid-cols-2">
+            <TextInput label="Owner" error={errors.ownerName?.message} {...register('ownerName', { setValueAs: (v: string) => v.trim() || undefined })} />
+            <TextInput label="Due on" type="date" error={errors.dueOn?.message} {...register('dueOn')} />
+          </div>
+          <div>
+            <Button type="submit" variant="secondary" icon="plus" pending={isSubmitting}>
+              Add action
+            </Button>
+          </div>
+        </>
+      )}
+    </Form>
+  );
+}
+
+export function ActionsPanel({ incidentId, actions, canManage }: { incidentId: number; actions: CorrectiveActionDto[]; canManage: boolean }) {
+  const [completing, setCompleting] = useState<number | null>(null);
+  return (
+    <div className="flex flex-col gap-4">
+      {actions.length === 0 && <p className="text-muted">No corrective actions yet.</p>}
+      <ul className="flex flex-col gap-3">
+        {actions.map((a) => (
+          <li key={a.id} className="rounded-md border border-line p-3 print:break-inside-avoid">
+            <p className="font-medium">{a.what}</p>
+            <p className="text-sm text-muted">
+              {a.ownerName} · due {formatDate(a.dueOn)}
+              {a.factor && a.level ? ` · ${a.factor} ${a.level}` : ''}
+            </p>
+            {a.doneOn ? (
+              <p className="mt-1 text-sm">
+                <Badge tone="ok">Done {formatDate(a.doneOn)}</Badge> Verified: {a.verification}
+              </p>
+            ) : (
+              a.overdue && <Badge tone="danger">Overdue</Badge>
+            )}
+            {canManage && !a.doneOn && completing !== a.id && (
+              <Button variant="ghost" className="no-print mt-1" onClick={() => setCompleting(a.id)}>
+                Mark done…
+              </Button>
+            )}
+            {completing === a.id && <CompleteForm action={a} onDone={() => setCompleting(null)} />}
+          </li>
+        ))}
+      </ul>
+      {canManage && <AddActionForm incidentId={incidentId} />}
+    </div>
+  );
+}

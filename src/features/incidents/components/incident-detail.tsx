@@ -1,0 +1,164 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState, type ReactNode } from 'react';
+import { Link } from 'react-router';
+import { contaminantNames, type Role } from '../../../../shared/enums';
+import type { IncidentDetailDto } from '../../../../shared/schemas/incidents';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/notice';
+import { PageHeader } from '../../../components/ui/page-header';
+import { FullPageSpinner } from '../../../components/ui/spinner';
+import { paths } from '../../../config/paths';
+import { errorMessage } from '../../../lib/api-client';
+import { incidentsQueries } from '../api/incidents-queries';
+import { causeLabels, severityLabels, stageLabels } from '../labels';
+import { ActionsPanel } from './actions-panel';
+import { AddPhotos } from './add-photos';
+import { EditIncidentDialog } from './edit-incident-dialog';
+import { HistoryList } from './history-list';
+import { IncidentBadges } from './incident-badges';
+import { IncidentJars } from './incident-jars';
+import { IncidentPhotos } from './incident-photos';
+import { ReviewPanel } from './review-panel';
+import { SporeCautions } from './spore-cautions';
+import { VoidDialog } from './void-dialog';
+
+function Item({ term, children }: { term: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-0.5">
+      <dt className="text-sm text-muted">{term}</dt>
+      <dd className="font-medium">{children}</dd>
+    </div>
+  );
+}
+
+function Section({ title, children, className }: { title: string; children: ReactNode; className?: string }) {
+  return (
+    <section aria-label={title} className={`rounded-lg border border-line bg-surface-raised p-4 print:border-0 print:p-0 ${className ?? ''}`}>
+      <h2 className="mb-3 text-lg font-semibold">{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+const yesNo = (b: boolean) => (b ? 'Yes' : 'No');
+
+/** The finder may edit and add to their own open incident; a supervisor any that is not voided (as the server checks). */
+const canAddTo = (i: IncidentDetailDto, me: { id: number; role: Role }) =>
+  !i.voided && (me.role === 'supervisor' || ((me.role === 'technician' || me.role === 'admin') && i.status === 'open' && i.foundById === me.id));
+
+export function IncidentDetail({ id, me }: { id: number; me: { id: number; role: Role } }) {
+  const detail = useQuery(incidentsQueries.detail(id));
+  const [voiding, setVoiding] = useState(false);
+  const [editing, setEditing] = useState(false);
+  if (detail.isPending) return <FullPageSpinner label="Loading incident" />;
+  if (detail.error) {
+    return (
+      <Notice tone="danger" title="The incident could not be loaded." action={<Button variant="secondary" onClick={() => void detail.refetch()}>Try again</Button>}>
+        {errorMessage(detail.error)}
+      </Notice>
+    );
+  }
+  const i = detail.data;
+  const supervisor = me.role === 'supervisor';
+
+  return (
+    <>
+      <p className="no-print mb-2">
+        <Link to={paths.incidents.to()} className="text-accent underline-offset-2 hover:underline">
+          ← Incidents
+        </Link>
+      </p>
+      <PageHeader
+        title={`Incident ${i.id}`}
+        description={<IncidentBadges status={i.status} verdict={i.verdict} voided={i.voided} />}
+        actions={
+          <>
+            <Button variant="secondary" onClick={() => window.print()}>
+              Print incident sheet
+            </Button>
+            {canAddTo(i, me) && (
+              <Button variant="secondary" onClick={() => setEditing(true)}>
+                Edit details
+              </Button>
+            )}
+            {supervisor && !i.voided && (
+              <Button variant="danger" onClick={() => setVoiding(true)}>
+                Void…
+              </Button>
+            )}
+          </>
+        }
+      />
+      {i.voided && (
+        <Notice tone="warn" title="Voided" className="mb-4">
+          {i.voidReason}. Its jars no longer count as contaminated.
+        </Notice>
+      )}
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] print:block">
+        <div className="flex flex-col gap-6 print:gap-4">
+          <Section title="What was found">
+            <dl className="grid grid-cols-2 gap-4 sm:grid-cols-3">
+              <Item term="Contaminant">{contaminantNames[i.contaminant]}</Item>
+              <Item term="Severity">{severityLabels[i.severity]}</Item>
+              <Item term="Stage">{stageLabels[i.stage]}</Item>
+              <Item term="Found">{new Date(i.foundAt).toLocaleString()}</Item>
+              <Item term="Found by">{i.foundByName}</Item>
+              <Item term="Signs">{[i.signColour, i.signSmell, i.signTexture].filter(Boolean).join(', ') || '—'}</Item>
+              <Item term="Sealed">{yesNo(i.sealed)}</Item>
+              <Item term="Sterilised before disposal">{yesNo(i.sterilisedBeforeDisposal)}</Item>
+              <Item term="Cause category">{i.causeCategory ? causeLabels[i.causeCategory].label : '—'}</Item>
+            </dl>
+            {i.notes && <p className="mt-3 whitespace-pre-line">{i.notes}</p>}
+            {i.rootCauseNotes && (
+              <p className="mt-3 whitespace-pre-line">
+                <span className="font-medium">Root cause: </span>
+                {i.rootCauseNotes}
+              </p>
+            )}
+          </Section>
+          <Section title={i.jars.length === 1 ? 'Jar' : `Jars (${i.jars.length})`}>
+            <IncidentJars jars={i.jars} />
+          </Section>
+          <Section title="Photos">
+            <IncidentPhotos photos={i.photos} />
+            {canAddTo(i, me) && <AddPhotos incidentId={i.id} />}
+          </Section>
+          {i.stepLinks.length > 0 && (
+            <Section title="Procedure steps likely missed">
+              <ul className="flex flex-col gap-2">
+                {i.stepLinks.map((l) => (
+                  <li key={l.id}>
+                    <span className="font-medium">
+                      {l.procedureTitle ?? 'Procedure'} v{l.procedureVersion ?? '?'}, step {l.position ?? '?'}:
+                    </span>{' '}
+                    {l.stepText}
+                    <span className="block text-sm text-muted">
+                      {l.linkedByName}
+                      {l.note ? ` — ${l.note}` : ''}
+                    </span>
+                  </li>
+                ))}
+              </ul>
+            </Section>
+          )}
+          <Section title="Corrective actions">
+            <ActionsPanel incidentId={i.id} actions={i.actions} canManage={supervisor && !i.voided} />
+          </Section>
+        </div>
+        <div className="flex flex-col gap-6 print:mt-4">
+          {supervisor && !i.voided && (
+            <Section title="Review" className="no-print">
+              <ReviewPanel incident={i} />
+            </Section>
+          )}
+          <SporeCautions />
+          <Section title="History">
+            <HistoryList entries={i.history} />
+          </Section>
+        </div>
+      </div>
+      {canAddTo(i, me) && <EditIncidentDialog incident={i} open={editing} onClose={() => setEditing(false)} />}
+      {supervisor && <VoidDialog incidentId={i.id} version={i.version} open={voiding} onClose={() => setVoiding(false)} />}
+    </>
+  );
+}

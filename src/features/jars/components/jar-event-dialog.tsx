@@ -1,0 +1,137 @@
+import { useId } from 'react';
+import type { FieldErrors } from 'react-hook-form';
+import { jarEventInputSchema, type JarEventInput, type JarEventInputType } from '../../../../shared/schemas/jars';
+import { Button } from '../../../components/ui/button';
+import { Dialog } from '../../../components/ui/dialog';
+import { controlClasses, Field } from '../../../components/ui/field';
+import { applyServerErrors, Form } from '../../../components/ui/form';
+import { Select } from '../../../components/ui/select';
+import { TextInput } from '../../../components/ui/text-input';
+import { useToast } from '../../../components/ui/toast';
+import { useRecordJarEvent } from '../api/use-record-jar-event';
+import { DiscardCaution } from './discard-caution';
+
+export const eventActions: Record<JarEventInputType, { label: string; title: string; done: string }> = {
+  check: { label: 'Check', title: 'Record a check', done: 'Check recorded.' },
+  shaken: { label: 'Shaken', title: 'Mark as shaken', done: 'Marked as shaken.' },
+  colonised: { label: 'Colonised', title: 'Mark fully colonised', done: 'Marked fully colonised.' },
+  moved: { label: 'Move', title: 'Move to another shelf', done: 'Jar moved.' },
+  released: { label: 'Release', title: 'Release the jar', done: 'Jar released.' },
+  hold: { label: 'Hold', title: 'Put the jar on hold', done: 'Jar put on hold.' },
+  discarded: { label: 'Discard', title: 'Discard the jar', done: 'Jar discarded.' },
+  resume: { label: 'Take off hold', title: 'Take the jar off hold', done: 'Jar taken off hold.' },
+};
+
+const fields = ['percentColonised', 'room', 'shelf', 'releasedTo', 'releasedToWho', 'reason', 'note', 'at'] as const;
+const releaseOptions = [
+  { value: 'grow-room', label: 'The grow room' },
+  { value: 'customer', label: 'A customer' },
+];
+
+interface Props {
+  jar: { id: number; label: string; room: string | null; shelf: string | null };
+  type: JarEventInputType | null;
+  onClose: () => void;
+}
+
+export function JarEventDialog({ jar, type, onClose }: Props) {
+  const formId = useId();
+  const record = useRecordJarEvent(jar.id);
+  const toast = useToast();
+  if (!type) return null;
+  const action = eventActions[type];
+  const defaults = {
+    type,
+    room: jar.room ?? '',
+    shelf: jar.shelf ?? '',
+    releasedTo: 'grow-room',
+  } as unknown as JarEventInput;
+
+  return (
+    <Dialog
+      open
+      onClose={onClose}
+      busy={record.isPending}
+      title={`${action.title} — ${jar.label}`}
+      footer={
+        <>
+          <Button variant="secondary" onClick={onClose} disabled={record.isPending}>
+            Cancel
+          </Button>
+          <Button
+            type="submit"
+            form={formId}
+            pending={record.isPending}
+            variant={type === 'discarded' ? 'danger' : 'primary'}
+          >
+            {action.label}
+          </Button>
+        </>
+      }
+    >
+      <Form
+        id={formId}
+        schema={jarEventInputSchema}
+        options={{ defaultValues: defaults }}
+        onSubmit={async (values, { setError }) => {
+          try {
+            await record.mutateAsync(values);
+            toast.success(action.done);
+            onClose();
+          } catch (error) {
+            applyServerErrors(error, setError, fields);
+          }
+        }}
+      >
+        {({ register, formState }) => {
+          const errors = formState.errors as FieldErrors<Record<(typeof fields)[number], string>>;
+          return (
+            <>
+              <input type="hidden" {...register('type')} />
+              {type === 'discarded' && <DiscardCaution />}
+              {type === 'check' && (
+                <TextInput
+                  label="Colonised (%)"
+                  type="number"
+                  inputMode="numeric"
+                  min={0}
+                  max={100}
+                  error={errors.percentColonised?.message}
+                  {...register('percentColonised', { setValueAs: (v: string) => (v === '' ? undefined : Number(v)) })}
+                />
+              )}
+              {type === 'moved' && (
+                <div className="grid gap-4 sm:grid-cols-2">
+                  <TextInput label="Room" error={errors.room?.message} {...register('room')} />
+                  <TextInput label="Shelf" error={errors.shelf?.message} {...register('shelf')} />
+                </div>
+              )}
+              {type === 'released' && (
+                <>
+                  <Select
+                    label="Released to"
+                    options={releaseOptions}
+                    error={errors.releasedTo?.message}
+                    {...register('releasedTo')}
+                  />
+                  <TextInput
+                    label="Who received it"
+                    hint="Needed for a customer, so the jar can be recalled."
+                    error={errors.releasedToWho?.message}
+                    {...register('releasedToWho')}
+                  />
+                </>
+              )}
+              {(type === 'hold' || type === 'discarded' || type === 'resume') && (
+                <TextInput label="Reason" error={errors.reason?.message} {...register('reason')} />
+              )}
+              <Field label="Note" optional error={errors.note?.message}>
+                {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('note')} />}
+              </Field>
+            </>
+          );
+        }}
+      </Form>
+    </Dialog>
+  );
+}

@@ -1,0 +1,38 @@
+import type { TimelineEntryDto } from '../../../../shared/schemas/jars';
+import { cx } from '../../../lib/cx';
+import { formatDate } from '../../../lib/format';
+
+const timeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (at: string) => (at.length === 10 ? formatDate(at) : timeFormat.format(new Date(at)));
+
+const dots: Record<TimelineEntryDto['kind'], string> = {
+  'grain-prep': 'bg-warn',
+  'cook-run': 'bg-danger',
+  culture: 'bg-accent',
+  session: 'bg-accent',
+  inoculated: 'bg-ok',
+  event: 'bg-line-strong',
+  incident: 'bg-danger',
+  photo: 'bg-line-strong',
+};
+
+/** The jar's story, oldest first, as the server ordered it. */
+export function JarTimeline({ entries }: { entries: TimelineEntryDto[] }) {
+  return (
+    <ol aria-label="The jar’s story" className="relative space-y-4 border-l-2 border-line pl-5">
+      {entries.map((e, i) => (
+        <li key={`${e.kind}-${e.ref ?? i}-${i}`} className="relative">
+          <span
+            aria-hidden
+            className={cx('absolute top-1.5 -left-[1.72rem] h-3 w-3 rounded-full ring-4 ring-surface', dots[e.kind])}
+          />
+          <p className="text-sm text-muted">
+            <time dateTime={e.at}>{when(e.at)}</time>
+          </p>
+          <p className={cx('font-medium', e.kind === 'incident' && 'text-danger')}>{e.title}</p>
+          {e.detail && <p className="text-muted">{e.detail}</p>}
+        </li>
+      ))}
+    </ol>
+  );
+}

@@ -1,0 +1,281 @@
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link } from 'react-router';
+import {
+  createJarBatchSchema,
+  type CreateJarBatchInput,
+  type JarBatchResultDto,
+} from '../../../../shared/schemas/jars';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { applyServerErrors, Form } from '../../../components/ui/form';
+import { Notice } from '../../../components/ui/notice';
+import { PageHeader } from '../../../components/ui/page-header';
+import { Select } from '../../../components/ui/select';
+import { Spinner } from '../../../components/ui/spinner';
+import { TextInput } from '../../../components/ui/text-input';
+import { useToast } from '../../../components/ui/toast';
+import { cautions, cautionFootnote } from '../../../config/cautions';
+import { paths } from '../../../config/paths';
+import { errorMessage } from '../../../lib/api-client';
+import { jarsQueries } from '../api/jars-queries';
+import { useCreateJarBatch } from '../api/use-create-jar-batch';
+
+const fields = [
+  'sessionId',
+  'count',
+  'grainId',
+  'prepBatchId',
+  'cookRunId',
+  'cultureId',
+  'parentJarId',
+  'inoculumMl',
+  'room',
+  'shelf',
+  'inoculatedAt',
+] as const;
+const blankToUndefined = (v: unknown) => (v === '' ? undefined : v);
+const idOrUndefined = (v: unknown) => (v === '' || v === undefined ? undefined : Number(v));
+const nowLocal = () => {
+  const d = new Date();
+  d.setMinutes(d.getMinutes() - d.getTimezoneOffset());
+  return d.toISOString().slice(0, 16);
+};
+
+function Result({ result, sessionId, onAgain }: { result: JarBatchResultDto; sessionId: number; onAgain: () => void }) {
+  const first = result.jars[0];
+  const last = result.jars.at(-1);
+  return (
+    <div className="space-y-4">
+      <Notice
+        tone="ok"
+        title={`${result.jars.length} jars made: ${first?.label ?? ''}${last && last !== first ? ` to ${last.label}` : ''}.`}
+      />
+      {result.warnings.map((w) => (
+        <Notice key={w} tone="warn">
+          {w}
+        </Notice>
+      ))}
+      <div className="flex flex-wrap gap-3">
+        <Link
+          to={paths.jarLabels.to({ ids: result.jars.map((j) => j.id).join(',') })}
+          className={buttonClasses('primary')}
+        >
+          Print their labels
+        </Link>
+        <Link to={paths.jars.to({ sessionId })} className={buttonClasses('secondary')}>
+          See the session’s jars
+        </Link>
+        <Button variant="ghost" onClick={onAgain}>
+          Make more jars
+        </Button>
+      </div>
+    </div>
+  );
+}
+
+export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
+  const options = useQuery(jarsQueries.options());
+  const create = useCreateJarBatch();
+  const toast = useToast();
+  const queryClient = useQueryClient();
+  const [fromJar, setFromJar] = useState(false);
+  const [result, setResult] = useState<{ data: JarBatchResultDto; sessionId: number } | null>(null);
+  const flame = cautions.find((c) => c.id === 'flame');
+
+  if (result)
+    return (
+      <>
+        <PageHeader title="Make jars" />
+        <Result result={result.data} sessionId={result.sessionId} onAgain={() => setResult(null)} />
+      </>
+    );
+  if (options.isPending) return <Spinner label="Loading the registers" />;
+  if (options.error)
+    return (
+      <Notice tone="danger" title="The form could not be loaded.">
+        {errorMessage(options.error)}
+      </Notice>
+    );
+  const o = options.data;
+  const pick = (items: { id: number; label: string }[], none: string) => [
+    { value: '', label: none },
+    ...items.map((i) => ({ value: String(i.id), label: i.label })),
+  ];
+
+  return (
+    <>
+      <PageHeader
+        title="Make jars"
+        description="Record a batch of jars from one session; labels are issued in sequence."
+      />
+      {flame && (
+        <Notice tone="warn" title={flame.title} className="mb-6">
+          {flame.text} {cautionFootnote}
+        </Notice>
+      )}
+      <Form
+        schema={createJarBatchSchema}
+        options={{
+          defaultValues: { sessionId, count: 12, inoculatedAt: nowLocal() } as unknown as CreateJarBatchInput,
+        }}
+        onSubmit={async (values, { setError }) => {
+          try {
+            const data = await create.mutateAsync(values);
+            toast.success(`${data.jars.length} jars made.`);
+            setResult({ data, sessionId: values.sessionId });
+          } catch (error) {
+            applyServerErrors(error, setError, fields);
+          }
+        }}
+      >
+        {({ register, setValue, setError, clearErrors, formState: { errors } }) => (
+          <>
+            <div className="grid gap-4 sm:grid-cols-2">
+              <Select
+                label="Session"
+                options={pick(
+                  o.sessions.map((s) => ({ id: s.id, label: `${s.code} · ${s.heldOn}` })),
+                  'Choose a session',
+                )}
+                error={errors.sessionId?.message}
+                {...register('sessionId', { setValueAs: idOrUndefined })}
+              />
+              <TextInput
+                label="Number of jars"
+                type="number"
+                inputMode="numeric"
+                min={1}
+                max={200}
+                error={errors.count?.message}
+                {...register('count', { setValueAs: idOrUndefined })}
+              />
+              <Select
+                label="Prep batch"
+                optional
+                hint="The grain comes from the batch when one is chosen."
+                options={pick(
+                  o.prepBatches.map((b) => ({ id: b.id, label: `${b.code} · ${b.grain} · ${b.preparedOn}` })),
+                  'No batch recorded',
+                )}
+                error={errors.prepBatchId?.message}
+                {...register('prepBatchId', { setValueAs: idOrUndefined })}
+              />
+              <Select
+                label="Grain"
+                optional
+                options={pick(
+                  o.grains.filter((g) => g.active).map((g) => ({ id: g.id, label: g.name })),
+                  'From the prep batch',
+                )}
+                error={errors.grainId?.message}
+                {...register('grainId', { setValueAs: idOrUndefined })}
+              />
+              <Select
+                label="Cook run"
+                optional
+                options={pick(
+                  o.cookRuns.map((c) => ({ id: c.id, label: `${c.code}${c.cookedOn ? ` · ${c.cookedOn}` : ''}` })),
+                  'No cook run recorded',
+                )}
+                error={errors.cookRunId?.message}
+                {...register('cookRunId', { setValueAs: idOrUndefined })}
+              />
+              <TextInput
+                label="Inoculated at"
+                type="datetime-local"
+                error={errors.inoculatedAt?.message}
+                {...register('inoculatedAt')}
+              />
+            </div>
+            <fieldset className="space-y-3">
+              <legend className="font-medium">Inoculated from</legend>
+              <div className="flex gap-3">
+                <Button
+                  variant={fromJar ? 'secondary' : 'primary'}
+                  aria-pressed={!fromJar}
+                  onClick={() => {
+                    setFromJar(false);
+                    setValue('parentJarId', undefined);
+                  }}
+                >
+                  A culture
+                </Button>
+                <Button
+                  variant={fromJar ? 'primary' : 'secondary'}
+                  aria-pressed={fromJar}
+                  onClick={() => {
+                    setFromJar(true);
+                    setValue('cultureId', undefined);
+                  }}
+                >
+                  A parent jar
+                </Button>
+              </div>
+              {fromJar ? (
+                <>
+                  <input type="hidden" {...register('parentJarId', { setValueAs: idOrUndefined })} />
+                  <TextInput
+                    label="Parent jar label"
+                    autoComplete="off"
+                    error={errors.parentJarId?.message}
+                    onBlur={async (e) => {
+                      const label = e.target.value.trim();
+                      if (!label) return setValue('parentJarId', undefined);
+                      try {
+                        const story = await queryClient.fetchQuery(jarsQueries.byLabel(label));
+                        setValue('parentJarId', story.jar.id);
+                        clearErrors('parentJarId');
+                      } catch (error) {
+                        setValue('parentJarId', undefined);
+                        setError('parentJarId', { type: 'server', message: errorMessage(error) });
+                      }
+                    }}
+                  />
+                </>
+              ) : (
+                <Select
+                  label="Culture"
+                  options={pick(
+                    o.cultures.map((c) => ({
+                      id: c.id,
+                      label: `${c.code}${c.state === 'released' ? '' : ` (${c.state})`}`,
+                    })),
+                    'Choose a culture',
+                  )}
+                  error={errors.cultureId?.message}
+                  {...register('cultureId', { setValueAs: idOrUndefined })}
+                />
+              )}
+              <TextInput
+                label="Inoculum per jar (ml)"
+                type="number"
+                inputMode="decimal"
+                step="0.1"
+                optional
+                error={errors.inoculumMl?.message}
+                {...register('inoculumMl', { setValueAs: blankToUndefined })}
+              />
+            </fieldset>
+            <div className="grid gap-4 sm:grid-cols-2">
+              <TextInput
+                label="Incubation room"
+                optional
+                error={errors.room?.message}
+                {...register('room', { setValueAs: blankToUndefined })}
+              />
+              <TextInput
+                label="Shelf"
+                optional
+                error={errors.shelf?.message}
+                {...register('shelf', { setValueAs: blankToUndefined })}
+              />
+            </div>
+            <Button type="submit" pending={create.isPending} className="min-h-14 text-lg sm:self-start">
+              Make jars
+            </Button>
+          </>
+        )}
+      </Form>
+    </>
+  );
+}

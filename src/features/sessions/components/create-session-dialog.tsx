@@ -1,0 +1,218 @@
+import { useQuery } from '@tanstack/react-query';
+import { useEffect, useId } from 'react';
+import { useNavigate } from 'react-router';
+import { workspaces } from '../../../../shared/enums';
+import { createSessionSchema, workspaceLabels, type CreateSessionInput } from '../../../../shared/schemas/sessions';
+import { Button } from '../../../components/ui/button';
+import { Checkbox } from '../../../components/ui/checkbox';
+import { Dialog } from '../../../components/ui/dialog';
+import { controlClasses, Field } from '../../../components/ui/field';
+import { applyServerErrors, Form, type FormMethods } from '../../../components/ui/form';
+import { Select } from '../../../components/ui/select';
+import { TextInput } from '../../../components/ui/text-input';
+import { useToast } from '../../../components/ui/toast';
+import { paths } from '../../../config/paths';
+import { sessionsQueries } from '../api/sessions-queries';
+import { useCreateSession } from '../api/use-create-session';
+import { FlameCaution } from './flame-caution';
+
+const fields = [
+  'code',
+  'heldOn',
+  'startedAt',
+  'operatorId',
+  'operatorName',
+  'workspace',
+  'procedureVersionId',
+  'checklist',
+  'notes',
+] as const;
+const workspaceOptions = workspaces.map((w) => ({ value: w, label: workspaceLabels[w] }));
+const localDateTime = (v: unknown) => (typeof v === 'string' && v ? new Date(v).toISOString() : null);
+const optionalId = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
+
+type Methods = FormMethods<typeof createSessionSchema>;
+
+/** The steps of the chosen version, each a tick box; the version's steps arrive from the server. */
+function ChecklistFields({ versionId, methods }: { versionId: number; methods: Methods }) {
+  const version = useQuery(sessionsQueries.procedureVersion(versionId));
+  const { setValue, register } = methods;
+  const steps = version.data?.steps;
+  useEffect(() => {
+    if (steps)
+      setValue(
+        'checklist',
+        steps.map((s) => ({ stepId: s.id, done: false })),
+      );
+  }, [steps, setValue]);
+
+  if (version.isPending) return <p className="text-muted">Loading the steps…</p>;
+  if (!steps) return <p className="text-danger">The steps of this procedure could not be loaded.</p>;
+  return (
+    <fieldset className="flex flex-col gap-1">
+      <legend className="mb-1 font-medium">Checklist — steps done</legend>
+      {steps.map((step, i) => (
+        <Checkbox
+          key={step.id}
+          label={`${step.position}. ${step.text}`}
+          hint={step.caution ?? undefined}
+          {...register(`checklist.${i}.done`)}
+        />
+      ))}
+    </fieldset>
+  );
+}
+
+interface Props {
+  open: boolean;
+  onClose: () => void;
+  me: { id: number; displayName: string };
+}
+
+export function CreateSessionDialog({ open, onClose, me }: Props) {
+  const formId = useId();
+  const createSession = useCreateSession();
+  const procedures = useQuery({ ...sessionsQueries.procedureOptions(), enabled: open });
+  const toast = useToast();
+  const navigate = useNavigate();
+  const procedureOptions = [
+    { value: '', label: 'None' },
+    ...(procedures.data?.items ?? [])
+      .filter((p) => p.currentVersionId !== null)
+      .map((p) => ({ value: String(p.currentVersionId), label: `${p.title} (v${p.currentVersion})` })),
+  ];
+  const defaults: CreateSessionInput = {
+    code: '',
+    heldOn: new Date().toLocaleDateString('en-CA'),
+    operatorId: me.id,
+    workspace: 'flow-hood',
+    procedureVersionId: null,
+    checklist: [],
+    notes: '',
+  };
+
+  return (
+    <Dialog
+      open={open}
+      onClose={onClose}
+      busy={createSession.isPending}
+      title="New inoculation session"
+      footer={
+        <>
+          <Button variant="secondary" onClick={onClose} disabled={createSession.isPending}>
+            Cancel
+          </Button>
+          <Button type="submit" form={formId} pending={createSession.isPending} icon="plus">
+            Record session
+          </Button>
+        </>
+      }
+    >
+      <div className="mb-5">
+        <FlameCaution />
+      </div>
+      <Form
+        id={formId}
+        schema={createSessionSchema}
+        options={{ defaultValues: defaults }}
+        onSubmit={async (values, { setError }) => {
+          try {
+            const session = await createSession.mutateAsync(values);
+            toast.success(`Session ${session.code} recorded.`);
+            onClose();
+            void navigate(paths.session.to(session.id));
+          } catch (error) {
+            applyServerErrors(error, setError, fields);
+          }
+        }}
+      >
+        {(methods) => {
+          const {
+            register,
+            watch,
+            setValue,
+            formState: { errors },
+          } = methods;
+          const byUser = watch('operatorId') === me.id;
+          const versionId = watch('procedureVersionId');
+          return (
+            <>
+              <div className="grid gap-4 sm:grid-cols-2">
+                <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
+                <TextInput label="Date" type="date" error={errors.heldOn?.message} {...register('heldOn')} />
+                <TextInput
+                  label="Start time"
+                  type="datetime-local"
+                  optional
+                  error={errors.startedAt?.message}
+                  {...register('startedAt', { setValueAs: localDateTime })}
+                />
+                <Select
+                  label="Workspace"
+                  options={workspaceOptions}
+                  error={errors.workspace?.message}
+                  {...register('workspace')}
+                />
+              </div>
+              <fieldset className="flex flex-col gap-3">
+                <legend className="mb-2 font-medium">Operator</legend>
+                <label className="flex min-h-touch items-center gap-3">
+                  <input
+                    type="radio"
+                    className="size-5 accent-accent"
+                    checked={byUser}
+                    onChange={() => {
+                      setValue('operatorId', me.id);
+                      setValue('operatorName', undefined);
+                    }}
+                  />
+                  I inoculated ({me.displayName})
+                </label>
+                <label className="flex min-h-touch items-center gap-3">
+                  <input
+                    type="radio"
+                    className="size-5 accent-accent"
+                    checked={!byUser}
+                    onChange={() => setValue('operatorId', undefined)}
+                  />
+                  Someone else
+                </label>
+                {!byUser && (
+                  <TextInput
+                    label="Staff name"
+                    error={errors.operatorName?.message ?? errors.operatorId?.message}
+                    {...register('operatorName')}
+                  />
+                )}
+              </fieldset>
+              <Select
+                label="Procedure followed"
+                optional
+                options={procedureOptions}
+                hint={
+                  procedures.isError
+                    ? 'The procedure list could not be loaded.'
+                    : 'Its current version; the checklist follows its steps.'
+                }
+                error={errors.procedureVersionId?.message}
+                {...register('procedureVersionId', {
+                  setValueAs: optionalId,
+                  onChange: () => setValue('checklist', []),
+                })}
+              />
+              {typeof versionId === 'number' && (
+                <ChecklistFields key={versionId} versionId={versionId} methods={methods} />
+              )}
+              {errors.checklist?.message && (
+                <p className="text-sm font-medium text-danger">{errors.checklist.message}</p>
+              )}
+              <Field label="Notes" optional error={errors.notes?.message}>
+                {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
+              </Field>
+            </>
+          );
+        }}
+      </Form>
+    </Dialog>
+  );
+}

@@ -1,0 +1,186 @@
+import supertest from 'supertest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { AuditEvent } from '../../server/audit/audit-event.entity';
+import { dataSource } from '../../server/db/data-source';
+import { createTestApp } from '../setup/test-app';
+import { signedIn, uniqueName } from '../setup/factories';
+
+const app = createTestApp();
+type Client = Awaited<ReturnType<typeof signedIn>>;
+
+let tech: Client;
+let ryeId: number;
+beforeAll(async () => {
+  tech = await signedIn(app, 'technician');
+  const grains = (await tech.agent.get('/api/grains')).body as { id: number; name: string }[];
+  ryeId = grains.find((g) => g.name === 'rye')!.id;
+});
+
+const post = (client: Client, url: string, body: Record<string, unknown>) =>
+  client.agent.post(url).set('X-CSRF-Token', client.token()).send(body);
+const newLot = (over: Record<string, unknown> = {}) => ({
+  grainId: ryeId,
+  supplierLotCode: uniqueName('SUP'),
+  receivedOn: '2026-02-01',
+  ...over,
+});
+const newBatch = (grainLotId: number, over: Record<string, unknown> = {}) => ({
+  code: uniqueName('PB'),
+  grainLotId,
+  preparedOn: '2026-02-03',
+  soakHours: 18,
+  simmerMinutes: 12,
+  drainMinutes: 45,
+  notes: 'a little wet',
+  ...over,
+});
+
+describe('/api/grains', () => {
+  it('answers 401 without a session', async () => {
+    const anon = supertest(app);
+    for (const url of [
+      '/api/grains',
+      '/api/grain-lots',
+      '/api/grain-lots/1',
+      '/api/prep-batches',
+      '/api/prep-batches/1',
+    ]) {
+      expect((await anon.get(url)).status).toBe(401);
+    }
+  });
+
+  it('lists the default grain list to any signed-in role', async () => {
+    const trainer = await signedIn(app, 'trainer');
+    const res = await trainer.agent.get('/api/grains');
+    expect(res.status).toBe(200);
+    const names = res.body.map((g: { name: string }) => g.name);
+    const defaults = ['brown rice', 'maize', 'millet', 'oats', 'rye', 'sorghum', 'wheat'];
+    expect(names.filter((n: string) => defaults.includes(n))).toEqual(defaults);
+  });
+
+  it('lets only an admin add a grain, refusing a name already listed in any case', async () => {
+    const supervisor = await signedIn(app, 'supervisor');
+    expect((await post(supervisor, '/api/grains', { name: 'spelt' })).status).toBe(403);
+    const admin = await signedIn(app, 'admin');
+    const name = uniqueName('spelt');
+    const res = await post(admin, '/api/grains', { name });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ name, active: true });
+    const clash = await post(admin, '/api/grains', { name: 'RYE' });
+    expect(clash.status).toBe(409);
+    expect(clash.body.error.issues[0].path).toBe('name');
+    const bad = await post(admin, '/api/grains', { name: 'x' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.issues[0].path).toBe('name');
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'grain',
+      recordId: String(res.body.id),
+    });
+    expect(audit?.action).toBe('create');
+  });
+});
+
+describe('/api/grain-lots', () => {
+  it('creates a lot, audits it and answers 403 to a trainer', async () => {
+    const trainer = await signedIn(app, 'trainer');
+    expect((await post(trainer, '/api/grain-lots', newLot())).status).toBe(403);
+    const res = await post(tech, '/api/grain-lots', newLot());
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ grain: 'rye', receivedOn: '2026-02-01', prepBatchCount: 0 });
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'grain-lot',
+      recordId: String(res.body.id),
+    });
+    expect(audit?.userName).toBe('Test technician');
+  });
+
+  it('answers 400 naming the field, 404 for an unknown lot and 409 naming supplierLotCode', async () => {
+    const unknown = await post(tech, '/api/grain-lots', newLot({ grainId: 999999 }));
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.error.issues[0].path).toBe('grainId');
+    const date = await post(tech, '/api/grain-lots', newLot({ receivedOn: '2026-13-01' }));
+    expect(date.body.error.issues[0].path).toBe('receivedOn');
+    expect((await tech.agent.get('/api/grain-lots/999999')).status).toBe(404);
+    const body = newLot();
+    await post(tech, '/api/grain-lots', body).then((r) => expect(r.status).toBe(201));
+    const clash = await post(tech, '/api/grain-lots', body);
+    expect(clash.status).toBe(409);
+    expect(clash.body.error.issues[0].path).toBe('supplierLotCode');
+  });
+
+  it('pages lots and shows a lot with its prep batches', async () => {
+    const code = uniqueName('PAGED');
+    for (const day of ['2026-01-01', '2026-01-03', '2026-01-02']) {
+      await post(tech, '/api/grain-lots', newLot({ supplierLotCode: `${code}-${day}`, receivedOn: day }));
+    }
+    const res = await tech.agent.get(`/api/grain-lots?q=${code}&sort=receivedOn&pageSize=2`);
+    expect(res.body).toMatchObject({ total: 3, page: 1, pageSize: 2 });
+    expect(res.body.items.map((l: { receivedOn: string }) => l.receivedOn)).toEqual(['2026-01-01', '2026-01-02']);
+    const lot = res.body.items[0];
+    await post(tech, '/api/prep-batches', newBatch(lot.id));
+    const detail = await tech.agent.get(`/api/grain-lots/${lot.id}`);
+    expect(detail.body.prepBatchCount).toBe(1);
+    expect(detail.body.prepBatches).toHaveLength(1);
+    expect(detail.body.prepBatches[0]).toMatchObject({ grain: 'rye', supplierLotCode: lot.supplierLotCode });
+  });
+});
+
+describe('/api/prep-batches', () => {
+  it('creates a batch with its prep times and audits it', async () => {
+    const lot = (await post(tech, '/api/grain-lots', newLot())).body;
+    const res = await post(tech, '/api/prep-batches', newBatch(lot.id));
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({
+      grainLotId: lot.id,
+      grain: 'rye',
+      soakHours: 18,
+      simmerMinutes: 12,
+      drainMinutes: 45,
+    });
+    expect((await tech.agent.get(`/api/prep-batches/${res.body.id}`)).body.code).toBe(res.body.code);
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'prep-batch',
+      recordId: String(res.body.id),
+    });
+    expect(audit?.action).toBe('create');
+  });
+
+  it('answers 403 to a trainer, 400 naming the field, 404 and 409 naming code', async () => {
+    const trainer = await signedIn(app, 'trainer');
+    const lot = (await post(tech, '/api/grain-lots', newLot())).body;
+    expect((await post(trainer, '/api/prep-batches', newBatch(lot.id))).status).toBe(403);
+    const noLot = await post(tech, '/api/prep-batches', newBatch(999999));
+    expect(noLot.body.error.issues[0].path).toBe('grainLotId');
+    const soak = await post(tech, '/api/prep-batches', newBatch(lot.id, { soakHours: 200 }));
+    expect(soak.status).toBe(400);
+    expect(soak.body.error.issues[0].path).toBe('soakHours');
+    const simmer = await post(tech, '/api/prep-batches', newBatch(lot.id, { simmerMinutes: 12.5 }));
+    expect(simmer.body.error.issues[0].path).toBe('simmerMinutes');
+    expect((await tech.agent.get('/api/prep-batches/999999')).status).toBe(404);
+    const body = newBatch(lot.id);
+    await post(tech, '/api/prep-batches', body).then((r) => expect(r.status).toBe(201));
+    const clash = await post(tech, '/api/prep-batches', body);
+    expect(clash.status).toBe(409);
+    expect(clash.body.error.issues[0].path).toBe('code');
+  });
+
+  it('filters by lot and by grain name or id', async () => {
+    const sorghumId = ((await tech.agent.get('/api/grains')).body as { id: number; name: string }[]).find(
+      (g) => g.name === 'sorghum',
+    )!.id;
+    const ryeLot = (await post(tech, '/api/grain-lots', newLot())).body;
+    const sorghumLot = (await post(tech, '/api/grain-lots', newLot({ grainId: sorghumId }))).body;
+    const tag = uniqueName('F');
+    const a = (await post(tech, '/api/prep-batches', newBatch(ryeLot.id, { code: `${tag}-a` }))).body;
+    const b = (await post(tech, '/api/prep-batches', newBatch(sorghumLot.id, { code: `${tag}-b` }))).body;
+    const byLot = await tech.agent.get(`/api/prep-batches?grainLotId=${ryeLot.id}`);
+    expect(byLot.body.items.map((x: { id: number }) => x.id)).toEqual([a.id]);
+    const byName = await tech.agent.get(`/api/prep-batches?q=${tag}&grain=Sorghum`);
+    expect(byName.body.items.map((x: { id: number }) => x.id)).toEqual([b.id]);
+    const byId = await tech.agent.get(`/api/prep-batches?q=${tag}&grain=${ryeId}`);
+    expect(byId.body.items.map((x: { id: number }) => x.id)).toEqual([a.id]);
+    const unknown = await tech.agent.get('/api/prep-batches?grain=quinoa-not-listed');
+    expect(unknown.status).toBe(400);
+    expect(unknown.body.error.issues[0].path).toBe('grain');
+  });
+});

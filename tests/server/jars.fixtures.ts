@@ -1,0 +1,96 @@
+import { dataSource } from '../../server/db/data-source';
+import { CookRun } from '../../server/cook-runs/cook-run.entity';
+import { Culture } from '../../server/cultures/culture.entity';
+import { GrainLot } from '../../server/grain/grain-lot.entity';
+import { Grain } from '../../server/grain/grain.entity';
+import { PrepBatch } from '../../server/grain/prep-batch.entity';
+import { InoculationSession } from '../../server/sessions/inoculation-session.entity';
+import type { CultureState } from '../../shared/enums';
+import type { Agent } from '../setup/test-app';
+import { uniqueName } from '../setup/factories';
+
+/** Invented production records for jar tests, written straight to the tables the other registers own. */
+export const jarFixtures = {
+  async grainId(name = 'rye'): Promise<number> {
+    const g = await dataSource.manager.findOneByOrFail(Grain, { name });
+    return g.id;
+  },
+
+  async prepBatch(grainName = 'rye') {
+    const m = dataSource.manager;
+    const lot = await m.save(
+      m.create(GrainLot, {
+        grainId: await this.grainId(grainName),
+        supplierLotCode: uniqueName('LOT'),
+        receivedOn: '2026-05-01',
+      }),
+    );
+    return m.save(
+      m.create(PrepBatch, {
+        code: uniqueName('PB'),
+        grainLotId: lot.id,
+        preparedOn: '2026-05-03',
+        soakHours: 18,
+        simmerMinutes: 12,
+        drainMinutes: 45,
+      }),
+    );
+  },
+
+  cookRun: () =>
+    dataSource.manager.save(
+      dataSource.manager.create(CookRun, {
+        code: uniqueName('CR'),
+        minutesAtPressure: 90,
+        gaugeKPa: 103,
+        container: '1 L jar',
+        cookedOn: '2026-05-03',
+        startedAt: new Date('2026-05-03T09:00:00Z'),
+      }),
+    ),
+
+  culture: (state: CultureState = 'released', parentCultureId: number | null = null) =>
+    dataSource.manager.save(
+      dataSource.manager.create(Culture, {
+        code: uniqueName('LC'),
+        species: 'Pleurotus ostreatus',
+        strain: 'invented grey',
+        state,
+        parentCultureId,
+        preparedOn: '2026-04-20',
+      }),
+    ),
+
+  session: (heldOn = '2026-05-04') =>
+    dataSource.manager.save(
+      dataSource.manager.create(InoculationSession, {
+        code: uniqueName('S'),
+        heldOn,
+        startedAt: new Date(`${heldOn}T10:00:00Z`),
+        operatorName: 'Test operator',
+        workspace: 'flow-hood',
+      }),
+    ),
+};
+
+export interface JarRow {
+  id: number;
+  label: string;
+  status: string;
+  shelfPosition: number | null;
+  [key: string]: unknown;
+}
+
+/** Makes jars through the API, as a technician at the bench would. */
+export async function makeJars(
+  client: { agent: Agent; token: () => string },
+  body: Record<string, unknown>,
+): Promise<JarRow[]> {
+  const res = await client.agent.post('/api/jars/batch').set('X-CSRF-Token', client.token()).send(body);
+  if (res.status !== 201) throw new Error(`batch failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return (res.body as { jars: JarRow[] }).jars;
+}
+
+export function jarEvent(client: { agent: Agent; token: () => string }, jarId: number, body: Record<string, unknown>) {
+  return client.agent.post(`/api/jars/${jarId}/events`).set('X-CSRF-Token', client.token()).send(body);
+}
