@@ -14,6 +14,8 @@ export interface NavItem {
   description?: string;
   /** Match the path exactly (the start page would otherwise match everything). */
   end?: boolean;
+  /** Roles for whom this screen is one of the few on the phone's bottom bar, in nav order. */
+  barFor?: readonly Role[];
 }
 
 // Order here is the order on screen; add new screens above Account, which stays last.
@@ -24,16 +26,16 @@ export const navigation: NavItem[] = [
     label: 'This week',
     to: paths.analysisWeekly.to(),
     roles: access.weeklyTable,
-    icon: 'check',
     description: 'The last twelve ISO weeks: jars, contamination and the p-chart, per grain and overall.',
+    icon: 'calendar',
   },
   {
     id: 'analysis',
     label: 'Analysis',
     to: paths.analysisCauses.to(),
     roles: access.analysis,
-    icon: 'search',
     description: 'Likely causes, rates, cross-tables, colonisation time and cook lethality.',
+    icon: 'chart',
   },
   {
     id: 'users',
@@ -42,6 +44,7 @@ export const navigation: NavItem[] = [
     roles: access.users,
     icon: 'users',
     description: 'Create accounts, change roles and deactivate people who have left.',
+    barFor: ['admin'],
   },
   {
     id: 'cook-runs',
@@ -49,6 +52,7 @@ export const navigation: NavItem[] = [
     to: paths.cookRuns.to(),
     roles: access.cookRuns,
     description: 'Sterilisation cycles, temperature logs and each run’s lethality (F0).',
+    icon: 'flame',
   },
   {
     id: 'cultures',
@@ -56,6 +60,7 @@ export const navigation: NavItem[] = [
     to: paths.cultures.to(),
     roles: access.cultures,
     description: 'Syringes and liquid cultures: quarantine, release, agar tests.',
+    icon: 'flask',
   },
   {
     id: 'sessions',
@@ -63,6 +68,7 @@ export const navigation: NavItem[] = [
     to: paths.sessions.to(),
     roles: access.sessions,
     description: 'Inoculation sessions: who, where, and the checklist they followed.',
+    icon: 'syringe',
   },
   {
     id: 'grain',
@@ -70,6 +76,7 @@ export const navigation: NavItem[] = [
     to: paths.grain.to(),
     roles: access.grain,
     description: 'Grain lots as received and the prep batches soaked and simmered from them.',
+    icon: 'grain',
   },
   {
     id: 'jars',
@@ -77,6 +84,7 @@ export const navigation: NavItem[] = [
     to: paths.jars.to(),
     roles: allRoles,
     description: 'Every jar with its status, place and story; labels, lineage and holds.',
+    icon: 'jar',
   },
   {
     id: 'shelf-walk',
@@ -84,6 +92,8 @@ export const navigation: NavItem[] = [
     to: paths.shelfWalk.to(),
     roles: productionRoles.write,
     description: 'Go along a shelf and mark each jar clean, colonised or shaken with one tap.',
+    icon: 'shelf',
+    barFor: ['technician'],
   },
   {
     id: 'flag-jar',
@@ -92,6 +102,7 @@ export const navigation: NavItem[] = [
     roles: access.flagJar,
     icon: 'alert',
     description: 'A jar has turned: record it with a photo in under half a minute.',
+    barFor: ['technician', 'supervisor'],
   },
   {
     id: 'incidents',
@@ -101,6 +112,7 @@ export const navigation: NavItem[] = [
     icon: 'inbox',
     description: 'The incident register: review, verdicts, corrective actions and history.',
     end: true,
+    barFor: ['supervisor', 'trainer'],
   },
   {
     id: 'history-import',
@@ -108,14 +120,16 @@ export const navigation: NavItem[] = [
     to: paths.historyImport.to(),
     roles: access.historyImport,
     description: 'Bring past production in from a spreadsheet: jars, cook runs, sessions, cultures and outcomes.',
+    icon: 'upload',
   },
   {
     id: 'procedures',
     label: 'Procedures',
     to: paths.procedures.to(),
     roles: access.procedures,
-    icon: 'check',
     description: 'The lab’s written methods, step by step, with the incidents linked to each step.',
+    icon: 'list',
+    barFor: ['trainer'],
   },
   {
     id: 'training',
@@ -130,24 +144,25 @@ export const navigation: NavItem[] = [
     label: 'Sent mail',
     to: paths.sentMail.to(),
     roles: access.sentMail,
-    icon: 'inbox',
     description: 'Every e-mail Asepta sent, and the weekly digest on demand.',
+    icon: 'mail',
   },
   {
     id: 'mail',
     label: 'Mail',
     to: paths.mailPreferences.to(),
     roles: access.mailPreferences,
-    icon: 'info',
     description: 'Choose which e-mails you get.',
+    icon: 'mail',
   },
   {
     id: 'lab-settings',
     label: 'Lab settings',
     to: paths.labSettings.to(),
     roles: access.labSettings,
-    icon: 'info',
     description: 'Cook-duration buckets, the lethality target, the observation window and alert thresholds.',
+    icon: 'settings',
+    barFor: ['admin'],
   },
   {
     id: 'account',
@@ -161,4 +176,11 @@ export const navigation: NavItem[] = [
 
 export function navigationFor(role: Role): NavItem[] {
   return navigation.filter((item) => item.roles.includes(role));
+}
+
+/** The role's screens with the ones it reaches for most (its phone-bar screens) first. */
+export function prioritisedFor(role: Role): NavItem[] {
+  const items = navigationFor(role);
+  const first = items.filter((i) => i.id === 'home' || i.barFor?.includes(role));
+  return [...first, ...items.filter((i) => !first.includes(i))];
 }

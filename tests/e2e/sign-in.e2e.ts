@@ -3,12 +3,13 @@ import { desktop, newPage, phone, shotsDir, signIn, useBrowser } from './support
 
 const browser = useBrowser();
 
-// Screens each demo role should see in the main navigation, and ones it must not.
+// Screens each demo role should see in the main navigation, and ones it must not (DESIGN.md §2).
+const everyone = ['Home', 'Analysis', 'Cook runs', 'Cultures', 'Sessions', 'Jars', 'Incidents', 'Procedures', 'Account'];
 const expected = {
-  technician: { sees: ['Home', 'Account'], hidden: ['Users'] },
-  supervisor: { sees: ['Home', 'Account'], hidden: ['Users'] },
-  trainer: { sees: ['Home', 'Account'], hidden: ['Users'] },
-  admin: { sees: ['Home', 'Users', 'Account'], hidden: [] as string[] },
+  technician: { sees: [...everyone, 'Shelf walk', 'Flag a jar'], hidden: ['Users', 'Lab settings', 'History import', 'This week', 'Training'] },
+  supervisor: { sees: [...everyone, 'This week', 'Flag a jar', 'History import', 'Training'], hidden: ['Users', 'Lab settings', 'Sent mail'] },
+  trainer: { sees: [...everyone, 'Training'], hidden: ['Users', 'Lab settings', 'Flag a jar', 'Shelf walk', 'History import'] },
+  admin: { sees: [...everyone, 'Users', 'Lab settings', 'History import', 'Sent mail'], hidden: ['Flag a jar', 'This week'] },
 } as const;
 
 describe('signing in', () => {

@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { Badge } from '../../components/ui/badge';
 import { Icon } from '../../components/ui/icon';
 import { cautionFootnote, cautions } from '../../config/cautions';
-import { navigationFor } from '../../config/navigation';
+import { prioritisedFor } from '../../config/navigation';
 import { roleLabels, roleSummaries } from '../../config/roles';
 import { useCurrentUser } from '../../features/auth/api/use-me';
 import { WeeklyScreen } from '../../features/analysis/components/weekly-screen';
@@ -11,7 +11,7 @@ import { formatLongDate, greeting, isoWeek } from '../../lib/format';
 export function HomeRoute() {
   const me = useCurrentUser();
   const now = new Date();
-  const tiles = navigationFor(me.role).filter((item) => item.id !== 'home');
+  const tiles = prioritisedFor(me.role).filter((item) => item.id !== 'home');
 
   return (
     <>

@@ -1,7 +1,7 @@
 import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { Link, NavLink, useLocation, useNavigation } from 'react-router';
 import type { Role } from '../../../shared/enums';
-import { navigationFor } from '../../config/navigation';
+import { navigationFor, prioritisedFor } from '../../config/navigation';
 import { paths } from '../../config/paths';
 import { roleLabels } from '../../config/roles';
 import { Badge } from '../ui/badge';
@@ -22,6 +22,7 @@ const barSlots = 4;
 export function AppLayout({ user, onSignOut, signingOut, children }: AppLayoutProps) {
   const items = navigationFor(user.role);
   const crowded = items.length > barSlots;
+  const barItems = prioritisedFor(user.role).slice(0, barSlots - 1);
   const [moreOpen, setMoreOpen] = useState(false);
   const mainRef = useRef<HTMLElement>(null);
   const { pathname } = useLocation();
@@ -81,7 +82,7 @@ export function AppLayout({ user, onSignOut, signingOut, children }: AppLayoutPr
           <div className="mx-auto max-w-6xl">{children}</div>
         </main>
       </div>
-      <BottomBar items={crowded ? items.slice(0, barSlots - 1) : items} onMore={crowded ? () => setMoreOpen(true) : undefined} />
+      <BottomBar items={crowded ? barItems : items} onMore={crowded ? () => setMoreOpen(true) : undefined} />
       <Dialog open={moreOpen} onClose={() => setMoreOpen(false)} title="All screens" size="sm">
         <ul className="flex flex-col gap-1">
           {items.map((item) => (
