@@ -61,8 +61,10 @@ const containers = [
   ['2 L jar', 25],
   ['3 kg bag', 15],
 ] as const;
+/** ISO weeks of history, the current one included: enough settled weeks for a steady p-chart centre line. */
+export const demoWeeks = 16;
 /** Share of the other jars found contaminated so far: a few per cent is good practice (shared/TRADE.md §1). */
-const backgroundRate = 0.04;
+const backgroundRate = 0.035;
 /** Days from inoculation to a visible contaminant, common practice (shared/TRADE.md §2). */
 const background: readonly (readonly [Contaminant, number, number, number])[] = [
   ['trichoderma', 30, 5, 14],
@@ -100,7 +102,7 @@ function makeRun(rng: Random, cookedOn: string, over: Partial<PlanRun> = {}): Pl
   };
 }
 
-/** Ten ISO weeks of invented production ending on `today`, with the planted problems built in. */
+/** Sixteen ISO weeks of invented production ending on `today`, with the planted problems built in. */
 export function planDemoHistory(today: string): DemoPlan {
   const rng = seededRandom(0x2614_0931);
   const monday = mondayOf(today);
@@ -138,10 +140,14 @@ export function planDemoHistory(today: string): DemoPlan {
     return jar;
   };
 
-  for (let d = day(9, 1); d <= today; d = addDays(d, 1)) {
+  for (let d = day(demoWeeks - 1, 1); d <= today; d = addDays(d, 1)) {
     if (isoWeekday(d) > 5 || (!forced.has(d) && rng.next() < 0.08)) continue;
     const back = Math.round((Date.parse(monday) - Date.parse(mondayOf(d))) / (7 * 86_400_000));
-    const dayRuns = Array.from({ length: rng.next() < 0.45 ? 2 : 1 }, () => makeRun(rng, addDays(d, -1)));
+    // The short run's grains also went into sound runs that day, so their prep batches are not the cause.
+    const dayRuns =
+      d === shortRunDay
+        ? planted.shortCookRun.grains.map((grain) => makeRun(rng, addDays(d, -1), { grain }))
+        : Array.from({ length: rng.next() < 0.45 ? 2 : 1 }, () => makeRun(rng, addDays(d, -1)));
     runs.push(...dayRuns);
     const pool = regularCultures.filter((c) => c.weeks.from >= back && c.weeks.to <= back).map((c) => c.code);
     const staff = rng.shuffle([
@@ -205,11 +211,14 @@ export function planDemoHistory(today: string): DemoPlan {
 
   const weeksBack = (date: string) => Math.round((Date.parse(monday) - Date.parse(mondayOf(date))) / (7 * 86_400_000));
   plantBadCulture(rng, jars, sessions, (s) => weeksBack(s.heldOn), shortRunDay);
-  contaminate(rng, today, jars, shortRun);
+  contaminate(rng, today, jars, shortRun, (s) => weeksBack(s.heldOn));
   return finish(runs, sessions, jars, shortRun);
 }
 
-/** LC-0931 goes to five jars in each of eight sessions over four weeks, away from the other planted causes. */
+/**
+ * LC-0931 goes to five jars in each of eight sessions, two in each of its four weeks, away from the
+ * other planted causes; an even spread keeps the culture, not one of its weeks, the lead.
+ */
 function plantBadCulture(
   rng: Random,
   jars: PlanJar[],
@@ -222,7 +231,9 @@ function plantBadCulture(
   const eligible = sessions.filter(
     (s) => weeks.has(weeksBack(s)) && s.operator !== demoOperators.relief && s.heldOn !== shortRunDay,
   );
-  const chosen = rng.shuffle(eligible).slice(0, c.sessions);
+  const chosen = [...weeks].flatMap((w) =>
+    rng.shuffle(eligible.filter((s) => weeksBack(s) === w)).slice(0, c.sessions / weeks.size),
+  );
   const perSession = c.jars / c.sessions;
   for (const s of chosen) {
     const own = jars.filter((j) => j.session === s && !j.fixed && !j.parent).slice(0, perSession);
@@ -230,7 +241,13 @@ function plantBadCulture(
   }
 }
 
-function contaminate(rng: Random, today: string, jars: PlanJar[], shortRun: PlanRun | undefined) {
+function contaminate(
+  rng: Random,
+  today: string,
+  jars: PlanJar[],
+  shortRun: PlanRun | undefined,
+  weeksBack: (s: PlanSession) => number,
+) {
   const plant = (set: PlanJar[], count: number, kinds: Contaminant[], [lo, hi]: readonly [number, number]) => {
     for (const j of rng.shuffle(set).slice(0, count)) {
       j.contaminant = rng.pick(kinds);
@@ -246,12 +263,13 @@ function contaminate(rng: Random, today: string, jars: PlanJar[], shortRun: Plan
     s.contaminants,
     s.daysToDetection,
   );
-  plant(
-    jars.filter((j) => j.culture === b.code),
-    b.contaminated,
-    b.contaminants,
-    b.daysToDetection,
-  );
+  for (const week of b.weeksBeforeCurrent)
+    plant(
+      jars.filter((j) => j.culture === b.code && weeksBack(j.session) === week),
+      b.contaminated / b.weeksBeforeCurrent.length,
+      b.contaminants,
+      b.daysToDetection,
+    );
   plant(
     jars.filter((j) => j.fixed && j.session.operator === w.operator),
     w.contaminated,
@@ -259,15 +277,12 @@ function contaminate(rng: Random, today: string, jars: PlanJar[], shortRun: Plan
     w.daysToDetection,
   );
   const others = jars.filter((j) => !j.fixed);
-  let left = Math.round(backgroundRate * others.length);
-  for (const j of rng.shuffle(others)) {
-    if (left === 0) break;
+  const drawn = rng.shuffle(others).slice(0, Math.round(backgroundRate * others.length));
+  for (const j of drawn) {
     const [kind, , lo, hi] = rng.weighted(background.map((x) => [x, x[1]] as const));
     const foundOn = addDays(j.session.heldOn, rng.int(lo, hi));
-    // A jar whose contaminant would show only after today is still clean on the shelf.
-    if (foundOn > today) continue;
-    Object.assign(j, { contaminant: kind, foundOn });
-    left -= 1;
+    // Still clean on the shelf until its contaminant shows; redrawing it onto an older jar would inflate settled weeks.
+    if (foundOn <= today) Object.assign(j, { contaminant: kind, foundOn });
   }
 }
 

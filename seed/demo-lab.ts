@@ -7,6 +7,7 @@ import { Jar } from '../server/jars/jar.entity';
 import { User } from '../server/users/user.entity';
 import { createUser } from '../server/users/users.service';
 import { addPlanDetails } from './demo-details';
+import { addDemoGrain, planDemoGrain } from './demo-grain';
 import { planDemoHistory, planToCsv } from './demo-history';
 import { loadOpenIncidents } from './demo-incidents';
 import { demoAccounts, demoPassword } from './demo-people';
@@ -14,8 +15,11 @@ import { loadDemoProcedures } from './demo-procedures';
 
 const seeder: Actor = { id: null, displayName: 'demo loader' };
 
-/** Loads the invented demo lab through the services; safe to run on every start. */
-export async function loadDemoLab(log: (line: string) => void = console.log): Promise<void> {
+/**
+ * Loads the invented demo lab through the services; safe to run on every start. `today` (lab-local)
+ * fixes the day the history ends on, so a test gets the same lab on any date.
+ */
+export async function loadDemoLab(log: (line: string) => void = console.log, today?: string): Promise<void> {
   let created = 0;
   for (const account of demoAccounts) {
     if (await dataSource.manager.existsBy(User, { username: account.username })) continue;
@@ -24,29 +28,33 @@ export async function loadDemoLab(log: (line: string) => void = console.log): Pr
   }
   log(created ? `Demo lab: created ${created} accounts` : 'Demo lab: accounts present');
   await loadDemoProcedures(log);
-  await loadDemoProduction(log);
+  await loadDemoProduction(log, today ?? localDate(new Date(), config().LAB_TIME_ZONE));
 }
 
-/** Ten weeks of production ending today, imported as a lab would import its history; skipped once jars exist. */
-async function loadDemoProduction(log: (line: string) => void): Promise<void> {
+/** Sixteen weeks of production ending today, imported as a lab would import its history; skipped once jars exist. */
+async function loadDemoProduction(log: (line: string) => void, today: string): Promise<void> {
   if (await dataSource.manager.exists(Jar)) {
     log('Demo lab: production already loaded');
     return;
   }
   const timeZone = config().LAB_TIME_ZONE;
-  const today = localDate(new Date(), timeZone);
   const plan = planDemoHistory(today);
+  const grain = planDemoGrain(plan);
   const supervisor = await dataSource.manager.findOneBy(User, { username: 'supervisor' });
   const actor: Actor = supervisor ? { id: supervisor.id, displayName: supervisor.displayName } : seeder;
   const imported = await dataSource.transaction(async (m) => {
-    const outcome = await importHistory(actor, Buffer.from(planToCsv(plan)), m);
+    const outcome = await importHistory(actor, Buffer.from(planToCsv(plan)), m, today);
     if (!outcome.ok) {
       const first = outcome.errors.slice(0, 5).map((e) => `line ${e.line} ${e.column}: ${e.message}`);
       throw new Error(`The demo history did not import:\n${first.join('\n')}`);
     }
     await addPlanDetails(m, plan, timeZone, today);
+    await addDemoGrain(m, actor, grain);
     return outcome.result.imported;
   });
-  log(`Demo lab: imported ${imported.jars} jars and ${imported.incidents} closed incidents`);
+  log(
+    `Demo lab: imported ${imported.jars} jars and ${imported.incidents} closed incidents; ` +
+      `${grain.lots.length} grain lots, ${grain.batches.length} prep batches`,
+  );
   await loadOpenIncidents(plan, today, timeZone, log);
 }

@@ -14,7 +14,7 @@ export const plantedProblems = {
     /** A mixed load, so the run is not one grain's run. */
     grains: ['rye', 'millet'],
     jars: 24,
-    contaminated: 14,
+    contaminated: 18,
     contaminants: ['bacterial'] as Contaminant[],
     daysToDetection: [2, 5] as const,
     weeksBeforeCurrent: 6,

@@ -74,3 +74,23 @@ export const factors = [
 ] as const;
 export const factorSchema = z.enum(factors);
 export type Factor = (typeof factors)[number];
+
+/**
+ * What a factor is called where people read it, mid-sentence ("minutes at pressure <60", "ISO week 2026-W43"):
+ * the server's hints and the screens' labels both read it from here.
+ */
+export const factorNames: Record<Factor, string> = {
+  grain: 'grain',
+  cookRun: 'cook run',
+  cookMinutes: 'minutes at pressure',
+  session: 'session',
+  operator: 'operator',
+  culture: 'culture',
+  week: 'ISO week',
+  prepBatch: 'prep batch',
+  workspace: 'workspace',
+  room: 'incubation room',
+};
+
+/** The same name at the start of a label or heading ("Minutes at pressure"). */
+export const factorLabel = (f: Factor) => factorNames[f].charAt(0).toUpperCase() + factorNames[f].slice(1);

@@ -25,7 +25,12 @@ export const analysisRouter = Router();
 analysisRouter.use(requireUser);
 
 function answer<T>(res: Response, format: 'json' | 'csv', dto: T, toCsv: (d: T) => csv.CsvTable) {
-  if (format === 'json') return res.json(dto);
+  if (format === 'json') {
+    // Sent without res.json's ETag: every answer is worked out afresh (causes runs to megabytes), and
+    // hashing it each time costs more than a revalidation would save.
+    res.type('json').end(JSON.stringify(dto));
+    return;
+  }
   const t = toCsv(dto);
   sendCsv(res, t.filename, t.header, t.rows);
 }

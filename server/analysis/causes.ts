@@ -1,112 +1,180 @@
-import { factors, type Factor } from '../../shared/enums';
+import { contaminants, factors, type Contaminant, type Factor } from '../../shared/enums';
 import type { CauseRow, FactorLevel } from '../../shared/schemas/analysis';
 import { bhAdjust } from '../../shared/stats/benjamini-hochberg';
 import { fisherExactTwoSided } from '../../shared/stats/fisher';
-import { relativeRisk } from '../../shared/stats/relative-risk';
+import { relativeRisk, type RelativeRisk } from '../../shared/stats/relative-risk';
 import type { CombinationRow } from './analysis.repository';
-import { factorIndex, hintFor, median, parseDetections, type Detections } from './hints';
-
-interface LevelTally {
-  level: string;
-  jars: number;
-  contaminated: number;
-  incubating: number;
-  detections: Detections;
-  confoundedWith: FactorLevel[];
-}
+import { hintFor, readDetections, type Detections } from './hints';
 
 export const CONFOUNDED_SHARE = 0.9;
 
-/**
- * Rolls the combinations up per factor level; each combination's jars count once per factor.
- * Levels are numbered per factor first, so the pairwise overlap for confoundedWith is counted on
- * integer keys rather than nested maps of strings.
- */
-function tallyLevels(combos: CombinationRow[]): Map<Factor, LevelTally[]> {
-  const index = factors.map(() => new Map<string, number>());
-  const tallies: LevelTally[][] = factors.map(() => []);
-  const levelIdx = new Int32Array(combos.length * factors.length);
+const F = factors.length;
+const C = contaminants.length;
+const factorOrder = Object.fromEntries(factors.map((f, i) => [f, i])) as Record<Factor, number>;
+
+/** One factor's levels, numbered in the order they first appear; counts are indexed by level number. */
+interface FactorLevels {
+  names: string[];
+  jars: number[];
+  contaminated: number[];
+  incubating: number[];
+  /** The combinations holding each level, listed level by level: members[start[i]] … members[start[i + 1] − 1]. */
+  start: Int32Array;
+  members: Int32Array;
+}
+
+/** Contaminated jars of every combination, flat: combination ci owns entries detStart[ci] … detStart[ci + 1] − 1. */
+interface ComboDetections {
+  detStart: Int32Array;
+  days: Float64Array;
+  contaminant: Uint8Array;
+}
+
+function readAllDetections(combos: CombinationRow[]): ComboDetections {
+  const days: number[] = [];
+  const codes: number[] = [];
+  const detStart = new Int32Array(combos.length + 1);
   combos.forEach((combo, ci) => {
-    const detections = parseDetections(combo.detections);
-    factors.forEach((factor, fi) => {
-      const level = combo[factor];
-      if (level === null) {
-        levelIdx[ci * factors.length + fi] = -1;
-        return;
-      }
-      const ids = index[fi]!;
-      let id = ids.get(level);
-      if (id === undefined) {
-        id = ids.size;
-        ids.set(level, id);
-        tallies[fi]!.push({
-          level,
-          jars: 0,
-          contaminated: 0,
-          incubating: 0,
-          detections: { days: [], contaminants: {} },
-          confoundedWith: [],
-        });
-      }
-      levelIdx[ci * factors.length + fi] = id;
-      const t = tallies[fi]![id]!;
-      t.jars += combo.jars;
-      t.contaminated += combo.contaminated;
-      t.incubating += combo.incubating;
-      if (detections.days.length > 0) {
-        for (const d of detections.days) t.detections.days.push(d);
-        for (const [c, n] of Object.entries(detections.contaminants) as [keyof Detections['contaminants'], number][]) {
-          t.detections.contaminants[c] = (t.detections.contaminants[c] ?? 0) + n;
-        }
-      }
+    readDetections(combo.detections, (d, c) => {
+      days.push(d);
+      codes.push(c);
     });
+    detStart[ci + 1] = days.length;
   });
-  const F = factors.length;
-  for (let a = 0; a < F; a++) {
-    const levelsA = tallies[a]!;
-    if (levelsA.length === 0) continue;
-    // Combinations listed per level of a (a counting sort), then one pass per other factor with a reused tally array.
-    const start = new Int32Array(levelsA.length + 1);
+  return { detStart, days: Float64Array.from(days), contaminant: Uint8Array.from(codes) };
+}
+
+/**
+ * Numbers each factor's levels and rolls the combinations up per level; each combination's jars count
+ * once per factor. levelIdx[ci * F + fi] is combination ci's level of factor fi, −1 where not recorded.
+ */
+function indexLevels(combos: CombinationRow[]): { levels: FactorLevels[]; levelIdx: Int32Array } {
+  const levelIdx = new Int32Array(combos.length * F);
+  const levels = factors.map((factor, fi) => {
+    const ids = new Map<string, number>();
+    const l: FactorLevels = {
+      names: [],
+      jars: [],
+      contaminated: [],
+      incubating: [],
+      start: new Int32Array(0),
+      members: new Int32Array(0),
+    };
     for (let ci = 0; ci < combos.length; ci++) {
-      const ia = levelIdx[ci * F + a]!;
-      if (ia >= 0) start[ia + 1]!++;
+      const combo = combos[ci]!;
+      const name = combo[factor];
+      if (name === null) {
+        levelIdx[ci * F + fi] = -1;
+        continue;
+      }
+      let id = ids.get(name);
+      if (id === undefined) {
+        id = l.names.length;
+        ids.set(name, id);
+        l.names.push(name);
+        l.jars.push(0);
+        l.contaminated.push(0);
+        l.incubating.push(0);
+      }
+      levelIdx[ci * F + fi] = id;
+      l.jars[id]! += combo.jars;
+      l.contaminated[id]! += combo.contaminated;
+      l.incubating[id]! += combo.incubating;
     }
-    for (let i = 0; i < levelsA.length; i++) start[i + 1]! += start[i]!;
-    const members = new Int32Array(start[levelsA.length]!);
-    const fill = start.slice(0, levelsA.length);
+    // A counting sort lists the combinations of each level together, for the per-level passes below.
+    const start = new Int32Array(l.names.length + 1);
     for (let ci = 0; ci < combos.length; ci++) {
-      const ia = levelIdx[ci * F + a]!;
-      if (ia >= 0) members[fill[ia]!++] = ci;
+      const id = levelIdx[ci * F + fi]!;
+      if (id >= 0) start[id + 1]!++;
     }
-    for (let b = 0; b < F; b++) {
-      const levelsB = tallies[b]!;
-      if (a === b || levelsB.length === 0) continue;
-      const sums = new Float64Array(levelsB.length);
-      const touched: number[] = [];
-      for (let ia = 0; ia < levelsA.length; ia++) {
-        const ta = levelsA[ia]!;
-        for (let m = start[ia]!; m < start[ia + 1]!; m++) {
-          const ci = members[m]!;
-          const ib = levelIdx[ci * F + b]!;
-          if (ib < 0) continue;
-          if (sums[ib] === 0) touched.push(ib);
-          sums[ib]! += combos[ci]!.jars;
+    for (let i = 0; i < l.names.length; i++) start[i + 1]! += start[i]!;
+    const members = new Int32Array(start[l.names.length]!);
+    const fill = start.slice(0, l.names.length);
+    for (let ci = 0; ci < combos.length; ci++) {
+      const id = levelIdx[ci * F + fi]!;
+      if (id >= 0) members[fill[id]!++] = ci;
+    }
+    l.start = start;
+    l.members = members;
+    return l;
+  });
+  return { levels, levelIdx };
+}
+
+/**
+ * For each level of factor a, the level of each other factor holding ≥ 90 % of its jars. Such a level
+ * holds most of them, so a weighted majority vote over the level's combinations names the one candidate
+ * per factor, and a second pass counts its jars; candidates come out in factor order. Factors whose
+ * largest level is smaller than 90 % of the level are skipped.
+ */
+function confounded(comboJars: Float64Array, levels: FactorLevels[], levelIdx: Int32Array, a: number): FactorLevel[][] {
+  const la = levels[a]!;
+  const out: FactorLevel[][] = la.names.map(() => []);
+  const largest = levels.map((l) => l.jars.reduce((m, j) => Math.max(m, j), 0));
+  const candidate = new Int32Array(F);
+  const weight = new Float64Array(F);
+  const eligible = new Int32Array(F);
+  for (let ia = 0; ia < la.names.length; ia++) {
+    const from = la.start[ia]!;
+    const to = la.start[ia + 1]!;
+    const need = CONFOUNDED_SHARE * la.jars[ia]!;
+    let e = 0;
+    for (let b = 0; b < F; b++) if (b !== a && largest[b]! >= need) eligible[e++] = b;
+    if (e === 0) continue;
+    candidate.fill(-1);
+    weight.fill(0);
+    for (let m = from; m < to; m++) {
+      const ci = la.members[m]!;
+      const w = comboJars[ci]!;
+      for (let k = 0; k < e; k++) {
+        const b = eligible[k]!;
+        const ib = levelIdx[ci * F + b]!;
+        if (ib < 0) continue;
+        if (candidate[b] === ib) weight[b]! += w;
+        else if (weight[b]! >= w) weight[b]! -= w;
+        else {
+          candidate[b] = ib;
+          weight[b] = w - weight[b]!;
         }
-        for (const ib of touched) {
-          if (sums[ib]! >= CONFOUNDED_SHARE * ta.jars)
-            ta.confoundedWith.push({ factor: factors[b]!, level: levelsB[ib]!.level });
-          sums[ib] = 0;
-        }
-        touched.length = 0;
       }
     }
-  }
-  for (const list of tallies) {
-    for (const t of list) {
-      t.confoundedWith.sort((x, y) => factorIndex(x.factor) - factorIndex(y.factor) || compareText(x.level, y.level));
+    weight.fill(0);
+    for (let m = from; m < to; m++) {
+      const ci = la.members[m]!;
+      for (let k = 0; k < e; k++) {
+        const b = eligible[k]!;
+        if (levelIdx[ci * F + b] === candidate[b]) weight[b]! += comboJars[ci]!;
+      }
+    }
+    for (let k = 0; k < e; k++) {
+      const b = eligible[k]!;
+      if (candidate[b]! >= 0 && weight[b]! >= need)
+        out[ia]!.push({ factor: factors[b]!, level: levels[b]!.names[candidate[b]!]! });
     }
   }
-  return new Map(factors.map((f, fi) => [f, tallies[fi]!]));
+  return out;
+}
+
+/** Contaminants and the median days to detection over one level's contaminated jars. */
+function detectionsOf(l: FactorLevels, ia: number, det: ComboDetections, buffer: Float64Array): Detections {
+  const counts = new Int32Array(C);
+  let n = 0;
+  for (let m = l.start[ia]!; m < l.start[ia + 1]!; m++) {
+    const ci = l.members[m]!;
+    for (let k = det.detStart[ci]!; k < det.detStart[ci + 1]!; k++) {
+      buffer[n++] = det.days[k]!;
+      counts[det.contaminant[k]!]!++;
+    }
+  }
+  const byContaminant: Partial<Record<Contaminant, number>> = {};
+  for (let c = 0; c < C; c++) if (counts[c]! > 0) byContaminant[contaminants[c]!] = counts[c]!;
+  let medianDays: number | null = null;
+  if (n > 0) {
+    const s = buffer.subarray(0, n).sort();
+    const mid = n >> 1;
+    medianDays = n % 2 ? s[mid]! : (s[mid - 1]! + s[mid]!) / 2;
+  }
+  return { count: n, contaminants: byContaminant, medianDays };
 }
 
 const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
@@ -118,7 +186,7 @@ export function compareCauses(a: CauseRow, b: CauseRow): number {
     a.qValue - b.qValue ||
     b.relativeRisk - a.relativeRisk ||
     a.pValue - b.pValue ||
-    factorIndex(a.factor) - factorIndex(b.factor) ||
+    factorOrder[a.factor] - factorOrder[b.factor] ||
     compareText(a.level, b.level)
   );
 }
@@ -128,51 +196,63 @@ export function compareCauses(a: CauseRow, b: CauseRow): number {
  * so a jar without a room never counts against or for any room.
  */
 export function buildCauses(combos: CombinationRow[], minJars: number): CauseRow[] {
+  const { levels, levelIdx } = indexLevels(combos);
+  const det = readAllDetections(combos);
+  const buffer = new Float64Array(det.days.length);
+  const comboJars = Float64Array.from(combos, (c) => c.jars);
   const rows: CauseRow[] = [];
-  for (const [factor, levels] of tallyLevels(combos)) {
+  levels.forEach((l, fi) => {
+    const factor = factors[fi]!;
     let universeJars = 0;
     let universeContaminated = 0;
-    for (const t of levels) {
-      universeJars += t.jars;
-      universeContaminated += t.contaminated;
+    for (let i = 0; i < l.names.length; i++) {
+      universeJars += l.jars[i]!;
+      universeContaminated += l.contaminated[i]!;
     }
-    for (const t of levels) {
-      const level = t.level;
-      const restJars = universeJars - t.jars;
-      const restContaminated = universeContaminated - t.contaminated;
-      if (t.jars < minJars || restJars < 1) continue;
-      const rr = relativeRisk(t.contaminated, t.jars, restContaminated, restJars);
-      const pValue = fisherExactTwoSided(
-        t.contaminated,
-        t.jars - t.contaminated,
-        restContaminated,
-        restJars - restContaminated,
-      );
-      const confoundedWith = t.confoundedWith;
+    const confoundedWith = confounded(comboJars, levels, levelIdx, fi);
+    // Within a factor N and the contaminated total are fixed, so levels of equal size and count share one test.
+    const tests = new Map<number, { rr: RelativeRisk; pValue: number }>();
+    for (let i = 0; i < l.names.length; i++) {
+      const jars = l.jars[i]!;
+      const contaminated = l.contaminated[i]!;
+      const restJars = universeJars - jars;
+      const restContaminated = universeContaminated - contaminated;
+      if (jars < minJars || restJars < 1) continue;
+      const key = jars * (universeContaminated + 1) + contaminated;
+      let test = tests.get(key);
+      if (!test) {
+        test = {
+          rr: relativeRisk(contaminated, jars, restContaminated, restJars),
+          pValue: fisherExactTwoSided(contaminated, jars - contaminated, restContaminated, restJars - restContaminated),
+        };
+        tests.set(key, test);
+      }
+      const { rr, pValue } = test;
+      const detections = detectionsOf(l, i, det, buffer);
       // Only a level that fares worse than its rest is a likely cause, so only it gets a trade hint.
-      const hint = rr.rr > 1 ? hintFor(factor, t.detections, confoundedWith) : null;
+      const hint = rr.rr > 1 ? hintFor(factor, detections, confoundedWith[i]!) : null;
       rows.push({
         factor,
-        level,
-        jars: t.jars,
-        contaminated: t.contaminated,
-        incubating: t.incubating,
+        level: l.names[i]!,
+        jars,
+        contaminated,
+        incubating: l.incubating[i]!,
         restJars,
         restContaminated,
-        rate: t.contaminated / t.jars,
+        rate: contaminated / jars,
         restRate: restContaminated / restJars,
         relativeRisk: rr.rr,
         rr95: rr.ci95,
         pValue,
         qValue: 1,
-        confoundedWith,
+        confoundedWith: confoundedWith[i]!,
         hint: hint?.hint ?? null,
         hintBasis: hint?.basis ?? null,
-        contaminants: t.detections.contaminants,
-        medianDaysToDetection: median(t.detections.days),
+        contaminants: detections.contaminants,
+        medianDaysToDetection: detections.medianDays,
       });
     }
-  }
+  });
   const q = bhAdjust(rows.map((r) => r.pValue));
   rows.forEach((r, i) => (r.qValue = q[i] ?? 1));
   return rows.sort(compareCauses);

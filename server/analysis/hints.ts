@@ -1,10 +1,11 @@
-import { contaminantNames, contaminants, factors, type Contaminant, type Factor } from '../../shared/enums';
+import { contaminantNames, contaminants, factorNames, type Contaminant, type Factor } from '../../shared/enums';
 import type { FactorLevel } from '../../shared/schemas/analysis';
 
-/** What is known of a set of contaminated jars: days from inoculation to detection, and jars per contaminant. */
+/** What is known of a level's contaminated jars: how many, jars per contaminant, median days to detection. */
 export interface Detections {
-  days: number[];
+  count: number;
   contaminants: Partial<Record<Contaminant, number>>;
+  medianDays: number | null;
 }
 
 const CP = 'common practice';
@@ -33,13 +34,6 @@ const sterilisationSide = new Set<Contaminant>(['bacterial', 'pin-mould', 'neuro
 const airSide = new Set<Contaminant>(['trichoderma', 'penicillium', 'aspergillus', 'cobweb']);
 const EARLY_DAYS = 7;
 const LATE_DAYS = 15;
-
-export function median(values: number[]): number | null {
-  if (values.length === 0) return null;
-  const s = [...values].sort((a, b) => a - b);
-  const mid = Math.floor(s.length / 2);
-  return s.length % 2 ? (s[mid] ?? 0) : ((s[mid - 1] ?? 0) + (s[mid] ?? 0)) / 2;
-}
 
 function dominant(d: Detections): { contaminant: Contaminant; count: number } {
   let best: Contaminant = 'unknown';
@@ -103,13 +97,13 @@ export interface Hint {
 }
 
 export function hintFor(factor: Factor, detections: Detections, confoundedWith: FactorLevel[]): Hint | null {
-  const n = detections.days.length;
+  const n = detections.count;
   if (n === 0) return null;
   if (n === 1) {
     return { hint: 'A single contaminated jar is weak evidence.', basis: CP };
   }
   const top = dominant(detections);
-  const days = median(detections.days) ?? 0;
+  const days = detections.medianDays ?? 0;
   const profile = profiles[top.contaminant];
   const parts = [
     lead(factor, top.contaminant, days),
@@ -117,27 +111,26 @@ export function hintFor(factor: Factor, detections: Detections, confoundedWith: 
   ];
   const others = confoundedWith.filter((c) => c.factor !== factor);
   if (others.length > 0) {
-    const names = others.map((c) => `${c.factor} ${c.level}`).join(', ');
+    const names = others.map((c) => `${factorNames[c.factor]} ${c.level}`).join(', ');
     parts.push(`Its jars are also almost all ${names}: the data cannot tell these apart.`);
   }
   const basis = profile.basis === CP ? CP : profile.basis.startsWith(CP) ? profile.basis : `${CP}; ${profile.basis}`;
   return { hint: parts.join(' '), basis };
 }
 
-/** Reads the `days:contaminant,…` list the causes query builds for a combination's contaminated jars. */
-export function parseDetections(text: string | null): Detections {
-  const out: Detections = { days: [], contaminants: {} };
-  if (!text) return out;
+const contaminantIndex = new Map<string, number>(contaminants.map((c, i) => [c, i]));
+const UNKNOWN = contaminants.indexOf('unknown');
+
+/**
+ * Reads the `days:contaminant,…` list the causes query builds for a combination's contaminated jars,
+ * handing each jar's days and contaminant (its index in `contaminants`; unknown codes count as unknown) to `add`.
+ */
+export function readDetections(text: string | null, add: (days: number, contaminant: number) => void): void {
+  if (!text) return;
   for (const token of text.split(',')) {
     const colon = token.indexOf(':');
     const n = Number(token.slice(0, colon));
     if (colon < 0 || !Number.isFinite(n)) continue;
-    const code = token.slice(colon + 1);
-    const contaminant = (contaminants as readonly string[]).includes(code) ? (code as Contaminant) : 'unknown';
-    out.days.push(n);
-    out.contaminants[contaminant] = (out.contaminants[contaminant] ?? 0) + 1;
+    add(n, contaminantIndex.get(token.slice(colon + 1)) ?? UNKNOWN);
   }
-  return out;
 }
-
-export const factorIndex = (f: Factor) => factors.indexOf(f);

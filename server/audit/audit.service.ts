@@ -51,3 +51,23 @@ export function diffEntries<T extends object>(
     .filter((k) => after[k] !== undefined && text(before[k]) !== text(after[k]))
     .map((k) => ({ ...base, field: k, oldValue: before[k], newValue: after[k] }));
 }
+
+/**
+ * Applies a patch to a loaded record inside the caller's transaction, with one audit event per changed
+ * field (and any extra entries). Nothing is written when nothing changed; returns the entries.
+ */
+export async function patchWithAudit<T extends object>(
+  manager: EntityManager,
+  actor: Actor,
+  record: T,
+  changes: Partial<T>,
+  base: Omit<AuditEntry, 'field' | 'oldValue' | 'newValue'>,
+  extra: AuditEntry[] = [],
+): Promise<AuditEntry[]> {
+  const entries = [...diffEntries(base, record, changes), ...extra];
+  if (entries.length === 0) return entries;
+  Object.assign(record, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
+  await manager.save(record);
+  await recordAudit(manager, actor, entries);
+  return entries;
+}

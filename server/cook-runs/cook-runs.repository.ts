@@ -2,32 +2,28 @@ import type { EntityManager, SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { CookRunFilters, CookRunListQuery } from '../../shared/schemas/cook-runs';
 import type { TemperatureSample } from '../../shared/stats/lethality';
-import { applySortAndPage } from '../core/paging';
+import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
 import { dataSource } from '../db/data-source';
-import { User } from '../users/user.entity';
 import { CookRunReading } from './cook-run-reading.entity';
 import { CookRun } from './cook-run.entity';
 
-const sortable = {
-  code: 'cr.code',
-  cookedOn: 'cr.cookedOn',
-  minutesAtPressure: 'cr.minutesAtPressure',
-  f0: 'cr.f0',
-  container: 'cr.container',
+const sort: SortSpec = {
+  sortable: {
+    code: 'cr.code',
+    cookedOn: 'cr.cookedOn',
+    minutesAtPressure: 'cr.minutesAtPressure',
+    f0: 'cr.f0',
+    container: 'cr.container',
+  },
+  defaultSort: '-cookedOn',
+  tieBreak: 'cr.id',
 };
-
-const exportChunk = 1000;
 
 function filtered(f: CookRunFilters, lethalityTarget: number): SelectQueryBuilder<CookRun> {
   const qb = dataSource.manager.createQueryBuilder(CookRun, 'cr');
-  if (f.q) {
-    qb.andWhere('(cr.code LIKE :q OR cr.vessel LIKE :q OR cr.operatorName LIKE :q OR cr.notes LIKE :q)', {
-      q: `%${f.q}%`,
-    });
-  }
+  whereContains(qb, ['cr.code', 'cr.vessel', 'cr.operatorName', 'cr.notes'], f.q);
   if (f.container) qb.andWhere('cr.container = :container', { container: f.container });
-  if (f.from) qb.andWhere('cr.cookedOn >= :from', { from: f.from });
-  if (f.to) qb.andWhere('cr.cookedOn <= :to', { to: f.to });
+  whereDateRange(qb, 'cr.cookedOn', f);
   if (f.lowLethality === 'true') qb.andWhere('cr.f0 < :target', { target: lethalityTarget });
   if (f.lowLethality === 'false') qb.andWhere('cr.f0 >= :target', { target: lethalityTarget });
   return qb;
@@ -36,26 +32,11 @@ function filtered(f: CookRunFilters, lethalityTarget: number): SelectQueryBuilde
 export const cookRunsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { id }),
   findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { code }),
-  findActiveUser: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(User, { id, active: true }),
 
   list: (q: CookRunListQuery, lethalityTarget: number): Promise<[CookRun[], number]> =>
-    applySortAndPage(filtered(q, lethalityTarget), q, sortable, '-cookedOn', 'cr.id').getManyAndCount(),
-
-  /** Every matching row, sorted as the list is, for the CSV export; read a page at a time. */
-  async all(q: CookRunFilters & Pick<PageQuery, 'sort'>, lethalityTarget: number): Promise<CookRun[]> {
-    const rows: CookRun[] = [];
-    for (let page = 1; ; page += 1) {
-      const chunk = await applySortAndPage(
-        filtered(q, lethalityTarget),
-        { page, pageSize: exportChunk, sort: q.sort },
-        sortable,
-        '-cookedOn',
-        'cr.id',
-      ).getMany();
-      rows.push(...chunk);
-      if (chunk.length < exportChunk) return rows;
-    }
-  },
+    pageSorted(filtered(q, lethalityTarget), q, sort),
+  all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, lethalityTarget: number) =>
+    allSorted(() => filtered(q, lethalityTarget), q.sort, sort),
 
   readingsCount: (cookRunId: number) => dataSource.manager.countBy(CookRunReading, { cookRunId }),
   readings: (cookRunId: number) =>

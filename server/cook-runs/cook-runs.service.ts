@@ -9,12 +9,13 @@ import type {
   UpdateCookRunInput,
 } from '../../shared/schemas/cook-runs';
 import { f0FromLog, lethalRate, type TemperatureSample } from '../../shared/stats/lethality';
-import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
+import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { localDate } from '../core/local-time';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { getLabSettings } from '../settings/settings.service';
+import { noOperator, resolveOperator } from '../users/users.service';
 import { estimatedF0 } from './cook-run-lethality';
 import { CookRun } from './cook-run.entity';
 import { cookRunsRepository } from './cook-runs.repository';
@@ -42,22 +43,6 @@ export async function getCookRun(id: number): Promise<CookRunDetailDto> {
   if (!run) throw notFound('Cook run');
   const [t, readingsCount] = await Promise.all([target(), cookRunsRepository.readingsCount(id)]);
   return { ...toCookRunDto(run, t), readingsCount };
-}
-
-/** A user operator also keeps their name, so the record reads the same after the account is gone. */
-async function operatorFields(
-  m: EntityManager,
-  input: { operatorId?: number | null; operatorName?: string | null },
-): Promise<Pick<CookRun, 'operatorId' | 'operatorName'> | null> {
-  if (input.operatorId) {
-    const user = await cookRunsRepository.findActiveUser(input.operatorId, m);
-    if (!user)
-      throw badRequest('operatorId: no such active user', [{ path: 'operatorId', message: 'is not an active user' }]);
-    return { operatorId: user.id, operatorName: user.displayName };
-  }
-  if (input.operatorName) return { operatorId: null, operatorName: input.operatorName };
-  if (input.operatorId === null || input.operatorName === null) return { operatorId: null, operatorName: null };
-  return null;
 }
 
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
@@ -88,7 +73,7 @@ export async function insertCookRun(m: EntityManager, actor: Actor, input: Creat
       ventingMinutes: input.ventingMinutes ?? null,
       container: input.container,
       loadCount: input.loadCount ?? null,
-      ...((await operatorFields(m, input)) ?? { operatorId: null, operatorName: null }),
+      ...((await resolveOperator(m, input)) ?? noOperator),
       f0: estimatedF0(cycle),
       f0Source: 'estimate',
       notes: input.notes || null,
@@ -116,7 +101,7 @@ export async function updateCookRun(actor: Actor, id: number, input: UpdateCookR
     if (!run) throw notFound('Cook run');
     const { reason, startedAt, operatorId, operatorName, ...rest } = input;
     if (rest.code !== undefined) await assertCodeFree(m, rest.code, id);
-    const changes: Partial<CookRun> = { ...rest, ...((await operatorFields(m, { operatorId, operatorName })) ?? {}) };
+    const changes: Partial<CookRun> = { ...rest, ...((await resolveOperator(m, { operatorId, operatorName })) ?? {}) };
     if (rest.vessel !== undefined) changes.vessel = rest.vessel || null;
     if (rest.notes !== undefined) changes.notes = rest.notes || null;
     if (startedAt !== undefined) {
@@ -134,14 +119,12 @@ export async function updateCookRun(actor: Actor, id: number, input: UpdateCookR
       changes.f0 = estimatedF0({ ...run, ...changes });
       changes.f0Source = 'estimate';
     }
-    const entries = diffEntries(
-      { action: 'update', recordType: 'cook-run', recordId: id, reason: reason ?? null },
-      run,
-      changes,
-    );
-    Object.assign(run, changes);
-    await m.save(run);
-    await recordAudit(m, actor, entries);
+    await patchWithAudit(m, actor, run, changes, {
+      action: 'update',
+      recordType: 'cook-run',
+      recordId: id,
+      reason: reason ?? null,
+    });
   });
   return getCookRun(id);
 }

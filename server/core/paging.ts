@@ -32,3 +32,61 @@ export function applySortAndPage<T extends ObjectLiteral>(
 export function pageResult<T>(items: T[], total: number, q: PageQuery): Page<T> {
   return { items, total, page: q.page, pageSize: q.pageSize };
 }
+
+/** Bounds a date column by the optional from/to of a filter, both ends inclusive. */
+export function whereDateRange<T extends ObjectLiteral>(
+  qb: SelectQueryBuilder<T>,
+  column: string,
+  range: { from?: string; to?: string },
+): SelectQueryBuilder<T> {
+  if (range.from) qb.andWhere(`${column} >= :from`, { from: range.from });
+  if (range.to) qb.andWhere(`${column} <= :to`, { to: range.to });
+  return qb;
+}
+
+/** A LIKE pattern for values starting with the term, its wildcards taken literally. */
+export const likePrefix = (term: string) => `${term.replace(/[\\%_]/g, '\\$&')}%`;
+
+/** Free-text search: the term anywhere in any of the columns. */
+export function whereContains<T extends ObjectLiteral>(
+  qb: SelectQueryBuilder<T>,
+  columns: string[],
+  q: string | undefined,
+): SelectQueryBuilder<T> {
+  if (q) qb.andWhere(`(${columns.map((c) => `${c} LIKE :q`).join(' OR ')})`, { q: `%${q}%` });
+  return qb;
+}
+
+export interface SortSpec {
+  sortable: Record<string, string>;
+  defaultSort: string;
+  tieBreak: string;
+}
+
+const exportChunk = 1000;
+
+/** Every matching row, sorted as the list is, for a CSV export; read a chunk at a time. */
+export async function allSorted<T extends ObjectLiteral>(
+  query: () => SelectQueryBuilder<T>,
+  sort: string | undefined,
+  spec: SortSpec,
+): Promise<T[]> {
+  const rows: T[] = [];
+  for (let page = 1; ; page += 1) {
+    const chunk = await applySortAndPage(
+      query(),
+      { page, pageSize: exportChunk, sort },
+      spec.sortable,
+      spec.defaultSort,
+      spec.tieBreak,
+    ).getMany();
+    rows.push(...chunk);
+    if (chunk.length < exportChunk) return rows;
+  }
+}
+
+export const pageSorted = <T extends ObjectLiteral>(
+  qb: SelectQueryBuilder<T>,
+  q: PageQuery,
+  spec: SortSpec,
+): Promise<[T[], number]> => applySortAndPage(qb, q, spec.sortable, spec.defaultSort, spec.tieBreak).getManyAndCount();

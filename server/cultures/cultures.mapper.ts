@@ -34,3 +34,19 @@ export const toAgarTestDto = (t: AgarTest): AgarTestDto => ({
   recordedById: t.recordedById,
   createdAt: t.createdAt.toISOString(),
 });
+
+export const cultureCsv = {
+  filename: 'cultures.csv',
+  header: ['code', 'species', 'strain', 'prepared_on', 'generation', 'volume_ml', 'parent', 'state', 'notes'],
+  row: (c: CultureDto): unknown[] => [
+    c.code,
+    c.species,
+    c.strain,
+    c.preparedOn,
+    c.generation,
+    c.volumeMl,
+    c.parentCode,
+    c.state,
+    c.notes,
+  ],
+};

@@ -1,20 +1,22 @@
 import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { CultureFilters, CultureListQuery } from '../../shared/schemas/cultures';
-import { applySortAndPage } from '../core/paging';
+import { allSorted, pageSorted, whereContains, type SortSpec } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { Photo } from '../photos/photo.entity';
 import { AgarTest } from './agar-test.entity';
 import { Culture } from './culture.entity';
 
-const sortable = { code: 'c.code', preparedOn: 'c.preparedOn', state: 'c.state', species: 'c.species' };
-const exportChunk = 1000;
+const sort: SortSpec = {
+  sortable: { code: 'c.code', preparedOn: 'c.preparedOn', state: 'c.state', species: 'c.species' },
+  defaultSort: 'code',
+  tieBreak: 'c.id',
+};
 
 function filtered(f: CultureFilters): SelectQueryBuilder<Culture> {
   const qb = dataSource.manager.createQueryBuilder(Culture, 'c');
   if (f.state) qb.andWhere('c.state = :state', { state: f.state });
-  if (f.q) qb.andWhere('(c.code LIKE :q OR c.species LIKE :q OR c.strain LIKE :q)', { q: `%${f.q}%` });
-  return qb;
+  return whereContains(qb, ['c.code', 'c.species', 'c.strain'], f.q);
 }
 
 export const culturesRepository = {
@@ -27,23 +29,8 @@ export const culturesRepository = {
     dataSource.manager.find(AgarTest, { where: { cultureId }, order: { testedOn: 'DESC', id: 'DESC' } }),
   photoExists: async (id: number, m: EntityManager) => (await m.countBy(Photo, { id })) > 0,
 
-  list: (q: CultureListQuery): Promise<[Culture[], number]> =>
-    applySortAndPage(filtered(q), q, sortable, 'code', 'c.id').getManyAndCount(),
-
-  async all(q: CultureFilters & Pick<PageQuery, 'sort'>): Promise<Culture[]> {
-    const rows: Culture[] = [];
-    for (let page = 1; ; page += 1) {
-      const chunk = await applySortAndPage(
-        filtered(q),
-        { page, pageSize: exportChunk, sort: q.sort },
-        sortable,
-        'code',
-        'c.id',
-      ).getMany();
-      rows.push(...chunk);
-      if (chunk.length < exportChunk) return rows;
-    }
-  },
+  list: (q: CultureListQuery): Promise<[Culture[], number]> => pageSorted(filtered(q), q, sort),
+  all: (q: CultureFilters & Pick<PageQuery, 'sort'>) => allSorted(() => filtered(q), q.sort, sort),
 
   /** Ancestors of a culture, nearest first; bounded so a corrupt loop cannot hang a request. */
   async ancestorIds(id: number, m: EntityManager): Promise<number[]> {

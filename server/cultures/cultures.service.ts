@@ -11,7 +11,7 @@ import {
   type CultureListQuery,
   type UpdateCultureInput,
 } from '../../shared/schemas/cultures';
-import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
+import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
@@ -136,14 +136,12 @@ export async function updateCulture(actor: Actor, id: number, input: UpdateCultu
     for (const key of ['species', 'strain', 'notes'] as const) {
       if (changes[key] !== undefined) normalised[key] = changes[key] || null;
     }
-    const entries = diffEntries(
-      { action: 'update', recordType: 'culture', recordId: id, reason: reason ?? null },
-      culture,
-      normalised,
-    );
-    Object.assign(culture, normalised);
-    await m.save(culture);
-    await recordAudit(m, actor, entries);
+    await patchWithAudit(m, actor, culture, normalised, {
+      action: 'update',
+      recordType: 'culture',
+      recordId: id,
+      reason: reason ?? null,
+    });
   });
   return getCulture(id);
 }

@@ -26,12 +26,14 @@ export const grainRepository = {
   listGrains: () => dataSource.manager.find(Grain, { order: { name: 'ASC' } }),
   findGrainById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { id }),
   findGrainByName: (name: string, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { name }),
-  grainsByIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(Grain, { id: In(ids) }) : []),
+  grainsByIds: async (ids: number[], m: EntityManager = dataSource.manager) =>
+    ids.length ? m.findBy(Grain, { id: In(ids) }) : [],
 
   findLotById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(GrainLot, { id }),
   findLot: (grainId: number, supplierLotCode: string, m: EntityManager = dataSource.manager) =>
     m.findOneBy(GrainLot, { grainId, supplierLotCode }),
-  lotsByIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(GrainLot, { id: In(ids) }) : []),
+  lotsByIds: async (ids: number[], m: EntityManager = dataSource.manager) =>
+    ids.length ? m.findBy(GrainLot, { id: In(ids) }) : [],
 
   async listLots(q: GrainLotListQuery): Promise<[GrainLot[], number]> {
     const qb = dataSource.manager.createQueryBuilder(GrainLot, 'l');
@@ -40,9 +42,9 @@ export const grainRepository = {
     return applySortAndPage(qb, q, lotSortable, '-receivedOn', 'l.id').getManyAndCount();
   },
 
-  async batchCounts(lotIds: number[]): Promise<Map<number, number>> {
+  async batchCounts(lotIds: number[], m: EntityManager = dataSource.manager): Promise<Map<number, number>> {
     if (lotIds.length === 0) return new Map();
-    const rows = await dataSource.manager
+    const rows = await m
       .createQueryBuilder(PrepBatch, 'pb')
       .select('pb.grainLotId', 'lotId')
       .addSelect('COUNT(*)', 'n')
@@ -52,7 +54,7 @@ export const grainRepository = {
     return new Map(rows.map((r) => [Number(r.lotId), Number(r.n)]));
   },
 
-  findBatchById: (id: number) => dataSource.manager.findOneBy(PrepBatch, { id }),
+  findBatchById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { id }),
   findBatchByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { code }),
 
   async listBatches(q: PrepBatchListQuery, grainId: number | null): Promise<[PrepBatch[], number]> {

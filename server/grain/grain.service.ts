@@ -1,3 +1,4 @@
+import type { EntityManager } from 'typeorm';
 import type { Page } from '../../shared/schemas/common';
 import type {
   CreateGrainInput,
@@ -40,18 +41,29 @@ export async function createGrain(actor: Actor, input: CreateGrainInput): Promis
   });
 }
 
-async function lotDtos(lots: GrainLot[]): Promise<GrainLotDto[]> {
+type InTransaction = <T>(work: (m: EntityManager) => Promise<T>) => Promise<T>;
+
+/** A caller that holds a transaction (the demo loader) passes its manager and owns the commit. */
+const within =
+  (manager: EntityManager | undefined): InTransaction =>
+  (work) =>
+    manager ? work(manager) : dataSource.transaction(work);
+
+async function lotDtos(lots: GrainLot[], m: EntityManager = dataSource.manager): Promise<GrainLotDto[]> {
   const [grains, counts] = await Promise.all([
-    grainRepository.grainsByIds([...new Set(lots.map((l) => l.grainId))]),
-    grainRepository.batchCounts(lots.map((l) => l.id)),
+    grainRepository.grainsByIds([...new Set(lots.map((l) => l.grainId))], m),
+    grainRepository.batchCounts(
+      lots.map((l) => l.id),
+      m,
+    ),
   ]);
   const grainById = byId(grains);
   return lots.map((l) => toGrainLotDto(l, grainById.get(l.grainId), counts.get(l.id) ?? 0));
 }
 
-async function batchDtos(batches: PrepBatch[]): Promise<PrepBatchDto[]> {
-  const lots = byId(await grainRepository.lotsByIds([...new Set(batches.map((b) => b.grainLotId))]));
-  const grains = byId(await grainRepository.grainsByIds([...new Set([...lots.values()].map((l) => l.grainId))]));
+async function batchDtos(batches: PrepBatch[], m: EntityManager = dataSource.manager): Promise<PrepBatchDto[]> {
+  const lots = byId(await grainRepository.lotsByIds([...new Set(batches.map((b) => b.grainLotId))], m));
+  const grains = byId(await grainRepository.grainsByIds([...new Set([...lots.values()].map((l) => l.grainId))], m));
   return batches.map((b) => {
     const lot = lots.get(b.grainLotId);
     return toPrepBatchDto(b, lot, lot ? grains.get(lot.grainId) : undefined);
@@ -71,8 +83,12 @@ export async function getGrainLot(id: number): Promise<GrainLotDetailDto> {
   return { ...dto!, prepBatches: await batchDtos(batches) };
 }
 
-export async function createGrainLot(actor: Actor, input: CreateGrainLotInput): Promise<GrainLotDto> {
-  const lot = await dataSource.transaction(async (m) => {
+export async function createGrainLot(
+  actor: Actor,
+  input: CreateGrainLotInput,
+  manager?: EntityManager,
+): Promise<GrainLotDto> {
+  const lot = await within(manager)(async (m) => {
     const grain = await grainRepository.findGrainById(input.grainId, m);
     if (!grain) throw badRequest('grainId: no such grain', [{ path: 'grainId', message: 'is not on the grain list' }]);
     if (await grainRepository.findLot(input.grainId, input.supplierLotCode, m)) {
@@ -98,7 +114,7 @@ export async function createGrainLot(actor: Actor, input: CreateGrainLotInput): 
     ]);
     return saved;
   });
-  const [dto] = await lotDtos([lot]);
+  const [dto] = await lotDtos([lot], manager);
   return dto!;
 }
 
@@ -120,15 +136,19 @@ export async function listPrepBatches(q: PrepBatchListQuery): Promise<Page<PrepB
   return pageResult(await batchDtos(batches), total, q);
 }
 
-export async function getPrepBatch(id: number): Promise<PrepBatchDto> {
-  const batch = await grainRepository.findBatchById(id);
+export async function getPrepBatch(id: number, manager?: EntityManager): Promise<PrepBatchDto> {
+  const batch = await grainRepository.findBatchById(id, manager);
   if (!batch) throw notFound('Prep batch');
-  const [dto] = await batchDtos([batch]);
+  const [dto] = await batchDtos([batch], manager);
   return dto!;
 }
 
-export async function createPrepBatch(actor: Actor, input: CreatePrepBatchInput): Promise<PrepBatchDto> {
-  const batch = await dataSource.transaction(async (m) => {
+export async function createPrepBatch(
+  actor: Actor,
+  input: CreatePrepBatchInput,
+  manager?: EntityManager,
+): Promise<PrepBatchDto> {
+  const batch = await within(manager)(async (m) => {
     if (!(await grainRepository.findLotById(input.grainLotId, m))) {
       throw badRequest('grainLotId: no such grain lot', [
         { path: 'grainLotId', message: 'is not a recorded grain lot' },
@@ -160,5 +180,5 @@ export async function createPrepBatch(actor: Actor, input: CreatePrepBatchInput)
     ]);
     return saved;
   });
-  return getPrepBatch(batch.id);
+  return getPrepBatch(batch.id, manager);
 }

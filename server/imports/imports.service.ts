@@ -22,14 +22,16 @@ type InTransaction = <T>(work: (m: EntityManager) => Promise<T>) => Promise<T>;
 /**
  * Validates the whole file, then writes it set-based in one transaction, or writes nothing.
  * A clash with a concurrent writer rolls back and is checked again, so it comes back as a 422 line.
- * A caller that holds a transaction (the demo loader) passes its manager and owns the commit.
+ * A caller that holds a transaction (the demo loader) passes its manager and owns the commit, and may
+ * pass the local date its own plan was made for, so jar statuses cannot straddle a midnight.
  */
 export async function importHistory(
   actor: Actor,
   file: Buffer,
   manager?: EntityManager,
+  today?: string,
 ): Promise<HistoryImportOutcome> {
-  if (manager) return attempt(actor, file, (work) => work(manager));
+  if (manager) return attempt(actor, file, (work) => work(manager), today);
   const own: InTransaction = (work) => dataSource.transaction(work);
   try {
     return await attempt(actor, file, own);
@@ -39,7 +41,12 @@ export async function importHistory(
   }
 }
 
-async function attempt(actor: Actor, file: Buffer, inTransaction: InTransaction): Promise<HistoryImportOutcome> {
+async function attempt(
+  actor: Actor,
+  file: Buffer,
+  inTransaction: InTransaction,
+  today?: string,
+): Promise<HistoryImportOutcome> {
   const parsed = parseHistoryCsv(file);
   if (!parsed.ok) return { ok: false, errors: parsed.errors };
   const errors: ImportError[] = [];
@@ -57,7 +64,7 @@ async function attempt(actor: Actor, file: Buffer, inTransaction: InTransaction)
     const ctx = await loadContext(m, rows);
     checkRows(rows, ctx, errors);
     if (errors.length) return { ok: false as const, errors: sortErrors(errors) };
-    const imported = await writeRows(m, actor, rows, ctx);
+    const imported = await writeRows(m, actor, rows, ctx, today);
     await recordAudit(m, actor, [
       {
         action: 'import',
@@ -91,7 +98,13 @@ function firstOf<T>(
   return [...out.values()];
 }
 
-async function writeRows(m: EntityManager, actor: Actor, rows: HistoryRow[], ctx: HistoryContext) {
+async function writeRows(
+  m: EntityManager,
+  actor: Actor,
+  rows: HistoryRow[],
+  ctx: HistoryContext,
+  asOf: string | undefined,
+) {
   const newCookRuns = firstOf(
     rows,
     (r) => r.cookRun,
@@ -125,7 +138,7 @@ async function writeRows(m: EntityManager, actor: Actor, rows: HistoryRow[], ctx
   };
 
   const timeZone = config().LAB_TIME_ZONE;
-  const today = localDate(new Date(), timeZone);
+  const today = asOf ?? localDate(new Date(), timeZone);
   const { observationWindowDays } = await getLabSettings(m);
   const noon = new Map<string, string>();
   const noonOf = (date: string) => {

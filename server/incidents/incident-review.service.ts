@@ -1,5 +1,5 @@
 import type { IncidentDetailDto, ReviewIncidentInput, VoidIncidentInput } from '../../shared/schemas/incidents';
-import { diffEntries, recordAudit } from '../audit/audit.service';
+import { patchWithAudit, recordAudit } from '../audit/audit.service';
 import type { SessionUser } from '../core/auth-guards';
 import { unprocessable } from '../core/errors';
 import { dataSource } from '../db/data-source';
@@ -42,12 +42,9 @@ export async function reviewIncident(user: SessionUser, id: number, input: Revie
       causeCategory: input.causeCategory,
       rootCauseNotes: input.rootCauseNotes === '' ? null : input.rootCauseNotes,
     };
-    const entries = diffEntries({ action: 'review', recordType: 'incident', recordId: id, reason: input.reason ?? null }, incident, changes);
-    if (entries.length === 0) return;
     const wasRuledOut = incident.verdict === 'ruled-out';
-    Object.assign(incident, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
-    await m.save(incident);
-    await recordAudit(m, user, entries);
+    const entries = await patchWithAudit(m, user, incident, changes, { action: 'review', recordType: 'incident', recordId: id, reason: input.reason ?? null });
+    if (entries.length === 0) return;
     if (wasRuledOut !== (incident.verdict === 'ruled-out')) {
       await syncJarStatuses(m, user, await incidentsRepository.jarIdsOf(m, id), `incident ${id} verdict ${incident.verdict}`);
     }

@@ -1,5 +1,6 @@
 import { contaminantNames } from '../../shared/enums';
 import type { IncidentListQuery } from '../../shared/schemas/incidents';
+import { todayLocal } from '../core/local-time';
 import { incidentsRepository } from './incidents.repository';
 
 /** A register export is a working copy, not a backup: capped so one click cannot exhaust the server. */
@@ -11,7 +12,7 @@ const header = [
   'sealed', 'sterilised_before_disposal', 'cause_category', 'root_cause_notes', 'notes',
 ];
 
-export async function exportIncidents(q: IncidentListQuery): Promise<{ header: string[]; rows: unknown[][] }> {
+async function exportRows(q: IncidentListQuery): Promise<unknown[][]> {
   const incidents = await incidentsRepository.listAll(q, q.sort, exportCap);
   const codes = await incidentsRepository.jarCodes(incidents.map((i) => i.id));
   const yesNo = (b: boolean) => (b ? 'yes' : 'no');
@@ -24,5 +25,12 @@ export async function exportIncidents(q: IncidentListQuery): Promise<{ header: s
       i.causeCategory, i.rootCauseNotes, i.notes,
     ];
   });
-  return { header, rows };
+  return rows;
 }
+
+export const incidentCsv = {
+  rows: exportRows,
+  filename: () => `incidents-${todayLocal()}.csv`,
+  header,
+  row: (r: unknown[]) => r,
+};

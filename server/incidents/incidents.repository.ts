@@ -1,7 +1,7 @@
 import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { IncidentFilters, IncidentListQuery } from '../../shared/schemas/incidents';
 import { AuditEvent } from '../audit/audit-event.entity';
-import { applySortAndPage } from '../core/paging';
+import { applySortAndPage, likePrefix, whereDateRange } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { Jar } from '../jars/jar.entity';
 import { IncidentStepLink } from '../procedures/incident-step-link.entity';
@@ -30,13 +30,12 @@ function filtered(f: IncidentFilters): SelectQueryBuilder<Incident> {
   if (f.verdict) qb.andWhere('i.verdict = :verdict', { verdict: f.verdict });
   if (f.contaminant) qb.andWhere('i.contaminant = :contaminant', { contaminant: f.contaminant });
   if (f.voided) qb.andWhere('i.voided = :voided', { voided: f.voided === 'true' });
-  if (f.from) qb.andWhere('i.foundOn >= :from', { from: f.from });
-  if (f.to) qb.andWhere('i.foundOn <= :to', { to: f.to });
+  whereDateRange(qb, 'i.foundOn', f);
   if (f.cookRunId) qb.andWhere(anyJar('f_j.cookRunId = :cookRunId'), { cookRunId: f.cookRunId });
   if (f.cultureId) qb.andWhere(anyJar('f_j.cultureId = :cultureId'), { cultureId: f.cultureId });
   if (f.sessionId) qb.andWhere(anyJar('f_j.sessionId = :sessionId'), { sessionId: f.sessionId });
   if (f.operator) qb.andWhere(anyJar('f_s.operatorName = :operator'), { operator: f.operator });
-  if (f.jar) qb.andWhere(anyJar("f_j.label LIKE CONCAT(:jar, '%')"), { jar: f.jar.replace(/[\\%_]/g, '\\$&') });
+  if (f.jar) qb.andWhere(anyJar('f_j.label LIKE :jar'), { jar: likePrefix(f.jar) });
   return qb;
 }
 

@@ -1,7 +1,7 @@
 import { In, IsNull, Not, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
-import { applySortAndPage } from '../core/paging';
+import { applySortAndPage, likePrefix, whereDateRange } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
@@ -71,10 +71,8 @@ function applyFilters(qb: SelectQueryBuilder<Jar>, f: JarFilters): SelectQueryBu
   if (f.cultureId) qb.andWhere('j.cultureId = :cultureId', { cultureId: f.cultureId });
   if (f.room) qb.andWhere('j.room = :room', { room: f.room });
   if (f.shelf) qb.andWhere('j.shelf = :shelf', { shelf: f.shelf });
-  if (f.q) qb.andWhere('j.label LIKE :q', { q: `${f.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` });
-  if (f.from) qb.andWhere('j.inoculatedOn >= :from', { from: f.from });
-  if (f.to) qb.andWhere('j.inoculatedOn <= :to', { to: f.to });
-  return qb;
+  if (f.q) qb.andWhere('j.label LIKE :q', { q: likePrefix(f.q) });
+  return whereDateRange(qb, 'j.inoculatedOn', f);
 }
 
 export const jarsRepository = {

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { idParamsSchema } from '../../shared/schemas/common';
 import {
   createJarBatchSchema,
   jarEventInputSchema,
@@ -9,12 +8,20 @@ import {
   labelSheetQuerySchema,
   shelfQuerySchema,
   shelfWalkSchema,
-  type JarListQuery,
   type ShelfQuery,
 } from '../../shared/schemas/jars';
-import { currentUser, requireRole, requireUser } from '../core/auth-guards';
-import { sendCsv } from '../core/csv';
+import { currentUser, requireUser } from '../core/auth-guards';
 import { todayLocal } from '../core/local-time';
+import {
+  createRoute,
+  csvExportRoute,
+  detailRoute,
+  idParam,
+  listRoute,
+  requireWriter,
+  validId,
+  writeRoute,
+} from '../core/record-routes';
 import { validate } from '../core/validate';
 import { recordJarEvent } from './jar-events.service';
 import { recordShelfWalk } from './shelf-walk.service';
@@ -24,26 +31,24 @@ import { createJarBatch, exportJars, listJars, shelfJars } from './jars.service'
 import { jarCsvHeader, jarCsvRow } from './jars.mapper';
 
 export const jarsRouter = Router();
-const writer = requireRole('technician', 'supervisor', 'admin');
 
-jarsRouter.get('/', requireUser, validate({ query: jarListQuerySchema }), async (req, res) => {
-  res.json(await listJars(req.query as unknown as JarListQuery));
-});
-
-jarsRouter.get('/export.csv', requireUser, validate({ query: jarExportQuerySchema }), async (req, res) => {
-  const rows = await exportJars(req.query);
-  sendCsv(res, `jars-${todayLocal()}.csv`, jarCsvHeader, rows.map(jarCsvRow));
-});
-
-jarsRouter.post('/batch', writer, validate({ body: createJarBatchSchema }), async (req, res) => {
-  res.status(201).json(await createJarBatch(currentUser(req), req.body));
-});
+jarsRouter.get('/', ...listRoute(jarListQuerySchema, listJars));
+jarsRouter.get(
+  '/export.csv',
+  ...csvExportRoute(jarExportQuerySchema, {
+    rows: exportJars,
+    filename: () => `jars-${todayLocal()}.csv`,
+    header: jarCsvHeader,
+    row: jarCsvRow,
+  }),
+);
+jarsRouter.post('/batch', ...createRoute(createJarBatchSchema, createJarBatch));
 
 jarsRouter.get('/shelf', requireUser, validate({ query: shelfQuerySchema }), async (req, res) => {
   res.json({ items: await shelfJars(req.query as unknown as ShelfQuery) });
 });
 
-jarsRouter.post('/shelf-walk', writer, validate({ body: shelfWalkSchema }), async (req, res) => {
+jarsRouter.post('/shelf-walk', requireWriter, validate({ body: shelfWalkSchema }), async (req, res) => {
   res.json(await recordShelfWalk(currentUser(req), req.body));
 });
 
@@ -55,22 +60,13 @@ jarsRouter.get('/by-label/:label', requireUser, validate({ params: labelParamsSc
   res.json(await jarStory({ label: String(req.params.label) }));
 });
 
-jarsRouter.get('/:id', requireUser, validate({ params: idParamsSchema }), async (req, res) => {
-  res.json(await jarStory({ id: Number(req.params.id) }));
-});
+jarsRouter.get('/:id', ...detailRoute((id) => jarStory({ id })));
 
-jarsRouter.get('/:id/qr.svg', requireUser, validate({ params: idParamsSchema }), async (req, res) => {
-  const svg = await jarQrSvg(Number(req.params.id));
+jarsRouter.get('/:id/qr.svg', requireUser, validId, async (req, res) => {
+  const svg = await jarQrSvg(idParam(req));
   res.setHeader('Content-Type', 'image/svg+xml; charset=utf-8');
   res.setHeader('Cache-Control', 'private, max-age=86400');
   res.send(svg);
 });
 
-jarsRouter.post(
-  '/:id/events',
-  writer,
-  validate({ params: idParamsSchema, body: jarEventInputSchema }),
-  async (req, res) => {
-    res.status(201).json(await recordJarEvent(currentUser(req), Number(req.params.id), req.body));
-  },
-);
+jarsRouter.post('/:id/events', ...writeRoute(jarEventInputSchema, recordJarEvent, { status: 201 }));

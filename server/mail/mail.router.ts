@@ -1,7 +1,7 @@
 import { Router } from 'express';
-import { idParamsSchema } from '../../shared/schemas/common';
-import { sentMailListQuerySchema, updateMailPreferencesSchema, type SentMailListQuery } from '../../shared/schemas/mail';
+import { sentMailListQuerySchema, updateMailPreferencesSchema } from '../../shared/schemas/mail';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
+import { detailRoute, listRoute } from '../core/record-routes';
 import { validate } from '../core/validate';
 import { sendWeeklyDigest } from './digest.service';
 import { getMailPreferences, getSentMail, listSentMail, updateMailPreferences } from './mail.service';
@@ -17,13 +17,8 @@ mailRouter.put('/preferences', requireUser, validate({ body: updateMailPreferenc
   res.json(await updateMailPreferences(currentUser(req), req.body));
 });
 
-mailRouter.get('/sent', admin, validate({ query: sentMailListQuerySchema }), async (req, res) => {
-  res.json(await listSentMail(req.query as unknown as SentMailListQuery));
-});
-
-mailRouter.get('/sent/:id', admin, validate({ params: idParamsSchema }), async (req, res) => {
-  res.json(await getSentMail(Number(req.params.id)));
-});
+mailRouter.get('/sent', ...listRoute(sentMailListQuerySchema, listSentMail, admin));
+mailRouter.get('/sent/:id', ...detailRoute(getSentMail, admin));
 
 mailRouter.post('/digest', admin, async (_req, res) => {
   res.json(await sendWeeklyDigest({ trigger: 'manual' }));

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { idParamsSchema, pageQuerySchema, type PageQuery } from '../../shared/schemas/common';
+import { idParamsSchema, pageQuerySchema } from '../../shared/schemas/common';
 import {
   createProcedureSchema,
   publishVersionSchema,
@@ -7,6 +7,7 @@ import {
   stepStatsQuerySchema,
 } from '../../shared/schemas/procedures';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
+import { createRoute, detailRoute, idParam, listRoute, validId, writeRoute } from '../core/record-routes';
 import { validate } from '../core/validate';
 import { createProcedure, getProcedure, getProcedureVersion, listProcedures, publishVersion } from './procedures.service';
 import { linkStep, listStepLinks, unlinkStep } from './step-links.service';
@@ -15,41 +16,35 @@ import { stepStats } from './step-stats.service';
 /** Mounted at /api: procedures, their versions and steps, and incident–step links. */
 export const proceduresRouter = Router();
 const editors = requireRole('trainer', 'admin');
-const byId = validate({ params: idParamsSchema });
 
-proceduresRouter.get('/procedures', requireUser, validate({ query: pageQuerySchema }), async (req, res) => {
-  res.json(await listProcedures(req.query as unknown as PageQuery));
-});
+proceduresRouter.get('/procedures', ...listRoute(pageQuerySchema, listProcedures));
+proceduresRouter.get('/procedures/:id', ...detailRoute(getProcedure));
+proceduresRouter.post('/procedures', ...createRoute(createProcedureSchema, createProcedure, editors));
+proceduresRouter.post(
+  '/procedures/:id/versions',
+  ...writeRoute(publishVersionSchema, publishVersion, { guard: editors, status: 201 }),
+);
+proceduresRouter.get('/procedure-versions/:id', ...detailRoute(getProcedureVersion));
 
-proceduresRouter.get('/procedures/:id', requireUser, byId, async (req, res) => {
-  res.json(await getProcedure(Number(req.params.id)));
-});
+proceduresRouter.get(
+  '/procedure-steps/:id/stats',
+  requireUser,
+  validate({ params: idParamsSchema, query: stepStatsQuerySchema }),
+  async (req, res) => {
+    res.json(await stepStats(idParam(req), req.query));
+  },
+);
 
-proceduresRouter.post('/procedures', editors, validate({ body: createProcedureSchema }), async (req, res) => {
-  res.status(201).json(await createProcedure(currentUser(req), req.body));
-});
+proceduresRouter.get(
+  '/incidents/:id/step-links',
+  ...detailRoute(async (id) => ({ items: await listStepLinks(id) })),
+);
+proceduresRouter.post(
+  '/incidents/:id/step-links',
+  ...writeRoute(stepLinkInputSchema, linkStep, { guard: editors, status: 201 }),
+);
 
-proceduresRouter.post('/procedures/:id/versions', editors, validate({ params: idParamsSchema, body: publishVersionSchema }), async (req, res) => {
-  res.status(201).json(await publishVersion(currentUser(req), Number(req.params.id), req.body));
-});
-
-proceduresRouter.get('/procedure-versions/:id', requireUser, byId, async (req, res) => {
-  res.json(await getProcedureVersion(Number(req.params.id)));
-});
-
-proceduresRouter.get('/procedure-steps/:id/stats', requireUser, validate({ params: idParamsSchema, query: stepStatsQuerySchema }), async (req, res) => {
-  res.json(await stepStats(Number(req.params.id), req.query));
-});
-
-proceduresRouter.get('/incidents/:id/step-links', requireUser, byId, async (req, res) => {
-  res.json({ items: await listStepLinks(Number(req.params.id)) });
-});
-
-proceduresRouter.post('/incidents/:id/step-links', editors, validate({ params: idParamsSchema, body: stepLinkInputSchema }), async (req, res) => {
-  res.status(201).json(await linkStep(currentUser(req), Number(req.params.id), req.body));
-});
-
-proceduresRouter.delete('/step-links/:id', editors, byId, async (req, res) => {
-  await unlinkStep(currentUser(req), Number(req.params.id));
+proceduresRouter.delete('/step-links/:id', editors, validId, async (req, res) => {
+  await unlinkStep(currentUser(req), idParam(req));
   res.status(204).end();
 });

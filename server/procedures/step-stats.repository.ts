@@ -1,3 +1,4 @@
+import { whereDateRange } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { Incident } from '../incidents/incident.entity';
 import { Jar } from '../jars/jar.entity';
@@ -32,8 +33,7 @@ export const stepStatsRepository = {
       ])
       .where('c.stepId = :stepId', { stepId, incubatingAfter })
       .groupBy('c.done');
-    if (from) qb.andWhere('j.inoculatedOn >= :from', { from });
-    if (to) qb.andWhere('j.inoculatedOn <= :to', { to });
+    whereDateRange(qb, 'j.inoculatedOn', { from, to });
     const rows = await qb.getRawMany<{ done: number | string; jars: string; contaminated: string; incubating: string }>();
     const empty = (): GroupCounts => ({ jars: 0, contaminated: 0, incubating: 0 });
     const out = { ticked: empty(), notTicked: empty() };

@@ -1,4 +1,4 @@
-import type { ChecklistRowDto, SessionDto } from '../../shared/schemas/sessions';
+import { workspaceLabels, type ChecklistRowDto, type SessionDto } from '../../shared/schemas/sessions';
 import type { ProcedureStep } from '../procedures/procedure-step.entity';
 import type { InoculationSession } from './inoculation-session.entity';
 import type { SessionStepCheck } from './session-step-check.entity';
@@ -27,3 +27,17 @@ export function toChecklist(steps: ProcedureStep[], checks: SessionStepCheck[]):
     done: done.get(s.id) ?? null,
   }));
 }
+
+export const sessionCsv = {
+  filename: 'inoculation-sessions.csv',
+  header: ['code', 'held_on', 'started_at', 'operator', 'workspace', 'procedure_version_id', 'notes'],
+  row: (s: SessionDto): unknown[] => [
+    s.code,
+    s.heldOn,
+    s.startedAt,
+    s.operatorName,
+    s.workspace ? workspaceLabels[s.workspace] : null,
+    s.procedureVersionId,
+    s.notes,
+  ],
+};

@@ -7,10 +7,11 @@ import type {
   SessionListQuery,
   UpdateSessionInput,
 } from '../../shared/schemas/sessions';
-import { diffEntries, recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import { patchWithAudit, recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
+import { noOperator, resolveOperator } from '../users/users.service';
 import { InoculationSession } from './inoculation-session.entity';
 import { sessionsRepository } from './sessions.repository';
 import { toChecklist, toSessionDto } from './sessions.mapper';
@@ -44,20 +45,6 @@ export async function getSession(id: number): Promise<SessionDetailDto> {
       : null,
     checklist: toChecklist(steps, checks),
   };
-}
-
-async function operatorFields(
-  m: EntityManager,
-  input: { operatorId?: number | null; operatorName?: string | null },
-): Promise<Pick<InoculationSession, 'operatorId' | 'operatorName'> | null> {
-  if (input.operatorId) {
-    const user = await sessionsRepository.findActiveUser(input.operatorId, m);
-    if (!user)
-      throw badRequest('operatorId: no such active user', [{ path: 'operatorId', message: 'is not an active user' }]);
-    return { operatorId: user.id, operatorName: user.displayName };
-  }
-  if (input.operatorName) return { operatorId: null, operatorName: input.operatorName };
-  return null;
 }
 
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
@@ -105,7 +92,7 @@ export async function insertSession(
       code: input.code,
       heldOn: input.heldOn,
       startedAt: input.startedAt ? new Date(input.startedAt) : null,
-      ...((await operatorFields(m, input)) ?? { operatorId: null, operatorName: null }),
+      ...((await resolveOperator(m, input)) ?? noOperator),
       workspace: input.workspace,
       procedureVersionId: input.procedureVersionId ?? null,
       notes: input.notes || null,
@@ -141,12 +128,13 @@ export async function updateSession(actor: Actor, id: number, input: UpdateSessi
     }
     const changes: Partial<InoculationSession> = {
       ...rest,
-      ...((await operatorFields(m, { operatorId, operatorName })) ?? {}),
+      // A null staff name on its own does not clear the operator: a session always has one.
+      ...((await resolveOperator(m, { operatorId, operatorName: operatorName ?? undefined })) ?? {}),
     };
     if (startedAt !== undefined) changes.startedAt = startedAt ? new Date(startedAt) : null;
     if (rest.notes !== undefined) changes.notes = rest.notes || null;
     const base = { action: 'update', recordType: 'session', recordId: id, reason: reason ?? null };
-    const entries: AuditEntry[] = diffEntries(base, session, changes);
+    const checklistEntries: AuditEntry[] = [];
 
     const versionId = rest.procedureVersionId !== undefined ? rest.procedureVersionId : session.procedureVersionId;
     const before = await sessionsRepository.checks(id, m);
@@ -166,11 +154,9 @@ export async function updateSession(actor: Actor, id: number, input: UpdateSessi
     const [oldList, newList] = [sortedChecks(before), sortedChecks(after)];
     if (JSON.stringify(oldList) !== JSON.stringify(newList)) {
       await sessionsRepository.replaceChecks(m, id, after);
-      entries.push({ ...base, field: 'checklist', oldValue: oldList, newValue: newList });
+      checklistEntries.push({ ...base, field: 'checklist', oldValue: oldList, newValue: newList });
     }
-    Object.assign(session, changes);
-    await m.save(session);
-    await recordAudit(m, actor, entries);
+    await patchWithAudit(m, actor, session, changes, base, checklistEntries);
   });
   return getSession(id);
 }

@@ -9,6 +9,7 @@ import {
   type TrainingRecordListQuery,
 } from '../../shared/schemas/training';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
+import { createRoute, listRoute } from '../core/record-routes';
 import { validate } from '../core/validate';
 import { listOperators } from './operators.service';
 import { createRetrainRequest, createTrainingRecord, listRetrainRequests, listTrainingRecords } from './training.service';
@@ -25,13 +26,9 @@ trainingRouter.get('/training-records', requireUser, validate({ query: trainingR
   res.json(await listTrainingRecords({ ...q, userId: ownUnlessStaff(req, q.userId) }));
 });
 
-trainingRouter.post('/training-records', requireRole('trainer', 'admin'), validate({ body: createTrainingRecordSchema }), async (req, res) => {
-  res.status(201).json(await createTrainingRecord(currentUser(req), req.body));
-});
+trainingRouter.post('/training-records', ...createRoute(createTrainingRecordSchema, createTrainingRecord, requireRole('trainer', 'admin')));
 
-trainingRouter.get('/training/operators', requireRole('supervisor', 'trainer', 'admin'), validate({ query: operatorsQuerySchema }), async (req, res) => {
-  res.json(await listOperators(req.query));
-});
+trainingRouter.get('/training/operators', ...listRoute(operatorsQuerySchema, listOperators, requireRole('supervisor', 'trainer', 'admin')));
 
 trainingRouter.get('/training/retrain-requests', requireUser, validate({ query: retrainRequestListQuerySchema }), async (req, res) => {
   const q = req.query as unknown as RetrainRequestListQuery;
@@ -40,9 +37,5 @@ trainingRouter.get('/training/retrain-requests', requireUser, validate({ query: 
 
 trainingRouter.post(
   '/training/retrain-requests',
-  requireRole('trainer', 'supervisor', 'admin'),
-  validate({ body: createRetrainRequestSchema }),
-  async (req, res) => {
-    res.status(201).json(await createRetrainRequest(currentUser(req), req.body));
-  },
+  ...createRoute(createRetrainRequestSchema, createRetrainRequest, requireRole('trainer', 'supervisor', 'admin')),
 );

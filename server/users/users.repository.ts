@@ -7,6 +7,7 @@ const sortable = { username: 'u.username', displayName: 'u.displayName', role: '
 
 export const usersRepository = {
   findById: (id: number, manager: EntityManager = dataSource.manager) => manager.findOneBy(User, { id }),
+  findActive: (id: number, manager: EntityManager = dataSource.manager) => manager.findOneBy(User, { id, active: true }),
   findByUsername: (username: string) => dataSource.manager.findOneBy(User, { username }),
 
   async list(q: UserListQuery): Promise<[User[], number]> {

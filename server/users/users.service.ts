@@ -1,4 +1,5 @@
 import bcrypt from 'bcryptjs';
+import type { EntityManager } from 'typeorm';
 import type { CreateUserInput, UpdateUserInput, UserListQuery } from '../../shared/schemas/users';
 import type { Page } from '../../shared/schemas/common';
 import type { UserDto } from '../../shared/schemas/users';
@@ -11,6 +12,32 @@ import { usersRepository } from './users.repository';
 import { toUserDto } from './users.mapper';
 
 export const hashPassword = (password: string) => bcrypt.hash(password, config().PASSWORD_HASH_ROUNDS);
+
+export interface OperatorFields {
+  operatorId: number | null;
+  operatorName: string | null;
+}
+
+/**
+ * The operator of a record: a user id or a typed staff name. A user operator also keeps their name, so
+ * the record reads the same after the account is gone. null: the input leaves the operator as it is.
+ */
+export async function resolveOperator(
+  m: EntityManager,
+  input: { operatorId?: number | null; operatorName?: string | null },
+): Promise<OperatorFields | null> {
+  if (input.operatorId) {
+    const user = await usersRepository.findActive(input.operatorId, m);
+    if (!user)
+      throw badRequest('operatorId: no such active user', [{ path: 'operatorId', message: 'is not an active user' }]);
+    return { operatorId: user.id, operatorName: user.displayName };
+  }
+  if (input.operatorName) return { operatorId: null, operatorName: input.operatorName };
+  if (input.operatorId === null || input.operatorName === null) return { operatorId: null, operatorName: null };
+  return null;
+}
+
+export const noOperator: OperatorFields = { operatorId: null, operatorName: null };
 
 export async function listUsers(q: UserListQuery): Promise<Page<UserDto>> {
   const [rows, total] = await usersRepository.list(q);

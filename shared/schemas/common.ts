@@ -15,6 +15,36 @@ export const pageQuerySchema = z.object({
 });
 export type PageQuery = z.infer<typeof pageQuerySchema>;
 
+/** A list query: the page, size and sort of every list, and the list's own filters. */
+export const listQueryOf = <S extends z.ZodRawShape>(filters: z.ZodObject<S>) => pageQuerySchema.extend(filters.shape);
+
+/** Optional from/to dates of a filter, both inclusive. */
+export const dateRangeShape = {
+  from: localDateSchema.optional(),
+  to: localDateSchema.optional(),
+};
+
+/** A refinement to spread into .refine(...rule). */
+type Rule<T> = [check: (v: T) => boolean, issue: { path: string[]; message: string }];
+
+/** For a query holding dateRangeShape. */
+export const fromNotAfterTo: Rule<{ from?: string; to?: string }> = [
+  (q: { from?: string; to?: string }) => !q.from || !q.to || q.from <= q.to,
+  { path: ['to'], message: 'must not be before from' },
+];
+
+/** Who did the work: a user of the lab, or the typed name of staff without an account. */
+export const operatorShape = {
+  operatorId: idSchema.nullish(),
+  operatorName: z.string().trim().min(1).max(120).nullish(),
+};
+
+/** For an input holding operatorShape. */
+export const oneOperator: Rule<{ operatorId?: number | null; operatorName?: string | null }> = [
+  (v: { operatorId?: number | null; operatorName?: string | null }) => !(v.operatorId && v.operatorName),
+  { path: ['operatorName'], message: 'give either a user or a staff name, not both' },
+];
+
 export function pageOf<T extends z.ZodTypeAny>(item: T) {
   return z.object({
     items: z.array(item),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { dateRangeShape, listQueryOf, localDateSchema, oneOperator, operatorShape } from './common';
 import { registerCodeSchema } from './grain';
 
 export const f0Sources = ['log', 'estimate'] as const;
@@ -55,8 +55,7 @@ const cookRunFields = {
   altitudeM: z.number().int('must be whole metres').min(-500).max(5000),
   container: z.string().trim().min(1).max(40),
   loadCount: z.number().int().min(1).max(1000).nullish(),
-  operatorId: idSchema.nullish(),
-  operatorName: z.string().trim().min(1).max(120).nullish(),
+  ...operatorShape,
   notes: z.string().trim().max(4000).nullish(),
 };
 
@@ -66,20 +65,14 @@ export const createCookRunSchema = z
     path: ['cookedOn'],
     message: 'enter the date of the run or its start time',
   })
-  .refine((v) => !(v.operatorId && v.operatorName), {
-    path: ['operatorName'],
-    message: 'give either a user or a staff name, not both',
-  });
+  .refine(...oneOperator);
 export type CreateCookRunInput = z.input<typeof createCookRunSchema>;
 export type CreateCookRunValues = z.output<typeof createCookRunSchema>;
 
 export const updateCookRunSchema = z
   .object({ ...cookRunFields, reason: z.string().trim().max(500).optional() })
   .partial()
-  .refine((v) => !(v.operatorId && v.operatorName), {
-    path: ['operatorName'],
-    message: 'give either a user or a staff name, not both',
-  });
+  .refine(...oneOperator);
 export type UpdateCookRunInput = z.infer<typeof updateCookRunSchema>;
 
 export const cookRunSortFields = ['code', 'cookedOn', 'minutesAtPressure', 'f0', 'container'] as const;
@@ -87,11 +80,10 @@ export const cookRunSortFields = ['code', 'cookedOn', 'minutesAtPressure', 'f0',
 export const cookRunFiltersSchema = z.object({
   q: z.string().trim().max(80).optional(),
   container: z.string().trim().max(40).optional(),
-  from: localDateSchema.optional(),
-  to: localDateSchema.optional(),
+  ...dateRangeShape,
   lowLethality: z.enum(['true', 'false']).optional(),
 });
-export const cookRunListQuerySchema = pageQuerySchema.extend(cookRunFiltersSchema.shape);
+export const cookRunListQuerySchema = listQueryOf(cookRunFiltersSchema);
 export type CookRunListQuery = z.infer<typeof cookRunListQuerySchema>;
 export type CookRunFilters = z.infer<typeof cookRunFiltersSchema>;
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { cultureStateSchema, cultureStates, type CultureState } from '../enums';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { idSchema, listQueryOf, localDateSchema } from './common';
 import { registerCodeSchema } from './grain';
 
 export const agarResults = ['clean', 'contaminated', 'inconclusive'] as const;
@@ -92,6 +92,6 @@ export const cultureFiltersSchema = z.object({
   state: z.enum(cultureStates).optional(),
   q: z.string().trim().max(120).optional(),
 });
-export const cultureListQuerySchema = pageQuerySchema.extend(cultureFiltersSchema.shape);
+export const cultureListQuerySchema = listQueryOf(cultureFiltersSchema);
 export type CultureListQuery = z.infer<typeof cultureListQuerySchema>;
 export type CultureFilters = z.infer<typeof cultureFiltersSchema>;

@@ -8,7 +8,7 @@ import {
   stageFoundSchema,
   verdictSchema,
 } from '../enums';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { dateRangeShape, fromNotAfterTo, idSchema, localDateSchema, pageQuerySchema } from './common';
 import { photoSchema } from './photos';
 
 export const incidentSeverities = ['low', 'medium', 'high'] as const;
@@ -107,11 +107,10 @@ export const incidentListQuerySchema = pageQuerySchema
     sessionId: idSchema.optional(),
     operator: z.string().trim().min(1).max(120).optional(),
     jar: z.string().trim().min(1).max(40).optional(),
-    from: localDateSchema.optional(),
-    to: localDateSchema.optional(),
+    ...dateRangeShape,
     voided: boolQuery.optional(),
   })
-  .refine((q) => !q.from || !q.to || q.from <= q.to, { path: ['to'], message: 'must not be before from' });
+  .refine(...fromNotAfterTo);
 export type IncidentListQuery = z.infer<typeof incidentListQuerySchema>;
 export type IncidentFilters = Omit<IncidentListQuery, 'page' | 'pageSize' | 'sort'>;
 export const incidentSortFields = ['foundAt', 'id', 'contaminant', 'status', 'verdict', 'severity', 'stage'] as const;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { jarStatusSchema, jarStatuses, type JarStatus } from '../enums';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { dateRangeShape, idSchema, pageQuerySchema } from './common';
 
 export const releasedTargets = ['grow-room', 'customer'] as const;
 export const releasedToSchema = z.enum(releasedTargets);
@@ -91,8 +91,7 @@ export const jarListQuerySchema = pageQuerySchema.extend({
   room: optionalPlace,
   shelf: optionalPlace,
   q: z.string().trim().max(40).optional(),
-  from: localDateSchema.optional(),
-  to: localDateSchema.optional(),
+  ...dateRangeShape,
 });
 export type JarListQuery = z.infer<typeof jarListQuerySchema>;
 export type JarFilters = Omit<JarListQuery, 'page' | 'pageSize' | 'sort'>;

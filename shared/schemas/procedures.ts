@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, localDateSchema } from './common';
+import { dateRangeShape, fromNotAfterTo, idSchema } from './common';
 
 const optionalText = (max: number) =>
   z
@@ -106,8 +106,8 @@ export const stepLinkSchema = z.object({
 export type StepLinkDto = z.infer<typeof stepLinkSchema>;
 
 export const stepStatsQuerySchema = z
-  .object({ from: localDateSchema.optional(), to: localDateSchema.optional() })
-  .refine((q) => !q.from || !q.to || q.from <= q.to, { path: ['to'], message: 'must not be before from' });
+  .object(dateRangeShape)
+  .refine(...fromNotAfterTo);
 export type StepStatsQuery = z.infer<typeof stepStatsQuerySchema>;
 
 export const stepGroupSchema = z.object({

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { workspaceSchema } from '../enums';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { dateRangeShape, idSchema, listQueryOf, localDateSchema, oneOperator, operatorShape } from './common';
 import { registerCodeSchema } from './grain';
 
 export const workspaceLabels = {
@@ -55,22 +55,16 @@ const sessionFields = {
   code: registerCodeSchema,
   heldOn: localDateSchema,
   startedAt: z.iso.datetime({ offset: true, error: 'must be a date and time such as 2026-03-01T09:30:00Z' }).nullish(),
-  operatorId: idSchema.nullish(),
-  operatorName: z.string().trim().min(1).max(120).nullish(),
+  ...operatorShape,
   workspace: workspaceSchema,
   procedureVersionId: idSchema.nullish(),
   checklist: checklistSchema.optional(),
   notes: z.string().trim().max(4000).nullish(),
 };
 
-const oneOperator = {
-  check: (v: { operatorId?: number | null; operatorName?: string | null }) => !(v.operatorId && v.operatorName),
-  issue: { path: ['operatorName'], message: 'give either a user or a staff name, not both' },
-};
-
 export const createSessionSchema = z
   .object(sessionFields)
-  .refine(oneOperator.check, oneOperator.issue)
+  .refine(...oneOperator)
   .refine((v) => v.operatorId || v.operatorName, {
     path: ['operatorId'],
     message: 'choose the operator or type a staff name',
@@ -84,18 +78,17 @@ export type CreateSessionInput = z.infer<typeof createSessionSchema>;
 export const updateSessionSchema = z
   .object({ ...sessionFields, reason: z.string().trim().max(500).optional() })
   .partial()
-  .refine(oneOperator.check, oneOperator.issue);
+  .refine(...oneOperator);
 export type UpdateSessionInput = z.infer<typeof updateSessionSchema>;
 
 export const sessionSortFields = ['code', 'heldOn', 'operator'] as const;
 
 export const sessionFiltersSchema = z.object({
-  from: localDateSchema.optional(),
-  to: localDateSchema.optional(),
+  ...dateRangeShape,
   operator: z.string().trim().max(120).optional(),
   workspace: workspaceSchema.optional(),
   q: z.string().trim().max(120).optional(),
 });
-export const sessionListQuerySchema = pageQuerySchema.extend(sessionFiltersSchema.shape);
+export const sessionListQuerySchema = listQueryOf(sessionFiltersSchema);
 export type SessionListQuery = z.infer<typeof sessionListQuerySchema>;
 export type SessionFilters = z.infer<typeof sessionFiltersSchema>;

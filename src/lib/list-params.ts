@@ -42,3 +42,12 @@ export function patchParams(
   if (next.get('pageSize') === String(defaultPageSize)) next.delete('pageSize');
   return next;
 }
+
+export type ParamPatch = Record<string, string | number | undefined>;
+
+/** A patch that removes every named filter from the URL. */
+export const clearedPatch = <K extends string>(keys: readonly K[]) =>
+  Object.fromEntries(keys.map((k) => [k, undefined])) as Record<K, undefined>;
+
+export const hasAnyFilter = <F extends object>(filters: F, keys: readonly (keyof F)[]): boolean =>
+  keys.some((k) => filters[k] !== undefined && filters[k] !== '');

@@ -34,15 +34,19 @@ function send(path: string, body: FormData | Blob, token: string, options: Uploa
   });
 }
 
+/** Sends with progress and the stale-token retry, and hands back whatever the server answered. */
+export async function uploadRaw(path: string, body: FormData | Blob, options: UploadOptions = {}) {
+  let res = await send(path, body, await getCsrfToken(), options);
+  if (res.status === 403 && isStaleCsrf(errorFromBody(res.status, res.body))) {
+    res = await send(path, body, await refreshCsrfToken(), options);
+  }
+  return res;
+}
+
 /** Sends a file with upload progress, which fetch cannot report. */
 export async function upload<T>(path: string, body: FormData | Blob, options: UploadOptions = {}): Promise<T> {
-  let res = await send(path, body, await getCsrfToken(), options);
-  if (res.status < 200 || res.status >= 300) {
-    const error = errorFromBody(res.status, res.body);
-    if (!isStaleCsrf(error)) throw error;
-    res = await send(path, body, await refreshCsrfToken(), options);
-    if (res.status < 200 || res.status >= 300) throw errorFromBody(res.status, res.body);
-  }
+  const res = await uploadRaw(path, body, options);
+  if (res.status < 200 || res.status >= 300) throw errorFromBody(res.status, res.body);
   options.onProgress?.(1);
   return res.body as T;
 }

@@ -7,7 +7,7 @@ import { desktop, newPage, shotsDir, signIn, useBrowser } from './support/browse
 const browser = useBrowser();
 
 describe('the supervisor reads the analysis of the demo lab', () => {
-  it('sees the weekly table at home, opens it, and finds the planted weeks at the top', async () => {
+  it('sees the weekly table at home, opens it, finds the planted weeks at the top and the short run week out of control', async () => {
     const { context, page } = await newPage(browser(), desktop);
     await signIn(page, 'supervisor');
     await expect.poll(() => page.getByRole('heading', { name: 'Contamination, week by week' }).count()).toBe(1);
@@ -22,6 +22,13 @@ describe('the supervisor reads the analysis of the demo lab', () => {
     expect(worst).toContain(sloppy);
     expect(worst).toContain(shortRun);
     for (const w of weekly.weeks) expect(w.outOfControl && w.provisional).toBe(false);
+    // The short run's week crosses its upper 3-sigma limit (Montgomery, Introduction to Statistical Quality Control, ch. 7).
+    const flagged = weekly.weeks.filter((w) => w.outOfControl).map((w) => w.week);
+    expect(flagged).toContain(shortRun);
+    expect(flagged.every((w) => [shortRun, sloppy].includes(w))).toBe(true);
+    const row = page.getByTestId(`week-${shortRun}`);
+    expect(await row.getByText('Out of control').count()).toBe(1);
+    expect(await page.getByText(`Out of control: ${flagged.join(', ')}.`).count()).toBe(1);
     expect(await page.getByText('p-chart: contaminated share per ISO week').count()).toBe(1);
     // The current week still holds incubating jars.
     expect(weekly.weeks.at(-1)?.provisional).toBe(true);

@@ -329,6 +329,18 @@ describe('GET /api/analysis/causes', () => {
     expect(culture.confoundedWith).toEqual([]);
   });
 
+  it('words the confounded levels of a hint with the names the screens show, not factor ids', () => {
+    const short = causes.find((c) => c.factor === 'cookRun' && c.level === planted.shortRun)!;
+    const shortGrain = history.find((j) => j.cookRun === planted.shortRun)!.grain;
+    const week = isoWeekLabel(addDays(planted.firstMonday, 7 * planted.shortRunWeek));
+    expect(short.hint).toContain(
+      `Its jars are also almost all grain ${shortGrain}, minutes at pressure <60, ISO week ${week}: the data cannot tell these apart.`,
+    );
+    expect(causes.some((c) => c.hint && /\b(cookMinutes|cookRun|prepBatch)\b|(?<!ISO )week \d{4}-W/.test(c.hint))).toBe(
+      false,
+    );
+  });
+
   it('gives each planted cause a common-practice hint that fits its contaminant', () => {
     const row = (factor: Factor, level: string) => causes.find((c) => c.factor === factor && c.level === level)!;
     const short = row('cookRun', planted.shortRun);

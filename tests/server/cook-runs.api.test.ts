@@ -1,13 +1,11 @@
-import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { CookRunReading } from '../../server/cook-runs/cook-run-reading.entity';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
-import { signedIn, uniqueName } from '../setup/factories';
+import { anonymousStatuses, postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 
 const app = createTestApp();
-type Client = Awaited<ReturnType<typeof signedIn>>;
 
 const newRun = (over: Record<string, unknown> = {}) => ({
   code: uniqueName('CR'),
@@ -31,16 +29,13 @@ beforeAll(async () => {
   tech = await signedIn(app, 'technician');
 });
 
-async function create(client: Client, body: Record<string, unknown>) {
-  return client.agent.post('/api/cook-runs').set('X-CSRF-Token', client.token()).send(body);
-}
+const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/cook-runs', body);
+const postLog = (client: Client, id: number, csv: string) => postCsvAs(client, `/api/cook-runs/${id}/readings`, csv);
 
 describe('/api/cook-runs guards and validation', () => {
   it('answers 401 without a session', async () => {
-    const anon = supertest(app);
-    expect((await anon.get('/api/cook-runs')).status).toBe(401);
-    expect((await anon.get('/api/cook-runs/1')).status).toBe(401);
-    expect((await anon.get('/api/cook-runs/export.csv')).status).toBe(401);
+    const urls = ['/api/cook-runs', '/api/cook-runs/1', '/api/cook-runs/export.csv'];
+    expect(await anonymousStatuses(app, urls)).toEqual([401, 401, 401]);
   });
 
   it('lets a trainer read but answers 403 to every write', async () => {
@@ -48,16 +43,9 @@ describe('/api/cook-runs guards and validation', () => {
     const run = (await create(tech, newRun())).body;
     expect((await trainer.agent.get(`/api/cook-runs/${run.id}`)).status).toBe(200);
     expect((await create(trainer, newRun())).status).toBe(403);
-    const patch = await trainer.agent
-      .patch(`/api/cook-runs/${run.id}`)
-      .set('X-CSRF-Token', trainer.token())
-      .send({ loadCount: 3 });
+    const patch = await sendAs(trainer, 'patch', `/api/cook-runs/${run.id}`, { loadCount: 3 });
     expect(patch.status).toBe(403);
-    const upload = await trainer.agent
-      .post(`/api/cook-runs/${run.id}/readings`)
-      .set('X-CSRF-Token', trainer.token())
-      .set('Content-Type', 'text/csv')
-      .send(cycleCsv('minute,celsius'));
+    const upload = await postLog(trainer, run.id, cycleCsv('minute,celsius'));
     expect(upload.status).toBe(403);
   });
 
@@ -91,16 +79,9 @@ describe('/api/cook-runs guards and validation', () => {
 
   it('answers 404 for an unknown cook run', async () => {
     expect((await tech.agent.get('/api/cook-runs/999999')).status).toBe(404);
-    const patch = await tech.agent
-      .patch('/api/cook-runs/999999')
-      .set('X-CSRF-Token', tech.token())
-      .send({ loadCount: 2 });
+    const patch = await sendAs(tech, 'patch', '/api/cook-runs/999999', { loadCount: 2 });
     expect(patch.status).toBe(404);
-    const upload = await tech.agent
-      .post('/api/cook-runs/999999/readings')
-      .set('X-CSRF-Token', tech.token())
-      .set('Content-Type', 'text/csv')
-      .send(cycleCsv('minute,celsius'));
+    const upload = await postLog(tech, 999999, cycleCsv('minute,celsius'));
     expect(upload.status).toBe(404);
     expect((await tech.agent.get('/api/cook-runs/999999/readings')).status).toBe(404);
   });
@@ -164,11 +145,7 @@ describe('/api/cook-runs lethality', () => {
 
   it('computes F0 from an uploaded log (text/csv, BOM, CRLF, any header case) and stores every reading', async () => {
     const run = (await create(tech, newRun())).body;
-    const res = await tech.agent
-      .post(`/api/cook-runs/${run.id}/readings`)
-      .set('X-CSRF-Token', tech.token())
-      .set('Content-Type', 'text/csv')
-      .send('\uFEFF' + cycleCsv('Minute,Temp_C', '\r\n'));
+    const res = await postLog(tech, run.id, '\uFEFF' + cycleCsv('Minute,Temp_C', '\r\n'));
     expect(res.status).toBe(200);
     expect(res.body.f0).toBeCloseTo(12.239, 3);
     expect(res.body.f0Source).toBe('log');
@@ -208,11 +185,7 @@ describe('/api/cook-runs lethality', () => {
 
   it('answers 422 with every bad line and stores nothing', async () => {
     const run = (await create(tech, newRun())).body;
-    const res = await tech.agent
-      .post(`/api/cook-runs/${run.id}/readings`)
-      .set('X-CSRF-Token', tech.token())
-      .set('Content-Type', 'text/csv')
-      .send('minute,celsius\n0,100\n\n1,hot\n1,120\n3,999\n');
+    const res = await postLog(tech, run.id, 'minute,celsius\n0,100\n\n1,hot\n1,120\n3,999\n');
     expect(res.status).toBe(422);
     const messages = res.body.error.issues.map((i: { path: string; message: string }) => `${i.path}|${i.message}`);
     expect(messages).toEqual([
@@ -226,27 +199,18 @@ describe('/api/cook-runs lethality', () => {
 
   it('answers 422 on line 1 when a column is missing and 400 naming file when no log is sent', async () => {
     const run = (await create(tech, newRun())).body;
-    const res = await tech.agent
-      .post(`/api/cook-runs/${run.id}/readings`)
-      .set('X-CSRF-Token', tech.token())
-      .set('Content-Type', 'text/csv')
-      .send('time,celsius\n0,100\n1,101\n');
+    const res = await postLog(tech, run.id, 'time,celsius\n0,100\n1,101\n');
     expect(res.status).toBe(422);
     expect(res.body.error.issues[0].message).toMatch(/^line 1, minute: no elapsed-minutes column/);
-    const empty = await tech.agent.post(`/api/cook-runs/${run.id}/readings`).set('X-CSRF-Token', tech.token()).send({});
+    const empty = await sendAs(tech, 'post', `/api/cook-runs/${run.id}/readings`, {});
     expect(empty.status).toBe(400);
     expect(empty.body.error.issues[0].path).toBe('file');
   });
 
   it('removes a log and falls back to the estimate', async () => {
     const run = (await create(tech, newRun())).body;
-    await tech.agent
-      .post(`/api/cook-runs/${run.id}/readings`)
-      .set('X-CSRF-Token', tech.token())
-      .set('Content-Type', 'text/csv')
-      .send(cycleCsv('minute,celsius'))
-      .expect(200);
-    const res = await tech.agent.delete(`/api/cook-runs/${run.id}/readings`).set('X-CSRF-Token', tech.token());
+    await postLog(tech, run.id, cycleCsv('minute,celsius')).expect(200);
+    const res = await sendAs(tech, 'delete', `/api/cook-runs/${run.id}/readings`);
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ f0Source: 'estimate', readingsCount: 0 });
     expect(res.body.f0).toBeCloseTo(run.f0, 9);
@@ -256,10 +220,7 @@ describe('/api/cook-runs lethality', () => {
 describe('/api/cook-runs editing, listing and export', () => {
   it('audits each changed field with its old and new value and re-estimates F0', async () => {
     const run = (await create(tech, newRun())).body;
-    const res = await tech.agent
-      .patch(`/api/cook-runs/${run.id}`)
-      .set('X-CSRF-Token', tech.token())
-      .send({ minutesAtPressure: 120, vessel: 'Cooker B', reason: 'gauge log re-read' });
+    const res = await sendAs(tech, 'patch', `/api/cook-runs/${run.id}`, { minutesAtPressure: 120, vessel: 'Cooker B', reason: 'gauge log re-read' });
     expect(res.status).toBe(200);
     expect(res.body.minutesAtPressure).toBe(120);
     expect(res.body.f0).toBeCloseTo((run.f0 / 90) * 120, 6);

@@ -1,15 +1,13 @@
 import { randomBytes } from 'node:crypto';
-import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { cultureUseWarning } from '../../server/cultures/cultures.service';
 import { dataSource } from '../../server/db/data-source';
 import { Photo } from '../../server/photos/photo.entity';
 import { createTestApp } from '../setup/test-app';
-import { signedIn, uniqueName } from '../setup/factories';
+import { anonymousStatuses, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 
 const app = createTestApp();
-type Client = Awaited<ReturnType<typeof signedIn>>;
 
 const newCulture = (over: Record<string, unknown> = {}) => ({
   code: uniqueName('LC'),
@@ -28,17 +26,14 @@ beforeAll(async () => {
   supervisor = await signedIn(app, 'supervisor');
 });
 
-const create = (client: Client, body: Record<string, unknown>) =>
-  client.agent.post('/api/cultures').set('X-CSRF-Token', client.token()).send(body);
+const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/cultures', body);
 const changeState = (client: Client, id: number, body: Record<string, unknown>) =>
-  client.agent.post(`/api/cultures/${id}/state`).set('X-CSRF-Token', client.token()).send(body);
+  sendAs(client, 'post', `/api/cultures/${id}/state`, body);
 
 describe('/api/cultures guards and validation', () => {
   it('answers 401 without a session', async () => {
-    const anon = supertest(app);
-    expect((await anon.get('/api/cultures')).status).toBe(401);
-    expect((await anon.get('/api/cultures/1')).status).toBe(401);
-    expect((await anon.get('/api/cultures/export.csv')).status).toBe(401);
+    const urls = ['/api/cultures', '/api/cultures/1', '/api/cultures/export.csv'];
+    expect(await anonymousStatuses(app, urls)).toEqual([401, 401, 401]);
   });
 
   it('answers 403 to a trainer writing and to a technician changing state', async () => {
@@ -46,10 +41,7 @@ describe('/api/cultures guards and validation', () => {
     const culture = (await create(tech, newCulture())).body;
     expect((await trainer.agent.get(`/api/cultures/${culture.id}`)).status).toBe(200);
     expect((await create(trainer, newCulture())).status).toBe(403);
-    const test = await trainer.agent
-      .post(`/api/cultures/${culture.id}/agar-tests`)
-      .set('X-CSRF-Token', trainer.token())
-      .send({ testedOn: '2026-02-12', result: 'clean' });
+    const test = await sendAs(trainer, 'post', `/api/cultures/${culture.id}/agar-tests`, { testedOn: '2026-02-12', result: 'clean' });
     expect(test.status).toBe(403);
     expect((await changeState(tech, culture.id, { state: 'released', reason: 'agar clean' })).status).toBe(403);
     expect((await changeState(trainer, culture.id, { state: 'released', reason: 'agar clean' })).status).toBe(403);
@@ -80,13 +72,10 @@ describe('/api/cultures guards and validation', () => {
 
   it('answers 404 for an unknown culture', async () => {
     expect((await tech.agent.get('/api/cultures/999999')).status).toBe(404);
-    const patch = await tech.agent.patch('/api/cultures/999999').set('X-CSRF-Token', tech.token()).send({ notes: 'x' });
+    const patch = await sendAs(tech, 'patch', '/api/cultures/999999', { notes: 'x' });
     expect(patch.status).toBe(404);
     expect((await changeState(supervisor, 999999, { state: 'released', reason: 'agar clean' })).status).toBe(404);
-    const test = await tech.agent
-      .post('/api/cultures/999999/agar-tests')
-      .set('X-CSRF-Token', tech.token())
-      .send({ testedOn: '2026-02-12', result: 'clean' });
+    const test = await sendAs(tech, 'post', '/api/cultures/999999/agar-tests', { testedOn: '2026-02-12', result: 'clean' });
     expect(test.status).toBe(404);
   });
 
@@ -163,7 +152,7 @@ describe('/api/cultures records', () => {
   it('records agar tests, newest first, and checks the photo exists', async () => {
     const culture = (await create(tech, newCulture())).body;
     const post = (body: Record<string, unknown>) =>
-      tech.agent.post(`/api/cultures/${culture.id}/agar-tests`).set('X-CSRF-Token', tech.token()).send(body);
+      sendAs(tech, 'post', `/api/cultures/${culture.id}/agar-tests`, body);
     // A photo row as the upload route leaves it; the test needs only its id.
     const sha256 = randomBytes(32).toString('hex');
     const photo = await dataSource.manager.save(
@@ -185,10 +174,7 @@ describe('/api/cultures records', () => {
   it('audits edits field by field and refuses a parent loop', async () => {
     const a = (await create(tech, newCulture())).body;
     const b = (await create(tech, newCulture({ parentCultureId: a.id }))).body;
-    const res = await tech.agent
-      .patch(`/api/cultures/${a.id}`)
-      .set('X-CSRF-Token', tech.token())
-      .send({ volumeMl: 250, strain: '', reason: 'half poured off' });
+    const res = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, { volumeMl: 250, strain: '', reason: 'half poured off' });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ volumeMl: 250, strain: null });
     const events = await dataSource.manager.findBy(AuditEvent, {
@@ -200,16 +186,10 @@ describe('/api/cultures records', () => {
       ['strain', 'grey oyster, lab line 4', null, 'half poured off'],
       ['volumeMl', '500', '250', 'half poured off'],
     ]);
-    const loop = await tech.agent
-      .patch(`/api/cultures/${a.id}`)
-      .set('X-CSRF-Token', tech.token())
-      .send({ parentCultureId: b.id });
+    const loop = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, { parentCultureId: b.id });
     expect(loop.status).toBe(400);
     expect(loop.body.error.issues[0].path).toBe('parentCultureId');
-    const state = await tech.agent
-      .patch(`/api/cultures/${a.id}`)
-      .set('X-CSRF-Token', tech.token())
-      .send({ state: 'released' });
+    const state = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, { state: 'released' });
     expect(state.status).toBe(200);
     expect(state.body.state).toBe('quarantined');
   });

@@ -1,16 +1,21 @@
 import { IsNull, Not } from 'typeorm';
 import { beforeAll, describe, expect, it } from 'vitest';
+import type { CausesDto, RatesDto } from '../../shared/schemas/analysis';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
+import { GrainLot } from '../../server/grain/grain-lot.entity';
+import { PrepBatch } from '../../server/grain/prep-batch.entity';
 import { Incident } from '../../server/incidents/incident.entity';
 import { Jar } from '../../server/jars/jar.entity';
-import { addDays, isoWeek } from '../../seed/demo-calendar';
-import { planDemoHistory, type PlanJar } from '../../seed/demo-history';
+import { addDays, isoWeek, mondayOf } from '../../seed/demo-calendar';
+import { planDemoGrain } from '../../seed/demo-grain';
+import { demoWeeks, planDemoHistory, type PlanJar } from '../../seed/demo-history';
 import { loadDemoLab } from '../../seed/demo-lab';
 import { plantedProblems, sloppyIsoWeek } from '../../seed/planted-problems';
+import { signedIn } from '../setup/factories';
+import { createTestApp } from '../setup/test-app';
 
 const today = localDate(new Date());
-const plan = planDemoHistory(today);
 // Loaded on any day: today, across a year boundary (2027-01-01 is in 2026-W53) and across the change to summer time.
 const days = [today, '2027-01-06', '2026-04-01'];
 const rate = (jars: PlanJar[]) => jars.filter((j) => j.contaminant).length / jars.length;
@@ -25,16 +30,34 @@ describe.each(days)('the demo lab plan loaded on %s', (day) => {
     );
   });
 
-  it('holds ten ISO weeks ending that day, 600–900 jars, and a background rate of 3–5 %', () => {
+  it('holds sixteen ISO weeks ending that day, 1000–1400 jars, and a background rate of 3–5 %', () => {
     const weeks = new Set(plan.jars.map((j) => isoWeek(j.session.heldOn)));
-    expect(weeks.size).toBe(10);
+    expect(weeks.size).toBe(demoWeeks);
+    expect(weeks.has(isoWeek(addDays(mondayOf(day), -7 * (demoWeeks - 1))))).toBe(true);
     expect(plan.jars.every((j) => j.session.heldOn <= day)).toBe(true);
-    expect(plan.jars.length).toBeGreaterThanOrEqual(600);
-    expect(plan.jars.length).toBeLessThanOrEqual(900);
+    expect(plan.jars.length).toBeGreaterThanOrEqual(1000);
+    expect(plan.jars.length).toBeLessThanOrEqual(1400);
     const background = rate(plan.jars.filter((j) => !j.fixed));
     expect(background).toBeGreaterThanOrEqual(0.03);
     expect(background).toBeLessThanOrEqual(0.05);
     expect(plan.jars.every((j) => !j.foundOn || (j.foundOn >= j.session.heldOn && j.foundOn <= day))).toBe(true);
+  });
+
+  it('gives every jar the prep batch of its grain and cook day, from a lot of that grain received before it', () => {
+    const grain = planDemoGrain(plan);
+    expect(grain.batches.flatMap((b) => b.jars).sort((a, b) => a.label.localeCompare(b.label))).toEqual(plan.jars);
+    for (const b of grain.batches) {
+      expect(new Set(b.jars.map((j) => `${j.grain} ${j.run.cookedOn}`))).toEqual(
+        new Set([`${b.lot.grain} ${b.preparedOn}`]),
+      );
+      expect(b.lot.receivedOn < b.preparedOn).toBe(true);
+    }
+    expect(new Set(grain.batches.map((b) => b.code)).size).toBe(grain.batches.length);
+    expect(new Set(grain.lots.map((l) => `${l.grain} ${l.supplierLotCode}`)).size).toBe(grain.lots.length);
+    // A fresh lot every four weeks: sixteen weeks hold four or five lots of a grain used throughout.
+    const ryeLots = grain.lots.filter((l) => l.grain === 'rye').length;
+    expect(ryeLots).toBeGreaterThanOrEqual(4);
+    expect(ryeLots).toBeLessThanOrEqual(5);
   });
 
   it('plants the short cook run: 45 min on 1 L jars, the only run under 60 min, across sessions and cultures', () => {
@@ -81,57 +104,141 @@ describe.each(days)('the demo lab plan loaded on %s', (day) => {
   });
 });
 
+/** A fixed day, so the counts below are exact: the loader makes the same lab for the same day on any date. */
+const LOADED_ON = '2026-03-18';
+const loaded = planDemoHistory(LOADED_ON);
+const loadedGrain = planDemoGrain(loaded);
+const firstDay = addDays(mondayOf(LOADED_ON), -7 * (demoWeeks - 1));
+const EXPECTED_JARS = 1167;
+const EXPECTED_IMPORTED = 79;
+const EXPECTED_LOTS = 26;
+const EXPECTED_BATCHES = 104;
+/** The short run leads, shadowed by its duration bucket (it is alone under 60 min) and by its week. */
+const EXPECTED_LEAD = [
+  'cookRun CR-2614',
+  'cookMinutes <60',
+  'culture LC-0931',
+  'week 2026-W06',
+  'operator Ferris Quell',
+];
+/** [inoculated in the 21 days before that day, status, jars] in the status column's order; the four open incidents mark their jars contaminated. */
+const EXPECTED_STATUSES: [number, string, number][] = [
+  [0, 'colonised', 844],
+  [0, 'contaminated', 74],
+  [1, 'incubating', 240],
+  [1, 'contaminated', 9],
+];
+
+/** Every table of the production record and the incident register, emptied in no particular order (no foreign keys). */
+const productionTables = [
+  'incident_jars',
+  'incident_photos',
+  'incident_step_links',
+  'corrective_actions',
+  'cluster_alerts',
+  'incidents',
+  'jar_events',
+  'jars',
+  'cook_run_readings',
+  'cook_runs',
+  'session_step_checks',
+  'inoculation_sessions',
+  'agar_tests',
+  'cultures',
+  'prep_batches',
+  'grain_lots',
+];
+
 describe('loadDemoLab', () => {
+  const app = createTestApp();
+
   beforeAll(async () => {
-    // The loader only runs into an empty production record, so this file clears the worker's.
-    for (const t of [
-      'incident_photos',
-      'incident_step_links',
-      'corrective_actions',
-      'incident_jars',
-      'incidents',
-      'jar_events',
-      'jars',
-    ]) {
-      await dataSource.query(`DELETE FROM \`${t}\``);
-    }
-    await loadDemoLab(() => undefined);
+    // Other files in this worker's database leave jars, runs and cultures behind; the loader only fills an empty record.
+    for (const t of productionTables) await dataSource.query(`DELETE FROM \`${t}\``);
+    await loadDemoLab(() => undefined, LOADED_ON);
   }, 120_000);
 
-  it('imports the plan, with its open incidents, and loads nothing twice', async () => {
-    expect(await dataSource.manager.count(Jar)).toBe(plan.jars.length);
-    const imported = await dataSource.manager.countBy(Incident, {
-      imported: true,
-      status: 'closed',
-      verdict: 'confirmed',
+  it('imports the plan for the day it is given, with its open incidents, and loads nothing twice', async () => {
+    const counts = async () => ({
+      jars: await dataSource.manager.count(Jar),
+      imported: await dataSource.manager.countBy(Incident, { imported: true, status: 'closed', verdict: 'confirmed' }),
+      open: await dataSource.manager.countBy(Incident, { imported: false, status: 'open', verdict: 'pending' }),
+      lots: await dataSource.manager.count(GrainLot),
+      batches: await dataSource.manager.count(PrepBatch),
     });
-    expect(imported).toBe(plan.jars.filter((j) => j.contaminant).length);
+    const first = await counts();
+    expect(first).toEqual({
+      jars: EXPECTED_JARS,
+      imported: EXPECTED_IMPORTED,
+      open: 4,
+      lots: EXPECTED_LOTS,
+      batches: EXPECTED_BATCHES,
+    });
+    expect(first.jars).toBe(loaded.jars.length);
+    expect(first.imported).toBe(loaded.jars.filter((j) => j.contaminant).length);
+    expect([first.lots, first.batches]).toEqual([loadedGrain.lots.length, loadedGrain.batches.length]);
     const open = await dataSource.manager.findBy(Incident, { imported: false });
-    expect(open.length).toBeGreaterThanOrEqual(3);
-    expect(open.every((i) => i.status === 'open' && i.verdict === 'pending' && i.foundOn >= addDays(today, -9))).toBe(
-      true,
-    );
+    expect(open.every((i) => i.foundOn >= addDays(LOADED_ON, -9) && i.foundOn < LOADED_ON)).toBe(true);
+
+    await loadDemoLab(() => undefined, LOADED_ON);
     await loadDemoLab(() => undefined);
-    expect(await dataSource.manager.count(Jar)).toBe(plan.jars.length);
-    expect(await dataSource.manager.countBy(Incident, { imported: false })).toBe(open.length);
+    expect(await counts()).toEqual(first);
+  });
+
+  it('points every jar at its prep batch, so prepBatch is a factor of the analysis', async () => {
+    expect(await dataSource.manager.countBy(Jar, { prepBatchId: IsNull() })).toBe(0);
+    const rows = await dataSource.query<{ code: string; n: string }[]>(
+      'SELECT pb.code, COUNT(*) AS n FROM jars j JOIN prep_batches pb ON pb.id = j.prepBatchId GROUP BY pb.code',
+    );
+    expect(new Map(rows.map((r) => [r.code, Number(r.n)]))).toEqual(
+      new Map(loadedGrain.batches.map((b) => [b.code, b.jars.length])),
+    );
+    const supervisor = await signedIn(app, 'supervisor');
+    const res = await supervisor.agent
+      .get('/api/analysis/rates')
+      .query({ by: 'prepBatch', from: firstDay, to: LOADED_ON });
+    expect(res.status).toBe(200);
+    const rates = res.body as RatesDto;
+    expect(rates.rows).toHaveLength(EXPECTED_BATCHES);
+    expect(rates.rows.reduce((s, r) => s + r.jars, 0)).toBe(EXPECTED_JARS);
+  });
+
+  it('ranks each planted cause first of its factor among the likely causes, ahead of the prep batches it shares', async () => {
+    // Ranked by Fisher's exact test (Fisher, The Design of Experiments, 1935) with Benjamini–Hochberg q-values (1995),
+    // both checked number for number in analysis.api.test.ts; this checks only the demo's order.
+    const supervisor = await signedIn(app, 'supervisor');
+    const res = await supervisor.agent.get('/api/analysis/causes').query({ from: firstDay, to: LOADED_ON });
+    expect(res.status).toBe(200);
+    const causes = (res.body as CausesDto).causes;
+    const firstOf = (factor: string) => causes.find((c) => c.factor === factor)?.level;
+    expect(firstOf('cookRun')).toBe(plantedProblems.shortCookRun.code);
+    expect(firstOf('culture')).toBe(plantedProblems.badCulture.code);
+    expect(firstOf('operator')).toBe(plantedProblems.sloppyWeek.operator);
+    const rank = (level: string) => causes.findIndex((c) => c.level === level);
+    const planted = [
+      plantedProblems.shortCookRun.code,
+      plantedProblems.badCulture.code,
+      plantedProblems.sloppyWeek.operator,
+    ];
+    const worstPlanted = Math.max(...planted.map(rank));
+    const firstBatch = causes.findIndex((c) => c.factor === 'prepBatch');
+    expect(rank(plantedProblems.shortCookRun.code)).toBeLessThan(firstBatch);
+    expect(causes.slice(0, worstPlanted + 1).map((c) => `${c.factor} ${c.level}`)).toEqual(EXPECTED_LEAD);
   });
 
   it('links grain-to-grain jars to their parent jar instead of a culture', async () => {
     const linked = await dataSource.manager.find(Jar, { where: { parentJarId: Not(IsNull()) } });
-    expect(linked).toHaveLength(plan.jars.filter((j) => j.parent).length);
+    expect(linked).toHaveLength(loaded.jars.filter((j) => j.parent).length);
     expect(linked.every((j) => j.cultureId === null)).toBe(true);
     const grandchildren = linked.filter((j) => linked.some((p) => p.id === j.parentJarId));
     expect(grandchildren.length).toBeGreaterThan(0);
   });
 
-  it('keeps the last two weeks of clean jars incubating and older clean jars colonised', async () => {
+  it('keeps clean jars of the last three weeks before that day incubating and older clean jars colonised', async () => {
     const rows = await dataSource.query<{ status: string; recent: string; n: string }[]>(
-      `SELECT status, inoculatedOn > ? AS recent, COUNT(*) AS n FROM jars WHERE status <> 'contaminated' GROUP BY status, recent`,
-      [addDays(today, -21)],
+      `SELECT status, inoculatedOn > ? AS recent, COUNT(*) AS n FROM jars GROUP BY status, recent ORDER BY recent, status`,
+      [addDays(LOADED_ON, -21)],
     );
-    const recent = rows.filter((r) => Number(r.recent) === 1).map((r) => r.status);
-    const old = rows.filter((r) => Number(r.recent) === 0).map((r) => r.status);
-    expect(new Set(recent)).toEqual(new Set(['incubating']));
-    expect(new Set(old)).toEqual(new Set(['colonised']));
+    expect(rows.map((r) => [Number(r.recent), r.status, Number(r.n)])).toEqual(EXPECTED_STATUSES);
   });
 });

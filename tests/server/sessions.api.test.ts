@@ -1,4 +1,3 @@
-import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { dataSource } from '../../server/db/data-source';
@@ -6,10 +5,9 @@ import { ProcedureStep } from '../../server/procedures/procedure-step.entity';
 import { ProcedureVersion } from '../../server/procedures/procedure-version.entity';
 import { Procedure } from '../../server/procedures/procedure.entity';
 import { createTestApp } from '../setup/test-app';
-import { signedIn, uniqueName } from '../setup/factories';
+import { anonymousStatuses, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 
 const app = createTestApp();
-type Client = Awaited<ReturnType<typeof signedIn>>;
 
 const newSession = (over: Record<string, unknown> = {}) => ({
   code: uniqueName('IS'),
@@ -38,17 +36,14 @@ beforeAll(async () => {
   tech = await signedIn(app, 'technician');
 });
 
-const create = (client: Client, body: Record<string, unknown>) =>
-  client.agent.post('/api/sessions').set('X-CSRF-Token', client.token()).send(body);
+const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/sessions', body);
 const patch = (client: Client, id: number, body: Record<string, unknown>) =>
-  client.agent.patch(`/api/sessions/${id}`).set('X-CSRF-Token', client.token()).send(body);
+  sendAs(client, 'patch', `/api/sessions/${id}`, body);
 
 describe('/api/sessions guards and validation', () => {
   it('answers 401 without a session', async () => {
-    const anon = supertest(app);
-    expect((await anon.get('/api/sessions')).status).toBe(401);
-    expect((await anon.get('/api/sessions/1')).status).toBe(401);
-    expect((await anon.get('/api/sessions/export.csv')).status).toBe(401);
+    const urls = ['/api/sessions', '/api/sessions/1', '/api/sessions/export.csv'];
+    expect(await anonymousStatuses(app, urls)).toEqual([401, 401, 401]);
   });
 
   it('lets a trainer read but answers 403 to writes', async () => {

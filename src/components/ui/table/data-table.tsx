@@ -8,12 +8,11 @@ import {
   type Updater,
 } from '@tanstack/react-table';
 import type { ReactNode } from 'react';
-import { errorMessage } from '../../../lib/api-client';
 import { cx } from '../../../lib/cx';
 import type { TableState } from '../../../lib/list-params';
 import { Button } from '../button';
 import { EmptyState } from '../empty-state';
-import { Notice } from '../notice';
+import { LoadFailed } from '../load-failed';
 import { Pager } from './pager';
 import { SkeletonRows, SortableHeader } from './table-parts';
 
@@ -42,7 +41,8 @@ const cellClasses = cx(
 );
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any -- any column of any row type
-const cellLabel = (def: ColumnDef<any, any>) => def.meta?.label ?? (typeof def.header === 'string' ? def.header : undefined);
+const cellLabel = (def: ColumnDef<any, any>) =>
+  def.meta?.label ?? (typeof def.header === 'string' ? def.header : undefined);
 
 interface DataTableProps<T> extends TableState {
   /** Names the table for screen readers. */
@@ -63,7 +63,8 @@ interface DataTableProps<T> extends TableState {
 
 /** Sorting and paging happen on the server; columns opt into sorting with `enableSorting: true`. */
 export function DataTable<T>(props: DataTableProps<T>) {
-  const { caption, columns, data, total, page, pageSize, sort, onChange, isLoading, isFetching, error, onRetry } = props;
+  const { caption, columns, data, total, page, pageSize, sort, onChange, isLoading, isFetching, error, onRetry } =
+    props;
   const sorting = toSorting(sort);
   const table = useReactTable({
     data: data ?? [],
@@ -84,13 +85,7 @@ export function DataTable<T>(props: DataTableProps<T>) {
     },
   });
 
-  if (error && !data) {
-    return (
-      <Notice tone="danger" title="The list could not be loaded." action={onRetry && <Button variant="secondary" onClick={onRetry}>Try again</Button>}>
-        {errorMessage(error)}
-      </Notice>
-    );
-  }
+  if (error && !data) return <LoadFailed title="The list could not be loaded." error={error} onRetry={onRetry} />;
 
   const columnCount = table.getVisibleLeafColumns().length;
   const rows = table.getRowModel().rows;
@@ -124,7 +119,11 @@ export function DataTable<T>(props: DataTableProps<T>) {
                   {page > 1 && total > 0 ? (
                     <EmptyState
                       title="This page is past the end of the list."
-                      action={<Button variant="secondary" onClick={() => onChange({ page: 1 })}>Go to the first page</Button>}
+                      action={
+                        <Button variant="secondary" onClick={() => onChange({ page: 1 })}>
+                          Go to the first page
+                        </Button>
+                      }
                     />
                   ) : (
                     props.empty

@@ -6,9 +6,11 @@ import { controlClasses } from '../field';
 interface PagerProps extends Omit<TableState, 'sort'> {
   total: number;
   onChange: (patch: Partial<TableState>) => void;
+  /** The page sizes offered; the registers' sizes unless a screen needs others. */
+  sizes?: readonly number[];
 }
 
-export function Pager({ page, pageSize, total, onChange }: PagerProps) {
+export function Pager({ page, pageSize, total, onChange, sizes = pageSizes }: PagerProps) {
   const sizeId = useId();
   const pageCount = Math.max(1, Math.ceil(total / pageSize));
   const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
@@ -30,7 +32,7 @@ export function Pager({ page, pageSize, total, onChange }: PagerProps) {
             onChange={(event) => onChange({ pageSize: Number(event.target.value), page: 1 })}
             className={`${controlClasses} w-auto cursor-pointer`}
           >
-            {pageSizes.map((size) => (
+            {sizes.map((size) => (
               <option key={size} value={size}>
                 {size}
               </option>

@@ -130,7 +130,14 @@ export function LoadState({ isPending, error, onRetry, isEmpty, emptyTitle, chil
   return <>{children}</>;
 }
 
-export function Table({ caption, children, className }: { caption: string; children: ReactNode; className?: string }) {
+interface TableProps {
+  caption: string;
+  children: ReactNode;
+  className?: string;
+  tableClassName?: string;
+}
+
+export function Table({ caption, children, className, tableClassName }: TableProps) {
   return (
     <div
       role="region"
@@ -138,7 +145,7 @@ export function Table({ caption, children, className }: { caption: string; child
 
       className={cx('overflow-x-auto rounded-lg border-2 border-line bg-surface-raised', className)}
     >
-      <table className="w-full border-collapse text-left">
+      <table className={cx('w-full border-collapse text-left', tableClassName)}>
         <caption className="sr-only">{caption}</caption>
         {children}
       </table>

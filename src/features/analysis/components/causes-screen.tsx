@@ -1,110 +1,59 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
-import { Link, useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router';
+import { factorSchema, factors } from '../../../../shared/enums';
 import type { CauseRow } from '../../../../shared/schemas/analysis';
-import { Badge } from '../../../components/ui/badge';
-import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { PageHeader } from '../../../components/ui/page-header';
+import { Select } from '../../../components/ui/select';
+import { Pager } from '../../../components/ui/table/pager';
 import { TextInput } from '../../../components/ui/text-input';
-import { paths } from '../../../config/paths';
-import { patchParams } from '../../../lib/list-params';
-import { analysisQueries, csvUrl, readPeriod, type Period } from '../api/analysis-queries';
-import { AnalysisTabs, CsvLink, LeadNotProof, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
-import { factorLabels, formatP, percent, ratio } from './labels';
+import { patchParams, type TableState } from '../../../lib/list-params';
+import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
+import { AnalysisTabs, CsvLink, LeadNotProof, LoadState, PeriodPicker, Table, num, th } from './analysis-frame';
+import { CauseRowView } from './cause-row';
+import { factorLabels } from './labels';
 
-const PAGE = 50;
+const pageSizes = [20, 50, 100] as const;
 
-function readMinJars(params: URLSearchParams): number {
-  const n = Number(params.get('minJars'));
-  return Number.isInteger(n) && n >= 1 ? n : 1;
+function whole(params: URLSearchParams, key: string, fallback: number): number {
+  const n = Number(params.get(key));
+  return Number.isInteger(n) && n >= 1 ? n : fallback;
 }
 
-function JarsLink({
-  row,
-  period,
-  only,
-  children,
-}: {
-  row: CauseRow;
-  period: Period;
-  only: 'all' | 'contaminated';
-  children: React.ReactNode;
-}) {
-  return (
-    <Link
-      to={paths.analysisJars.to({ factor: row.factor, level: row.level, only, from: period.from, to: period.to })}
-      className="text-accent underline"
-    >
-      {children}
-    </Link>
-  );
+const readPageSize = (params: URLSearchParams) => {
+  const size = whole(params, 'pageSize', pageSizes[0]);
+  return (pageSizes as readonly number[]).includes(size) ? size : pageSizes[0];
+};
+
+/** Levels per factor among the rows the other filters keep, for the factor picker. */
+function factorChoices(rows: CauseRow[]) {
+  const counts = new Map<string, number>();
+  for (const r of rows) counts.set(r.factor, (counts.get(r.factor) ?? 0) + 1);
+  return [
+    { value: '', label: `All factors (${rows.length})` },
+    ...factors
+      .filter((f) => counts.has(f))
+      .map((f) => ({ value: f, label: `${factorLabels[f]} (${counts.get(f) ?? 0})` })),
+  ];
 }
 
-function CauseRowView({ row, rank, period }: { row: CauseRow; rank: number; period: Period }) {
-  const harmful = row.relativeRisk > 1;
-  return (
-    <tr data-testid="cause-row" className={harmful && row.qValue < 0.05 ? 'bg-danger-soft/40' : undefined}>
-      <td className={`${td} ${num} text-muted`}>{rank}</td>
-      <th scope="row" className={`${td} text-left`}>
-        <span className="block text-sm font-normal text-muted">{factorLabels[row.factor]}</span>
-        <span className="font-semibold" data-testid="cause-level">
-          {row.level}
-        </span>
-      </th>
-      <td className={`${td} ${num}`}>
-        <JarsLink row={row} period={period} only="contaminated">
-          {row.contaminated}
-        </JarsLink>{' '}
-        of{' '}
-        <JarsLink row={row} period={period} only="all">
-          {row.jars}
-        </JarsLink>
-        <span className="block text-sm text-muted">
-          {percent(row.rate)} vs {percent(row.restRate)} in the rest
-        </span>
-      </td>
-      <td className={`${td} ${num}`}>
-        <span className="font-semibold">{ratio(row.relativeRisk)}</span>
-        <span className="block text-sm text-muted">
-          {ratio(row.rr95[0])} – {ratio(row.rr95[1])}
-        </span>
-      </td>
-      <td className={`${td} ${num}`}>
-        {formatP(row.qValue)}
-        <span className="block text-sm text-muted">p {formatP(row.pValue)}</span>
-      </td>
-      <td className={`${td} max-w-md`}>
-        {row.hint ? (
-          <>
-            <p>{row.hint}</p>
-            <p className="mt-1 text-sm text-muted">
-              <Badge tone="neutral">Hint</Badge> {row.hintBasis}
-            </p>
-          </>
-        ) : (
-          <span className="text-muted">—</span>
-        )}
-        {row.confoundedWith.length > 0 && (
-          <p className="mt-1 text-sm">
-            <span className="font-medium">Same jars as: </span>
-            {row.confoundedWith.map((c) => `${factorLabels[c.factor]} ${c.level}`).join(', ')}
-          </p>
-        )}
-      </td>
-    </tr>
-  );
-}
-
-/** Likely causes, ranked: each level against the rest of its factor. */
+/** Likely causes, ranked: each level against the rest of its factor. The answer arrives whole; it is paged here. */
 export function CausesScreen() {
   const [params, setParams] = useSearchParams();
   const period = readPeriod(params);
-  const minJars = readMinJars(params);
+  const minJars = whole(params, 'minJars', 1);
   const harmfulOnly = params.get('all') !== '1';
+  const factor = factorSchema.safeParse(params.get('factor')).data;
+  const page = whole(params, 'page', 1);
+  const pageSize = readPageSize(params);
   const causes = useQuery(analysisQueries.causes(period, minJars));
-  const [shown, setShown] = useState(PAGE);
-  const rows = (causes.data?.causes ?? []).filter((c) => !harmfulOnly || c.relativeRisk > 1);
+
+  const ranked = (causes.data?.causes ?? []).map((row, i) => ({ row, rank: i + 1 }));
+  const kept = ranked.filter(({ row }) => !harmfulOnly || row.relativeRisk > 1);
+  const shown = kept.filter(({ row }) => !factor || row.factor === factor);
+  const lastPage = Math.max(1, Math.ceil(shown.length / pageSize));
+  const pageRows = shown.slice((Math.min(page, lastPage) - 1) * pageSize, Math.min(page, lastPage) * pageSize);
+  const setPage = (patch: Partial<TableState>) => setParams(patchParams(params, patch));
 
   return (
     <>
@@ -125,6 +74,13 @@ export function CausesScreen() {
           onChange={(e) => setParams(patchParams(params, { minJars: e.target.value || undefined }))}
           className="w-44"
         />
+        <Select
+          label="Factor"
+          options={factorChoices(kept.map((k) => k.row))}
+          value={factor ?? ''}
+          onChange={(e) => setParams(patchParams(params, { factor: e.target.value || undefined }))}
+          className="w-56"
+        />
         <Checkbox
           label="Only levels that fare worse than the rest"
           checked={harmfulOnly}
@@ -135,11 +91,15 @@ export function CausesScreen() {
         isPending={causes.isPending}
         error={causes.error}
         onRetry={() => void causes.refetch()}
-        isEmpty={rows.length === 0}
-        emptyTitle="No level stands out in this period."
+        isEmpty={shown.length === 0}
+        emptyTitle={
+          factor
+            ? `No ${factorLabels[factor].toLowerCase()} stands out in this period.`
+            : 'No level stands out in this period.'
+        }
       >
-        <Table caption="Likely causes, most likely first">
-          <thead>
+        <Table caption="Likely causes, most likely first" tableClassName="max-sm:block">
+          <thead className="max-sm:hidden">
             <tr>
               <th scope="col" className={`${th} ${num}`}>
                 #
@@ -161,16 +121,20 @@ export function CausesScreen() {
               </th>
             </tr>
           </thead>
-          <tbody>
-            {rows.slice(0, shown).map((row, i) => (
-              <CauseRowView key={`${row.factor}:${row.level}`} row={row} rank={i + 1} period={period} />
+          <tbody className="max-sm:block">
+            {pageRows.map(({ row, rank }) => (
+              <CauseRowView key={`${row.factor}:${row.level}`} row={row} rank={rank} period={period} />
             ))}
           </tbody>
         </Table>
-        {rows.length > shown && (
-          <Button variant="secondary" className="mt-4" onClick={() => setShown((n) => n + PAGE)}>
-            Show {Math.min(PAGE, rows.length - shown)} more of {rows.length - shown}
-          </Button>
+        {shown.length > pageSizes[0] && (
+          <Pager
+            page={Math.min(page, lastPage)}
+            pageSize={pageSize}
+            total={shown.length}
+            onChange={setPage}
+            sizes={pageSizes}
+          />
         )}
         <p className="mt-4 text-sm text-muted">
           Fisher’s exact test, two-sided; q-values by Benjamini–Hochberg over every level tested; relative risk with the

@@ -1,17 +1,6 @@
-import { factors, type Factor } from '../../../../shared/enums';
+import { factorLabel, factors, type Factor } from '../../../../shared/enums';
 
-export const factorLabels: Record<Factor, string> = {
-  grain: 'Grain',
-  cookRun: 'Cook run',
-  cookMinutes: 'Minutes at pressure',
-  session: 'Session',
-  operator: 'Operator',
-  culture: 'Culture',
-  week: 'ISO week',
-  prepBatch: 'Prep batch',
-  workspace: 'Workspace',
-  room: 'Incubation room',
-};
+export const factorLabels = Object.fromEntries(factors.map((f) => [f, factorLabel(f)])) as Record<Factor, string>;
 
 export const factorOptions = factors.map((f) => ({ value: f, label: factorLabels[f] }));
 

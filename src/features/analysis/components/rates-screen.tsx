@@ -1,6 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router';
 import { Bar, BarChart, CartesianGrid, ErrorBar, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { factorNames } from '../../../../shared/enums';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Select } from '../../../components/ui/select';
 import { patchParams } from '../../../lib/list-params';
@@ -45,13 +46,13 @@ export function RatesScreen() {
         error={rates.error}
         onRetry={() => void rates.refetch()}
         isEmpty={!data || data.rows.length === 0}
-        emptyTitle={`No jars in this period record a ${factorLabels[by].toLowerCase()}.`}
+        emptyTitle={`No jars in this period record a ${factorNames[by]}.`}
       >
         {data && (
           <>
             <figure className="mb-6 rounded-lg border-2 border-line bg-surface-raised p-4">
               <figcaption className="mb-2 font-semibold">
-                Rate by {factorLabels[by].toLowerCase()}, whiskers at the 95 % interval
+                Rate by {factorNames[by]}, whiskers at the 95 % interval
                 {data.rows.length > MAX_BARS && ` (first ${MAX_BARS} of ${data.rows.length} levels)`}
               </figcaption>
               <div className="h-72 w-full">
@@ -68,7 +69,7 @@ export function RatesScreen() {
                 </ResponsiveContainer>
               </div>
             </figure>
-            <Table caption={`Contamination rate by ${factorLabels[by].toLowerCase()}`}>
+            <Table caption={`Contamination rate by ${factorNames[by]}`}>
               <thead>
                 <tr>
                   <th scope="col" className={th}>
@@ -118,8 +119,8 @@ export function RatesScreen() {
             </Table>
             {data.notRecorded > 0 && (
               <p className="mt-3 text-sm text-muted">
-                {data.notRecorded} jars in this period do not record a {factorLabels[by].toLowerCase()} and are left out
-                of the rows (they are in “All jars”).
+                {data.notRecorded} jars in this period do not record a {factorNames[by]} and are left out of the rows
+                (they are in “All jars”).
               </p>
             )}
           </>

@@ -1,4 +1,4 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import { pageOf } from '../../../../shared/schemas/common';
 import {
   cookRunDetailSchema,
@@ -7,8 +7,9 @@ import {
   cookRunSchema,
   cookRunSortFields,
 } from '../../../../shared/schemas/cook-runs';
-import { api, apiUrl } from '../../../lib/api-client';
+import { api } from '../../../lib/api-client';
 import { readTableState, type TableState } from '../../../lib/list-params';
+import { exportUrl, pagedListQuery, pickParam } from '../../../lib/list-query';
 
 export interface CookRunListFilters extends TableState {
   q: string | undefined;
@@ -20,10 +21,8 @@ export interface CookRunListFilters extends TableState {
 
 /** The URL is the list's source of truth; a filter the server would refuse is dropped, not sent. */
 export function readCookRunFilters(params: URLSearchParams): CookRunListFilters {
-  const pick = <K extends 'q' | 'container' | 'from' | 'to'>(key: K) => {
-    const parsed = cookRunFiltersSchema.shape[key].safeParse(params.get(key) || undefined);
-    return parsed.success ? parsed.data : undefined;
-  };
+  const pick = <K extends 'q' | 'container' | 'from' | 'to'>(key: K) =>
+    pickParam(cookRunFiltersSchema.shape, params, key);
   return {
     ...readTableState(params, cookRunSortFields),
     q: pick('q'),
@@ -40,11 +39,7 @@ export const cookRunsQueries = {
   all: ['cook-runs'] as const,
   lists: () => [...cookRunsQueries.all, 'list'] as const,
   list: (filters: CookRunListFilters) =>
-    queryOptions({
-      queryKey: [...cookRunsQueries.lists(), filters] as const,
-      queryFn: ({ signal }) => api.get('/cook-runs', { query: { ...filters }, signal, schema: pageSchema }),
-      placeholderData: keepPreviousData,
-    }),
+    pagedListQuery([...cookRunsQueries.lists(), filters] as const, '/cook-runs', pageSchema, filters),
   details: () => [...cookRunsQueries.all, 'detail'] as const,
   detail: (id: number) =>
     queryOptions({
@@ -58,7 +53,4 @@ export const cookRunsQueries = {
     }),
 };
 
-/** The export takes the list's filters and sort, but every row. */
-export function cookRunsExportUrl({ page: _page, pageSize: _size, ...filters }: CookRunListFilters): string {
-  return apiUrl('/cook-runs/export.csv', filters);
-}
+export const cookRunsExportUrl = (filters: CookRunListFilters) => exportUrl('/cook-runs/export.csv', filters);

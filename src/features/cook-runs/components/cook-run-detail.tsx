@@ -1,26 +1,16 @@
 import { useQuery } from '@tanstack/react-query';
-import type { ReactNode } from 'react';
-import { Link } from 'react-router';
-import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
+import { Fact, Facts } from '../../../components/ui/facts';
+import { LoadFailed } from '../../../components/ui/load-failed';
+import { BackLink } from '../../../components/ui/text-link';
 import { PageHeader } from '../../../components/ui/page-header';
 import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
 import { cookRunsQueries } from '../api/cook-runs-queries';
 import { formatF0 } from './lethality-figure';
 import { PressureCaution } from './pressure-caution';
 import { ReadingsPanel } from './readings-panel';
-
-function Item({ term, children }: { term: string; children: ReactNode }) {
-  return (
-    <div className="flex flex-col gap-0.5">
-      <dt className="text-sm text-muted">{term}</dt>
-      <dd className="font-medium">{children}</dd>
-    </div>
-  );
-}
 
 const orDash = (v: string | number | null) => (v === null || v === '' ? '—' : v);
 
@@ -29,28 +19,18 @@ export function CookRunDetail({ id, canWrite }: { id: number; canWrite: boolean 
   if (detail.isPending) return <FullPageSpinner label="Loading cook run" />;
   if (detail.error) {
     return (
-      <Notice
-        tone="danger"
+      <LoadFailed
         title="The cook run could not be loaded."
-        action={
-          <Button variant="secondary" onClick={() => void detail.refetch()}>
-            Try again
-          </Button>
-        }
-      >
-        {errorMessage(detail.error)}
-      </Notice>
+        error={detail.error}
+        onRetry={() => void detail.refetch()}
+      />
     );
   }
   const run = detail.data;
 
   return (
     <>
-      <p className="no-print mb-2">
-        <Link to={paths.cookRuns.to()} className="text-accent underline-offset-2 hover:underline">
-          ← Cook runs
-        </Link>
-      </p>
+      <BackLink to={paths.cookRuns.to()}>Cook runs</BackLink>
       <PageHeader title={`Cook run ${run.code}`} description={run.vessel ?? undefined} />
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className="flex flex-col gap-6">
@@ -76,22 +56,22 @@ export function CookRunDetail({ id, canWrite }: { id: number; canWrite: boolean 
             )}
           </section>
           <section aria-label="Cycle" className="rounded-lg border border-line bg-surface-raised p-4">
-            <dl className="grid gap-4 sm:grid-cols-3">
-              <Item term="Date">{run.cookedOn ? formatDate(run.cookedOn) : '—'}</Item>
-              <Item term="Start time">{run.startedAt ? new Date(run.startedAt).toLocaleString() : '—'}</Item>
-              <Item term="Container">{orDash(run.container)}</Item>
-              <Item term="Minutes at pressure">{run.minutesAtPressure}</Item>
-              <Item term="Gauge">
+            <Facts>
+              <Fact term="Date">{run.cookedOn ? formatDate(run.cookedOn) : '—'}</Fact>
+              <Fact term="Start time">{run.startedAt ? new Date(run.startedAt).toLocaleString() : '—'}</Fact>
+              <Fact term="Container">{orDash(run.container)}</Fact>
+              <Fact term="Minutes at pressure">{run.minutesAtPressure}</Fact>
+              <Fact term="Gauge">
                 {run.gaugeKPa === null
                   ? 'not read (103.4 kPa assumed)'
                   : `${run.gaugeKPa.toFixed(1)} kPa · ${run.gaugePsi?.toFixed(2)} psi`}
-              </Item>
-              <Item term="Steam temperature">{run.sterilisingTemperatureC?.toFixed(1)} °C</Item>
-              <Item term="Venting minutes">{orDash(run.ventingMinutes)}</Item>
-              <Item term="Site altitude">{run.altitudeM} m</Item>
-              <Item term="Load count">{orDash(run.loadCount)}</Item>
-              <Item term="Operator">{orDash(run.operatorName)}</Item>
-            </dl>
+              </Fact>
+              <Fact term="Steam temperature">{run.sterilisingTemperatureC?.toFixed(1)} °C</Fact>
+              <Fact term="Venting minutes">{orDash(run.ventingMinutes)}</Fact>
+              <Fact term="Site altitude">{run.altitudeM} m</Fact>
+              <Fact term="Load count">{orDash(run.loadCount)}</Fact>
+              <Fact term="Operator">{orDash(run.operatorName)}</Fact>
+            </Facts>
             {run.notes && <p className="mt-4 whitespace-pre-line">{run.notes}</p>}
           </section>
           <ReadingsPanel run={run} canWrite={canWrite} />

@@ -1,13 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { useSearchParams } from 'react-router';
-import { Button, buttonClasses } from '../../../components/ui/button';
-import { EmptyState } from '../../../components/ui/empty-state';
-import { PageHeader } from '../../../components/ui/page-header';
-import { patchParams } from '../../../lib/list-params';
+import { RegisterScreen } from '../../../components/layouts/register-screen';
+import { Button } from '../../../components/ui/button';
+import { RegisterEmpty } from '../../../components/ui/register-empty';
+import { useListParams } from '../../../lib/use-list-params';
 import { cookRunsExportUrl, cookRunsQueries, readCookRunFilters } from '../api/cook-runs-queries';
-import { CookRunsFilters } from './cook-runs-filters';
-import { CookRunsTable } from './cook-runs-table';
+import { cookRunColumns } from './cook-runs-columns';
+import { CookRunsFilters, isCookRunFiltered } from './cook-runs-filters';
 import { CreateCookRunDialog } from './create-cook-run-dialog';
 
 interface Props {
@@ -16,52 +15,36 @@ interface Props {
 }
 
 export function CookRunsScreen({ canWrite, me }: Props) {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const filters = readCookRunFilters(searchParams);
+  const { filters, update } = useListParams(readCookRunFilters);
   const list = useQuery(cookRunsQueries.list(filters));
   const [creating, setCreating] = useState(false);
-  const update = (patch: Record<string, string | number | undefined>) =>
-    setSearchParams(patchParams(searchParams, patch));
-  const filtered = Boolean(filters.q || filters.container || filters.from || filters.to || filters.lowLethality);
 
   return (
-    <>
-      <PageHeader
-        title="Cook runs"
-        description="Each sterilisation load with its lethality. Without a temperature log, F0 is an estimate from the chamber temperature — an upper bound, because the centre of a jar lags behind."
-        actions={
-          <>
-            <a href={cookRunsExportUrl(filters)} download className={buttonClasses('secondary')}>
-              Export CSV
-            </a>
-            {canWrite && (
-              <Button icon="plus" onClick={() => setCreating(true)}>
-                New cook run
-              </Button>
-            )}
-          </>
-        }
-      />
-      <CookRunsFilters filters={filters} onChange={update} />
-      <CookRunsTable
-        data={list.data}
-        page={filters.page}
-        pageSize={filters.pageSize}
-        sort={filters.sort}
-        onChange={update}
-        isLoading={list.isPending}
-        isFetching={list.isPlaceholderData}
-        error={list.error}
-        onRetry={() => void list.refetch()}
-        empty={
-          filtered ? (
-            <EmptyState icon="search" title="No cook runs match these filters." />
-          ) : (
-            <EmptyState title="No cook runs recorded yet." />
-          )
-        }
-      />
+    <RegisterScreen
+      title="Cook runs"
+      description="Each sterilisation load with its lethality. Without a temperature log, F0 is an estimate from the chamber temperature — an upper bound, because the centre of a jar lags behind."
+      exportHref={cookRunsExportUrl(filters)}
+      actions={
+        canWrite && (
+          <Button icon="plus" onClick={() => setCreating(true)}>
+            New cook run
+          </Button>
+        )
+      }
+      filters={<CookRunsFilters filters={filters} onChange={update} />}
+      columns={cookRunColumns}
+      query={list}
+      state={filters}
+      onChange={update}
+      empty={
+        <RegisterEmpty
+          filtered={isCookRunFiltered(filters)}
+          none="No cook runs recorded yet."
+          noMatch="No cook runs match these filters."
+        />
+      }
+    >
       {canWrite && <CreateCookRunDialog open={creating} onClose={() => setCreating(false)} me={me} />}
-    </>
+    </RegisterScreen>
   );
 }

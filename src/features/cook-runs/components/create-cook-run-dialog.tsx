@@ -2,10 +2,8 @@ import { useId } from 'react';
 import { useNavigate } from 'react-router';
 import { createCookRunSchema, defaultGaugeKPa, type CreateCookRunInput } from '../../../../shared/schemas/cook-runs';
 import { kPaToPsi } from '../../../../shared/stats/steam';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
-import { applyServerErrors, Form } from '../../../components/ui/form';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
@@ -40,7 +38,6 @@ interface Props {
 }
 
 export function CreateCookRunDialog({ open, onClose, me }: Props) {
-  const formId = useId();
   const listId = useId();
   const createRun = useCreateCookRun();
   const toast = useToast();
@@ -56,162 +53,145 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
   };
 
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={createRun.isPending}
+      pending={createRun.isPending}
       title="New cook run"
       description="One load through the cooker or autoclave. Minutes at pressure mean little without the container, so both are required."
-      footer={
-        <>
-          <Button variant="secondary" onClick={onClose} disabled={createRun.isPending}>
-            Cancel
-          </Button>
-          <Button type="submit" form={formId} pending={createRun.isPending} icon="plus">
-            Record cook run
-          </Button>
-        </>
-      }
+      submitLabel="Record cook run"
+      submitIcon="plus"
+      intro={<PressureCaution />}
+      schema={createCookRunSchema}
+      options={{ defaultValues: defaults }}
+      serverFields={fields}
+      onSubmit={async (values) => {
+        const run = await createRun.mutateAsync(values);
+        toast.success(`Cook run ${run.code} recorded.`);
+        onClose();
+        void navigate(paths.cookRun.to(run.id));
+      }}
     >
-      <div className="mb-5">
-        <PressureCaution />
-      </div>
-      <Form
-        id={formId}
-        schema={createCookRunSchema}
-        options={{ defaultValues: defaults }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            const run = await createRun.mutateAsync(values);
-            toast.success(`Cook run ${run.code} recorded.`);
-            onClose();
-            void navigate(paths.cookRun.to(run.id));
-          } catch (error) {
-            applyServerErrors(error, setError, fields);
-          }
-        }}
-      >
-        {({ register, watch, setValue, formState: { errors } }) => {
-          const gauge = watch('gaugeKPa');
-          const byUser = watch('operatorId') === me.id;
-          return (
-            <>
-              <div className="grid gap-4 sm:grid-cols-2">
-                <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
-                <TextInput
-                  label="Vessel"
-                  optional
-                  placeholder="Cooker A"
-                  error={errors.vessel?.message}
-                  {...register('vessel')}
+      {({ register, watch, setValue, formState: { errors } }) => {
+        const gauge = watch('gaugeKPa');
+        const byUser = watch('operatorId') === me.id;
+        return (
+          <>
+            <div className="grid gap-4 sm:grid-cols-2">
+              <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
+              <TextInput
+                label="Vessel"
+                optional
+                placeholder="Cooker A"
+                error={errors.vessel?.message}
+                {...register('vessel')}
+              />
+              <TextInput
+                label="Date"
+                type="date"
+                hint="Or give the start time."
+                error={errors.cookedOn?.message}
+                {...register('cookedOn', { setValueAs: (v: unknown) => v || null })}
+              />
+              <TextInput
+                label="Start time"
+                type="datetime-local"
+                optional
+                error={errors.startedAt?.message}
+                {...register('startedAt', { setValueAs: localDateTime })}
+              />
+              <TextInput
+                label="Container"
+                list={listId}
+                hint="1 L jar, 2 L jar, 3 kg bag…"
+                error={errors.container?.message}
+                {...register('container')}
+              />
+              <datalist id={listId}>
+                <option value="1 L jar" />
+                <option value="2 L jar" />
+                <option value="3 kg bag" />
+              </datalist>
+              <TextInput
+                label="Load count"
+                type="number"
+                inputMode="numeric"
+                optional
+                error={errors.loadCount?.message}
+                {...register('loadCount', { setValueAs: optionalNumber })}
+              />
+              <TextInput
+                label="Minutes at pressure"
+                type="number"
+                inputMode="numeric"
+                error={errors.minutesAtPressure?.message}
+                {...register('minutesAtPressure', { setValueAs: number })}
+              />
+              <TextInput
+                label="Gauge pressure (kPa)"
+                type="number"
+                step="0.1"
+                inputMode="decimal"
+                optional
+                hint={
+                  typeof gauge === 'number' && !Number.isNaN(gauge)
+                    ? `${kPaToPsi(gauge).toFixed(2)} psi`
+                    : 'Left empty, 103.4 kPa (15 psi) is assumed.'
+                }
+                error={errors.gaugeKPa?.message}
+                {...register('gaugeKPa', { setValueAs: optionalNumber })}
+              />
+              <TextInput
+                label="Venting minutes"
+                type="number"
+                inputMode="numeric"
+                optional
+                hint="Steam flowing before the vent was closed."
+                error={errors.ventingMinutes?.message}
+                {...register('ventingMinutes', { setValueAs: optionalNumber })}
+              />
+              <TextInput
+                label="Site altitude (m)"
+                type="number"
+                inputMode="numeric"
+                hint="Lower air pressure lowers the steam temperature at the same gauge reading."
+                error={errors.altitudeM?.message}
+                {...register('altitudeM', { setValueAs: number })}
+              />
+            </div>
+            <fieldset className="flex flex-col gap-3">
+              <legend className="mb-2 font-medium">Operator</legend>
+              <label className="flex min-h-touch items-center gap-3">
+                <input
+                  type="radio"
+                  className="size-5 accent-accent"
+                  checked={byUser}
+                  onChange={() => {
+                    setValue('operatorId', me.id);
+                    setValue('operatorName', undefined);
+                  }}
                 />
-                <TextInput
-                  label="Date"
-                  type="date"
-                  hint="Or give the start time."
-                  error={errors.cookedOn?.message}
-                  {...register('cookedOn', { setValueAs: (v: unknown) => v || null })}
+                I ran it ({me.displayName})
+              </label>
+              <label className="flex min-h-touch items-center gap-3">
+                <input
+                  type="radio"
+                  className="size-5 accent-accent"
+                  checked={!byUser}
+                  onChange={() => setValue('operatorId', undefined)}
                 />
-                <TextInput
-                  label="Start time"
-                  type="datetime-local"
-                  optional
-                  error={errors.startedAt?.message}
-                  {...register('startedAt', { setValueAs: localDateTime })}
-                />
-                <TextInput
-                  label="Container"
-                  list={listId}
-                  hint="1 L jar, 2 L jar, 3 kg bag…"
-                  error={errors.container?.message}
-                  {...register('container')}
-                />
-                <datalist id={listId}>
-                  <option value="1 L jar" />
-                  <option value="2 L jar" />
-                  <option value="3 kg bag" />
-                </datalist>
-                <TextInput
-                  label="Load count"
-                  type="number"
-                  inputMode="numeric"
-                  optional
-                  error={errors.loadCount?.message}
-                  {...register('loadCount', { setValueAs: optionalNumber })}
-                />
-                <TextInput
-                  label="Minutes at pressure"
-                  type="number"
-                  inputMode="numeric"
-                  error={errors.minutesAtPressure?.message}
-                  {...register('minutesAtPressure', { setValueAs: number })}
-                />
-                <TextInput
-                  label="Gauge pressure (kPa)"
-                  type="number"
-                  step="0.1"
-                  inputMode="decimal"
-                  optional
-                  hint={
-                    typeof gauge === 'number' && !Number.isNaN(gauge)
-                      ? `${kPaToPsi(gauge).toFixed(2)} psi`
-                      : 'Left empty, 103.4 kPa (15 psi) is assumed.'
-                  }
-                  error={errors.gaugeKPa?.message}
-                  {...register('gaugeKPa', { setValueAs: optionalNumber })}
-                />
-                <TextInput
-                  label="Venting minutes"
-                  type="number"
-                  inputMode="numeric"
-                  optional
-                  hint="Steam flowing before the vent was closed."
-                  error={errors.ventingMinutes?.message}
-                  {...register('ventingMinutes', { setValueAs: optionalNumber })}
-                />
-                <TextInput
-                  label="Site altitude (m)"
-                  type="number"
-                  inputMode="numeric"
-                  hint="Lower air pressure lowers the steam temperature at the same gauge reading."
-                  error={errors.altitudeM?.message}
-                  {...register('altitudeM', { setValueAs: number })}
-                />
-              </div>
-              <fieldset className="flex flex-col gap-3">
-                <legend className="mb-2 font-medium">Operator</legend>
-                <label className="flex min-h-touch items-center gap-3">
-                  <input
-                    type="radio"
-                    className="size-5 accent-accent"
-                    checked={byUser}
-                    onChange={() => {
-                      setValue('operatorId', me.id);
-                      setValue('operatorName', undefined);
-                    }}
-                  />
-                  I ran it ({me.displayName})
-                </label>
-                <label className="flex min-h-touch items-center gap-3">
-                  <input
-                    type="radio"
-                    className="size-5 accent-accent"
-                    checked={!byUser}
-                    onChange={() => setValue('operatorId', undefined)}
-                  />
-                  Someone else
-                </label>
-                {!byUser && (
-                  <TextInput label="Staff name" error={errors.operatorName?.message} {...register('operatorName')} />
-                )}
-              </fieldset>
-              <Field label="Notes" optional error={errors.notes?.message}>
-                {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-              </Field>
-            </>
-          );
-        }}
-      </Form>
-    </Dialog>
+                Someone else
+              </label>
+              {!byUser && (
+                <TextInput label="Staff name" error={errors.operatorName?.message} {...register('operatorName')} />
+              )}
+            </fieldset>
+            <Field label="Notes" optional error={errors.notes?.message}>
+              {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
+            </Field>
+          </>
+        );
+      }}
+    </FormDialog>
   );
 }

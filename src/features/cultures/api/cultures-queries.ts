@@ -1,9 +1,10 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import { cultureStateSchema, type CultureState } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
 import { cultureDetailSchema, cultureSchema, cultureSortFields } from '../../../../shared/schemas/cultures';
-import { api, apiUrl } from '../../../lib/api-client';
+import { api } from '../../../lib/api-client';
 import { readTableState, type TableState } from '../../../lib/list-params';
+import { exportUrl, pagedListQuery } from '../../../lib/list-query';
 
 export interface CultureListFilters extends TableState {
   state: CultureState | undefined;
@@ -26,11 +27,7 @@ export const culturesQueries = {
   all: ['cultures'] as const,
   lists: () => [...culturesQueries.all, 'list'] as const,
   list: (filters: CultureListFilters) =>
-    queryOptions({
-      queryKey: [...culturesQueries.lists(), filters] as const,
-      queryFn: ({ signal }) => api.get('/cultures', { query: { ...filters }, signal, schema: pageSchema }),
-      placeholderData: keepPreviousData,
-    }),
+    pagedListQuery([...culturesQueries.lists(), filters] as const, '/cultures', pageSchema, filters),
   details: () => [...culturesQueries.all, 'detail'] as const,
   detail: (id: number) =>
     queryOptions({
@@ -39,6 +36,4 @@ export const culturesQueries = {
     }),
 };
 
-export function culturesExportUrl({ page: _page, pageSize: _size, ...filters }: CultureListFilters): string {
-  return apiUrl('/cultures/export.csv', filters);
-}
+export const culturesExportUrl = (filters: CultureListFilters) => exportUrl('/cultures/export.csv', filters);

@@ -1,9 +1,6 @@
-import { useId } from 'react';
 import { agarResults, createAgarTestSchema } from '../../../../shared/schemas/cultures';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
-import { applyServerErrors, Form } from '../../../components/ui/form';
 import { Notice } from '../../../components/ui/notice';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
@@ -23,68 +20,51 @@ export function AgarTestDialog({
   open: boolean;
   onClose: () => void;
 }) {
-  const formId = useId();
   const addTest = useAddAgarTest(cultureId);
   const toast = useToast();
 
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={addTest.isPending}
+      pending={addTest.isPending}
       title="Record an agar test"
-      footer={
-        <>
-          <Button variant="secondary" onClick={onClose} disabled={addTest.isPending}>
-            Cancel
-          </Button>
-          <Button type="submit" form={formId} pending={addTest.isPending}>
-            Save test
-          </Button>
-        </>
-      }
+      submitLabel="Save test"
+      schema={createAgarTestSchema}
+      options={{ defaultValues: { testedOn: new Date().toISOString().slice(0, 10), result: 'clean', notes: '' } }}
+      serverFields={['testedOn', 'result', 'notes', 'photoId']}
+      onSubmit={async (values) => {
+        await addTest.mutateAsync(values);
+        toast.success('Agar test recorded.');
+        onClose();
+      }}
     >
-      <Form
-        id={formId}
-        schema={createAgarTestSchema}
-        options={{ defaultValues: { testedOn: new Date().toISOString().slice(0, 10), result: 'clean', notes: '' } }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            await addTest.mutateAsync(values);
-            toast.success('Agar test recorded.');
-            onClose();
-          } catch (error) {
-            applyServerErrors(error, setError, ['testedOn', 'result', 'notes', 'photoId']);
-          }
-        }}
-      >
-        {({ register, watch, formState: { errors } }) => (
-          <>
-            <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput label="Tested on" type="date" error={errors.testedOn?.message} {...register('testedOn')} />
-              <Select label="Result" options={resultOptions} error={errors.result?.message} {...register('result')} />
-            </div>
-            <TextInput
-              label="Photo number"
-              type="number"
-              inputMode="numeric"
-              optional
-              hint="The number of a photo already uploaded."
-              error={errors.photoId?.message}
-              {...register('photoId', { setValueAs: optionalNumber })}
-            />
-            <Field label="Notes" optional error={errors.notes?.message}>
-              {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-            </Field>
-            {watch('result') === 'contaminated' && (
-              <Notice tone="warn" title="Contaminated plate">
-                Keep the plate sealed and sterilise it before disposal. Sporulating moulds can cause allergy; do not
-                open it indoors. Follow your local biosafety and waste rules. {cautionFootnote}
-              </Notice>
-            )}
-          </>
-        )}
-      </Form>
-    </Dialog>
+      {({ register, watch, formState: { errors } }) => (
+        <>
+          <div className="grid gap-4 sm:grid-cols-2">
+            <TextInput label="Tested on" type="date" error={errors.testedOn?.message} {...register('testedOn')} />
+            <Select label="Result" options={resultOptions} error={errors.result?.message} {...register('result')} />
+          </div>
+          <TextInput
+            label="Photo number"
+            type="number"
+            inputMode="numeric"
+            optional
+            hint="The number of a photo already uploaded."
+            error={errors.photoId?.message}
+            {...register('photoId', { setValueAs: optionalNumber })}
+          />
+          <Field label="Notes" optional error={errors.notes?.message}>
+            {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
+          </Field>
+          {watch('result') === 'contaminated' && (
+            <Notice tone="warn" title="Contaminated plate">
+              Keep the plate sealed and sterilise it before disposal. Sporulating moulds can cause allergy; do not open
+              it indoors. Follow your local biosafety and waste rules. {cautionFootnote}
+            </Notice>
+          )}
+        </>
+      )}
+    </FormDialog>
   );
 }

@@ -1,10 +1,7 @@
-import { useId } from 'react';
 import { useNavigate } from 'react-router';
 import { createCultureSchema, type CreateCultureInput } from '../../../../shared/schemas/cultures';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
-import { applyServerErrors, Form } from '../../../components/ui/form';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
@@ -31,7 +28,6 @@ interface Props {
 }
 
 export function CreateCultureDialog({ open, onClose, parent }: Props) {
-  const formId = useId();
   const createCulture = useCreateCulture();
   const toast = useToast();
   const navigate = useNavigate();
@@ -43,87 +39,72 @@ export function CreateCultureDialog({ open, onClose, parent }: Props) {
   };
 
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={createCulture.isPending}
+      pending={createCulture.isPending}
       title={parent ? `New culture from ${parent.code}` : 'New culture'}
       description="A new culture starts quarantined. A supervisor releases it once an agar test comes back clean."
-      footer={
-        <>
-          <Button variant="secondary" onClick={onClose} disabled={createCulture.isPending}>
-            Cancel
-          </Button>
-          <Button type="submit" form={formId} pending={createCulture.isPending} icon="plus">
-            Record culture
-          </Button>
-        </>
-      }
+      submitLabel="Record culture"
+      submitIcon="plus"
+      schema={createCultureSchema}
+      options={{ defaultValues: defaults }}
+      serverFields={fields}
+      onSubmit={async (values) => {
+        const culture = await createCulture.mutateAsync(values);
+        toast.success(`Culture ${culture.code} recorded, quarantined.`);
+        onClose();
+        void navigate(paths.culture.to(culture.id));
+      }}
     >
-      <Form
-        id={formId}
-        schema={createCultureSchema}
-        options={{ defaultValues: defaults }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            const culture = await createCulture.mutateAsync(values);
-            toast.success(`Culture ${culture.code} recorded, quarantined.`);
-            onClose();
-            void navigate(paths.culture.to(culture.id));
-          } catch (error) {
-            applyServerErrors(error, setError, fields);
-          }
-        }}
-      >
-        {({ register, formState: { errors } }) => (
-          <>
-            <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput
-                label="Code"
-                autoComplete="off"
-                placeholder="LC-…"
-                error={errors.code?.message}
-                {...register('code')}
-              />
-              <TextInput
-                label="Prepared on"
-                type="date"
-                optional
-                error={errors.preparedOn?.message}
-                {...register('preparedOn', { setValueAs: optionalText })}
-              />
-              <TextInput
-                label="Species"
-                optional
-                error={errors.species?.message}
-                {...register('species', { setValueAs: optionalText })}
-              />
-              <TextInput label="Strain label" optional error={errors.strain?.message} {...register('strain')} />
-              <TextInput
-                label="Generation"
-                type="number"
-                inputMode="numeric"
-                optional
-                hint={parent ? 'Left empty, one more than the parent.' : undefined}
-                error={errors.generation?.message}
-                {...register('generation', { setValueAs: optionalNumber })}
-              />
-              <TextInput
-                label="Volume (ml)"
-                type="number"
-                inputMode="decimal"
-                optional
-                error={errors.volumeMl?.message}
-                {...register('volumeMl', { setValueAs: optionalNumber })}
-              />
-            </div>
-            {parent ? <p className="text-muted">Parent culture: {parent.code}</p> : null}
-            <Field label="Notes" optional error={errors.notes?.message}>
-              {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-            </Field>
-          </>
-        )}
-      </Form>
-    </Dialog>
+      {({ register, formState: { errors } }) => (
+        <>
+          <div className="grid gap-4 sm:grid-cols-2">
+            <TextInput
+              label="Code"
+              autoComplete="off"
+              placeholder="LC-…"
+              error={errors.code?.message}
+              {...register('code')}
+            />
+            <TextInput
+              label="Prepared on"
+              type="date"
+              optional
+              error={errors.preparedOn?.message}
+              {...register('preparedOn', { setValueAs: optionalText })}
+            />
+            <TextInput
+              label="Species"
+              optional
+              error={errors.species?.message}
+              {...register('species', { setValueAs: optionalText })}
+            />
+            <TextInput label="Strain label" optional error={errors.strain?.message} {...register('strain')} />
+            <TextInput
+              label="Generation"
+              type="number"
+              inputMode="numeric"
+              optional
+              hint={parent ? 'Left empty, one more than the parent.' : undefined}
+              error={errors.generation?.message}
+              {...register('generation', { setValueAs: optionalNumber })}
+            />
+            <TextInput
+              label="Volume (ml)"
+              type="number"
+              inputMode="decimal"
+              optional
+              error={errors.volumeMl?.message}
+              {...register('volumeMl', { setValueAs: optionalNumber })}
+            />
+          </div>
+          {parent ? <p className="text-muted">Parent culture: {parent.code}</p> : null}
+          <Field label="Notes" optional error={errors.notes?.message}>
+            {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
+          </Field>
+        </>
+      )}
+    </FormDialog>
   );
 }

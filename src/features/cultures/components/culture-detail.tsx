@@ -1,29 +1,20 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState, type ReactNode } from 'react';
-import { Link } from 'react-router';
+import { useState } from 'react';
 import type { CultureState } from '../../../../shared/enums';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/notice';
+import { Fact, Facts } from '../../../components/ui/facts';
+import { LoadFailed } from '../../../components/ui/load-failed';
+import { BackLink, TextLink } from '../../../components/ui/text-link';
 import { PageHeader } from '../../../components/ui/page-header';
 import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
 import { culturesQueries } from '../api/cultures-queries';
 import { AgarTestDialog } from './agar-test-dialog';
 import { ChangeStateDialog } from './change-state-dialog';
 import { CreateCultureDialog } from './create-culture-dialog';
 import { CultureStateBadge } from './culture-state-badge';
-
-function Item({ term, children }: { term: string; children: ReactNode }) {
-  return (
-    <div className="flex flex-col gap-0.5">
-      <dt className="text-sm text-muted">{term}</dt>
-      <dd className="font-medium">{children}</dd>
-    </div>
-  );
-}
 
 const resultTone = { clean: 'ok', contaminated: 'danger', inconclusive: 'warn' } as const;
 const stateButtons: Record<CultureState, string> = {
@@ -47,17 +38,7 @@ export function CultureDetail({ id, canWrite, canChangeState }: Props) {
   if (detail.isPending) return <FullPageSpinner label="Loading culture" />;
   if (detail.error) {
     return (
-      <Notice
-        tone="danger"
-        title="The culture could not be loaded."
-        action={
-          <Button variant="secondary" onClick={() => void detail.refetch()}>
-            Try again
-          </Button>
-        }
-      >
-        {errorMessage(detail.error)}
-      </Notice>
+      <LoadFailed title="The culture could not be loaded." error={detail.error} onRetry={() => void detail.refetch()} />
     );
   }
   const c = detail.data;
@@ -65,11 +46,7 @@ export function CultureDetail({ id, canWrite, canChangeState }: Props) {
 
   return (
     <>
-      <p className="no-print mb-2">
-        <Link to={paths.cultures.to()} className="text-accent underline-offset-2 hover:underline">
-          ← Cultures
-        </Link>
-      </p>
+      <BackLink to={paths.cultures.to()}>Cultures</BackLink>
       <PageHeader
         title={`Culture ${c.code}`}
         description={<span className="italic">{[c.species, c.strain].filter(Boolean).join(' · ') || undefined}</span>}
@@ -101,32 +78,24 @@ export function CultureDetail({ id, canWrite, canChangeState }: Props) {
         </section>
 
         <section aria-label="Details" className="rounded-lg border border-line bg-surface-raised p-4">
-          <dl className="grid gap-4 sm:grid-cols-3">
-            <Item term="Prepared on">{c.preparedOn ? formatDate(c.preparedOn) : '—'}</Item>
-            <Item term="Generation">{c.generation ?? '—'}</Item>
-            <Item term="Volume">{c.volumeMl === null ? '—' : `${c.volumeMl} ml`}</Item>
-            <Item term="Parent">
-              {c.parent ? (
-                <Link to={paths.culture.to(c.parent.id)} className="text-accent underline-offset-2 hover:underline">
-                  {c.parent.code}
-                </Link>
-              ) : (
-                '—'
-              )}
-            </Item>
-            <Item term="Made from it">
+          <Facts>
+            <Fact term="Prepared on">{c.preparedOn ? formatDate(c.preparedOn) : '—'}</Fact>
+            <Fact term="Generation">{c.generation ?? '—'}</Fact>
+            <Fact term="Volume">{c.volumeMl === null ? '—' : `${c.volumeMl} ml`}</Fact>
+            <Fact term="Parent">
+              {c.parent ? <TextLink to={paths.culture.to(c.parent.id)}>{c.parent.code}</TextLink> : '—'}
+            </Fact>
+            <Fact term="Made from it">
               {c.children.length === 0
                 ? 'No cultures yet'
                 : c.children.map((child, i) => (
                     <span key={child.id}>
                       {i > 0 && ', '}
-                      <Link to={paths.culture.to(child.id)} className="text-accent underline-offset-2 hover:underline">
-                        {child.code}
-                      </Link>
+                      <TextLink to={paths.culture.to(child.id)}>{child.code}</TextLink>
                     </span>
                   ))}
-            </Item>
-          </dl>
+            </Fact>
+          </Facts>
           {c.notes && <p className="mt-4 whitespace-pre-line">{c.notes}</p>}
         </section>
 

@@ -1,10 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
-import { useId } from 'react';
 import { createGrainLotSchema, createGrainSchema, createPrepBatchSchema } from '../../../../shared/schemas/grain';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
-import { applyServerErrors, Form } from '../../../components/ui/form';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
@@ -22,71 +19,40 @@ interface DialogProps {
   onClose: () => void;
 }
 
-function Footer({
-  formId,
-  pending,
-  label,
-  onClose,
-}: {
-  formId: string;
-  pending: boolean;
-  label: string;
-  onClose: () => void;
-}) {
-  return (
-    <>
-      <Button variant="secondary" onClick={onClose} disabled={pending}>
-        Cancel
-      </Button>
-      <Button type="submit" form={formId} pending={pending} icon="plus">
-        {label}
-      </Button>
-    </>
-  );
-}
-
 export function AddGrainDialog({ open, onClose }: DialogProps) {
-  const formId = useId();
   const create = useCreateGrain();
   const toast = useToast();
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={create.isPending}
+      pending={create.isPending}
       size="sm"
       title="Add a grain to the list"
-      footer={<Footer formId={formId} pending={create.isPending} label="Add grain" onClose={onClose} />}
+      submitLabel="Add grain"
+      submitIcon="plus"
+      schema={createGrainSchema}
+      options={{ defaultValues: { name: '' } }}
+      serverFields={['name']}
+      onSubmit={async (values) => {
+        const grain = await create.mutateAsync(values);
+        toast.success(`${grain.name} added to the grain list.`);
+        onClose();
+      }}
     >
-      <Form
-        id={formId}
-        schema={createGrainSchema}
-        options={{ defaultValues: { name: '' } }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            const grain = await create.mutateAsync(values);
-            toast.success(`${grain.name} added to the grain list.`);
-            onClose();
-          } catch (error) {
-            applyServerErrors(error, setError, ['name']);
-          }
-        }}
-      >
-        {({ register, formState: { errors } }) => (
-          <TextInput
-            label="Name"
-            hint="Imports match grain names case-insensitively."
-            error={errors.name?.message}
-            {...register('name')}
-          />
-        )}
-      </Form>
-    </Dialog>
+      {({ register, formState: { errors } }) => (
+        <TextInput
+          label="Name"
+          hint="Imports match grain names case-insensitively."
+          error={errors.name?.message}
+          {...register('name')}
+        />
+      )}
+    </FormDialog>
   );
 }
 
 export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
-  const formId = useId();
   const grains = useQuery({ ...grainQueries.grains(), enabled: open });
   const create = useCreateGrainLot();
   const toast = useToast();
@@ -95,54 +61,47 @@ export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
     ...(grains.data ?? []).filter((g) => g.active).map((g) => ({ value: String(g.id), label: g.name })),
   ];
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={create.isPending}
+      pending={create.isPending}
       title="New grain lot"
       description="A delivery of grain, as the supplier labels it."
-      footer={<Footer formId={formId} pending={create.isPending} label="Record lot" onClose={onClose} />}
+      submitLabel="Record lot"
+      submitIcon="plus"
+      schema={createGrainLotSchema}
+      options={{ defaultValues: { supplierLotCode: '', receivedOn: today(), notes: '' } }}
+      serverFields={['grainId', 'supplierLotCode', 'receivedOn', 'notes']}
+      onSubmit={async (values) => {
+        const lot = await create.mutateAsync(values);
+        toast.success(`Lot ${lot.supplierLotCode} of ${lot.grain} recorded.`);
+        onClose();
+      }}
     >
-      <Form
-        id={formId}
-        schema={createGrainLotSchema}
-        options={{ defaultValues: { supplierLotCode: '', receivedOn: today(), notes: '' } }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            const lot = await create.mutateAsync(values);
-            toast.success(`Lot ${lot.supplierLotCode} of ${lot.grain} recorded.`);
-            onClose();
-          } catch (error) {
-            applyServerErrors(error, setError, ['grainId', 'supplierLotCode', 'receivedOn', 'notes']);
-          }
-        }}
-      >
-        {({ register, formState: { errors } }) => (
-          <>
-            <Select
-              label="Grain"
-              options={options}
-              error={errors.grainId?.message}
-              {...register('grainId', { setValueAs: requiredId })}
-            />
-            <TextInput
-              label="Supplier lot code"
-              error={errors.supplierLotCode?.message}
-              {...register('supplierLotCode')}
-            />
-            <TextInput label="Received on" type="date" error={errors.receivedOn?.message} {...register('receivedOn')} />
-            <Field label="Notes" optional error={errors.notes?.message}>
-              {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('notes')} />}
-            </Field>
-          </>
-        )}
-      </Form>
-    </Dialog>
+      {({ register, formState: { errors } }) => (
+        <>
+          <Select
+            label="Grain"
+            options={options}
+            error={errors.grainId?.message}
+            {...register('grainId', { setValueAs: requiredId })}
+          />
+          <TextInput
+            label="Supplier lot code"
+            error={errors.supplierLotCode?.message}
+            {...register('supplierLotCode')}
+          />
+          <TextInput label="Received on" type="date" error={errors.receivedOn?.message} {...register('receivedOn')} />
+          <Field label="Notes" optional error={errors.notes?.message}>
+            {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('notes')} />}
+          </Field>
+        </>
+      )}
+    </FormDialog>
   );
 }
 
 export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { lotId?: number }) {
-  const formId = useId();
   const lots = useQuery({ ...grainQueries.lotOptions(), enabled: open });
   const create = useCreatePrepBatch();
   const toast = useToast();
@@ -154,88 +113,69 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
     })),
   ];
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={create.isPending}
+      pending={create.isPending}
       title="New prep batch"
       description="Grain soaked and simmered together. Wetness varies batch to batch, so jars point at their batch."
-      footer={<Footer formId={formId} pending={create.isPending} label="Record batch" onClose={onClose} />}
+      submitLabel="Record batch"
+      submitIcon="plus"
+      schema={createPrepBatchSchema}
+      options={{ defaultValues: { code: '', grainLotId: lotId, preparedOn: today(), notes: '' } }}
+      serverFields={['code', 'grainLotId', 'preparedOn', 'soakHours', 'simmerMinutes', 'drainMinutes', 'notes']}
+      onSubmit={async (values) => {
+        const created = await create.mutateAsync(values);
+        toast.success(`Prep batch ${created.code} recorded.`);
+        onClose();
+      }}
     >
-      <Form
-        id={formId}
-        schema={createPrepBatchSchema}
-        options={{ defaultValues: { code: '', grainLotId: lotId, preparedOn: today(), notes: '' } }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            const created = await create.mutateAsync(values);
-            toast.success(`Prep batch ${created.code} recorded.`);
-            onClose();
-          } catch (error) {
-            applyServerErrors(error, setError, [
-              'code',
-              'grainLotId',
-              'preparedOn',
-              'soakHours',
-              'simmerMinutes',
-              'drainMinutes',
-              'notes',
-            ]);
-          }
-        }}
-      >
-        {({ register, formState: { errors } }) => (
-          <>
-            <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
-              <TextInput
-                label="Prepared on"
-                type="date"
-                error={errors.preparedOn?.message}
-                {...register('preparedOn')}
-              />
-            </div>
-            <Select
-              label="Grain lot"
-              options={options}
-              error={errors.grainLotId?.message}
-              {...register('grainLotId', { setValueAs: requiredId })}
+      {({ register, formState: { errors } }) => (
+        <>
+          <div className="grid gap-4 sm:grid-cols-2">
+            <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
+            <TextInput label="Prepared on" type="date" error={errors.preparedOn?.message} {...register('preparedOn')} />
+          </div>
+          <Select
+            label="Grain lot"
+            options={options}
+            error={errors.grainLotId?.message}
+            {...register('grainLotId', { setValueAs: requiredId })}
+          />
+          <div className="grid gap-4 sm:grid-cols-3">
+            <TextInput
+              label="Soak (hours)"
+              type="number"
+              step="0.5"
+              inputMode="decimal"
+              optional
+              hint="Usually 12–24 h."
+              error={errors.soakHours?.message}
+              {...register('soakHours', { setValueAs: optionalNumber })}
             />
-            <div className="grid gap-4 sm:grid-cols-3">
-              <TextInput
-                label="Soak (hours)"
-                type="number"
-                step="0.5"
-                inputMode="decimal"
-                optional
-                hint="Usually 12–24 h."
-                error={errors.soakHours?.message}
-                {...register('soakHours', { setValueAs: optionalNumber })}
-              />
-              <TextInput
-                label="Simmer (min)"
-                type="number"
-                inputMode="numeric"
-                optional
-                hint="Usually 10–15 min."
-                error={errors.simmerMinutes?.message}
-                {...register('simmerMinutes', { setValueAs: optionalNumber })}
-              />
-              <TextInput
-                label="Drain / dry (min)"
-                type="number"
-                inputMode="numeric"
-                optional
-                error={errors.drainMinutes?.message}
-                {...register('drainMinutes', { setValueAs: optionalNumber })}
-              />
-            </div>
-            <Field label="Notes" optional hint="How wet or burst the grain looked." error={errors.notes?.message}>
-              {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('notes')} />}
-            </Field>
-          </>
-        )}
-      </Form>
-    </Dialog>
+            <TextInput
+              label="Simmer (min)"
+              type="number"
+              inputMode="numeric"
+              optional
+              hint="Usually 10–15 min."
+              error={errors.simmerMinutes?.message}
+              {...register('simmerMinutes', { setValueAs: optionalNumber })}
+            />
+            <TextInput
+              label="Drain / dry (min)"
+              type="number"
+              inputMode="numeric"
+              optional
+              error={errors.drainMinutes?.message}
+              {...register('drainMinutes', { setValueAs: optionalNumber })}
+            />
+          </div>
+          <Field label="Notes" optional hint="How wet or burst the grain looked." error={errors.notes?.message}>
+            {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('notes')} />}
+          </Field>
+        </>
+      )}
+    </FormDialog>
   );
 }

@@ -1,4 +1,4 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import { pageOf } from '../../../../shared/schemas/common';
 import {
   incidentDetailSchema,
@@ -6,10 +6,23 @@ import {
   incidentListQuerySchema,
   incidentSortFields,
 } from '../../../../shared/schemas/incidents';
-import { api, apiUrl } from '../../../lib/api-client';
-import { readTableState, type TableState } from '../../../lib/list-params';
+import { api } from '../../../lib/api-client';
+import { hasAnyFilter, readTableState, type TableState } from '../../../lib/list-params';
+import { exportUrl, pagedListQuery } from '../../../lib/list-query';
 
-export const incidentFilterKeys = ['status', 'verdict', 'contaminant', 'cookRunId', 'cultureId', 'sessionId', 'operator', 'jar', 'from', 'to', 'voided'] as const;
+export const incidentFilterKeys = [
+  'status',
+  'verdict',
+  'contaminant',
+  'cookRunId',
+  'cultureId',
+  'sessionId',
+  'operator',
+  'jar',
+  'from',
+  'to',
+  'voided',
+] as const;
 export type IncidentFilterKey = (typeof incidentFilterKeys)[number];
 
 export type IncidentListFilters = TableState & Partial<Record<IncidentFilterKey, string>>;
@@ -25,7 +38,7 @@ export function readIncidentFilters(params: URLSearchParams): IncidentListFilter
   return filters;
 }
 
-export const hasIncidentFilters = (f: IncidentListFilters) => incidentFilterKeys.some((k) => f[k] !== undefined);
+export const hasIncidentFilters = (f: IncidentListFilters) => hasAnyFilter(f, incidentFilterKeys);
 
 const pageSchema = pageOf(incidentListItemSchema);
 
@@ -33,11 +46,7 @@ export const incidentsQueries = {
   all: ['incidents'] as const,
   lists: () => [...incidentsQueries.all, 'list'] as const,
   list: (filters: IncidentListFilters) =>
-    queryOptions({
-      queryKey: [...incidentsQueries.lists(), filters] as const,
-      queryFn: ({ signal }) => api.get('/incidents', { query: { ...filters }, signal, schema: pageSchema }),
-      placeholderData: keepPreviousData,
-    }),
+    pagedListQuery([...incidentsQueries.lists(), filters] as const, '/incidents', pageSchema, filters),
   details: () => [...incidentsQueries.all, 'detail'] as const,
   detail: (id: number) =>
     queryOptions({
@@ -46,7 +55,4 @@ export const incidentsQueries = {
     }),
 };
 
-/** The export takes the list's filters and sort, but every row. */
-export function incidentsExportUrl({ page: _page, pageSize: _size, ...filters }: IncidentListFilters): string {
-  return apiUrl('/incidents/export.csv', filters);
-}
+export const incidentsExportUrl = (filters: IncidentListFilters) => exportUrl('/incidents/export.csv', filters);

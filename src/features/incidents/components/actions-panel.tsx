@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { factorNames } from '../../../../shared/enums';
 import { createActionSchema, updateActionSchema, type CorrectiveActionDto } from '../../../../shared/schemas/incidents';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
@@ -88,7 +89,7 @@ export function ActionsPanel({ incidentId, actions, canManage }: { incidentId: n
             <p className="font-medium">{a.what}</p>
             <p className="text-sm text-muted">
               {a.ownerName} · due {formatDate(a.dueOn)}
-              {a.factor && a.level ? ` · ${a.factor} ${a.level}` : ''}
+              {a.factor && a.level ? ` · ${factorNames[a.factor]} ${a.level}` : ''}
             </p>
             {a.doneOn ? (
               <p className="mt-1 text-sm">

@@ -1,9 +1,7 @@
 import { contaminantNames, contaminants, stagesFound } from '../../../../shared/enums';
 import { incidentSeverities, updateIncidentSchema, type IncidentDetailDto } from '../../../../shared/schemas/incidents';
-import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { Dialog } from '../../../components/ui/dialog';
-import { applyServerErrors, Form } from '../../../components/ui/form';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
@@ -11,78 +9,119 @@ import { useUpdateIncident } from '../api/use-incident-mutations';
 import { severityLabels, stageLabels } from '../labels';
 import { NotesField } from './notes-field';
 
-const fields = ['contaminant', 'severity', 'stage', 'signColour', 'signSmell', 'signTexture', 'sealed', 'sterilisedBeforeDisposal', 'notes', 'reason', 'version'] as const;
+const fields = [
+  'contaminant',
+  'severity',
+  'stage',
+  'signColour',
+  'signSmell',
+  'signTexture',
+  'sealed',
+  'sterilisedBeforeDisposal',
+  'notes',
+  'reason',
+  'version',
+] as const;
 const blankToNull = (v: string) => (v.trim() === '' ? null : v);
 
 /** Descriptive fields only; status and verdict belong to the review. Each change is audited with the reason. */
-export function EditIncidentDialog({ incident, open, onClose }: { incident: IncidentDetailDto; open: boolean; onClose: () => void }) {
+export function EditIncidentDialog({
+  incident,
+  open,
+  onClose,
+}: {
+  incident: IncidentDetailDto;
+  open: boolean;
+  onClose: () => void;
+}) {
   const update = useUpdateIncident(incident.id);
   const toast = useToast();
-  const formId = `edit-incident-${incident.id}`;
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
       title={`Edit incident ${incident.id}`}
-      busy={update.isPending}
-      footer={
-        <>
-          <Button variant="secondary" onClick={onClose} disabled={update.isPending}>
-            Cancel
-          </Button>
-          <Button type="submit" form={formId} pending={update.isPending}>
-            Save changes
-          </Button>
-        </>
-      }
+      pending={update.isPending}
+      submitLabel="Save changes"
+      formKey={`${incident.version}-${String(open)}`}
+      serverFields={fields}
+      schema={updateIncidentSchema}
+      options={{
+        defaultValues: {
+          version: incident.version,
+          contaminant: incident.contaminant,
+          severity: incident.severity,
+          stage: incident.stage,
+          signColour: incident.signColour,
+          signSmell: incident.signSmell,
+          signTexture: incident.signTexture,
+          sealed: incident.sealed,
+          sterilisedBeforeDisposal: incident.sterilisedBeforeDisposal,
+          notes: incident.notes,
+        },
+      }}
+      onSubmit={async (values) => {
+        await update.mutateAsync(values);
+        toast.success(`Incident ${incident.id} updated.`);
+        onClose();
+      }}
     >
-      <Form
-        id={formId}
-        key={`${incident.version}-${String(open)}`}
-        schema={updateIncidentSchema}
-        options={{
-          defaultValues: {
-            version: incident.version,
-            contaminant: incident.contaminant,
-            severity: incident.severity,
-            stage: incident.stage,
-            signColour: incident.signColour,
-            signSmell: incident.signSmell,
-            signTexture: incident.signTexture,
-            sealed: incident.sealed,
-            sterilisedBeforeDisposal: incident.sterilisedBeforeDisposal,
-            notes: incident.notes,
-          },
-        }}
-        onSubmit={(values, { setError }) =>
-          update.mutateAsync(values).then(
-            () => {
-              toast.success(`Incident ${incident.id} updated.`);
-              onClose();
-            },
-            (error: unknown) => applyServerErrors(error, setError, fields),
-          )
-        }
-      >
-        {({ register, formState: { errors } }) => (
-          <>
-            <Select label="Contaminant" options={contaminants.map((c) => ({ value: c, label: contaminantNames[c] }))} error={errors.contaminant?.message} {...register('contaminant')} />
-            <div className="grid gap-4 sm:grid-cols-2">
-              <Select label="Severity" options={incidentSeverities.map((s) => ({ value: s, label: severityLabels[s] }))} {...register('severity')} />
-              <Select label="Stage found" options={stagesFound.map((s) => ({ value: s, label: stageLabels[s] }))} {...register('stage')} />
-            </div>
-            <div className="grid gap-4 sm:grid-cols-3">
-              <TextInput label="Colour" optional error={errors.signColour?.message} {...register('signColour', { setValueAs: blankToNull })} />
-              <TextInput label="Smell" optional error={errors.signSmell?.message} {...register('signSmell', { setValueAs: blankToNull })} />
-              <TextInput label="Texture" optional error={errors.signTexture?.message} {...register('signTexture', { setValueAs: blankToNull })} />
-            </div>
-            <Checkbox label="Sealed" {...register('sealed')} />
-            <Checkbox label="Sterilised before disposal" {...register('sterilisedBeforeDisposal')} />
-            <NotesField label="Notes" optional error={errors.notes?.message} {...register('notes', { setValueAs: blankToNull })} />
-            <TextInput label="Reason for the change" optional error={errors.reason?.message} {...register('reason', { setValueAs: (v: string) => v.trim() || undefined })} />
-          </>
-        )}
-      </Form>
-    </Dialog>
+      {({ register, formState: { errors } }) => (
+        <>
+          <Select
+            label="Contaminant"
+            options={contaminants.map((c) => ({ value: c, label: contaminantNames[c] }))}
+            error={errors.contaminant?.message}
+            {...register('contaminant')}
+          />
+          <div className="grid gap-4 sm:grid-cols-2">
+            <Select
+              label="Severity"
+              options={incidentSeverities.map((s) => ({ value: s, label: severityLabels[s] }))}
+              {...register('severity')}
+            />
+            <Select
+              label="Stage found"
+              options={stagesFound.map((s) => ({ value: s, label: stageLabels[s] }))}
+              {...register('stage')}
+            />
+          </div>
+          <div className="grid gap-4 sm:grid-cols-3">
+            <TextInput
+              label="Colour"
+              optional
+              error={errors.signColour?.message}
+              {...register('signColour', { setValueAs: blankToNull })}
+            />
+            <TextInput
+              label="Smell"
+              optional
+              error={errors.signSmell?.message}
+              {...register('signSmell', { setValueAs: blankToNull })}
+            />
+            <TextInput
+              label="Texture"
+              optional
+              error={errors.signTexture?.message}
+              {...register('signTexture', { setValueAs: blankToNull })}
+            />
+          </div>
+          <Checkbox label="Sealed" {...register('sealed')} />
+          <Checkbox label="Sterilised before disposal" {...register('sterilisedBeforeDisposal')} />
+          <NotesField
+            label="Notes"
+            optional
+            error={errors.notes?.message}
+            {...register('notes', { setValueAs: blankToNull })}
+          />
+          <TextInput
+            label="Reason for the change"
+            optional
+            error={errors.reason?.message}
+            {...register('reason', { setValueAs: (v: string) => v.trim() || undefined })}
+          />
+        </>
+      )}
+    </FormDialog>
   );
 }

@@ -1,14 +1,15 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { Link } from 'react-router';
 import { contaminantNames, type Role } from '../../../../shared/enums';
 import type { IncidentDetailDto } from '../../../../shared/schemas/incidents';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
+import { Fact, Facts } from '../../../components/ui/facts';
+import { LoadFailed } from '../../../components/ui/load-failed';
+import { BackLink } from '../../../components/ui/text-link';
 import { PageHeader } from '../../../components/ui/page-header';
 import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
-import { errorMessage } from '../../../lib/api-client';
 import { incidentsQueries } from '../api/incidents-queries';
 import { causeLabels, severityLabels, stageLabels } from '../labels';
 import { ActionsPanel } from './actions-panel';
@@ -22,18 +23,12 @@ import { ReviewPanel } from './review-panel';
 import { SporeCautions } from './spore-cautions';
 import { VoidDialog } from './void-dialog';
 
-function Item({ term, children }: { term: string; children: ReactNode }) {
-  return (
-    <div className="flex flex-col gap-0.5">
-      <dt className="text-sm text-muted">{term}</dt>
-      <dd className="font-medium">{children}</dd>
-    </div>
-  );
-}
-
 function Section({ title, children, className }: { title: string; children: ReactNode; className?: string }) {
   return (
-    <section aria-label={title} className={`rounded-lg border border-line bg-surface-raised p-4 print:border-0 print:p-0 ${className ?? ''}`}>
+    <section
+      aria-label={title}
+      className={`rounded-lg border border-line bg-surface-raised p-4 print:border-0 print:p-0 ${className ?? ''}`}
+    >
       <h2 className="mb-3 text-lg font-semibold">{title}</h2>
       {children}
     </section>
@@ -44,7 +39,9 @@ const yesNo = (b: boolean) => (b ? 'Yes' : 'No');
 
 /** The finder may edit and add to their own open incident; a supervisor any that is not voided (as the server checks). */
 const canAddTo = (i: IncidentDetailDto, me: { id: number; role: Role }) =>
-  !i.voided && (me.role === 'supervisor' || ((me.role === 'technician' || me.role === 'admin') && i.status === 'open' && i.foundById === me.id));
+  !i.voided &&
+  (me.role === 'supervisor' ||
+    ((me.role === 'technician' || me.role === 'admin') && i.status === 'open' && i.foundById === me.id));
 
 export function IncidentDetail({ id, me }: { id: number; me: { id: number; role: Role } }) {
   const detail = useQuery(incidentsQueries.detail(id));
@@ -53,9 +50,11 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
   if (detail.isPending) return <FullPageSpinner label="Loading incident" />;
   if (detail.error) {
     return (
-      <Notice tone="danger" title="The incident could not be loaded." action={<Button variant="secondary" onClick={() => void detail.refetch()}>Try again</Button>}>
-        {errorMessage(detail.error)}
-      </Notice>
+      <LoadFailed
+        title="The incident could not be loaded."
+        error={detail.error}
+        onRetry={() => void detail.refetch()}
+      />
     );
   }
   const i = detail.data;
@@ -63,11 +62,7 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
 
   return (
     <>
-      <p className="no-print mb-2">
-        <Link to={paths.incidents.to()} className="text-accent underline-offset-2 hover:underline">
-          ← Incidents
-        </Link>
-      </p>
+      <BackLink to={paths.incidents.to()}>Incidents</BackLink>
       <PageHeader
         title={`Incident ${i.id}`}
         description={<IncidentBadges status={i.status} verdict={i.verdict} voided={i.voided} />}
@@ -97,17 +92,17 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
       <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)] print:block">
         <div className="flex flex-col gap-6 print:gap-4">
           <Section title="What was found">
-            <dl className="grid grid-cols-2 gap-4 sm:grid-cols-3">
-              <Item term="Contaminant">{contaminantNames[i.contaminant]}</Item>
-              <Item term="Severity">{severityLabels[i.severity]}</Item>
-              <Item term="Stage">{stageLabels[i.stage]}</Item>
-              <Item term="Found">{new Date(i.foundAt).toLocaleString()}</Item>
-              <Item term="Found by">{i.foundByName}</Item>
-              <Item term="Signs">{[i.signColour, i.signSmell, i.signTexture].filter(Boolean).join(', ') || '—'}</Item>
-              <Item term="Sealed">{yesNo(i.sealed)}</Item>
-              <Item term="Sterilised before disposal">{yesNo(i.sterilisedBeforeDisposal)}</Item>
-              <Item term="Cause category">{i.causeCategory ? causeLabels[i.causeCategory].label : '—'}</Item>
-            </dl>
+            <Facts className="grid-cols-2">
+              <Fact term="Contaminant">{contaminantNames[i.contaminant]}</Fact>
+              <Fact term="Severity">{severityLabels[i.severity]}</Fact>
+              <Fact term="Stage">{stageLabels[i.stage]}</Fact>
+              <Fact term="Found">{new Date(i.foundAt).toLocaleString()}</Fact>
+              <Fact term="Found by">{i.foundByName}</Fact>
+              <Fact term="Signs">{[i.signColour, i.signSmell, i.signTexture].filter(Boolean).join(', ') || '—'}</Fact>
+              <Fact term="Sealed">{yesNo(i.sealed)}</Fact>
+              <Fact term="Sterilised before disposal">{yesNo(i.sterilisedBeforeDisposal)}</Fact>
+              <Fact term="Cause category">{i.causeCategory ? causeLabels[i.causeCategory].label : '—'}</Fact>
+            </Facts>
             {i.notes && <p className="mt-3 whitespace-pre-line">{i.notes}</p>}
             {i.rootCauseNotes && (
               <p className="mt-3 whitespace-pre-line">
@@ -158,7 +153,9 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
         </div>
       </div>
       {canAddTo(i, me) && <EditIncidentDialog incident={i} open={editing} onClose={() => setEditing(false)} />}
-      {supervisor && <VoidDialog incidentId={i.id} version={i.version} open={voiding} onClose={() => setVoiding(false)} />}
+      {supervisor && (
+        <VoidDialog incidentId={i.id} version={i.version} open={voiding} onClose={() => setVoiding(false)} />
+      )}
     </>
   );
 }

@@ -1,4 +1,4 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import { z } from 'zod';
 import { jarStatusSchema, type JarStatus } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
@@ -13,6 +13,7 @@ import {
 } from '../../../../shared/schemas/jars';
 import { api, apiUrl } from '../../../lib/api-client';
 import { readTableState, type TableState } from '../../../lib/list-params';
+import { exportUrl, pagedListQuery, pickParam } from '../../../lib/list-query';
 
 type TextFilter = 'room' | 'shelf' | 'q' | 'from' | 'to';
 type IdFilter = 'grainId' | 'cookRunId' | 'sessionId' | 'cultureId';
@@ -25,14 +26,8 @@ export interface JarListFilters
 /** The URL is the list's source of truth; a filter the server would refuse is dropped, not sent. */
 export function readJarFilters(params: URLSearchParams): JarListFilters {
   const shape = jarListQuerySchema.shape;
-  const text = (key: TextFilter) => {
-    const parsed = shape[key].safeParse(params.get(key) || undefined);
-    return parsed.success ? parsed.data : undefined;
-  };
-  const id = (key: IdFilter) => {
-    const parsed = shape[key].safeParse(params.get(key) || undefined);
-    return parsed.success ? parsed.data : undefined;
-  };
+  const text = (key: TextFilter) => pickParam(shape, params, key);
+  const id = (key: IdFilter) => pickParam(shape, params, key);
   const status = jarStatusSchema.safeParse(params.get('status'));
   return {
     ...readTableState(params, jarSortFields),
@@ -68,11 +63,7 @@ export const jarsQueries = {
   all: ['jars'] as const,
   lists: () => [...jarsQueries.all, 'list'] as const,
   list: (filters: JarListFilters) =>
-    queryOptions({
-      queryKey: [...jarsQueries.lists(), filters] as const,
-      queryFn: ({ signal }) => api.get('/jars', { query: { ...filters }, signal, schema: pageSchema }),
-      placeholderData: keepPreviousData,
-    }),
+    pagedListQuery([...jarsQueries.lists(), filters] as const, '/jars', pageSchema, filters),
   details: () => [...jarsQueries.all, 'detail'] as const,
   byLabel: (label: string) =>
     queryOptions({
@@ -124,9 +115,6 @@ export const jarsQueries = {
     }),
 };
 
-/** The export takes the list's filters and sort, but every row. */
-export function jarsExportUrl({ page: _page, pageSize: _size, ...filters }: JarListFilters): string {
-  return apiUrl('/jars/export.csv', filters);
-}
+export const jarsExportUrl = (filters: JarListFilters) => exportUrl('/jars/export.csv', filters);
 
 export const jarQrUrl = (qrPath: string) => apiUrl(qrPath.replace(/^\/api/, ''));

@@ -1,10 +1,7 @@
-import { useId } from 'react';
 import type { FieldErrors } from 'react-hook-form';
 import { jarEventInputSchema, type JarEventInput, type JarEventInputType } from '../../../../shared/schemas/jars';
-import { Button } from '../../../components/ui/button';
-import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
-import { applyServerErrors, Form } from '../../../components/ui/form';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
@@ -35,7 +32,6 @@ interface Props {
 }
 
 export function JarEventDialog({ jar, type, onClose }: Props) {
-  const formId = useId();
   const record = useRecordJarEvent(jar.id);
   const toast = useToast();
   if (!type) return null;
@@ -48,90 +44,70 @@ export function JarEventDialog({ jar, type, onClose }: Props) {
   } as unknown as JarEventInput;
 
   return (
-    <Dialog
+    <FormDialog
       open
       onClose={onClose}
-      busy={record.isPending}
+      pending={record.isPending}
       title={`${action.title} — ${jar.label}`}
-      footer={
-        <>
-          <Button variant="secondary" onClick={onClose} disabled={record.isPending}>
-            Cancel
-          </Button>
-          <Button
-            type="submit"
-            form={formId}
-            pending={record.isPending}
-            variant={type === 'discarded' ? 'danger' : 'primary'}
-          >
-            {action.label}
-          </Button>
-        </>
-      }
+      submitLabel={action.label}
+      submitVariant={type === 'discarded' ? 'danger' : 'primary'}
+      schema={jarEventInputSchema}
+      options={{ defaultValues: defaults }}
+      serverFields={fields}
+      onSubmit={async (values) => {
+        await record.mutateAsync(values);
+        toast.success(action.done);
+        onClose();
+      }}
     >
-      <Form
-        id={formId}
-        schema={jarEventInputSchema}
-        options={{ defaultValues: defaults }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            await record.mutateAsync(values);
-            toast.success(action.done);
-            onClose();
-          } catch (error) {
-            applyServerErrors(error, setError, fields);
-          }
-        }}
-      >
-        {({ register, formState }) => {
-          const errors = formState.errors as FieldErrors<Record<(typeof fields)[number], string>>;
-          return (
-            <>
-              <input type="hidden" {...register('type')} />
-              {type === 'discarded' && <DiscardCaution />}
-              {type === 'check' && (
-                <TextInput
-                  label="Colonised (%)"
-                  type="number"
-                  inputMode="numeric"
-                  min={0}
-                  max={100}
-                  error={errors.percentColonised?.message}
-                  {...register('percentColonised', { setValueAs: (v: string) => (v === '' ? undefined : Number(v)) })}
+      {({ register, formState }) => {
+        const errors = formState.errors as FieldErrors<Record<(typeof fields)[number], string>>;
+        return (
+          <>
+            <input type="hidden" {...register('type')} />
+            {type === 'discarded' && <DiscardCaution />}
+            {type === 'check' && (
+              <TextInput
+                label="Colonised (%)"
+                type="number"
+                inputMode="numeric"
+                min={0}
+                max={100}
+                error={errors.percentColonised?.message}
+                {...register('percentColonised', { setValueAs: (v: string) => (v === '' ? undefined : Number(v)) })}
+              />
+            )}
+            {type === 'moved' && (
+              <div className="grid gap-4 sm:grid-cols-2">
+                <TextInput label="Room" error={errors.room?.message} {...register('room')} />
+                <TextInput label="Shelf" error={errors.shelf?.message} {...register('shelf')} />
+              </div>
+            )}
+            {type === 'released' && (
+              <>
+                <Select
+                  label="Released to"
+                  options={releaseOptions}
+                  error={errors.releasedTo?.message}
+                  {...register('releasedTo')}
                 />
-              )}
-              {type === 'moved' && (
-                <div className="grid gap-4 sm:grid-cols-2">
-                  <TextInput label="Room" error={errors.room?.message} {...register('room')} />
-                  <TextInput label="Shelf" error={errors.shelf?.message} {...register('shelf')} />
-                </div>
-              )}
-              {type === 'released' && (
-                <>
-                  <Select
-                    label="Released to"
-                    options={releaseOptions}
-                    error={errors.releasedTo?.message}
-                    {...register('releasedTo')}
-                  />
-                  <TextInput
-                    label="Who received it"
-                    hint="Needed for a customer, so the jar can be recalled."
-                    error={errors.releasedToWho?.message}
-                    {...register('releasedToWho')}
-                  />
-                </>
-              )}
-              {(type === 'hold' || type === 'discarded' || type === 'resume') && (
-                <TextInput label="Reason" error={errors.reason?.message} {...register('reason')} />
-              )}
-              <Field label="Note" optional error={errors.note?.message}>
-                {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('note')} />}
-              </Field>
-            </>
-          );
-        }}
-      </Form>
-    </Dialog>
+                <TextInput
+                  label="Who received it"
+                  hint="Needed for a customer, so the jar can be recalled."
+                  error={errors.releasedToWho?.message}
+                  {...register('releasedToWho')}
+                />
+              </>
+            )}
+            {(type === 'hold' || type === 'discarded' || type === 'resume') && (
+              <TextInput label="Reason" error={errors.reason?.message} {...register('reason')} />
+            )}
+            <Field label="Note" optional error={errors.note?.message}>
+              {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('note')} />}
+            </Field>
+          </>
+        );
+      }}
+    </FormDialog>
   );
 }

@@ -1,13 +1,24 @@
-import type { FormEvent } from 'react';
 import { jarStatuses } from '../../../../shared/enums';
-import { Button } from '../../../components/ui/button';
-import { Select } from '../../../components/ui/select';
+import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
+import { DateFilter, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
+import { clearedPatch, hasAnyFilter } from '../../../lib/list-params';
 import type { JarListFilters } from '../api/jars-queries';
 import { jarStatusLabels } from './jar-status-badge';
 
-type FilterKey =
-  'q' | 'status' | 'room' | 'shelf' | 'from' | 'to' | 'sessionId' | 'cookRunId' | 'cultureId' | 'grainId';
+const filterKeys = [
+  'q',
+  'status',
+  'room',
+  'shelf',
+  'from',
+  'to',
+  'sessionId',
+  'cookRunId',
+  'cultureId',
+  'grainId',
+] as const;
+type FilterKey = (typeof filterKeys)[number];
 
 interface JarsFiltersProps {
   filters: JarListFilters;
@@ -18,39 +29,18 @@ const statusOptions = [
   { value: '', label: 'Any status' },
   ...jarStatuses.map((s) => ({ value: s, label: jarStatusLabels[s] })),
 ];
-const cleared: Record<FilterKey, undefined> = {
-  q: undefined,
-  status: undefined,
-  room: undefined,
-  shelf: undefined,
-  from: undefined,
-  to: undefined,
-  sessionId: undefined,
-  cookRunId: undefined,
-  cultureId: undefined,
-  grainId: undefined,
-};
 
-export const isFiltered = (f: JarListFilters) => (Object.keys(cleared) as FilterKey[]).some((k) => f[k] !== undefined);
+export const isFiltered = (f: JarListFilters) => hasAnyFilter(f, filterKeys);
 
 export function JarsFilters({ filters, onChange }: JarsFiltersProps) {
-  const submit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const data = new FormData(event.currentTarget);
-    const text = (key: string) => {
-      const value = data.get(key);
-      return typeof value === 'string' && value.trim() ? value.trim() : undefined;
-    };
-    onChange({ q: text('q'), room: text('room'), shelf: text('shelf') });
-  };
-
   return (
-    <div className="no-print mb-4 grid gap-4 rounded-lg border border-line bg-surface-raised p-4 md:grid-cols-4">
-      <form
-        role="search"
-        onSubmit={submit}
+    <FilterBar className="md:grid-cols-4">
+      <SearchForm
+        names={['q', 'room', 'shelf']}
+        values={filters}
+        onSearch={onChange}
         className="grid gap-2 sm:grid-cols-[1fr_1fr_1fr_auto] sm:items-end md:col-span-4"
-        key={`${filters.q ?? ''}|${filters.room ?? ''}|${filters.shelf ?? ''}`}
+        wordOnPhones
       >
         <TextInput
           label="Label starts with"
@@ -61,35 +51,20 @@ export function JarsFilters({ filters, onChange }: JarsFiltersProps) {
         />
         <TextInput label="Room" name="room" defaultValue={filters.room ?? ''} />
         <TextInput label="Shelf" name="shelf" defaultValue={filters.shelf ?? ''} />
-        <Button type="submit" variant="secondary" icon="search">
-          Search
-        </Button>
-      </form>
-      <Select
+      </SearchForm>
+      <SelectFilter
         label="Status"
         options={statusOptions}
-        value={filters.status ?? ''}
-        onChange={(e) => onChange({ status: e.target.value || undefined })}
+        value={filters.status}
+        onChange={(status) => onChange({ status })}
       />
-      <TextInput
-        label="Inoculated from"
-        type="date"
-        value={filters.from ?? ''}
-        onChange={(e) => onChange({ from: e.target.value || undefined })}
+      <DateFilter label="Inoculated from" value={filters.from} onChange={(from) => onChange({ from })} />
+      <DateFilter label="Inoculated to" value={filters.to} onChange={(to) => onChange({ to })} />
+      <ClearFilters
+        shown={isFiltered(filters)}
+        onClear={() => onChange(clearedPatch(filterKeys))}
+        className="flex items-end"
       />
-      <TextInput
-        label="Inoculated to"
-        type="date"
-        value={filters.to ?? ''}
-        onChange={(e) => onChange({ to: e.target.value || undefined })}
-      />
-      {isFiltered(filters) && (
-        <div className="flex items-end">
-          <Button variant="ghost" onClick={() => onChange(cleared)}>
-            Clear filters
-          </Button>
-        </div>
-      )}
-    </div>
+    </FilterBar>
   );
 }

@@ -1,61 +1,47 @@
 import { useQuery } from '@tanstack/react-query';
-import { Link, useSearchParams } from 'react-router';
+import { Link } from 'react-router';
+import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { buttonClasses } from '../../../components/ui/button';
-import { EmptyState } from '../../../components/ui/empty-state';
-import { PageHeader } from '../../../components/ui/page-header';
+import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { paths } from '../../../config/paths';
-import { patchParams } from '../../../lib/list-params';
+import { useListParams } from '../../../lib/use-list-params';
 import { jarsExportUrl, jarsQueries, readJarFilters } from '../api/jars-queries';
+import { jarColumns } from './jars-columns';
 import { isFiltered, JarsFilters } from './jars-filters';
-import { JarsTable } from './jars-table';
 
 export function JarsScreen({ canWrite }: { canWrite: boolean }) {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const filters = readJarFilters(searchParams);
+  const { filters, update } = useListParams(readJarFilters);
   const list = useQuery(jarsQueries.list(filters));
-  const update = (patch: Record<string, string | number | undefined>) =>
-    setSearchParams(patchParams(searchParams, patch));
 
   return (
-    <>
-      <PageHeader
-        title="Jars"
-        description="Every jar and bag, where it sits and how it is doing. Open a label for its whole story."
-        actions={
-          <>
-            <a href={jarsExportUrl(filters)} download className={buttonClasses('secondary')}>
-              Export CSV
-            </a>
-            <Link to={paths.shelfWalk.to()} className={buttonClasses('secondary')}>
-              Shelf walk
+    <RegisterScreen
+      title="Jars"
+      description="Every jar and bag, where it sits and how it is doing. Open a label for its whole story."
+      exportHref={jarsExportUrl(filters)}
+      actions={
+        <>
+          <Link to={paths.shelfWalk.to()} className={buttonClasses('secondary')}>
+            Shelf walk
+          </Link>
+          {canWrite && (
+            <Link to={paths.newJars.to()} className={buttonClasses('primary')}>
+              Make jars
             </Link>
-            {canWrite && (
-              <Link to={paths.newJars.to()} className={buttonClasses('primary')}>
-                Make jars
-              </Link>
-            )}
-          </>
-        }
-      />
-      <JarsFilters filters={filters} onChange={update} />
-      <JarsTable
-        data={list.data}
-        page={filters.page}
-        pageSize={filters.pageSize}
-        sort={filters.sort}
-        onChange={update}
-        isLoading={list.isPending}
-        isFetching={list.isPlaceholderData}
-        error={list.error}
-        onRetry={() => void list.refetch()}
-        empty={
-          isFiltered(filters) ? (
-            <EmptyState icon="search" title="No jars match these filters." />
-          ) : (
-            <EmptyState title="No jars recorded yet." />
-          )
-        }
-      />
-    </>
+          )}
+        </>
+      }
+      filters={<JarsFilters filters={filters} onChange={update} />}
+      columns={jarColumns}
+      query={list}
+      state={filters}
+      onChange={update}
+      empty={
+        <RegisterEmpty
+          filtered={isFiltered(filters)}
+          none="No jars recorded yet."
+          noMatch="No jars match these filters."
+        />
+      }
+    />
   );
 }

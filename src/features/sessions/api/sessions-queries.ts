@@ -1,4 +1,4 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import { workspaceSchema, type Workspace } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
 import { procedureSchema, procedureVersionSchema } from '../../../../shared/schemas/procedures';
@@ -8,8 +8,9 @@ import {
   sessionSchema,
   sessionSortFields,
 } from '../../../../shared/schemas/sessions';
-import { api, apiUrl } from '../../../lib/api-client';
+import { api } from '../../../lib/api-client';
 import { readTableState, type TableState } from '../../../lib/list-params';
+import { exportUrl, pagedListQuery, pickParam } from '../../../lib/list-query';
 
 export interface SessionListFilters extends TableState {
   from: string | undefined;
@@ -20,10 +21,8 @@ export interface SessionListFilters extends TableState {
 }
 
 export function readSessionFilters(params: URLSearchParams): SessionListFilters {
-  const pick = <K extends 'from' | 'to' | 'operator' | 'q'>(key: K) => {
-    const parsed = sessionFiltersSchema.shape[key].safeParse(params.get(key) || undefined);
-    return parsed.success ? parsed.data : undefined;
-  };
+  const pick = <K extends 'from' | 'to' | 'operator' | 'q'>(key: K) =>
+    pickParam(sessionFiltersSchema.shape, params, key);
   const workspace = workspaceSchema.safeParse(params.get('workspace'));
   return {
     ...readTableState(params, sessionSortFields),
@@ -42,11 +41,7 @@ export const sessionsQueries = {
   all: ['sessions'] as const,
   lists: () => [...sessionsQueries.all, 'list'] as const,
   list: (filters: SessionListFilters) =>
-    queryOptions({
-      queryKey: [...sessionsQueries.lists(), filters] as const,
-      queryFn: ({ signal }) => api.get('/sessions', { query: { ...filters }, signal, schema: pageSchema }),
-      placeholderData: keepPreviousData,
-    }),
+    pagedListQuery([...sessionsQueries.lists(), filters] as const, '/sessions', pageSchema, filters),
   details: () => [...sessionsQueries.all, 'detail'] as const,
   detail: (id: number) =>
     queryOptions({
@@ -69,6 +64,4 @@ export const sessionsQueries = {
     }),
 };
 
-export function sessionsExportUrl({ page: _page, pageSize: _size, ...filters }: SessionListFilters): string {
-  return apiUrl('/sessions/export.csv', filters);
-}
+export const sessionsExportUrl = (filters: SessionListFilters) => exportUrl('/sessions/export.csv', filters);

@@ -1,13 +1,12 @@
 import { useQuery } from '@tanstack/react-query';
-import { useEffect, useId } from 'react';
+import { useEffect } from 'react';
 import { useNavigate } from 'react-router';
 import { workspaces } from '../../../../shared/enums';
 import { createSessionSchema, workspaceLabels, type CreateSessionInput } from '../../../../shared/schemas/sessions';
-import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { Dialog } from '../../../components/ui/dialog';
+import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
-import { applyServerErrors, Form, type FormMethods } from '../../../components/ui/form';
+import type { FormMethods } from '../../../components/ui/form';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
@@ -70,7 +69,6 @@ interface Props {
 }
 
 export function CreateSessionDialog({ open, onClose, me }: Props) {
-  const formId = useId();
   const createSession = useCreateSession();
   const procedures = useQuery({ ...sessionsQueries.procedureOptions(), enabled: open });
   const toast = useToast();
@@ -92,127 +90,108 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
   };
 
   return (
-    <Dialog
+    <FormDialog
       open={open}
       onClose={onClose}
-      busy={createSession.isPending}
+      pending={createSession.isPending}
       title="New inoculation session"
-      footer={
-        <>
-          <Button variant="secondary" onClick={onClose} disabled={createSession.isPending}>
-            Cancel
-          </Button>
-          <Button type="submit" form={formId} pending={createSession.isPending} icon="plus">
-            Record session
-          </Button>
-        </>
-      }
+      submitLabel="Record session"
+      submitIcon="plus"
+      intro={<FlameCaution />}
+      schema={createSessionSchema}
+      options={{ defaultValues: defaults }}
+      serverFields={fields}
+      onSubmit={async (values) => {
+        const session = await createSession.mutateAsync(values);
+        toast.success(`Session ${session.code} recorded.`);
+        onClose();
+        void navigate(paths.session.to(session.id));
+      }}
     >
-      <div className="mb-5">
-        <FlameCaution />
-      </div>
-      <Form
-        id={formId}
-        schema={createSessionSchema}
-        options={{ defaultValues: defaults }}
-        onSubmit={async (values, { setError }) => {
-          try {
-            const session = await createSession.mutateAsync(values);
-            toast.success(`Session ${session.code} recorded.`);
-            onClose();
-            void navigate(paths.session.to(session.id));
-          } catch (error) {
-            applyServerErrors(error, setError, fields);
-          }
-        }}
-      >
-        {(methods) => {
-          const {
-            register,
-            watch,
-            setValue,
-            formState: { errors },
-          } = methods;
-          const byUser = watch('operatorId') === me.id;
-          const versionId = watch('procedureVersionId');
-          return (
-            <>
-              <div className="grid gap-4 sm:grid-cols-2">
-                <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
-                <TextInput label="Date" type="date" error={errors.heldOn?.message} {...register('heldOn')} />
-                <TextInput
-                  label="Start time"
-                  type="datetime-local"
-                  optional
-                  error={errors.startedAt?.message}
-                  {...register('startedAt', { setValueAs: localDateTime })}
-                />
-                <Select
-                  label="Workspace"
-                  options={workspaceOptions}
-                  error={errors.workspace?.message}
-                  {...register('workspace')}
-                />
-              </div>
-              <fieldset className="flex flex-col gap-3">
-                <legend className="mb-2 font-medium">Operator</legend>
-                <label className="flex min-h-touch items-center gap-3">
-                  <input
-                    type="radio"
-                    className="size-5 accent-accent"
-                    checked={byUser}
-                    onChange={() => {
-                      setValue('operatorId', me.id);
-                      setValue('operatorName', undefined);
-                    }}
-                  />
-                  I inoculated ({me.displayName})
-                </label>
-                <label className="flex min-h-touch items-center gap-3">
-                  <input
-                    type="radio"
-                    className="size-5 accent-accent"
-                    checked={!byUser}
-                    onChange={() => setValue('operatorId', undefined)}
-                  />
-                  Someone else
-                </label>
-                {!byUser && (
-                  <TextInput
-                    label="Staff name"
-                    error={errors.operatorName?.message ?? errors.operatorId?.message}
-                    {...register('operatorName')}
-                  />
-                )}
-              </fieldset>
-              <Select
-                label="Procedure followed"
+      {(methods) => {
+        const {
+          register,
+          watch,
+          setValue,
+          formState: { errors },
+        } = methods;
+        const byUser = watch('operatorId') === me.id;
+        const versionId = watch('procedureVersionId');
+        return (
+          <>
+            <div className="grid gap-4 sm:grid-cols-2">
+              <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
+              <TextInput label="Date" type="date" error={errors.heldOn?.message} {...register('heldOn')} />
+              <TextInput
+                label="Start time"
+                type="datetime-local"
                 optional
-                options={procedureOptions}
-                hint={
-                  procedures.isError
-                    ? 'The procedure list could not be loaded.'
-                    : 'Its current version; the checklist follows its steps.'
-                }
-                error={errors.procedureVersionId?.message}
-                {...register('procedureVersionId', {
-                  setValueAs: optionalId,
-                  onChange: () => setValue('checklist', []),
-                })}
+                error={errors.startedAt?.message}
+                {...register('startedAt', { setValueAs: localDateTime })}
               />
-              {typeof versionId === 'number' && (
-                <ChecklistFields key={versionId} versionId={versionId} methods={methods} />
+              <Select
+                label="Workspace"
+                options={workspaceOptions}
+                error={errors.workspace?.message}
+                {...register('workspace')}
+              />
+            </div>
+            <fieldset className="flex flex-col gap-3">
+              <legend className="mb-2 font-medium">Operator</legend>
+              <label className="flex min-h-touch items-center gap-3">
+                <input
+                  type="radio"
+                  className="size-5 accent-accent"
+                  checked={byUser}
+                  onChange={() => {
+                    setValue('operatorId', me.id);
+                    setValue('operatorName', undefined);
+                  }}
+                />
+                I inoculated ({me.displayName})
+              </label>
+              <label className="flex min-h-touch items-center gap-3">
+                <input
+                  type="radio"
+                  className="size-5 accent-accent"
+                  checked={!byUser}
+                  onChange={() => setValue('operatorId', undefined)}
+                />
+                Someone else
+              </label>
+              {!byUser && (
+                <TextInput
+                  label="Staff name"
+                  error={errors.operatorName?.message ?? errors.operatorId?.message}
+                  {...register('operatorName')}
+                />
               )}
-              {errors.checklist?.message && (
-                <p className="text-sm font-medium text-danger">{errors.checklist.message}</p>
-              )}
-              <Field label="Notes" optional error={errors.notes?.message}>
-                {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-              </Field>
-            </>
-          );
-        }}
-      </Form>
-    </Dialog>
+            </fieldset>
+            <Select
+              label="Procedure followed"
+              optional
+              options={procedureOptions}
+              hint={
+                procedures.isError
+                  ? 'The procedure list could not be loaded.'
+                  : 'Its current version; the checklist follows its steps.'
+              }
+              error={errors.procedureVersionId?.message}
+              {...register('procedureVersionId', {
+                setValueAs: optionalId,
+                onChange: () => setValue('checklist', []),
+              })}
+            />
+            {typeof versionId === 'number' && (
+              <ChecklistFields key={versionId} versionId={versionId} methods={methods} />
+            )}
+            {errors.checklist?.message && <p className="text-sm font-medium text-danger">{errors.checklist.message}</p>}
+            <Field label="Notes" optional error={errors.notes?.message}>
+              {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
+            </Field>
+          </>
+        );
+      }}
+    </FormDialog>
   );
 }

@@ -1,9 +1,8 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import { roleSchema, type Role } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
 import { userSchema } from '../../../../shared/schemas/users';
-import { api } from '../../../lib/api-client';
 import { readTableState, type TableState } from '../../../lib/list-params';
+import { pagedListQuery } from '../../../lib/list-query';
 
 export const userSortFields = ['username', 'displayName', 'role', 'createdAt'] as const;
 
@@ -32,9 +31,5 @@ export const usersQueries = {
   all: ['users'] as const,
   lists: () => [...usersQueries.all, 'list'] as const,
   list: (filters: UserFilters) =>
-    queryOptions({
-      queryKey: [...usersQueries.lists(), filters] as const,
-      queryFn: ({ signal }) => api.get('/users', { query: { ...filters }, signal, schema: userPageSchema }),
-      placeholderData: keepPreviousData,
-    }),
+    pagedListQuery([...usersQueries.lists(), filters] as const, '/users', userPageSchema, filters),
 };

@@ -1,6 +1,5 @@
-import type { FormEvent } from 'react';
-import { Button } from '../../../components/ui/button';
-import { Select } from '../../../components/ui/select';
+import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
+import { SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
 import type { UserFilters } from '../api/users-queries';
 import { roleOptions } from './role-options';
@@ -10,24 +9,20 @@ interface UsersFiltersProps {
   onChange: (patch: Partial<Record<'role' | 'active' | 'q', string | undefined>>) => void;
 }
 
+const roleFilterOptions = [{ value: '', label: 'All roles' }, ...roleOptions];
 const statusOptions = [
   { value: '', label: 'Any status' },
   { value: 'true', label: 'Active' },
   { value: 'false', label: 'Deactivated' },
 ];
 
-export function UsersFilters({ filters, onChange }: UsersFiltersProps) {
-  const submitSearch = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const value = new FormData(event.currentTarget).get('q');
-    onChange({ q: typeof value === 'string' ? value.trim() || undefined : undefined });
-  };
-  const filtered = Boolean(filters.role || filters.active || filters.q);
+export const usersCleared = { role: undefined, active: undefined, q: undefined };
+export const isUserFiltered = (filters: UserFilters) => Boolean(filters.role || filters.active || filters.q);
 
+export function UsersFilters({ filters, onChange }: UsersFiltersProps) {
   return (
-    <div className="no-print mb-4 grid gap-4 rounded-lg border border-line bg-surface-raised p-4 md:grid-cols-[2fr_1fr_1fr]">
-      {/* Keyed on the URL value so "Clear filters" and back/forward refill the box. */}
-      <form role="search" onSubmit={submitSearch} className="flex items-end gap-2" key={filters.q ?? ''}>
+    <FilterBar className="md:grid-cols-[2fr_1fr_1fr]">
+      <SearchForm names={['q']} values={filters} onSearch={onChange}>
         <TextInput
           label="Search"
           name="q"
@@ -37,29 +32,20 @@ export function UsersFilters({ filters, onChange }: UsersFiltersProps) {
           maxLength={64}
           className="flex-1"
         />
-        <Button type="submit" variant="secondary" icon="search">
-          <span className="sr-only sm:not-sr-only">Search</span>
-        </Button>
-      </form>
-      <Select
+      </SearchForm>
+      <SelectFilter
         label="Role"
-        value={filters.role ?? ''}
-        options={[{ value: '', label: 'All roles' }, ...roleOptions]}
-        onChange={(event) => onChange({ role: event.target.value || undefined })}
+        value={filters.role}
+        options={roleFilterOptions}
+        onChange={(role) => onChange({ role })}
       />
-      <Select
+      <SelectFilter
         label="Status"
-        value={filters.active ?? ''}
+        value={filters.active}
         options={statusOptions}
-        onChange={(event) => onChange({ active: event.target.value || undefined })}
+        onChange={(active) => onChange({ active })}
       />
-      {filtered && (
-        <div className="md:col-span-3">
-          <Button variant="ghost" onClick={() => onChange({ role: undefined, active: undefined, q: undefined })}>
-            Clear filters
-          </Button>
-        </div>
-      )}
-    </div>
+      <ClearFilters shown={isUserFiltered(filters)} onClear={() => onChange(usersCleared)} className="md:col-span-3" />
+    </FilterBar>
   );
 }

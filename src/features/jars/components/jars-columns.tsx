@@ -1,36 +1,16 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import type { ReactNode } from 'react';
-import { Link } from 'react-router';
-import type { Page } from '../../../../shared/schemas/common';
 import type { JarRowDto } from '../../../../shared/schemas/jars';
-import { DataTable } from '../../../components/ui/table/data-table';
+import { CodeLink, dash, DateCell } from '../../../components/ui/table/cells';
 import { paths } from '../../../config/paths';
-import { formatDate } from '../../../lib/format';
-import type { TableState } from '../../../lib/list-params';
 import { JarStatusBadge } from './jar-status-badge';
 
-interface JarsTableProps extends TableState {
-  data: Page<JarRowDto> | undefined;
-  isLoading: boolean;
-  isFetching: boolean;
-  error: unknown;
-  onRetry: () => void;
-  onChange: (patch: Partial<TableState>) => void;
-  empty: ReactNode;
-}
-
 const column = createColumnHelper<JarRowDto>();
-const dash = (v: string | number | null) => (v === null || v === '' ? '—' : v);
 
-const columns = [
+export const jarColumns = [
   column.accessor('label', {
     header: 'Label',
     enableSorting: true,
-    cell: ({ getValue }) => (
-      <Link to={paths.jarPage.to(getValue())} className="font-medium text-accent underline-offset-2 hover:underline">
-        {getValue()}
-      </Link>
-    ),
+    cell: ({ getValue }) => <CodeLink to={paths.jarPage.to(getValue())}>{getValue()}</CodeLink>,
   }),
   column.accessor('status', {
     header: 'Status',
@@ -41,7 +21,7 @@ const columns = [
   column.accessor('inoculatedOn', {
     header: 'Inoculated',
     enableSorting: true,
-    cell: ({ getValue }) => <span className="whitespace-nowrap">{formatDate(getValue())}</span>,
+    cell: ({ getValue }) => <DateCell value={getValue()} />,
   }),
   column.display({
     id: 'inoculum',
@@ -58,16 +38,3 @@ const columns = [
       j.room ? `${j.room} / ${j.shelf ?? '—'}${j.shelfPosition ? ` #${j.shelfPosition}` : ''}` : '—',
   }),
 ];
-
-export function JarsTable({ data, ...table }: JarsTableProps) {
-  return (
-    <DataTable
-      caption="Jars"
-      columns={columns}
-      data={data?.items}
-      total={data?.total ?? 0}
-      getRowId={(j) => String(j.id)}
-      {...table}
-    />
-  );
-}

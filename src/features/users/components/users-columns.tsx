@@ -1,34 +1,24 @@
 import { createColumnHelper } from '@tanstack/react-table';
-import { useMemo, type ReactNode } from 'react';
-import type { Page } from '../../../../shared/schemas/common';
+import { useMemo } from 'react';
 import type { UserDto } from '../../../../shared/schemas/users';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
-import { DataTable } from '../../../components/ui/table/data-table';
+import { DateCell } from '../../../components/ui/table/cells';
 import { roleLabels } from '../../../config/roles';
-import { formatDate } from '../../../lib/format';
-import type { TableState } from '../../../lib/list-params';
 
 export interface UserActions {
   onChangeRole: (user: UserDto) => void;
   onToggleActive: (user: UserDto) => void;
 }
 
-interface UsersTableProps extends TableState, UserActions {
-  data: Page<UserDto> | undefined;
-  currentUserId: number;
-  isLoading: boolean;
-  isFetching: boolean;
-  error: unknown;
-  onRetry: () => void;
-  onChange: (patch: Partial<TableState>) => void;
-  empty: ReactNode;
-}
-
 const column = createColumnHelper<UserDto>();
 
-export function UsersTable({ data, currentUserId, onChangeRole, onToggleActive, ...table }: UsersTableProps) {
-  const columns = useMemo(
+export function useUserColumns({
+  currentUserId,
+  onChangeRole,
+  onToggleActive,
+}: UserActions & { currentUserId: number }) {
+  return useMemo(
     () => [
       column.accessor('displayName', {
         header: 'Name',
@@ -50,7 +40,9 @@ export function UsersTable({ data, currentUserId, onChangeRole, onToggleActive, 
       column.accessor('role', {
         header: 'Role',
         enableSorting: true,
-        cell: ({ getValue }) => <Badge tone={getValue() === 'admin' ? 'warn' : 'neutral'}>{roleLabels[getValue()]}</Badge>,
+        cell: ({ getValue }) => (
+          <Badge tone={getValue() === 'admin' ? 'warn' : 'neutral'}>{roleLabels[getValue()]}</Badge>
+        ),
       }),
       column.accessor('active', {
         header: 'Status',
@@ -60,7 +52,7 @@ export function UsersTable({ data, currentUserId, onChangeRole, onToggleActive, 
       column.accessor('createdAt', {
         header: 'Created',
         enableSorting: true,
-        cell: ({ getValue }) => <span className="whitespace-nowrap">{formatDate(getValue())}</span>,
+        cell: ({ getValue }) => <DateCell value={getValue()} />,
       }),
       column.display({
         id: 'actions',
@@ -87,16 +79,5 @@ export function UsersTable({ data, currentUserId, onChangeRole, onToggleActive, 
       }),
     ],
     [currentUserId, onChangeRole, onToggleActive],
-  );
-
-  return (
-    <DataTable
-      caption="Users"
-      columns={columns}
-      data={data?.items}
-      total={data?.total ?? 0}
-      getRowId={(user) => String(user.id)}
-      {...table}
-    />
   );
 }
