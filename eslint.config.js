@@ -17,10 +17,15 @@ export default tseslint.config(
       globals: { ...globals.node, ...globals.browser },
     },
     plugins: { 'import-x': importX },
-    settings: { 'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })] },
+    settings: {
+      'import-x/resolver-next': [createNodeResolver({ extensions: ['.ts', '.tsx', '.js', '.mjs', '.json'] })],
+    },
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
-      '@typescript-eslint/no-misused-promises': ['error', { checksVoidReturn: { arguments: false, attributes: false } }],
+      '@typescript-eslint/no-misused-promises': [
+        'error',
+        { checksVoidReturn: { arguments: false, attributes: false } },
+      ],
       '@typescript-eslint/no-unsafe-assignment': 'off',
       '@typescript-eslint/no-unsafe-member-access': 'off',
       '@typescript-eslint/no-unsafe-argument': 'off',
@@ -34,7 +39,11 @@ export default tseslint.config(
         'error',
         {
           zones: [
-            { target: './shared', from: ['./src', './server', './seed', './tests'], message: 'shared/ imports nothing of ours.' },
+            {
+              target: './shared',
+              from: ['./src', './server', './seed', './tests'],
+              message: 'shared/ imports nothing of ours.',
+            },
             { target: './src', from: ['./server', './seed'], message: 'The client reaches the server only over HTTP.' },
             { target: './server', from: ['./src', './seed', './tests'] },
           ],

@@ -15,7 +15,11 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: 'unit', include: ['tests/shared/**/*.test.ts', 'tests/client/**/*.test.{ts,tsx}'], environment: 'node' },
+        test: {
+          name: 'unit',
+          include: ['tests/shared/**/*.test.ts', 'tests/client/**/*.test.{ts,tsx}'],
+          environment: 'node',
+        },
       },
       {
         extends: true,

@@ -3,4 +3,6 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 export PATH="/usr/sbin:$PATH"
+bash scripts/ensure-deps.sh
+bash scripts/ensure-mariadb.sh
 exec node_modules/.bin/tsx scripts/bench-analysis.ts "$@"

@@ -96,7 +96,12 @@ export async function startMariaDb(opts: MariaDbOptions): Promise<MariaDbHandle>
   await waitForServer(child, opts.port);
 
   const rootQuery = async (sql: string) => {
-    const conn = await mysql.createConnection({ host: '127.0.0.1', port: opts.port, user: 'root', multipleStatements: true });
+    const conn = await mysql.createConnection({
+      host: '127.0.0.1',
+      port: opts.port,
+      user: 'root',
+      multipleStatements: true,
+    });
     try {
       await conn.query(sql);
     } finally {
@@ -108,7 +113,10 @@ export async function startMariaDb(opts: MariaDbOptions): Promise<MariaDbHandle>
   await rootQuery(
     `CREATE DATABASE IF NOT EXISTS \`${opts.database}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;` +
       ['127.0.0.1', 'localhost']
-        .map((h) => `CREATE USER IF NOT EXISTS ${user}@'${h}' IDENTIFIED BY ${pass}; GRANT ALL ON \`${opts.database}\`.* TO ${user}@'${h}';`)
+        .map(
+          (h) =>
+            `CREATE USER IF NOT EXISTS ${user}@'${h}' IDENTIFIED BY ${pass}; GRANT ALL ON \`${opts.database}\`.* TO ${user}@'${h}';`,
+        )
         .join(''),
   );
   opts.log?.(`MariaDB ${dataDir} on 127.0.0.1:${opts.port}`);

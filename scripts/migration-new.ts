@@ -14,7 +14,9 @@ const cli = ['tsx', './node_modules/typeorm/cli.js'];
 const db = await startLocalDb();
 try {
   execFileSync('npx', [...cli, 'migration:run', '-d', 'server/db/data-source.ts'], { stdio: 'inherit' });
-  execFileSync('npx', [...cli, 'migration:generate', `${dir}/${name}`, '-d', 'server/db/data-source.ts'], { stdio: 'inherit' });
+  execFileSync('npx', [...cli, 'migration:generate', `${dir}/${name}`, '-d', 'server/db/data-source.ts'], {
+    stdio: 'inherit',
+  });
 } finally {
   await db.stop();
 }

@@ -41,6 +41,8 @@ export async function changePassword(actor: SessionUser, input: ChangePasswordIn
   const passwordHash = await hashPassword(input.newPassword);
   await dataSource.transaction(async (m) => {
     await m.update(User, { id: user.id }, { passwordHash });
-    await recordAudit(m, actor, [{ action: 'change-password', recordType: 'user', recordId: user.id, field: 'password' }]);
+    await recordAudit(m, actor, [
+      { action: 'change-password', recordType: 'user', recordId: user.id, field: 'password' },
+    ]);
   });
 }

@@ -23,10 +23,19 @@ export async function isLoginBlocked(username: string, address: string): Promise
 }
 
 export async function recordLoginFailure(username: string, address: string): Promise<void> {
-  await dataSource.manager.insert(LoginFailure, { username: username.slice(0, 64), address: address.slice(0, 64), failedAt: new Date() });
+  await dataSource.manager.insert(LoginFailure, {
+    username: username.slice(0, 64),
+    address: address.slice(0, 64),
+    failedAt: new Date(),
+  });
 }
 
 /** Old rows carry no weight in the count; prune them so the table stays small. */
 export async function pruneLoginFailures(): Promise<void> {
-  await dataSource.manager.createQueryBuilder().delete().from(LoginFailure).where('failedAt < :before', { before: new Date(Date.now() - 24 * 3600_000) }).execute();
+  await dataSource.manager
+    .createQueryBuilder()
+    .delete()
+    .from(LoginFailure)
+    .where('failedAt < :before', { before: new Date(Date.now() - 24 * 3600_000) })
+    .execute();
 }

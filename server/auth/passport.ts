@@ -11,7 +11,7 @@ passport.use(
   }),
 );
 
-passport.serializeUser<number>((user, done) => done(null, (user).id));
+passport.serializeUser<number>((user, done) => done(null, user.id));
 
 // A deactivated account loses its sessions at the next request.
 passport.deserializeUser<number>((id, done) => {

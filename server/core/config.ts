@@ -21,7 +21,10 @@ const configSchema = z.object({
     }, 'must be an IANA time zone such as Europe/London'),
   DB_HOST: z.string().default('127.0.0.1'),
   DB_PORT: z.coerce.number().int().min(1).max(65535).default(3307),
-  DB_NAME: z.string().regex(/^[A-Za-z0-9_]+$/).default('asepta'),
+  DB_NAME: z
+    .string()
+    .regex(/^[A-Za-z0-9_]+$/)
+    .default('asepta'),
   DB_USER: z.string().default('asepta'),
   DB_PASSWORD: z.string().default('asepta-local'),
   DB_DATA_DIR: z.string().default('.data/mariadb'),

@@ -11,13 +11,16 @@ function send(res: Parameters<ErrorRequestHandler>[2], status: number, error: Er
   res.status(status).json({ error } satisfies ErrorBody);
 }
 
-function isDuplicateKey(err: unknown): err is QueryFailedError & { driverError: { code: string; sqlMessage?: string } } {
+function isDuplicateKey(
+  err: unknown,
+): err is QueryFailedError & { driverError: { code: string; sqlMessage?: string } } {
   return err instanceof QueryFailedError && (err.driverError as { code?: string }).code === 'ER_DUP_ENTRY';
 }
 
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (res.headersSent) return;
-  if (err instanceof AppError) return send(res, err.status, { code: err.code, message: err.message, issues: err.issues });
+  if (err instanceof AppError)
+    return send(res, err.status, { code: err.code, message: err.message, issues: err.issues });
   if (err instanceof ZodError) {
     const issues = err.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
     const first = issues[0];
@@ -29,14 +32,20 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   }
   if (err instanceof multer.MulterError) {
     const status = err.code === 'LIMIT_FILE_SIZE' || err.code === 'LIMIT_FILE_COUNT' ? 413 : 400;
-    return send(res, status, { code: 'upload-rejected', message: err.message, issues: [{ path: err.field ?? 'file', message: err.message }] });
+    return send(res, status, {
+      code: 'upload-rejected',
+      message: err.message,
+      issues: [{ path: err.field ?? 'file', message: err.message }],
+    });
   }
-  const status = (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
+  const status =
+    (err as { status?: number; statusCode?: number }).status ?? (err as { statusCode?: number }).statusCode;
   if (typeof status === 'number' && status >= 400 && status < 500) {
     // body-parser and friends: malformed JSON, body too large
     const { type, code } = err as { type?: string; code?: unknown };
     const message = type === 'entity.too.large' ? 'The request body is too large.' : (err as Error).message;
-    const errorCode = typeof code === 'string' ? code : type === 'entity.parse.failed' ? 'malformed-body' : 'bad-request';
+    const errorCode =
+      typeof code === 'string' ? code : type === 'entity.parse.failed' ? 'malformed-body' : 'bad-request';
     return send(res, status, { code: errorCode, message });
   }
   const requestId = randomUUID();

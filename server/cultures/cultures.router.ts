@@ -8,7 +8,15 @@ import {
 } from '../../shared/schemas/cultures';
 import { requireRole } from '../core/auth-guards';
 import { createRoute, csvExportRoute, detailRoute, listRoute, writeRoute } from '../core/record-routes';
-import { addAgarTest, changeCultureState, createCulture, exportCultures, getCulture, listCultures, updateCulture } from './cultures.service';
+import {
+  addAgarTest,
+  changeCultureState,
+  createCulture,
+  exportCultures,
+  getCulture,
+  listCultures,
+  updateCulture,
+} from './cultures.service';
 import { cultureCsv } from './cultures.mapper';
 
 export const culturesRouter = Router();

@@ -6,4 +6,7 @@ import { updateAction } from './corrective-actions.service';
 
 export const correctiveActionsRouter = Router();
 
-correctiveActionsRouter.patch('/:id', ...writeRoute(updateActionSchema, updateAction, { guard: requireRole('supervisor') }));
+correctiveActionsRouter.patch(
+  '/:id',
+  ...writeRoute(updateActionSchema, updateAction, { guard: requireRole('supervisor') }),
+);

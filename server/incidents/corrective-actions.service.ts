@@ -12,11 +12,18 @@ import { toActionDto } from './incidents.mapper';
 
 async function ownerName(m: EntityManager, ownerId: number): Promise<string> {
   const owner = await m.findOneBy(User, { id: ownerId, active: true });
-  if (!owner) throw unprocessable(`ownerId: no active user has id ${ownerId}.`, [{ path: 'ownerId', message: 'is not an active user' }]);
+  if (!owner)
+    throw unprocessable(`ownerId: no active user has id ${ownerId}.`, [
+      { path: 'ownerId', message: 'is not an active user' },
+    ]);
   return owner.displayName;
 }
 
-export async function createAction(user: SessionUser, incidentId: number, input: CreateActionInput): Promise<CorrectiveActionDto> {
+export async function createAction(
+  user: SessionUser,
+  incidentId: number,
+  input: CreateActionInput,
+): Promise<CorrectiveActionDto> {
   return dataSource.transaction(async (m) => {
     await loadForChange(m, incidentId);
     const name = input.ownerId !== undefined ? await ownerName(m, input.ownerId) : (input.ownerName ?? '');
@@ -33,7 +40,12 @@ export async function createAction(user: SessionUser, incidentId: number, input:
     );
     const { what, ownerName: owner, dueOn, factor, level } = action;
     await recordAudit(m, user, [
-      { action: 'create', recordType: 'corrective-action', recordId: action.id, newValue: { incidentId, what, owner, dueOn, factor, level } },
+      {
+        action: 'create',
+        recordType: 'corrective-action',
+        recordId: action.id,
+        newValue: { incidentId, what, owner, dueOn, factor, level },
+      },
     ]);
     return toActionDto(action, todayLocal());
   });
@@ -50,25 +62,40 @@ function checkMerged(a: CorrectiveAction, today: string): void {
     throw unprocessable('doneOn: cannot be in the future.', [{ path: 'doneOn', message: 'cannot be in the future' }]);
   }
   if ((a.factor === null) !== (a.level === null)) {
-    throw unprocessable('level: give both the factor and its level, or neither.', [{ path: 'level', message: 'goes together with factor' }]);
+    throw unprocessable('level: give both the factor and its level, or neither.', [
+      { path: 'level', message: 'goes together with factor' },
+    ]);
   }
 }
 
-export async function updateAction(user: SessionUser, id: number, input: UpdateActionInput): Promise<CorrectiveActionDto> {
+export async function updateAction(
+  user: SessionUser,
+  id: number,
+  input: UpdateActionInput,
+): Promise<CorrectiveActionDto> {
   return dataSource.transaction(async (m) => {
-    const action = await m.createQueryBuilder(CorrectiveAction, 'a').setLock('pessimistic_write').where('a.id = :id', { id }).getOne();
+    const action = await m
+      .createQueryBuilder(CorrectiveAction, 'a')
+      .setLock('pessimistic_write')
+      .where('a.id = :id', { id })
+      .getOne();
     if (!action) throw notFound('Corrective action');
     try {
       await loadForChange(m, action.incidentId);
     } catch (err) {
-      if (err instanceof AppError && err.code === 'voided') throw new AppError(409, 'voided', `The incident of action ${id} is voided; its actions can no longer change.`);
+      if (err instanceof AppError && err.code === 'voided')
+        throw new AppError(409, 'voided', `The incident of action ${id} is voided; its actions can no longer change.`);
       throw err;
     }
     const { reason, ownerId, ownerName: typedOwner, ...rest } = input;
     const changes: Partial<CorrectiveAction> = { ...rest };
     if (ownerId !== undefined) Object.assign(changes, { ownerId, ownerName: await ownerName(m, ownerId) });
     else if (typedOwner !== undefined) Object.assign(changes, { ownerId: null, ownerName: typedOwner });
-    const entries = diffEntries({ action: 'update', recordType: 'corrective-action', recordId: id, reason: reason ?? null }, action, changes);
+    const entries = diffEntries(
+      { action: 'update', recordType: 'corrective-action', recordId: id, reason: reason ?? null },
+      action,
+      changes,
+    );
     const today = todayLocal();
     if (entries.length === 0) return toActionDto(action, today);
     Object.assign(action, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));

@@ -33,13 +33,21 @@ async function ancestryOf(rows: JarRow[]): Promise<Map<number, IncidentJarDto['a
   const byId = new Map<number, { label: string; parentJarId: number | null; cultureId: number | null }>();
   let pending = [...new Set(rows.map((r) => r.parentJarId).filter((id): id is number => id !== null))];
   for (let depth = 0; pending.length && depth < maxAncestry; depth += 1) {
-    const parents = await dataSource.manager.find(Jar, { where: { id: In(pending) }, select: { id: true, label: true, parentJarId: true, cultureId: true } });
+    const parents = await dataSource.manager.find(Jar, {
+      where: { id: In(pending) },
+      select: { id: true, label: true, parentJarId: true, cultureId: true },
+    });
     for (const p of parents) byId.set(p.id, p);
     pending = parents.map((p) => p.parentJarId).filter((id): id is number => id !== null && !byId.has(id));
   }
   const cultureIds = [...new Set([...byId.values()].map((j) => j.cultureId).filter((id): id is number => id !== null))];
   const cultures: { id: number; code: string }[] = cultureIds.length
-    ? await dataSource.manager.createQueryBuilder().select(['c.id AS id', 'c.code AS code']).from('cultures', 'c').where('c.id IN (:...ids)', { ids: cultureIds }).getRawMany()
+    ? await dataSource.manager
+        .createQueryBuilder()
+        .select(['c.id AS id', 'c.code AS code'])
+        .from('cultures', 'c')
+        .where('c.id IN (:...ids)', { ids: cultureIds })
+        .getRawMany()
     : [];
   const cultureCode = new Map(cultures.map((c) => [Number(c.id), c.code]));
   const out = new Map<number, IncidentJarDto['ancestry']>();
@@ -50,7 +58,12 @@ async function ancestryOf(rows: JarRow[]): Promise<Map<number, IncidentJarDto['a
       const parent = byId.get(next);
       if (!parent) break;
       chain.push({ kind: 'jar', id: next, code: parent.label });
-      if (parent.cultureId !== null) chain.push({ kind: 'culture', id: parent.cultureId, code: cultureCode.get(parent.cultureId) ?? `#${parent.cultureId}` });
+      if (parent.cultureId !== null)
+        chain.push({
+          kind: 'culture',
+          id: parent.cultureId,
+          code: cultureCode.get(parent.cultureId) ?? `#${parent.cultureId}`,
+        });
       next = parent.parentJarId;
     }
     out.set(r.id, chain);
@@ -63,9 +76,21 @@ export const incidentDetailRepository = {
     const rows: JarRow[] = await dataSource.manager
       .createQueryBuilder()
       .select([
-        'j.id AS id', 'j.label AS label', 'j.status AS status', 'g.name AS grain', 'j.inoculatedOn AS inoculatedOn',
-        'j.room AS room', 'j.shelf AS shelf', 'j.cookRunId AS cookRunId', 'cr.code AS cookRunCode', 'j.sessionId AS sessionId',
-        's.code AS sessionCode', 's.operatorName AS operatorName', 'j.cultureId AS cultureId', 'c.code AS cultureCode', 'j.parentJarId AS parentJarId',
+        'j.id AS id',
+        'j.label AS label',
+        'j.status AS status',
+        'g.name AS grain',
+        'j.inoculatedOn AS inoculatedOn',
+        'j.room AS room',
+        'j.shelf AS shelf',
+        'j.cookRunId AS cookRunId',
+        'cr.code AS cookRunCode',
+        'j.sessionId AS sessionId',
+        's.code AS sessionCode',
+        's.operatorName AS operatorName',
+        'j.cultureId AS cultureId',
+        'c.code AS cultureCode',
+        'j.parentJarId AS parentJarId',
       ])
       .from(IncidentJar, 'ij')
       .innerJoin(Jar, 'j', 'j.id = ij.jarId')
@@ -85,11 +110,15 @@ export const incidentDetailRepository = {
         label: r.label,
         status: r.status,
         grain: r.grain,
-        inoculatedOn: r.inoculatedOn instanceof Date ? r.inoculatedOn.toISOString().slice(0, 10) : String(r.inoculatedOn),
+        inoculatedOn:
+          r.inoculatedOn instanceof Date ? r.inoculatedOn.toISOString().slice(0, 10) : String(r.inoculatedOn),
         room: r.room,
         shelf: r.shelf,
         cookRun: r.cookRunId !== null ? { id: Number(r.cookRunId), code: r.cookRunCode ?? '' } : null,
-        session: r.sessionId !== null ? { id: Number(r.sessionId), code: r.sessionCode ?? '', operatorName: r.operatorName } : null,
+        session:
+          r.sessionId !== null
+            ? { id: Number(r.sessionId), code: r.sessionCode ?? '', operatorName: r.operatorName }
+            : null,
         culture: r.cultureId !== null ? { id: Number(r.cultureId), code: r.cultureCode ?? '' } : null,
         parentJar: parent?.kind === 'jar' ? { id: parent.id, label: parent.code } : null,
         ancestry: chain,
@@ -98,7 +127,10 @@ export const incidentDetailRepository = {
   },
 
   async photos(incidentId: number) {
-    const links = await dataSource.manager.find(IncidentPhoto, { where: { incidentId }, order: { addedAt: 'ASC', photoId: 'ASC' } });
+    const links = await dataSource.manager.find(IncidentPhoto, {
+      where: { incidentId },
+      order: { addedAt: 'ASC', photoId: 'ASC' },
+    });
     const photos = links.length ? await dataSource.manager.findBy(Photo, { id: In(links.map((l) => l.photoId)) }) : [];
     const byId = new Map(photos.map((p) => [p.id, p]));
     return links.flatMap((l) => {
@@ -111,8 +143,15 @@ export const incidentDetailRepository = {
     const rows: Record<string, unknown>[] = await dataSource.manager
       .createQueryBuilder()
       .select([
-        'l.id AS id', 'l.stepId AS stepId', 'ps.position AS position', 'ps.text AS stepText', 'pv.title AS procedureTitle',
-        'pv.version AS procedureVersion', 'l.linkedByName AS linkedByName', 'l.note AS note', 'l.createdAt AS createdAt',
+        'l.id AS id',
+        'l.stepId AS stepId',
+        'ps.position AS position',
+        'ps.text AS stepText',
+        'pv.title AS procedureTitle',
+        'pv.version AS procedureVersion',
+        'l.linkedByName AS linkedByName',
+        'l.note AS note',
+        'l.createdAt AS createdAt',
       ])
       .from('incident_step_links', 'l')
       .leftJoin('procedure_steps', 'ps', 'ps.id = l.stepId')

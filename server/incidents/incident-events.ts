@@ -36,7 +36,9 @@ function hookList<E>() {
       for (const listener of listeners) {
         void Promise.resolve()
           .then(() => listener(event))
-          .catch((err: unknown) => logger.error({ err, incidentId: (event as { id?: number }).id }, 'incident listener failed'));
+          .catch((err: unknown) =>
+            logger.error({ err, incidentId: (event as { id?: number }).id }, 'incident listener failed'),
+          );
       }
     },
   };

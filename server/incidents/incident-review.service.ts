@@ -19,12 +19,18 @@ function checkClosed(incident: Incident, input: ReviewIncidentInput): void {
     ]);
   }
   if (!input.reason) {
-    throw unprocessable('reason: say why the closed incident is reopened.', [{ path: 'reason', message: 'give a reason for reopening' }]);
+    throw unprocessable('reason: say why the closed incident is reopened.', [
+      { path: 'reason', message: 'give a reason for reopening' },
+    ]);
   }
 }
 
 /** Supervisor review: status, verdict, six-M cause category and notes, each change audited with the reason. */
-export async function reviewIncident(user: SessionUser, id: number, input: ReviewIncidentInput): Promise<IncidentDetailDto> {
+export async function reviewIncident(
+  user: SessionUser,
+  id: number,
+  input: ReviewIncidentInput,
+): Promise<IncidentDetailDto> {
   let event: IncidentReviewedEvent | undefined;
   await dataSource.transaction(async (m) => {
     const incident = await loadForChange(m, id, input.version);
@@ -43,19 +49,40 @@ export async function reviewIncident(user: SessionUser, id: number, input: Revie
       rootCauseNotes: input.rootCauseNotes === '' ? null : input.rootCauseNotes,
     };
     const wasRuledOut = incident.verdict === 'ruled-out';
-    const entries = await patchWithAudit(m, user, incident, changes, { action: 'review', recordType: 'incident', recordId: id, reason: input.reason ?? null });
+    const entries = await patchWithAudit(m, user, incident, changes, {
+      action: 'review',
+      recordType: 'incident',
+      recordId: id,
+      reason: input.reason ?? null,
+    });
     if (entries.length === 0) return;
     if (wasRuledOut !== (incident.verdict === 'ruled-out')) {
-      await syncJarStatuses(m, user, await incidentsRepository.jarIdsOf(m, id), `incident ${id} verdict ${incident.verdict}`);
+      await syncJarStatuses(
+        m,
+        user,
+        await incidentsRepository.jarIdsOf(m, id),
+        `incident ${id} verdict ${incident.verdict}`,
+      );
     }
-    event = { id, by: user.displayName, status: incident.status, verdict: incident.verdict, voided: false, changedFields: entries.map((e) => e.field ?? '') };
+    event = {
+      id,
+      by: user.displayName,
+      status: incident.status,
+      verdict: incident.verdict,
+      voided: false,
+      changedFields: entries.map((e) => e.field ?? ''),
+    };
   });
   if (event) emitIncidentReviewed(event);
   return getIncident(id);
 }
 
 /** Incidents are never deleted; a void keeps the record and its history, and frees its jars. */
-export async function voidIncident(user: SessionUser, id: number, input: VoidIncidentInput): Promise<IncidentDetailDto> {
+export async function voidIncident(
+  user: SessionUser,
+  id: number,
+  input: VoidIncidentInput,
+): Promise<IncidentDetailDto> {
   let event: IncidentReviewedEvent | undefined;
   await dataSource.transaction(async (m) => {
     const incident = await loadForChange(m, id, input.version);
@@ -63,10 +90,25 @@ export async function voidIncident(user: SessionUser, id: number, input: VoidInc
     incident.voidReason = input.reason;
     await m.save(incident);
     await recordAudit(m, user, [
-      { action: 'void', recordType: 'incident', recordId: id, field: 'voided', oldValue: false, newValue: true, reason: input.reason },
+      {
+        action: 'void',
+        recordType: 'incident',
+        recordId: id,
+        field: 'voided',
+        oldValue: false,
+        newValue: true,
+        reason: input.reason,
+      },
     ]);
     await syncJarStatuses(m, user, await incidentsRepository.jarIdsOf(m, id), `incident ${id} voided`);
-    event = { id, by: user.displayName, status: incident.status, verdict: incident.verdict, voided: true, changedFields: ['voided'] };
+    event = {
+      id,
+      by: user.displayName,
+      status: incident.status,
+      verdict: incident.verdict,
+      voided: true,
+      changedFields: ['voided'],
+    };
   });
   if (event) emitIncidentReviewed(event);
   return getIncident(id);

@@ -7,9 +7,31 @@ import { incidentsRepository } from './incidents.repository';
 export const exportCap = 20_000;
 
 const header = [
-  'id', 'found_at_utc', 'found_on', 'found_by', 'stage', 'contaminant', 'contaminant_name', 'severity', 'status', 'verdict',
-  'voided', 'void_reason', 'jars', 'jar_count', 'cook_runs', 'cultures', 'sessions', 'sign_colour', 'sign_smell', 'sign_texture',
-  'sealed', 'sterilised_before_disposal', 'cause_category', 'root_cause_notes', 'notes',
+  'id',
+  'found_at_utc',
+  'found_on',
+  'found_by',
+  'stage',
+  'contaminant',
+  'contaminant_name',
+  'severity',
+  'status',
+  'verdict',
+  'voided',
+  'void_reason',
+  'jars',
+  'jar_count',
+  'cook_runs',
+  'cultures',
+  'sessions',
+  'sign_colour',
+  'sign_smell',
+  'sign_texture',
+  'sealed',
+  'sterilised_before_disposal',
+  'cause_category',
+  'root_cause_notes',
+  'notes',
 ];
 
 async function exportRows(q: IncidentListQuery): Promise<unknown[][]> {
@@ -19,10 +41,31 @@ async function exportRows(q: IncidentListQuery): Promise<unknown[][]> {
   const rows = incidents.map((i) => {
     const c = codes.get(i.id);
     return [
-      i.id, i.foundAt, i.foundOn, i.foundByName, i.stage, i.contaminant, contaminantNames[i.contaminant], i.severity, i.status, i.verdict,
-      yesNo(i.voided), i.voidReason, c?.labels.join(' '), c?.labels.length ?? 0, c?.cookRuns.join(' '), c?.cultures.join(' '),
-      c?.sessions.join(' '), i.signColour, i.signSmell, i.signTexture, yesNo(i.sealed), yesNo(i.sterilisedBeforeDisposal),
-      i.causeCategory, i.rootCauseNotes, i.notes,
+      i.id,
+      i.foundAt,
+      i.foundOn,
+      i.foundByName,
+      i.stage,
+      i.contaminant,
+      contaminantNames[i.contaminant],
+      i.severity,
+      i.status,
+      i.verdict,
+      yesNo(i.voided),
+      i.voidReason,
+      c?.labels.join(' '),
+      c?.labels.length ?? 0,
+      c?.cookRuns.join(' '),
+      c?.cultures.join(' '),
+      c?.sessions.join(' '),
+      i.signColour,
+      i.signSmell,
+      i.signTexture,
+      yesNo(i.sealed),
+      yesNo(i.sterilisedBeforeDisposal),
+      i.causeCategory,
+      i.rootCauseNotes,
+      i.notes,
     ];
   });
   return rows;

@@ -60,11 +60,25 @@ export const incidentsRepository = {
 
   /** Labels and production codes of each incident's jars, for the list and the CSV. */
   async jarCodes(incidentIds: number[]): Promise<Map<number, JarCodes>> {
-    const out = new Map<number, JarCodes>(incidentIds.map((id) => [id, { labels: [], cookRuns: [], cultures: [], sessions: [] }]));
+    const out = new Map<number, JarCodes>(
+      incidentIds.map((id) => [id, { labels: [], cookRuns: [], cultures: [], sessions: [] }]),
+    );
     if (incidentIds.length === 0) return out;
-    const rows: { incidentId: number; label: string; cookRun: string | null; culture: string | null; session: string | null }[] = await dataSource.manager
+    const rows: {
+      incidentId: number;
+      label: string;
+      cookRun: string | null;
+      culture: string | null;
+      session: string | null;
+    }[] = await dataSource.manager
       .createQueryBuilder()
-      .select(['ij.incidentId AS incidentId', 'j.label AS label', 'cr.code AS cookRun', 'c.code AS culture', 's.code AS session'])
+      .select([
+        'ij.incidentId AS incidentId',
+        'j.label AS label',
+        'cr.code AS cookRun',
+        'c.code AS culture',
+        's.code AS session',
+      ])
       .from(IncidentJar, 'ij')
       .innerJoin(Jar, 'j', 'j.id = ij.jarId')
       .leftJoin('cook_runs', 'cr', 'cr.id = j.cookRunId')
@@ -100,10 +114,13 @@ export const incidentsRepository = {
   jarIdsOf: async (m: EntityManager, incidentId: number) =>
     (await m.findBy(IncidentJar, { incidentId })).map((r) => r.jarId),
 
-  findJarsByIds: (m: EntityManager, ids: number[]) => (ids.length ? m.findBy(Jar, { id: In(ids) }) : Promise.resolve([])),
-  findJarsByLabels: (m: EntityManager, labels: string[]) => (labels.length ? m.findBy(Jar, { label: In(labels) }) : Promise.resolve([])),
+  findJarsByIds: (m: EntityManager, ids: number[]) =>
+    ids.length ? m.findBy(Jar, { id: In(ids) }) : Promise.resolve([]),
+  findJarsByLabels: (m: EntityManager, labels: string[]) =>
+    labels.length ? m.findBy(Jar, { label: In(labels) }) : Promise.resolve([]),
 
-  actionsOf: (incidentId: number) => dataSource.manager.find(CorrectiveAction, { where: { incidentId }, order: { dueOn: 'ASC', id: 'ASC' } }),
+  actionsOf: (incidentId: number) =>
+    dataSource.manager.find(CorrectiveAction, { where: { incidentId }, order: { dueOn: 'ASC', id: 'ASC' } }),
 
   stepLinkIdsOf: async (incidentId: number) =>
     (await dataSource.manager.find(IncidentStepLink, { where: { incidentId }, select: { id: true } })).map((l) => l.id),
@@ -113,8 +130,14 @@ export const incidentsRepository = {
     const qb = dataSource.manager
       .createQueryBuilder(AuditEvent, 'a')
       .where("(a.recordType = 'incident' AND a.recordId = :id)", { id: String(incidentId) });
-    if (actionIds.length) qb.orWhere("(a.recordType = 'corrective-action' AND a.recordId IN (:...actionIds))", { actionIds: actionIds.map(String) });
-    if (linkIds.length) qb.orWhere("(a.recordType = 'incident-step-link' AND a.recordId IN (:...linkIds))", { linkIds: linkIds.map(String) });
+    if (actionIds.length)
+      qb.orWhere("(a.recordType = 'corrective-action' AND a.recordId IN (:...actionIds))", {
+        actionIds: actionIds.map(String),
+      });
+    if (linkIds.length)
+      qb.orWhere("(a.recordType = 'incident-step-link' AND a.recordId IN (:...linkIds))", {
+        linkIds: linkIds.map(String),
+      });
     return qb.orderBy('a.at', 'ASC').addOrderBy('a.id', 'ASC').getMany();
   },
 };

@@ -31,10 +31,14 @@ import { syncJarStatuses } from './jar-contamination';
 async function resolveJars(m: EntityManager, input: Pick<CreateIncidentInput, 'jarIds' | 'jarLabels'>): Promise<Jar[]> {
   const labels = input.jarLabels ?? [];
   const ids = input.jarIds ?? [];
-  const [byLabel, byId] = await Promise.all([incidentsRepository.findJarsByLabels(m, labels), incidentsRepository.findJarsByIds(m, ids)]);
+  const [byLabel, byId] = await Promise.all([
+    incidentsRepository.findJarsByLabels(m, labels),
+    incidentsRepository.findJarsByIds(m, ids),
+  ]);
   const issues: FieldIssue[] = [];
   labels.forEach((label, i) => {
-    if (!byLabel.some((j) => j.label.toLowerCase() === label.toLowerCase())) issues.push({ path: `jarLabels.${i}`, message: `no jar is labelled ${label}` });
+    if (!byLabel.some((j) => j.label.toLowerCase() === label.toLowerCase()))
+      issues.push({ path: `jarLabels.${i}`, message: `no jar is labelled ${label}` });
   });
   ids.forEach((id, i) => {
     if (!byId.some((j) => j.id === id)) issues.push({ path: `jarIds.${i}`, message: `no jar has id ${id}` });
@@ -68,12 +72,33 @@ export async function createIncident(user: SessionUser, input: CreateIncidentInp
         notes: input.notes || null,
       }),
     );
-    await m.insert(IncidentJar, jars.map((j) => ({ incidentId: incident.id, jarId: j.id })));
-    if (photos.length) await m.insert(IncidentPhoto, photos.map((p) => ({ incidentId: incident.id, photoId: p.id, addedById: user.id })));
+    await m.insert(
+      IncidentJar,
+      jars.map((j) => ({ incidentId: incident.id, jarId: j.id })),
+    );
+    if (photos.length)
+      await m.insert(
+        IncidentPhoto,
+        photos.map((p) => ({ incidentId: incident.id, photoId: p.id, addedById: user.id })),
+      );
     const labels = jars.map((j) => j.label).sort();
-    const snapshot = { contaminant: incident.contaminant, severity: incident.severity, stage: incident.stage, foundAt: incident.foundAt, jars: labels, photos: photos.map((p) => p.id) };
-    await recordAudit(m, user, [{ action: 'create', recordType: 'incident', recordId: incident.id, newValue: snapshot }]);
-    await syncJarStatuses(m, user, jars.map((j) => j.id), `incident ${incident.id} flagged`);
+    const snapshot = {
+      contaminant: incident.contaminant,
+      severity: incident.severity,
+      stage: incident.stage,
+      foundAt: incident.foundAt,
+      jars: labels,
+      photos: photos.map((p) => p.id),
+    };
+    await recordAudit(m, user, [
+      { action: 'create', recordType: 'incident', recordId: incident.id, newValue: snapshot },
+    ]);
+    await syncJarStatuses(
+      m,
+      user,
+      jars.map((j) => j.id),
+      `incident ${incident.id} flagged`,
+    );
     return { incident, labels };
   });
   const { incident, labels } = created;
@@ -107,7 +132,11 @@ export async function getIncident(id: number): Promise<IncidentDetailDto> {
     incidentsRepository.actionsOf(id),
     incidentsRepository.stepLinkIdsOf(id),
   ]);
-  const history = await incidentsRepository.history(id, actions.map((a) => a.id), linkIds);
+  const history = await incidentsRepository.history(
+    id,
+    actions.map((a) => a.id),
+    linkIds,
+  );
   const today = todayLocal();
   return toIncidentDetail(incident, {
     jars,
@@ -120,7 +149,11 @@ export async function getIncident(id: number): Promise<IncidentDetailDto> {
 
 const notYours = () => forbidden('Only the finder edits an open incident; a supervisor edits the rest.');
 
-export async function updateIncident(user: SessionUser, id: number, input: UpdateIncidentInput): Promise<IncidentDetailDto> {
+export async function updateIncident(
+  user: SessionUser,
+  id: number,
+  input: UpdateIncidentInput,
+): Promise<IncidentDetailDto> {
   await dataSource.transaction(async (m) => {
     const incident = await loadForChange(m, id, input.version);
     if (!canEditDescriptive(user, incident)) throw notYours();
@@ -135,7 +168,11 @@ export async function updateIncident(user: SessionUser, id: number, input: Updat
       const jarIds = await incidentsRepository.jarIdsOf(m, id);
       checkFoundAt(changes.foundAt, foundOn, await incidentsRepository.findJarsByIds(m, jarIds));
     }
-    const entries = diffEntries({ action: 'update', recordType: 'incident', recordId: id, reason: input.reason ?? null }, incident, changes);
+    const entries = diffEntries(
+      { action: 'update', recordType: 'incident', recordId: id, reason: input.reason ?? null },
+      incident,
+      changes,
+    );
     if (entries.length === 0) return;
     Object.assign(incident, changes, changes.foundAt ? { foundOn: localDate(changes.foundAt) } : {});
     await m.save(incident);
@@ -144,7 +181,11 @@ export async function updateIncident(user: SessionUser, id: number, input: Updat
   return getIncident(id);
 }
 
-export async function addIncidentPhotos(user: SessionUser, id: number, input: AddIncidentPhotosInput): Promise<IncidentDetailDto> {
+export async function addIncidentPhotos(
+  user: SessionUser,
+  id: number,
+  input: AddIncidentPhotosInput,
+): Promise<IncidentDetailDto> {
   await dataSource.transaction(async (m) => {
     const incident = await loadForChange(m, id);
     if (!canEditDescriptive(user, incident)) throw notYours();
@@ -152,8 +193,21 @@ export async function addIncidentPhotos(user: SessionUser, id: number, input: Ad
     const existing = new Set((await m.findBy(IncidentPhoto, { incidentId: id })).map((l) => l.photoId));
     const fresh = photos.filter((p) => !existing.has(p.id));
     if (fresh.length === 0) return;
-    await m.insert(IncidentPhoto, fresh.map((p) => ({ incidentId: id, photoId: p.id, addedById: user.id })));
-    await recordAudit(m, user, fresh.map((p) => ({ action: 'add-photo', recordType: 'incident', recordId: id, field: 'photos', newValue: p.id })));
+    await m.insert(
+      IncidentPhoto,
+      fresh.map((p) => ({ incidentId: id, photoId: p.id, addedById: user.id })),
+    );
+    await recordAudit(
+      m,
+      user,
+      fresh.map((p) => ({
+        action: 'add-photo',
+        recordType: 'incident',
+        recordId: id,
+        field: 'photos',
+        newValue: p.id,
+      })),
+    );
   });
   return getIncident(id);
 }

@@ -57,7 +57,10 @@ export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: nu
     let next: JarStatus | undefined;
     if (live.has(jar.id) && flaggable.includes(jar.status)) next = 'contaminated';
     if (!live.has(jar.id) && jar.status === 'contaminated') {
-      next = statusBeforeContamination(jar, events.filter((e) => e.jarId === jar.id));
+      next = statusBeforeContamination(
+        jar,
+        events.filter((e) => e.jarId === jar.id),
+      );
     }
     if (!next || next === jar.status) continue;
     await m.insert(JarEvent, {
@@ -71,7 +74,15 @@ export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: nu
       note: why,
     });
     await m.update(Jar, { id: jar.id }, { status: next });
-    audit.push({ action: 'status', recordType: 'jar', recordId: jar.id, field: 'status', oldValue: jar.status, newValue: next, reason: why });
+    audit.push({
+      action: 'status',
+      recordType: 'jar',
+      recordId: jar.id,
+      field: 'status',
+      oldValue: jar.status,
+      newValue: next,
+      reason: why,
+    });
   }
   await recordAudit(m, actor, audit);
 }

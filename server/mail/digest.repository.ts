@@ -51,7 +51,10 @@ export const digestRepository = {
 
   /** INSERT IGNORE: answers false when another instance already holds this week. */
   async claimWeek(m: EntityManager, isoWeek: string, trigger: DigestRun['trigger']): Promise<boolean> {
-    const result: unknown = await m.query('INSERT IGNORE INTO digest_runs (isoWeek, `trigger`) VALUES (?, ?)', [isoWeek, trigger]);
+    const result: unknown = await m.query('INSERT IGNORE INTO digest_runs (isoWeek, `trigger`) VALUES (?, ?)', [
+      isoWeek,
+      trigger,
+    ]);
     const packet = (Array.isArray(result) ? result[0] : result) as { affectedRows?: number } | undefined;
     return packet?.affectedRows === 1;
   },

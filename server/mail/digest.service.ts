@@ -29,7 +29,15 @@ export async function buildDigestFacts(today: string): Promise<DigestFacts> {
     const jars = mine.reduce((s, c) => s + c.jars, 0);
     const contaminated = mine.reduce((s, c) => s + c.contaminated, 0);
     const incubating = mine.reduce((s, c) => s + c.incubating, 0);
-    return { week, jars, contaminated, incubating, rate: rate(contaminated, jars), provisional: incubating > 0, outOfControl: false };
+    return {
+      week,
+      jars,
+      contaminated,
+      incubating,
+      rate: rate(contaminated, jars),
+      provisional: incubating > 0,
+      outOfControl: false,
+    };
   });
   const chart = pChartLimits(
     rows.map((r) => r.contaminated),
@@ -58,7 +66,10 @@ export async function buildDigestFacts(today: string): Promise<DigestFacts> {
  * unique digest_runs row records that the week is done. A manual run sends even when the week
  * is already done, and claims the week so the schedule does not repeat it.
  */
-export async function sendWeeklyDigest(options: { now?: Date; trigger: 'schedule' | 'manual' }): Promise<DigestResultDto> {
+export async function sendWeeklyDigest(options: {
+  now?: Date;
+  trigger: 'schedule' | 'manual';
+}): Promise<DigestResultDto> {
   const now = options.now ?? new Date();
   const clock = labClock(now, config().LAB_TIME_ZONE);
   const sendWeek = isoWeekOf(clock.date);

@@ -67,7 +67,12 @@ export const incidentMailRepository = {
       .createQueryBuilder(Incident, 'i')
       .innerJoin(IncidentJar, 'ij', 'ij.incidentId = i.id')
       .innerJoin(Jar, 'j', 'j.id = ij.jarId')
-      .select(['i.id AS id', 'i.foundOn AS foundOn', 'i.contaminant AS contaminant', 'COUNT(DISTINCT ij.jarId) AS jars'])
+      .select([
+        'i.id AS id',
+        'i.foundOn AS foundOn',
+        'i.contaminant AS contaminant',
+        'COUNT(DISTINCT ij.jarId) AS jars',
+      ])
       .where(`${dimensionColumn[dimension]} = :levelId`, { levelId })
       .andWhere('i.voided = 0')
       .andWhere("i.verdict <> 'ruled-out'")
@@ -90,7 +95,11 @@ export const incidentMailRepository = {
   openAlert: (m: EntityManager, dimension: ClusterDimension, levelId: number, windowStart: string) =>
     m
       .createQueryBuilder(ClusterAlert, 'a')
-      .where('a.dimension = :dimension AND a.levelId = :levelId AND a.lastFoundOn >= :windowStart', { dimension, levelId, windowStart })
+      .where('a.dimension = :dimension AND a.levelId = :levelId AND a.lastFoundOn >= :windowStart', {
+        dimension,
+        levelId,
+        windowStart,
+      })
       .orderBy('a.lastFoundOn', 'DESC')
       .getOne(),
 };

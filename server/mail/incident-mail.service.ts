@@ -21,7 +21,11 @@ const levelOf: Record<ClusterDimension, (j: IncidentJarRow) => { id: number | nu
   session: (j) => ({ id: j.sessionId, code: j.session }),
 };
 
-const listParam: Record<ClusterDimension, string> = { cookRun: 'cookRunId', culture: 'cultureId', session: 'sessionId' };
+const listParam: Record<ClusterDimension, string> = {
+  cookRun: 'cookRunId',
+  culture: 'cultureId',
+  session: 'sessionId',
+};
 
 export interface IncidentMailOutcome {
   newIncident: DeliveryResult;
@@ -51,7 +55,11 @@ export async function notifyIncidentCreated(incidentId: number): Promise<Inciden
     jars,
     url: `${base}/incidents/${incident.id}`,
   });
-  outcome.newIncident = await deliver('new-incident', await mailRepository.recipients('new-incident', audienceRoles('new-incident')), content);
+  outcome.newIncident = await deliver(
+    'new-incident',
+    await mailRepository.recipients('new-incident', audienceRoles('new-incident')),
+    content,
+  );
 
   const settings = await getLabSettings();
   const windowStart = addDays(incident.foundOn, -(settings.clusterDays - 1));
@@ -63,7 +71,13 @@ export async function notifyIncidentCreated(incidentId: number): Promise<Inciden
     }
     for (const [levelId, code] of levels) {
       const alert = await withNamedLock(`asepta-cluster-${dimension}-${levelId}`, 10, async (m) => {
-        const found = await incidentMailRepository.clusterIncidents(m, dimension, levelId, windowStart, incident.foundOn);
+        const found = await incidentMailRepository.clusterIncidents(
+          m,
+          dimension,
+          levelId,
+          windowStart,
+          incident.foundOn,
+        );
         if (found.length < settings.clusterIncidents) return undefined;
         const firstFoundOn = found[0]?.foundOn ?? incident.foundOn;
         const existing = await incidentMailRepository.openAlert(m, dimension, levelId, windowStart);
@@ -98,7 +112,11 @@ export async function notifyIncidentCreated(incidentId: number): Promise<Inciden
         lastFoundOn: incident.foundOn,
         url: `${base}/incidents?${listParam[dimension]}=${levelId}`,
       });
-      const delivery = await deliver('cluster-alert', await mailRepository.recipients('cluster-alert', audienceRoles('cluster-alert')), mail);
+      const delivery = await deliver(
+        'cluster-alert',
+        await mailRepository.recipients('cluster-alert', audienceRoles('cluster-alert')),
+        mail,
+      );
       outcome.clusters.push({ dimension, code, delivery });
     }
   }

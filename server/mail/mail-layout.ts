@@ -56,8 +56,7 @@ function textBlock(b: MailBlock): string {
   }
 }
 
-const footer =
-  'You receive this because of your role in Asepta. Choose which mails you get under Account → Mail.';
+const footer = 'You receive this because of your role in Asepta. Choose which mails you get under Account → Mail.';
 
 /** The same blocks rendered twice: a plain-text part and an HTML part. */
 export function renderMail(subject: string, blocks: MailBlock[]): MailContent {

@@ -31,7 +31,10 @@ const jarLine = (j: IncidentJarFacts) =>
 export function newIncidentMail(f: NewIncidentFacts): MailContent {
   const name = contaminantNames[f.contaminant];
   const blocks: MailBlock[] = [
-    { kind: 'p', text: `${f.foundByName} filed incident #${f.id} on ${f.foundOn}: ${name}, ${jarCount(f.jars.length)}, found at the ${f.stage} stage, severity ${f.severity}.` },
+    {
+      kind: 'p',
+      text: `${f.foundByName} filed incident #${f.id} on ${f.foundOn}: ${name}, ${jarCount(f.jars.length)}, found at the ${f.stage} stage, severity ${f.severity}.`,
+    },
     { kind: 'list', items: f.jars.map(jarLine) },
     {
       kind: 'p',
@@ -84,7 +87,10 @@ export function clusterAlertMail(f: ClusterFacts): MailContent {
       head: ['Incident', 'Found on', 'Contaminant', 'Jars'],
       rows: f.incidents.map((i) => [`#${i.id}`, i.foundOn, contaminantNames[i.contaminant], String(i.jars)]),
     },
-    { kind: 'p', text: `Lead: ${clusterLeads[f.dimension]} Jars from one ${dimensionLabels[f.dimension]} are not independent, so treat this as a lead, not a verdict.` },
+    {
+      kind: 'p',
+      text: `Lead: ${clusterLeads[f.dimension]} Jars from one ${dimensionLabels[f.dimension]} are not independent, so treat this as a lead, not a verdict.`,
+    },
     { kind: 'link', label: `Open the incidents of ${what}`, url: f.url },
     mailCautions.spores,
     mailCautions.disposal,
@@ -105,10 +111,16 @@ export interface RetrainingFacts {
 
 export function retrainingMail(f: RetrainingFacts): MailContent {
   const blocks: MailBlock[] = [
-    { kind: 'p', text: `${f.personName}, ${f.requestedByName} asks you to retrain on “${f.procedureTitle}”, version ${f.version}.` },
+    {
+      kind: 'p',
+      text: `${f.personName}, ${f.requestedByName} asks you to retrain on “${f.procedureTitle}”, version ${f.version}.`,
+    },
     { kind: 'p', text: `Reason: ${f.reason}` },
     { kind: 'p', text: `The ${f.steps.length} steps of version ${f.version}:` },
-    { kind: 'list', items: f.steps.map((s) => `${s.position}. ${s.text}${s.caution ? ` (Caution: ${s.caution})` : ''}`) },
+    {
+      kind: 'list',
+      items: f.steps.map((s) => `${s.position}. ${s.text}${s.caution ? ` (Caution: ${s.caution})` : ''}`),
+    },
     { kind: 'link', label: 'Read the procedure', url: f.url },
     mailCautions.flame,
     mailCautions.deferral,
@@ -148,7 +160,14 @@ export function weeklyDigestMail(f: DigestFacts): MailContent {
     {
       kind: 'table',
       head: ['Week', 'Jars', 'Contaminated', 'Incubating', 'Rate', ''],
-      rows: f.weeks.map((w) => [w.week, String(w.jars), String(w.contaminated), String(w.incubating), percent(w.rate), flag(w)]),
+      rows: f.weeks.map((w) => [
+        w.week,
+        String(w.jars),
+        String(w.contaminated),
+        String(w.incubating),
+        percent(w.rate),
+        flag(w),
+      ]),
     },
     {
       kind: 'p',

@@ -13,7 +13,13 @@ export interface Recipient {
   email: string;
 }
 
-const sentSortable = { createdAt: 'm.createdAt', kind: 'm.kind', status: 'm.status', to: 'm.toAddress', subject: 'm.subject' };
+const sentSortable = {
+  createdAt: 'm.createdAt',
+  kind: 'm.kind',
+  status: 'm.status',
+  to: 'm.toAddress',
+  subject: 'm.subject',
+};
 
 export const mailRepository = {
   /** Active people in the roles with an address who have not turned this kind off. */
@@ -43,7 +49,8 @@ export const mailRepository = {
     );
   },
 
-  insertSent: (row: Omit<SentMail, 'id' | 'createdAt'>) => dataSource.manager.save(dataSource.manager.create(SentMail, row)),
+  insertSent: (row: Omit<SentMail, 'id' | 'createdAt'>) =>
+    dataSource.manager.save(dataSource.manager.create(SentMail, row)),
 
   listSent(q: SentMailListQuery): Promise<[SentMail[], number]> {
     const qb = dataSource.manager.createQueryBuilder(SentMail, 'm');

@@ -21,7 +21,10 @@ export async function getMailPreferences(userId: number): Promise<MailPreference
   return prefs;
 }
 
-export async function updateMailPreferences(actor: Actor & { id: number }, input: UpdateMailPreferencesInput): Promise<MailPreferencesDto> {
+export async function updateMailPreferences(
+  actor: Actor & { id: number },
+  input: UpdateMailPreferencesInput,
+): Promise<MailPreferencesDto> {
   const before = await getMailPreferences(actor.id);
   const changes = mailKinds.flatMap((k) => {
     const next = input[k];

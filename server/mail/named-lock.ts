@@ -6,11 +6,18 @@ import type { EntityManager } from 'typeorm';
  * never do it at once. GET_LOCK belongs to one connection, hence a dedicated query runner.
  * Answers undefined when the lock was not obtained within `waitSeconds`.
  */
-export async function withNamedLock<T>(name: string, waitSeconds: number, work: (m: EntityManager) => Promise<T>): Promise<T | undefined> {
+export async function withNamedLock<T>(
+  name: string,
+  waitSeconds: number,
+  work: (m: EntityManager) => Promise<T>,
+): Promise<T | undefined> {
   const runner = dataSource.createQueryRunner();
   await runner.connect();
   try {
-    const rows: { got: number | string | null }[] = await runner.query('SELECT GET_LOCK(?, ?) AS got', [name, waitSeconds]);
+    const rows: { got: number | string | null }[] = await runner.query('SELECT GET_LOCK(?, ?) AS got', [
+      name,
+      waitSeconds,
+    ]);
     if (Number(rows[0]?.got) !== 1) return undefined;
     try {
       return await work(runner.manager);

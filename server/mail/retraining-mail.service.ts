@@ -5,7 +5,10 @@ import { retrainingMail, type RetrainingFacts } from './mail-templates';
 import { deliver } from './mailer';
 
 /** After the request has committed. Answers whether a mail went out (the person may have opted out). */
-export async function notifyRetrainRequested(userId: number, facts: Omit<RetrainingFacts, 'personName' | 'url'> & { procedureVersionId: number }): Promise<boolean> {
+export async function notifyRetrainRequested(
+  userId: number,
+  facts: Omit<RetrainingFacts, 'personName' | 'url'> & { procedureVersionId: number },
+): Promise<boolean> {
   try {
     const [person] = await mailRepository.recipients('retraining', [], userId);
     if (!person) return false;

@@ -25,7 +25,9 @@ const receivePhotos: RequestHandler = (req, res, next) => {
   upload(req, res, (err: unknown) => {
     if (err instanceof multer.MulterError) {
       const [status, message] = limitMessages[err.code] ?? [400, err.message];
-      return next(new AppError(status, 'upload-rejected', `${photoField}: ${message}`, [{ path: photoField, message }]));
+      return next(
+        new AppError(status, 'upload-rejected', `${photoField}: ${message}`, [{ path: photoField, message }]),
+      );
     }
     next(err);
   });

@@ -17,7 +17,11 @@ export interface UploadedFile {
   buffer: Buffer;
 }
 
-const extensions: Record<(typeof photoAcceptedTypes)[number], string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' };
+const extensions: Record<(typeof photoAcceptedTypes)[number], string> = {
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+};
 const heicTypes = new Set(['image/heic', 'image/heif', 'image/heic-sequence', 'image/heif-sequence']);
 
 const unsupported = (message: string, index: number) =>
@@ -35,7 +39,10 @@ async function checkType(file: UploadedFile, index: number): Promise<Checked> {
   if (detected && heicTypes.has(detected.mime)) throw unsupported(heicRefusal, index);
   const mime = photoAcceptedTypes.find((t) => t === detected?.mime);
   if (!mime) {
-    throw unsupported(`${photoField}: "${file.originalname}" is not a JPEG, PNG or WebP image (found ${detected?.mime ?? 'no image'}).`, index);
+    throw unsupported(
+      `${photoField}: "${file.originalname}" is not a JPEG, PNG or WebP image (found ${detected?.mime ?? 'no image'}).`,
+      index,
+    );
   }
   return { file, mime, sha256: createHash('sha256').update(file.buffer).digest('hex') };
 }
@@ -52,9 +59,12 @@ async function decode(c: Checked, index: number): Promise<DecodedPhoto> {
   try {
     return await thumbnailer.decode(c.file.buffer);
   } catch {
-    throw new AppError(422, 'unreadable-image', `${photoField}: "${c.file.originalname}" could not be read as an image; it may be damaged.`, [
-      { path: `${photoField}.${index}`, message: 'could not be read as an image' },
-    ]);
+    throw new AppError(
+      422,
+      'unreadable-image',
+      `${photoField}: "${c.file.originalname}" could not be read as an image; it may be damaged.`,
+      [{ path: `${photoField}.${index}`, message: 'could not be read as an image' }],
+    );
   }
 }
 
@@ -63,21 +73,29 @@ async function decode(c: Checked, index: number): Promise<DecodedPhoto> {
  * refused file leaves nothing behind; files written for a failed transaction are removed again.
  */
 export async function uploadPhotos(actor: Actor & { id: number }, files: UploadedFile[]): Promise<PhotoDto[]> {
-  if (files.length === 0) throw badRequest(`${photoField}: attach at least one photo`, [{ path: photoField, message: 'attach at least one photo' }]);
+  if (files.length === 0)
+    throw badRequest(`${photoField}: attach at least one photo`, [
+      { path: photoField, message: 'attach at least one photo' },
+    ]);
   const checked = await Promise.all(files.map(checkType));
   const known = new Map((await photosRepository.findBySha(checked.map((c) => c.sha256))).map((p) => [p.sha256, p]));
   const fresh = new Map<string, { c: Checked; index: number }>();
   checked.forEach((c, index) => {
     if (!known.has(c.sha256) && !fresh.has(c.sha256)) fresh.set(c.sha256, { c, index });
   });
-  const decoded = await Promise.all([...fresh.values()].map(async ({ c, index }) => ({ c, d: await decode(c, index) })));
+  const decoded = await Promise.all(
+    [...fresh.values()].map(async ({ c, index }) => ({ c, d: await decode(c, index) })),
+  );
 
   const written: string[] = [];
   const storage = photoStorage();
   try {
     for (const { c, d } of decoded) {
       const keys = storageKeys(c.sha256, c.mime);
-      for (const [key, bytes] of [[keys.storageKey, c.file.buffer], [keys.thumbKey, d.thumb]] as const) {
+      for (const [key, bytes] of [
+        [keys.storageKey, c.file.buffer],
+        [keys.thumbKey, d.thumb],
+      ] as const) {
         if (await storage.exists(key)) continue;
         await storage.put(key, bytes);
         written.push(key);
@@ -86,11 +104,24 @@ export async function uploadPhotos(actor: Actor & { id: number }, files: Uploade
     await dataSource.transaction(async (m) => {
       for (const { c, d } of decoded) {
         const photo = await m.save(
-          m.create(Photo, { sha256: c.sha256, mime: c.mime, bytes: c.file.buffer.length, width: d.width, height: d.height, uploadedById: actor.id, ...storageKeys(c.sha256, c.mime) }),
+          m.create(Photo, {
+            sha256: c.sha256,
+            mime: c.mime,
+            bytes: c.file.buffer.length,
+            width: d.width,
+            height: d.height,
+            uploadedById: actor.id,
+            ...storageKeys(c.sha256, c.mime),
+          }),
         );
         known.set(photo.sha256, photo);
         await recordAudit(m, actor, [
-          { action: 'upload', recordType: 'photo', recordId: photo.id, newValue: { sha256: photo.sha256, mime: photo.mime, bytes: photo.bytes } },
+          {
+            action: 'upload',
+            recordType: 'photo',
+            recordId: photo.id,
+            newValue: { sha256: photo.sha256, mime: photo.mime, bytes: photo.bytes },
+          },
         ]);
       }
     });

@@ -34,7 +34,10 @@ class Thumbnailer {
   private nextId = 1;
 
   private spawn(): Slot {
-    const slot: Slot = { worker: new Worker(thumbnailWorkerSource, { eval: true, workerData: { jimpEntry, thumbEdge } }), jobs: new Map() };
+    const slot: Slot = {
+      worker: new Worker(thumbnailWorkerSource, { eval: true, workerData: { jimpEntry, thumbEdge } }),
+      jobs: new Map(),
+    };
     slot.worker.unref();
     slot.worker.on('message', (reply: Reply) => {
       const job = slot.jobs.get(reply.jobId);

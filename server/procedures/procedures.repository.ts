@@ -33,7 +33,10 @@ export const proceduresRepository = {
     m.createQueryBuilder(Procedure, 'p').setLock('pessimistic_write').where('p.id = :id', { id }).getOne(),
 
   /** The newest version of each procedure: the one a session should follow. */
-  async currentVersions(procedureIds: number[], m: EntityManager = dataSource.manager): Promise<Map<number, ProcedureVersion>> {
+  async currentVersions(
+    procedureIds: number[],
+    m: EntityManager = dataSource.manager,
+  ): Promise<Map<number, ProcedureVersion>> {
     if (procedureIds.length === 0) return new Map();
     const rows = await m
       .createQueryBuilder(ProcedureVersion, 'v')
@@ -52,7 +55,11 @@ export const proceduresRepository = {
       .where('v.procedureId = :procedureId', { procedureId })
       .orderBy('v.version', 'DESC')
       .getRawAndEntities<{ publishedByName: string | null; stepCount: string }>();
-    return entities.map((v, i) => ({ ...v, publishedByName: raw[i]?.publishedByName ?? null, stepCount: Number(raw[i]?.stepCount ?? 0) }));
+    return entities.map((v, i) => ({
+      ...v,
+      publishedByName: raw[i]?.publishedByName ?? null,
+      stepCount: Number(raw[i]?.stepCount ?? 0),
+    }));
   },
 
   findVersion: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(ProcedureVersion, { id }),

@@ -9,7 +9,13 @@ import {
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { createRoute, detailRoute, idParam, listRoute, validId, writeRoute } from '../core/record-routes';
 import { validate } from '../core/validate';
-import { createProcedure, getProcedure, getProcedureVersion, listProcedures, publishVersion } from './procedures.service';
+import {
+  createProcedure,
+  getProcedure,
+  getProcedureVersion,
+  listProcedures,
+  publishVersion,
+} from './procedures.service';
 import { linkStep, listStepLinks, unlinkStep } from './step-links.service';
 import { stepStats } from './step-stats.service';
 
@@ -35,10 +41,7 @@ proceduresRouter.get(
   },
 );
 
-proceduresRouter.get(
-  '/incidents/:id/step-links',
-  ...detailRoute(async (id) => ({ items: await listStepLinks(id) })),
-);
+proceduresRouter.get('/incidents/:id/step-links', ...detailRoute(async (id) => ({ items: await listStepLinks(id) })));
 proceduresRouter.post(
   '/incidents/:id/step-links',
   ...writeRoute(stepLinkInputSchema, linkStep, { guard: editors, status: 201 }),

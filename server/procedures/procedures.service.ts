@@ -21,7 +21,11 @@ import { toProcedureDto, toStepDto, toVersionSummaryDto } from './procedures.map
 export async function listProcedures(q: PageQuery): Promise<Page<ProcedureDto>> {
   const [rows, total] = await proceduresRepository.list(q);
   const current = await proceduresRepository.currentVersions(rows.map((p) => p.id));
-  return pageResult(rows.map((p) => toProcedureDto(p, current.get(p.id))), total, q);
+  return pageResult(
+    rows.map((p) => toProcedureDto(p, current.get(p.id))),
+    total,
+    q,
+  );
 }
 
 export async function getProcedure(id: number): Promise<ProcedureDetailDto> {
@@ -61,7 +65,9 @@ async function insertVersion(
   changeNote: string | null,
   steps: ProcedureStepInput[],
 ): Promise<ProcedureVersion> {
-  const saved = await m.save(m.create(ProcedureVersion, { procedureId, version, title, changeNote, publishedById: actor.id }));
+  const saved = await m.save(
+    m.create(ProcedureVersion, { procedureId, version, title, changeNote, publishedById: actor.id }),
+  );
   await m.insert(
     ProcedureStep,
     steps.map((s, i) => ({ versionId: saved.id, position: i + 1, text: s.text, caution: s.caution })),
@@ -71,7 +77,9 @@ async function insertVersion(
 
 export async function createProcedure(actor: Actor, input: CreateProcedureInput): Promise<ProcedureDetailDto> {
   if (await proceduresRepository.findByCode(input.code)) {
-    throw conflict('A procedure with that code exists.', [{ path: 'code', message: 'is already used by another procedure' }]);
+    throw conflict('A procedure with that code exists.', [
+      { path: 'code', message: 'is already used by another procedure' },
+    ]);
   }
   const id = await dataSource.transaction(async (m) => {
     const procedure = await m.save(m.create(Procedure, { code: input.code, title: input.title }));
@@ -81,7 +89,13 @@ export async function createProcedure(actor: Actor, input: CreateProcedureInput)
         action: 'create',
         recordType: 'procedure',
         recordId: procedure.id,
-        newValue: { code: procedure.code, title: procedure.title, versionId: version.id, version: 1, steps: input.steps.length },
+        newValue: {
+          code: procedure.code,
+          title: procedure.title,
+          versionId: version.id,
+          version: 1,
+          steps: input.steps.length,
+        },
       },
     ]);
     return procedure.id;
@@ -89,7 +103,11 @@ export async function createProcedure(actor: Actor, input: CreateProcedureInput)
   return getProcedure(id);
 }
 
-export async function publishVersion(actor: Actor, procedureId: number, input: PublishVersionInput): Promise<ProcedureVersionDto> {
+export async function publishVersion(
+  actor: Actor,
+  procedureId: number,
+  input: PublishVersionInput,
+): Promise<ProcedureVersionDto> {
   const versionId = await dataSource.transaction(async (m) => {
     // The row lock serialises two trainers publishing at once, so version numbers never collide.
     const procedure = await proceduresRepository.lockById(procedureId, m);
@@ -110,7 +128,15 @@ export async function publishVersion(actor: Actor, procedureId: number, input: P
       },
     ];
     if (title !== procedure.title) {
-      entries.push({ action: 'update', recordType: 'procedure', recordId: procedureId, field: 'title', oldValue: procedure.title, newValue: title, reason: input.changeNote });
+      entries.push({
+        action: 'update',
+        recordType: 'procedure',
+        recordId: procedureId,
+        field: 'title',
+        oldValue: procedure.title,
+        newValue: title,
+        reason: input.changeNote,
+      });
       await m.update(Procedure, { id: procedureId }, { title });
     }
     await recordAudit(m, actor, entries);

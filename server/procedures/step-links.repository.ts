@@ -64,7 +64,9 @@ const toDto = (r: LinkRaw): StepLinkDto => ({
 
 export const stepLinksRepository = {
   async listForIncident(incidentId: number): Promise<StepLinkDto[]> {
-    const rows = await linkQuery(dataSource.manager).where('l.incidentId = :incidentId', { incidentId }).getRawMany<LinkRaw>();
+    const rows = await linkQuery(dataSource.manager)
+      .where('l.incidentId = :incidentId', { incidentId })
+      .getRawMany<LinkRaw>();
     return rows.map(toDto);
   },
 
@@ -80,6 +82,13 @@ export const stepLinksRepository = {
       .select(['s.id AS id', 's.position AS position', 'v.version AS version', 'v.title AS procedureTitle'])
       .where('s.id = :stepId', { stepId })
       .getRawOne<{ id: number; position: number; version: number; procedureTitle: string }>();
-    return row ? { id: Number(row.id), position: Number(row.position), version: Number(row.version), procedureTitle: row.procedureTitle } : undefined;
+    return row
+      ? {
+          id: Number(row.id),
+          position: Number(row.position),
+          version: Number(row.version),
+          procedureTitle: row.procedureTitle,
+        }
+      : undefined;
   },
 };

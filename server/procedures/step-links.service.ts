@@ -23,11 +23,19 @@ export async function linkStep(actor: Actor, incidentId: number, input: StepLink
   const step = await stepLinksRepository.stepWithVersion(input.stepId);
   if (!step) throw notFound('Procedure step');
   if (await dataSource.manager.existsBy(IncidentStepLink, { incidentId, stepId: input.stepId })) {
-    throw conflict('This incident is already linked to that step.', [{ path: 'stepId', message: 'is already linked to this incident' }]);
+    throw conflict('This incident is already linked to that step.', [
+      { path: 'stepId', message: 'is already linked to this incident' },
+    ]);
   }
   const id = await dataSource.transaction(async (m) => {
     const link = await m.save(
-      m.create(IncidentStepLink, { incidentId, stepId: input.stepId, linkedById: actor.id, linkedByName: actor.displayName, note: input.note }),
+      m.create(IncidentStepLink, {
+        incidentId,
+        stepId: input.stepId,
+        linkedById: actor.id,
+        linkedByName: actor.displayName,
+        note: input.note,
+      }),
     );
     // Filed under the incident, so the incident's own history shows who blamed which step.
     await recordAudit(m, actor, [
@@ -36,7 +44,13 @@ export async function linkStep(actor: Actor, incidentId: number, input: StepLink
         recordType: 'incident',
         recordId: incidentId,
         field: 'procedureStep',
-        newValue: { linkId: link.id, stepId: step.id, procedure: step.procedureTitle, version: step.version, position: step.position },
+        newValue: {
+          linkId: link.id,
+          stepId: step.id,
+          procedure: step.procedureTitle,
+          version: step.version,
+          position: step.position,
+        },
         reason: input.note,
       },
     ]);
@@ -59,7 +73,14 @@ export async function unlinkStep(actor: Actor, linkId: number): Promise<void> {
         recordType: 'incident',
         recordId: link.incidentId,
         field: 'procedureStep',
-        oldValue: { linkId, stepId: link.stepId, procedure: step?.procedureTitle, version: step?.version, position: step?.position, note: link.note },
+        oldValue: {
+          linkId,
+          stepId: link.stepId,
+          procedure: step?.procedureTitle,
+          version: step?.version,
+          position: step?.position,
+          note: link.note,
+        },
       },
     ]);
   });

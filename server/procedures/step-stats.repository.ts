@@ -20,7 +20,12 @@ export const stepStatsRepository = {
    * Jars of sessions whose checklist holds this step, split by whether it was ticked. Sessions that
    * followed another version have no row for the step and are left out of both groups.
    */
-  async countsByTick(stepId: number, incubatingAfter: string, from?: string, to?: string): Promise<{ ticked: GroupCounts; notTicked: GroupCounts }> {
+  async countsByTick(
+    stepId: number,
+    incubatingAfter: string,
+    from?: string,
+    to?: string,
+  ): Promise<{ ticked: GroupCounts; notTicked: GroupCounts }> {
     const qb = dataSource.manager
       .createQueryBuilder(SessionStepCheck, 'c')
       .innerJoin(Jar, 'j', 'j.sessionId = c.sessionId')
@@ -34,7 +39,12 @@ export const stepStatsRepository = {
       .where('c.stepId = :stepId', { stepId, incubatingAfter })
       .groupBy('c.done');
     whereDateRange(qb, 'j.inoculatedOn', { from, to });
-    const rows = await qb.getRawMany<{ done: number | string; jars: string; contaminated: string; incubating: string }>();
+    const rows = await qb.getRawMany<{
+      done: number | string;
+      jars: string;
+      contaminated: string;
+      incubating: string;
+    }>();
     const empty = (): GroupCounts => ({ jars: 0, contaminated: 0, incubating: 0 });
     const out = { ticked: empty(), notTicked: empty() };
     for (const r of rows) {

@@ -29,7 +29,12 @@ export async function stepStats(stepId: number, q: StepStatsQuery): Promise<Step
   ]);
   const pValue =
     ticked.jars > 0 && notTicked.jars > 0
-      ? fisherExactTwoSided(ticked.contaminated, ticked.jars - ticked.contaminated, notTicked.contaminated, notTicked.jars - notTicked.contaminated)
+      ? fisherExactTwoSided(
+          ticked.contaminated,
+          ticked.jars - ticked.contaminated,
+          notTicked.contaminated,
+          notTicked.jars - notTicked.contaminated,
+        )
       : null;
   return { stepId, incidentsLinked, ticked: group(ticked), notTicked: group(notTicked), pValue };
 }

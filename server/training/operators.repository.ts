@@ -46,7 +46,12 @@ export const operatorsRepository = {
     return new Map(
       rows.map((r) => [
         Number(r.userId),
-        { sessions: Number(r.sessions), jars: Number(r.jars), contaminatedJars: Number(r.contaminatedJars), incidents: Number(r.incidents) },
+        {
+          sessions: Number(r.sessions),
+          jars: Number(r.jars),
+          contaminatedJars: Number(r.contaminatedJars),
+          incidents: Number(r.incidents),
+        },
       ]),
     );
   },
@@ -63,7 +68,11 @@ export const operatorsRepository = {
     return new Map(
       rows.map((r) => [
         Number(r.userId),
-        { trainedVersion: Number(r.trainedVersion), lastTrainedOn: day(r.lastTrainedOn), trainedOnCurrent: Number(r.onCurrent) === 1 },
+        {
+          trainedVersion: Number(r.trainedVersion),
+          lastTrainedOn: day(r.lastTrainedOn),
+          trainedOnCurrent: Number(r.onCurrent) === 1,
+        },
       ]),
     );
   },

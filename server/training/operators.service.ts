@@ -13,7 +13,13 @@ export async function listOperators(q: OperatorsQuery): Promise<OperatorsDto> {
       throw notFound('Procedure');
     });
     const current = await currentVersionOf(procedureId);
-    procedure = { id: p.id, code: p.code, title: p.title, currentVersionId: current?.id ?? null, currentVersion: current?.version ?? null };
+    procedure = {
+      id: p.id,
+      code: p.code,
+      title: p.title,
+      currentVersionId: current?.id ?? null,
+      currentVersion: current?.version ?? null,
+    };
   }
   const [people, counts, training, requests] = await Promise.all([
     operatorsRepository.people(),

@@ -1,5 +1,10 @@
 import type { EntityManager, SelectQueryBuilder } from 'typeorm';
-import type { RetrainRequestDto, RetrainRequestListQuery, TrainingRecordDto, TrainingRecordListQuery } from '../../shared/schemas/training';
+import type {
+  RetrainRequestDto,
+  RetrainRequestListQuery,
+  TrainingRecordDto,
+  TrainingRecordListQuery,
+} from '../../shared/schemas/training';
 import { applySortAndPage } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';

@@ -21,7 +21,8 @@ import { trainingRepository } from './training.repository';
 async function requirePerson(userId: number) {
   const user = await dataSource.manager.findOneBy(User, { id: userId });
   if (!user) throw notFound('User');
-  if (!user.active) throw unprocessable('That account is deactivated.', [{ path: 'userId', message: 'is a deactivated account' }]);
+  if (!user.active)
+    throw unprocessable('That account is deactivated.', [{ path: 'userId', message: 'is a deactivated account' }]);
   return user;
 }
 
@@ -60,7 +61,12 @@ export async function createTrainingRecord(actor: Actor, input: CreateTrainingRe
         action: 'create',
         recordType: 'training-record',
         recordId: record.id,
-        newValue: { userId: person.id, procedureVersionId: version.id, version: version.version, trainedOn: input.trainedOn },
+        newValue: {
+          userId: person.id,
+          procedureVersionId: version.id,
+          version: version.version,
+          trainedOn: input.trainedOn,
+        },
       },
       ...answered.map((r) => ({
         action: 'close',
@@ -90,7 +96,12 @@ export async function createRetrainRequest(actor: Actor, input: CreateRetrainReq
   const version = await requireVersion(input.procedureVersionId);
   const id = await dataSource.transaction(async (m) => {
     const request = await m.save(
-      m.create(RetrainingRequest, { userId: person.id, procedureVersionId: version.id, requestedById: actor.id, reason: input.reason }),
+      m.create(RetrainingRequest, {
+        userId: person.id,
+        procedureVersionId: version.id,
+        requestedById: actor.id,
+        reason: input.reason,
+      }),
     );
     await recordAudit(m, actor, [
       {

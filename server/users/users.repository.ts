@@ -3,11 +3,17 @@ import type { UserListQuery } from '../../shared/schemas/users';
 import { dataSource } from '../db/data-source';
 import { User } from './user.entity';
 
-const sortable = { username: 'u.username', displayName: 'u.displayName', role: 'u.role', createdAt: 'u.createdAt' } as const;
+const sortable = {
+  username: 'u.username',
+  displayName: 'u.displayName',
+  role: 'u.role',
+  createdAt: 'u.createdAt',
+} as const;
 
 export const usersRepository = {
   findById: (id: number, manager: EntityManager = dataSource.manager) => manager.findOneBy(User, { id }),
-  findActive: (id: number, manager: EntityManager = dataSource.manager) => manager.findOneBy(User, { id, active: true }),
+  findActive: (id: number, manager: EntityManager = dataSource.manager) =>
+    manager.findOneBy(User, { id, active: true }),
   findByUsername: (username: string) => dataSource.manager.findOneBy(User, { username }),
 
   async list(q: UserListQuery): Promise<[User[], number]> {
@@ -18,6 +24,9 @@ export const usersRepository = {
     const desc = q.sort?.startsWith('-') ?? false;
     const key = (q.sort?.replace(/^-/, '') ?? 'username') as keyof typeof sortable;
     qb.orderBy(sortable[key] ?? sortable.username, desc ? 'DESC' : 'ASC').addOrderBy('u.id', 'ASC');
-    return qb.skip((q.page - 1) * q.pageSize).take(q.pageSize).getManyAndCount();
+    return qb
+      .skip((q.page - 1) * q.pageSize)
+      .take(q.pageSize)
+      .getManyAndCount();
   },
 };

@@ -1,6 +1,11 @@
 import { Router } from 'express';
 import { idParamsSchema } from '../../shared/schemas/common';
-import { createUserSchema, updateUserSchema, userListQuerySchema, type UserListQuery } from '../../shared/schemas/users';
+import {
+  createUserSchema,
+  updateUserSchema,
+  userListQuerySchema,
+  type UserListQuery,
+} from '../../shared/schemas/users';
 import { currentUser, requireRole } from '../core/auth-guards';
 import { validate } from '../core/validate';
 import { createUser, listUsers, updateUser } from './users.service';

@@ -60,7 +60,14 @@ export async function createUser(actor: Actor, input: CreateUserInput): Promise<
         active: true,
       }),
     );
-    await recordAudit(m, actor, [{ action: 'create', recordType: 'user', recordId: user.id, newValue: { username: user.username, role: user.role } }]);
+    await recordAudit(m, actor, [
+      {
+        action: 'create',
+        recordType: 'user',
+        recordId: user.id,
+        newValue: { username: user.username, role: user.role },
+      },
+    ]);
     return toUserDto(user);
   });
 }

@@ -24,14 +24,26 @@ export const signSuggestions = {
 
 const sign = z.string().trim().max(120, 'use at most 120 characters');
 const optionalText = (max: number) => z.string().trim().max(max, `use at most ${max} characters`);
-const reasonSchema = z.string().trim().min(3, 'give a reason of at least 3 characters').max(500, 'use at most 500 characters');
+const reasonSchema = z
+  .string()
+  .trim()
+  .min(3, 'give a reason of at least 3 characters')
+  .max(500, 'use at most 500 characters');
 
-export const jarLabelSchema = z.string().trim().min(1, 'enter a jar label').max(40, 'a jar label has at most 40 characters');
+export const jarLabelSchema = z
+  .string()
+  .trim()
+  .min(1, 'enter a jar label')
+  .max(40, 'a jar label has at most 40 characters');
 
 export const createIncidentSchema = z
   .object({
     jarIds: z.array(idSchema).min(1, 'name at least one jar').max(50, 'at most 50 jars per incident').optional(),
-    jarLabels: z.array(jarLabelSchema).min(1, 'name at least one jar').max(50, 'at most 50 jars per incident').optional(),
+    jarLabels: z
+      .array(jarLabelSchema)
+      .min(1, 'name at least one jar')
+      .max(50, 'at most 50 jars per incident')
+      .optional(),
     contaminant: contaminantSchema,
     signColour: sign.optional(),
     signSmell: sign.optional(),
@@ -127,7 +139,10 @@ export const createActionSchema = z
     factor: factorSchema.optional(),
     level: z.string().trim().min(1).max(120).optional(),
   })
-  .refine((v) => v.ownerId !== undefined || v.ownerName !== undefined, { path: ['ownerName'], message: 'name an owner' })
+  .refine((v) => v.ownerId !== undefined || v.ownerName !== undefined, {
+    path: ['ownerName'],
+    message: 'name an owner',
+  })
   .refine((v) => (v.factor === undefined) === (v.level === undefined), {
     path: ['level'],
     message: 'give both the factor and its level, or neither',
@@ -237,24 +252,26 @@ export const historyEntrySchema = z.object({
 });
 export type HistoryEntryDto = z.infer<typeof historyEntrySchema>;
 
-export const incidentDetailSchema = incidentListItemSchema.omit({ jarLabels: true, jarCount: true, photoCount: true }).extend({
-  foundById: z.number().int().nullable(),
-  signColour: z.string().nullable(),
-  signSmell: z.string().nullable(),
-  signTexture: z.string().nullable(),
-  sealed: z.boolean(),
-  sterilisedBeforeDisposal: z.boolean(),
-  voidReason: z.string().nullable(),
-  causeCategory: causeCategorySchema.nullable(),
-  rootCauseNotes: z.string().nullable(),
-  notes: z.string().nullable(),
-  imported: z.boolean(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
-  jars: z.array(incidentJarSchema),
-  photos: z.array(incidentPhotoSchema),
-  stepLinks: z.array(stepLinkSchema),
-  actions: z.array(correctiveActionSchema),
-  history: z.array(historyEntrySchema),
-});
+export const incidentDetailSchema = incidentListItemSchema
+  .omit({ jarLabels: true, jarCount: true, photoCount: true })
+  .extend({
+    foundById: z.number().int().nullable(),
+    signColour: z.string().nullable(),
+    signSmell: z.string().nullable(),
+    signTexture: z.string().nullable(),
+    sealed: z.boolean(),
+    sterilisedBeforeDisposal: z.boolean(),
+    voidReason: z.string().nullable(),
+    causeCategory: causeCategorySchema.nullable(),
+    rootCauseNotes: z.string().nullable(),
+    notes: z.string().nullable(),
+    imported: z.boolean(),
+    createdAt: z.string(),
+    updatedAt: z.string(),
+    jars: z.array(incidentJarSchema),
+    photos: z.array(incidentPhotoSchema),
+    stepLinks: z.array(stepLinkSchema),
+    actions: z.array(correctiveActionSchema),
+    history: z.array(historyEntrySchema),
+  });
 export type IncidentDetailDto = z.infer<typeof incidentDetailSchema>;

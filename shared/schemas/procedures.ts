@@ -105,9 +105,7 @@ export const stepLinkSchema = z.object({
 });
 export type StepLinkDto = z.infer<typeof stepLinkSchema>;
 
-export const stepStatsQuerySchema = z
-  .object(dateRangeShape)
-  .refine(...fromNotAfterTo);
+export const stepStatsQuerySchema = z.object(dateRangeShape).refine(...fromNotAfterTo);
 export type StepStatsQuery = z.infer<typeof stepStatsQuerySchema>;
 
 export const stepGroupSchema = z.object({

@@ -51,60 +51,108 @@ export function createAppRouter(queryClient: QueryClient) {
                 {
                   element: <RoleGate roles={access.cookRuns} />,
                   children: [
-                    { path: paths.cookRuns.pattern, lazy: () => import('./routes/cook-runs').then((m) => ({ Component: m.CookRunsRoute })) },
-                    { path: paths.cookRun.pattern, lazy: () => import('./routes/cook-run').then((m) => ({ Component: m.CookRunRoute })) },
+                    {
+                      path: paths.cookRuns.pattern,
+                      lazy: () => import('./routes/cook-runs').then((m) => ({ Component: m.CookRunsRoute })),
+                    },
+                    {
+                      path: paths.cookRun.pattern,
+                      lazy: () => import('./routes/cook-run').then((m) => ({ Component: m.CookRunRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.cultures} />,
                   children: [
-                    { path: paths.cultures.pattern, lazy: () => import('./routes/cultures').then((m) => ({ Component: m.CulturesRoute })) },
-                    { path: paths.culture.pattern, lazy: () => import('./routes/culture').then((m) => ({ Component: m.CultureRoute })) },
+                    {
+                      path: paths.cultures.pattern,
+                      lazy: () => import('./routes/cultures').then((m) => ({ Component: m.CulturesRoute })),
+                    },
+                    {
+                      path: paths.culture.pattern,
+                      lazy: () => import('./routes/culture').then((m) => ({ Component: m.CultureRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.sessions} />,
                   children: [
-                    { path: paths.sessions.pattern, lazy: () => import('./routes/sessions').then((m) => ({ Component: m.SessionsRoute })) },
-                    { path: paths.session.pattern, lazy: () => import('./routes/session').then((m) => ({ Component: m.SessionRoute })) },
+                    {
+                      path: paths.sessions.pattern,
+                      lazy: () => import('./routes/sessions').then((m) => ({ Component: m.SessionsRoute })),
+                    },
+                    {
+                      path: paths.session.pattern,
+                      lazy: () => import('./routes/session').then((m) => ({ Component: m.SessionRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.grain} />,
                   children: [
-                    { path: paths.grain.pattern, lazy: () => import('./routes/grain').then((m) => ({ Component: m.GrainRoute })) },
+                    {
+                      path: paths.grain.pattern,
+                      lazy: () => import('./routes/grain').then((m) => ({ Component: m.GrainRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.incidents} />,
                   children: [
-                    { path: paths.incidents.pattern, lazy: () => import('./routes/incidents').then((m) => ({ Component: m.IncidentsRoute })) },
-                    { path: paths.incident.pattern, lazy: () => import('./routes/incident').then((m) => ({ Component: m.IncidentRoute })) },
+                    {
+                      path: paths.incidents.pattern,
+                      lazy: () => import('./routes/incidents').then((m) => ({ Component: m.IncidentsRoute })),
+                    },
+                    {
+                      path: paths.incident.pattern,
+                      lazy: () => import('./routes/incident').then((m) => ({ Component: m.IncidentRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.flagJar} />,
                   children: [
-                    { path: paths.flagJar.pattern, lazy: () => import('./routes/flag-jar').then((m) => ({ Component: m.FlagJarRoute })) },
+                    {
+                      path: paths.flagJar.pattern,
+                      lazy: () => import('./routes/flag-jar').then((m) => ({ Component: m.FlagJarRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.historyImport} />,
                   children: [
-                    { path: paths.historyImport.pattern, lazy: () => import('./routes/history-import').then((m) => ({ Component: m.HistoryImportRoute })) },
+                    {
+                      path: paths.historyImport.pattern,
+                      lazy: () => import('./routes/history-import').then((m) => ({ Component: m.HistoryImportRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.procedures} />,
                   children: [
-                    { path: paths.procedures.pattern, lazy: () => import('./routes/procedures').then((m) => ({ Component: m.ProceduresRoute })) },
-                    { path: paths.procedureVersion.pattern, lazy: () => import('./routes/procedure-version').then((m) => ({ Component: m.ProcedureVersionRoute })) },
-                    { path: paths.procedure.pattern, lazy: () => import('./routes/procedure').then((m) => ({ Component: m.ProcedureRoute })) },
+                    {
+                      path: paths.procedures.pattern,
+                      lazy: () => import('./routes/procedures').then((m) => ({ Component: m.ProceduresRoute })),
+                    },
+                    {
+                      path: paths.procedureVersion.pattern,
+                      lazy: () =>
+                        import('./routes/procedure-version').then((m) => ({ Component: m.ProcedureVersionRoute })),
+                    },
+                    {
+                      path: paths.procedure.pattern,
+                      lazy: () => import('./routes/procedure').then((m) => ({ Component: m.ProcedureRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.training} />,
-                  children: [{ path: paths.training.pattern, lazy: () => import('./routes/training').then((m) => ({ Component: m.TrainingRoute })) }],
+                  children: [
+                    {
+                      path: paths.training.pattern,
+                      lazy: () => import('./routes/training').then((m) => ({ Component: m.TrainingRoute })),
+                    },
+                  ],
                 },
                 {
                   path: paths.mailPreferences.pattern,
@@ -112,35 +160,82 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
                 {
                   element: <RoleGate roles={access.sentMail} />,
-                  children: [{ path: paths.sentMail.pattern, lazy: () => import('./routes/sent-mail').then((m) => ({ Component: m.SentMailRoute })) }],
+                  children: [
+                    {
+                      path: paths.sentMail.pattern,
+                      lazy: () => import('./routes/sent-mail').then((m) => ({ Component: m.SentMailRoute })),
+                    },
+                  ],
                 },
-                { path: paths.jars.pattern, lazy: () => import('./routes/jars').then((m) => ({ Component: m.JarsRoute })) },
-                { path: paths.jarPage.pattern, lazy: () => import('./routes/jar').then((m) => ({ Component: m.JarRoute })) },
-                { path: paths.jarLabels.pattern, lazy: () => import('./routes/jar-labels').then((m) => ({ Component: m.JarLabelsRoute })) },
-                { path: paths.lineage.pattern, lazy: () => import('./routes/lineage').then((m) => ({ Component: m.LineageRoute })) },
+                {
+                  path: paths.jars.pattern,
+                  lazy: () => import('./routes/jars').then((m) => ({ Component: m.JarsRoute })),
+                },
+                {
+                  path: paths.jarPage.pattern,
+                  lazy: () => import('./routes/jar').then((m) => ({ Component: m.JarRoute })),
+                },
+                {
+                  path: paths.jarLabels.pattern,
+                  lazy: () => import('./routes/jar-labels').then((m) => ({ Component: m.JarLabelsRoute })),
+                },
+                {
+                  path: paths.lineage.pattern,
+                  lazy: () => import('./routes/lineage').then((m) => ({ Component: m.LineageRoute })),
+                },
                 {
                   element: <RoleGate roles={productionRoles.write} />,
                   children: [
-                    { path: paths.newJars.pattern, lazy: () => import('./routes/jars-new').then((m) => ({ Component: m.NewJarsRoute })) },
-                    { path: paths.shelfWalk.pattern, lazy: () => import('./routes/shelf-walk').then((m) => ({ Component: m.ShelfWalkRoute })) },
+                    {
+                      path: paths.newJars.pattern,
+                      lazy: () => import('./routes/jars-new').then((m) => ({ Component: m.NewJarsRoute })),
+                    },
+                    {
+                      path: paths.shelfWalk.pattern,
+                      lazy: () => import('./routes/shelf-walk').then((m) => ({ Component: m.ShelfWalkRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.analysis} />,
                   children: [
-                    { path: paths.analysisWeekly.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisWeeklyRoute })) },
-                    { path: paths.analysisCauses.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisCausesRoute })) },
-                    { path: paths.analysisRates.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisRatesRoute })) },
-                    { path: paths.analysisCrosstab.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisCrosstabRoute })) },
-                    { path: paths.analysisColonisation.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisColonisationRoute })) },
-                    { path: paths.analysisLethality.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisLethalityRoute })) },
-                    { path: paths.analysisJars.pattern, lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisJarsRoute })) },
+                    {
+                      path: paths.analysisWeekly.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisWeeklyRoute })),
+                    },
+                    {
+                      path: paths.analysisCauses.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisCausesRoute })),
+                    },
+                    {
+                      path: paths.analysisRates.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisRatesRoute })),
+                    },
+                    {
+                      path: paths.analysisCrosstab.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisCrosstabRoute })),
+                    },
+                    {
+                      path: paths.analysisColonisation.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisColonisationRoute })),
+                    },
+                    {
+                      path: paths.analysisLethality.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisLethalityRoute })),
+                    },
+                    {
+                      path: paths.analysisJars.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisJarsRoute })),
+                    },
                   ],
                 },
                 {
                   element: <RoleGate roles={access.labSettings} />,
                   children: [
-                    { path: paths.labSettings.pattern, lazy: () => import('./routes/lab-settings').then((m) => ({ Component: m.LabSettingsRoute })) },
+                    {
+                      path: paths.labSettings.pattern,
+                      lazy: () => import('./routes/lab-settings').then((m) => ({ Component: m.LabSettingsRoute })),
+                    },
                   ],
                 },
                 { path: '*', lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })) },

@@ -42,7 +42,10 @@ export const paths = {
     pattern: '/jars/labels',
     to: (query: { session?: number; ids?: string; layout?: 'sheet' | 'roll' }) => withQuery('/jars/labels', query),
   },
-  shelfWalk: { pattern: '/jars/shelf-walk', to: (query?: { room?: string; shelf?: string }) => withQuery('/jars/shelf-walk', query) },
+  shelfWalk: {
+    pattern: '/jars/shelf-walk',
+    to: (query?: { room?: string; shelf?: string }) => withQuery('/jars/shelf-walk', query),
+  },
   lineage: { pattern: '/lineage/:kind/:id', to: (kind: 'culture' | 'jar', id: number) => `/lineage/${kind}/${id}` },
   procedures: { pattern: '/procedures', to: () => '/procedures' },
   procedure: { pattern: '/procedures/:id', to: (id: number) => `/procedures/${id}` },

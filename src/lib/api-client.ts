@@ -82,9 +82,11 @@ export function getCsrfToken(): Promise<string> {
     return token;
   });
   csrfPending = pending;
-  void pending.finally(() => {
-    if (csrfPending === pending) csrfPending = undefined;
-  }).catch(() => undefined);
+  void pending
+    .finally(() => {
+      if (csrfPending === pending) csrfPending = undefined;
+    })
+    .catch(() => undefined);
   return pending;
 }
 
@@ -144,6 +146,7 @@ export const api = {
   get: <T>(path: string, options?: NoBody<T>) => request<T>('GET', path, options),
   post: <T = void>(path: string, body?: unknown, options?: NoBody<T>) => request<T>('POST', path, { ...options, body }),
   put: <T = void>(path: string, body?: unknown, options?: NoBody<T>) => request<T>('PUT', path, { ...options, body }),
-  patch: <T = void>(path: string, body?: unknown, options?: NoBody<T>) => request<T>('PATCH', path, { ...options, body }),
+  patch: <T = void>(path: string, body?: unknown, options?: NoBody<T>) =>
+    request<T>('PATCH', path, { ...options, body }),
   delete: <T = void>(path: string, options?: NoBody<T>) => request<T>('DELETE', path, options),
 };

@@ -1,10 +1,19 @@
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium' });
+const dateTimeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const longDateFormat = new Intl.DateTimeFormat(undefined, { weekday: 'long', day: 'numeric', month: 'long' });
 
 export function formatDate(value: string | Date): string {
   const date = typeof value === 'string' ? new Date(value) : value;
   return Number.isNaN(date.getTime()) ? '—' : dateFormat.format(date);
 }
+
+export function formatDateTime(value: string | Date): string {
+  const date = typeof value === 'string' ? new Date(value) : value;
+  return Number.isNaN(date.getTime()) ? '—' : dateTimeFormat.format(date);
+}
+
+/** Today's date in the browser's time zone as YYYY-MM-DD, the value a date input takes. */
+export const todayIso = () => new Date().toLocaleDateString('en-CA');
 
 export const formatLongDate = (date: Date) => longDateFormat.format(date);
 

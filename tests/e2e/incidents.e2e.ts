@@ -58,7 +58,9 @@ describe('flagging a jar and reviewing the incident', () => {
     await tech.page.getByText('High', { exact: true }).click();
     await tech.page.getByLabel('Sealed (lid closed, tape over the port)').check();
     const photo = await new Jimp({ width: 640, height: 480, color: 0x3d8b4aff }).getBuffer('image/jpeg');
-    await tech.page.locator('input[type=file]').setInputFiles({ name: 'shelf.jpg', mimeType: 'image/jpeg', buffer: photo });
+    await tech.page
+      .locator('input[type=file]')
+      .setInputFiles({ name: 'shelf.jpg', mimeType: 'image/jpeg', buffer: photo });
     await tech.page.getByText('Uploaded', { exact: true }).waitFor();
     await tech.page.screenshot({ path: `${shotsDir}/incident-flag-phone.png`, fullPage: true });
     await tech.page.getByRole('button', { name: 'Flag jar' }).click();
@@ -72,7 +74,11 @@ describe('flagging a jar and reviewing the incident', () => {
 
     const sup = await newPage(browser(), desktop);
     await signIn(sup.page, 'supervisor');
-    await sup.page.getByRole('navigation', { name: 'Main' }).first().getByRole('link', { name: 'Incidents', exact: true }).click();
+    await sup.page
+      .getByRole('navigation', { name: 'Main' })
+      .first()
+      .getByRole('link', { name: 'Incidents', exact: true })
+      .click();
     await sup.page.getByRole('heading', { name: 'Incidents' }).waitFor();
     await sup.page.getByLabel('Jar label').fill(label);
     await sup.page.getByLabel('Jar label').press('Enter');

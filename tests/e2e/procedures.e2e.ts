@@ -62,10 +62,18 @@ describe('procedures in the browser', () => {
 
     await page.goto(`/procedures/${procedure.id}`);
     await page.getByRole('button', { name: 'Publish a new version' }).click();
-    await page.getByLabel('What changed and why').fill('Gloves are wiped again after touching anything outside the hood.');
-    await page.getByLabel('Step 3', { exact: true }).fill('Put on clean gloves; wipe them with 70 % isopropyl alcohol again after touching anything outside the hood.');
+    await page
+      .getByLabel('What changed and why')
+      .fill('Gloves are wiped again after touching anything outside the hood.');
+    await page
+      .getByLabel('Step 3', { exact: true })
+      .fill(
+        'Put on clean gloves; wipe them with 70 % isopropyl alcohol again after touching anything outside the hood.',
+      );
     await page.getByRole('button', { name: 'Publish', exact: true }).click();
-    await page.waitForURL((url) => /\/procedures\/versions\/\d+$/.test(url.pathname) && !url.pathname.endsWith(`/${oldId}`));
+    await page.waitForURL(
+      (url) => /\/procedures\/versions\/\d+$/.test(url.pathname) && !url.pathname.endsWith(`/${oldId}`),
+    );
     await page.getByText('current version', { exact: true }).waitFor();
     const newSteps = await stepTexts(page);
     expect(newSteps[2]).toContain('again after touching anything outside the hood');

@@ -4,29 +4,54 @@ import { desktop, newPage, phone, shotsDir, signIn, useBrowser } from './support
 const browser = useBrowser();
 
 // Screens each demo role should see in the main navigation, and ones it must not (DESIGN.md §2).
-const everyone = ['Home', 'Analysis', 'Cook runs', 'Cultures', 'Sessions', 'Jars', 'Incidents', 'Procedures', 'Account'];
+const everyone = [
+  'Home',
+  'Analysis',
+  'Cook runs',
+  'Cultures',
+  'Sessions',
+  'Jars',
+  'Incidents',
+  'Procedures',
+  'Account',
+];
 const expected = {
-  technician: { sees: [...everyone, 'Shelf walk', 'Flag a jar'], hidden: ['Users', 'Lab settings', 'History import', 'This week', 'Training'] },
-  supervisor: { sees: [...everyone, 'This week', 'Flag a jar', 'History import', 'Training'], hidden: ['Users', 'Lab settings', 'Sent mail'] },
-  trainer: { sees: [...everyone, 'Training'], hidden: ['Users', 'Lab settings', 'Flag a jar', 'Shelf walk', 'History import'] },
-  admin: { sees: [...everyone, 'Users', 'Lab settings', 'History import', 'Sent mail'], hidden: ['Flag a jar', 'This week'] },
+  technician: {
+    sees: [...everyone, 'Shelf walk', 'Flag a jar'],
+    hidden: ['Users', 'Lab settings', 'History import', 'This week', 'Training'],
+  },
+  supervisor: {
+    sees: [...everyone, 'This week', 'Flag a jar', 'History import', 'Training'],
+    hidden: ['Users', 'Lab settings', 'Sent mail'],
+  },
+  trainer: {
+    sees: [...everyone, 'Training'],
+    hidden: ['Users', 'Lab settings', 'Flag a jar', 'Shelf walk', 'History import'],
+  },
+  admin: {
+    sees: [...everyone, 'Users', 'Lab settings', 'History import', 'Sent mail'],
+    hidden: ['Flag a jar', 'This week'],
+  },
 } as const;
 
 describe('signing in', () => {
-  it.each(Object.keys(expected) as (keyof typeof expected)[])('shows the %s the navigation of their role', async (role) => {
-    const { context, page } = await newPage(browser(), desktop);
-    await signIn(page, role);
-    const nav = page.getByRole('navigation', { name: 'Main' }).first();
-    await nav.waitFor();
-    for (const label of expected[role].sees) {
-      expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(1);
-    }
-    for (const label of expected[role].hidden) {
-      expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(0);
-    }
-    await page.screenshot({ path: `${shotsDir}/home-${role}.png` });
-    await context.close();
-  });
+  it.each(Object.keys(expected) as (keyof typeof expected)[])(
+    'shows the %s the navigation of their role',
+    async (role) => {
+      const { context, page } = await newPage(browser(), desktop);
+      await signIn(page, role);
+      const nav = page.getByRole('navigation', { name: 'Main' }).first();
+      await nav.waitFor();
+      for (const label of expected[role].sees) {
+        expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(1);
+      }
+      for (const label of expected[role].hidden) {
+        expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(0);
+      }
+      await page.screenshot({ path: `${shotsDir}/home-${role}.png` });
+      await context.close();
+    },
+  );
 
   it('tells the user plainly when the password is wrong', async () => {
     const { context, page } = await newPage(browser(), phone);

@@ -14,7 +14,10 @@ describe('POST /api/auth/login', () => {
   it('signs in with the right password, sets a session cookie and answers the user', async () => {
     const user = await makeUser('technician');
     const { agent, token } = await csrfAgent(app);
-    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: user.username, password: testPassword });
+    const res = await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', token())
+      .send({ username: user.username, password: testPassword });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ username: user.username, role: 'technician' });
     expect(res.headers['set-cookie']?.[0]).toMatch(/^asepta\.sid=.*HttpOnly/);
@@ -27,7 +30,10 @@ describe('POST /api/auth/login', () => {
   it('answers 401 with a clear code for a wrong password', async () => {
     const user = await makeUser('technician');
     const { agent, token } = await csrfAgent(app);
-    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: user.username, password: 'wrong-password' });
+    const res = await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', token())
+      .send({ username: user.username, password: 'wrong-password' });
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('invalid-credentials');
   });
@@ -42,9 +48,16 @@ describe('POST /api/auth/login', () => {
   it('refuses a deactivated user', async () => {
     const user = await makeUser('technician');
     const admin = await signedIn(app, 'admin');
-    await admin.agent.patch(`/api/users/${user.id}`).set('X-CSRF-Token', admin.token()).send({ active: false }).expect(200);
+    await admin.agent
+      .patch(`/api/users/${user.id}`)
+      .set('X-CSRF-Token', admin.token())
+      .send({ active: false })
+      .expect(200);
     const { agent, token } = await csrfAgent(app);
-    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: user.username, password: testPassword });
+    const res = await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', token())
+      .send({ username: user.username, password: testPassword });
     expect(res.status).toBe(401);
   });
 
@@ -54,23 +67,39 @@ describe('POST /api/auth/login', () => {
     const { agent, token } = await csrfAgent(app);
     const statuses: number[] = [];
     for (let i = 0; i < 11; i += 1) {
-      const res = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: victim.username, password: `bad-${i}` });
+      const res = await agent
+        .post('/api/auth/login')
+        .set('X-CSRF-Token', token())
+        .send({ username: victim.username, password: `bad-${i}` });
       statuses.push(res.status);
     }
     expect(statuses.slice(0, 10)).toEqual(Array(10).fill(401));
     expect(statuses[10]).toBe(429);
-    const blockedEvenIfRight = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: victim.username, password: testPassword });
+    const blockedEvenIfRight = await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', token())
+      .send({ username: victim.username, password: testPassword });
     expect(blockedEvenIfRight.status).toBe(429);
-    const ok = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: other.username, password: testPassword });
+    const ok = await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', token())
+      .send({ username: other.username, password: testPassword });
     expect(ok.status).toBe(200);
   });
 
   it('gives 429 to one address that fails on ten different usernames', async () => {
     const { agent, token } = await csrfAgent(app);
     for (let i = 0; i < 10; i += 1) {
-      await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: uniqueName('nobody'), password: 'x' }).expect(401);
+      await agent
+        .post('/api/auth/login')
+        .set('X-CSRF-Token', token())
+        .send({ username: uniqueName('nobody'), password: 'x' })
+        .expect(401);
     }
-    const res = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ username: uniqueName('nobody'), password: 'x' });
+    const res = await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', token())
+      .send({ username: uniqueName('nobody'), password: 'x' });
     // trust proxy is off, so every request above came from the same loopback address
     expect(res.status).toBe(429);
   });
@@ -93,7 +122,11 @@ describe('CSRF', () => {
     const user = await makeUser('trainer');
     const { agent, token } = await csrfAgent(app);
     const before = token();
-    await agent.post('/api/auth/login').set('X-CSRF-Token', before).send({ username: user.username, password: testPassword }).expect(200);
+    await agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', before)
+      .send({ username: user.username, password: testPassword })
+      .expect(200);
     const res = await agent.post('/api/auth/logout').set('X-CSRF-Token', before);
     expect(res.status).toBe(403);
   });
@@ -130,7 +163,10 @@ describe('POST /api/auth/password', () => {
       .send({ currentPassword: testPassword, newPassword: 'a-brand-new-secret' })
       .expect(204);
     const fresh = await csrfAgent(app);
-    const res = await fresh.agent.post('/api/auth/login').set('X-CSRF-Token', fresh.token()).send({ username: client.user.username, password: 'a-brand-new-secret' });
+    const res = await fresh.agent
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', fresh.token())
+      .send({ username: client.user.username, password: 'a-brand-new-secret' });
     expect(res.status).toBe(200);
   });
 

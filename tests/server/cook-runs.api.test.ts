@@ -220,7 +220,11 @@ describe('/api/cook-runs lethality', () => {
 describe('/api/cook-runs editing, listing and export', () => {
   it('audits each changed field with its old and new value and re-estimates F0', async () => {
     const run = (await create(tech, newRun())).body;
-    const res = await sendAs(tech, 'patch', `/api/cook-runs/${run.id}`, { minutesAtPressure: 120, vessel: 'Cooker B', reason: 'gauge log re-read' });
+    const res = await sendAs(tech, 'patch', `/api/cook-runs/${run.id}`, {
+      minutesAtPressure: 120,
+      vessel: 'Cooker B',
+      reason: 'gauge log re-read',
+    });
     expect(res.status).toBe(200);
     expect(res.body.minutesAtPressure).toBe(120);
     expect(res.body.f0).toBeCloseTo((run.f0 / 90) * 120, 6);

@@ -41,7 +41,10 @@ describe('/api/cultures guards and validation', () => {
     const culture = (await create(tech, newCulture())).body;
     expect((await trainer.agent.get(`/api/cultures/${culture.id}`)).status).toBe(200);
     expect((await create(trainer, newCulture())).status).toBe(403);
-    const test = await sendAs(trainer, 'post', `/api/cultures/${culture.id}/agar-tests`, { testedOn: '2026-02-12', result: 'clean' });
+    const test = await sendAs(trainer, 'post', `/api/cultures/${culture.id}/agar-tests`, {
+      testedOn: '2026-02-12',
+      result: 'clean',
+    });
     expect(test.status).toBe(403);
     expect((await changeState(tech, culture.id, { state: 'released', reason: 'agar clean' })).status).toBe(403);
     expect((await changeState(trainer, culture.id, { state: 'released', reason: 'agar clean' })).status).toBe(403);
@@ -75,7 +78,10 @@ describe('/api/cultures guards and validation', () => {
     const patch = await sendAs(tech, 'patch', '/api/cultures/999999', { notes: 'x' });
     expect(patch.status).toBe(404);
     expect((await changeState(supervisor, 999999, { state: 'released', reason: 'agar clean' })).status).toBe(404);
-    const test = await sendAs(tech, 'post', '/api/cultures/999999/agar-tests', { testedOn: '2026-02-12', result: 'clean' });
+    const test = await sendAs(tech, 'post', '/api/cultures/999999/agar-tests', {
+      testedOn: '2026-02-12',
+      result: 'clean',
+    });
     expect(test.status).toBe(404);
   });
 
@@ -174,7 +180,11 @@ describe('/api/cultures records', () => {
   it('audits edits field by field and refuses a parent loop', async () => {
     const a = (await create(tech, newCulture())).body;
     const b = (await create(tech, newCulture({ parentCultureId: a.id }))).body;
-    const res = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, { volumeMl: 250, strain: '', reason: 'half poured off' });
+    const res = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, {
+      volumeMl: 250,
+      strain: '',
+      reason: 'half poured off',
+    });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ volumeMl: 250, strain: null });
     const events = await dataSource.manager.findBy(AuditEvent, {

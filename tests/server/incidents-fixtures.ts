@@ -16,9 +16,19 @@ const dayMs = 86_400_000;
 /** Production rows made straight in the database: incident tests need jars, not the jars API. */
 export async function makeProduction(operatorName = uniqueName('Operator')) {
   const m = dataSource.manager;
-  const cookRun = await m.save(m.create(CookRun, { code: uniqueName('CR'), minutesAtPressure: 90, container: '1 L jar' }));
-  const culture = await m.save(m.create(Culture, { code: uniqueName('LC'), species: 'Pleurotus ostreatus', state: 'released' }));
-  const session = await m.save(m.create(InoculationSession, { code: uniqueName('S'), heldOn: localDate(new Date(Date.now() - 5 * dayMs)), operatorName }));
+  const cookRun = await m.save(
+    m.create(CookRun, { code: uniqueName('CR'), minutesAtPressure: 90, container: '1 L jar' }),
+  );
+  const culture = await m.save(
+    m.create(Culture, { code: uniqueName('LC'), species: 'Pleurotus ostreatus', state: 'released' }),
+  );
+  const session = await m.save(
+    m.create(InoculationSession, {
+      code: uniqueName('S'),
+      heldOn: localDate(new Date(Date.now() - 5 * dayMs)),
+      operatorName,
+    }),
+  );
   return { cookRun, culture, session, operatorName };
 }
 

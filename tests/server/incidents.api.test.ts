@@ -25,7 +25,11 @@ const flag = (jarLabels: string[], extra: Record<string, unknown> = {}) => ({
   ...extra,
 });
 
-const post = (c: Client, body: unknown) => c.agent.post('/api/incidents').set('X-CSRF-Token', c.token()).send(body as object);
+const post = (c: Client, body: unknown) =>
+  c.agent
+    .post('/api/incidents')
+    .set('X-CSRF-Token', c.token())
+    .send(body as object);
 
 describe('POST /api/incidents', () => {
   it('answers 401 without a session and 403 to a trainer', async () => {
@@ -42,14 +46,35 @@ describe('POST /api/incidents', () => {
     const prod = await makeProduction();
     const a = await makeJar(prod);
     const b = await makeJar(prod, { status: 'colonised' });
-    const up = await tech.agent.post('/api/photos').set('X-CSRF-Token', tech.token()).attach('photos', await makeJpeg(), 'a.jpg');
-    const res = await post(tech, flag([a.label.toLowerCase(), b.label], { photoIds: [up.body[0].id], notes: 'two jars on shelf B2' }));
+    const up = await tech.agent
+      .post('/api/photos')
+      .set('X-CSRF-Token', tech.token())
+      .attach('photos', await makeJpeg(), 'a.jpg');
+    const res = await post(
+      tech,
+      flag([a.label.toLowerCase(), b.label], { photoIds: [up.body[0].id], notes: 'two jars on shelf B2' }),
+    );
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ status: 'open', verdict: 'pending', voided: false, foundByName: 'Test technician', contaminant: 'trichoderma' });
+    expect(res.body).toMatchObject({
+      status: 'open',
+      verdict: 'pending',
+      voided: false,
+      foundByName: 'Test technician',
+      contaminant: 'trichoderma',
+    });
     expect(res.body.jars.map((j: { label: string }) => j.label).sort()).toEqual([a.label, b.label].sort());
-    expect(res.body.jars[0]).toMatchObject({ status: 'contaminated', grain: 'rye', cookRun: { code: prod.cookRun.code }, culture: { code: prod.culture.code } });
+    expect(res.body.jars[0]).toMatchObject({
+      status: 'contaminated',
+      grain: 'rye',
+      cookRun: { code: prod.cookRun.code },
+      culture: { code: prod.culture.code },
+    });
     expect(res.body.photos).toHaveLength(1);
-    expect(res.body.history[0]).toMatchObject({ action: 'create', recordType: 'incident', userName: 'Test technician' });
+    expect(res.body.history[0]).toMatchObject({
+      action: 'create',
+      recordType: 'incident',
+      userName: 'Test technician',
+    });
 
     const jars = await dataSource.manager.findBy(Jar, [{ id: a.id }, { id: b.id }]);
     expect(jars.every((j) => j.status === 'contaminated')).toBe(true);
@@ -82,7 +107,10 @@ describe('POST /api/incidents', () => {
   it('answers 422 for a find before the jar was inoculated, in the future, or with an unknown photo', async () => {
     const tech = await signedIn(app, 'technician');
     const jar = await makeJar(await makeProduction(), { daysAgo: 3 });
-    const early = await post(tech, flag([jar.label], { foundAt: new Date(Date.now() - 10 * 86_400_000).toISOString() }));
+    const early = await post(
+      tech,
+      flag([jar.label], { foundAt: new Date(Date.now() - 10 * 86_400_000).toISOString() }),
+    );
     expect(early.status).toBe(422);
     expect(early.body.error.issues[0].path).toBe('foundAt');
     const future = await post(tech, flag([jar.label], { foundAt: new Date(Date.now() + 86_400_000).toISOString() }));
@@ -179,7 +207,10 @@ describe('GET /api/incidents', () => {
     const res = await tech.agent.get(`/api/incidents/export.csv?cookRunId=${prod.cookRun.id}`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
-    const lines = res.text.replace(/^\uFEFF/, '').trim().split('\r\n');
+    const lines = res.text
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\r\n');
     expect(lines).toHaveLength(2);
     expect(lines[0]).toMatch(/^id,found_at_utc,found_on,found_by,/);
     expect(lines[1]).toContain(jar.label);
@@ -192,7 +223,9 @@ describe('GET /api/incidents', () => {
     const tech = await signedIn(app, 'technician');
     const jar = await makeJar(await makeProduction());
     await post(tech, flag([jar.label]));
-    const rows: { jarId: number }[] = await dataSource.query(`${liveIncidentJarsSubquery()} AND live_ij.jarId = ?`, [jar.id]);
+    const rows: { jarId: number }[] = await dataSource.query(`${liveIncidentJarsSubquery()} AND live_ij.jarId = ?`, [
+      jar.id,
+    ]);
     expect(rows.map((r) => Number(r.jarId))).toEqual([jar.id]);
   });
 });

@@ -27,8 +27,16 @@ describe('ISO weeks', () => {
 
   it('reads the lab clock in its own time zone', () => {
     // Europe/London is on GMT in March and on BST (UTC+1) in June 2041 — the EU/UK rule: last Sunday of March.
-    expect(labClock(new Date('2041-03-11T06:59:00Z'), 'Europe/London')).toEqual({ date: '2041-03-11', weekday: 1, hour: 6 });
-    expect(labClock(new Date('2041-06-03T06:00:00Z'), 'Europe/London')).toEqual({ date: '2041-06-03', weekday: 1, hour: 7 });
+    expect(labClock(new Date('2041-03-11T06:59:00Z'), 'Europe/London')).toEqual({
+      date: '2041-03-11',
+      weekday: 1,
+      hour: 6,
+    });
+    expect(labClock(new Date('2041-06-03T06:00:00Z'), 'Europe/London')).toEqual({
+      date: '2041-06-03',
+      weekday: 1,
+      hour: 7,
+    });
     expect(isDigestTime(new Date('2041-03-11T06:59:00Z'))).toBe(false);
     expect(isDigestTime(new Date('2041-03-11T07:00:00Z'))).toBe(true);
     expect(isDigestTime(new Date('2041-06-03T05:59:00Z'))).toBe(false);
@@ -56,11 +64,36 @@ describe('weekly digest', () => {
   it('builds the weekly numbers with p-chart flags', async () => {
     const facts = await buildDigestFacts('2041-03-11');
     expect(facts.reportWeek).toBe('2041-W10');
-    expect(facts.weeks.map((w) => w.week)).toEqual(['2041-W03', '2041-W04', '2041-W05', '2041-W06', '2041-W07', '2041-W08', '2041-W09', '2041-W10']);
+    expect(facts.weeks.map((w) => w.week)).toEqual([
+      '2041-W03',
+      '2041-W04',
+      '2041-W05',
+      '2041-W06',
+      '2041-W07',
+      '2041-W08',
+      '2041-W09',
+      '2041-W10',
+    ]);
     const byWeek = Object.fromEntries(facts.weeks.map((w) => [w.week, w]));
-    expect(byWeek['2041-W03']).toEqual({ week: '2041-W03', jars: 20, contaminated: 1, incubating: 0, rate: 0.05, provisional: false, outOfControl: false });
+    expect(byWeek['2041-W03']).toEqual({
+      week: '2041-W03',
+      jars: 20,
+      contaminated: 1,
+      incubating: 0,
+      rate: 0.05,
+      provisional: false,
+      outOfControl: false,
+    });
     expect(byWeek['2041-W06']).toMatchObject({ jars: 20, contaminated: 12, rate: 0.6, outOfControl: true });
-    expect(byWeek['2041-W10']).toEqual({ week: '2041-W10', jars: 4, contaminated: 1, incubating: 3, rate: 0.25, provisional: true, outOfControl: false });
+    expect(byWeek['2041-W10']).toEqual({
+      week: '2041-W10',
+      jars: 4,
+      contaminated: 1,
+      incubating: 3,
+      rate: 0.25,
+      provisional: true,
+      outOfControl: false,
+    });
     // Montgomery, Introduction to Statistical Quality Control, ch. 7: p̄ = Σx/Σn over the settled weeks = 15/60;
     // UCL for n = 20 is 0.25 + 3·√(0.25·0.75/20) = 0.5405, so 12/20 = 0.6 is out of control.
     expect(facts.pBar).toBeCloseTo(0.25, 12);
@@ -75,14 +108,21 @@ describe('weekly digest', () => {
     const trainer = await signedIn(app, 'trainer');
     const quiet = await signedIn(app, 'admin');
     const tech = await signedIn(app, 'technician');
-    await quiet.agent.put('/api/mail/preferences').set('X-CSRF-Token', quiet.token()).send({ 'weekly-digest': false }).expect(200);
+    await quiet.agent
+      .put('/api/mail/preferences')
+      .set('X-CSRF-Token', quiet.token())
+      .send({ 'weekly-digest': false })
+      .expect(200);
 
     const scheduler = startDigestScheduler(60 * 60_000);
     try {
       await scheduler.tick(new Date('2041-03-11T06:30:00Z'));
       expect(await dataSource.manager.countBy(DigestRun, { isoWeek: '2041-W11' })).toBe(0);
       // Two instances ticking at once: GET_LOCK and the unique week let one of them send.
-      const [a, b] = await Promise.all([sendWeeklyDigest({ now: monday, trigger: 'schedule' }), sendWeeklyDigest({ now: monday, trigger: 'schedule' })]);
+      const [a, b] = await Promise.all([
+        sendWeeklyDigest({ now: monday, trigger: 'schedule' }),
+        sendWeeklyDigest({ now: monday, trigger: 'schedule' }),
+      ]);
       expect([a.skipped, b.skipped].sort()).toEqual([false, true]);
       await scheduler.tick(new Date('2041-03-11T08:00:00Z'));
     } finally {
@@ -114,7 +154,9 @@ describe('weekly digest', () => {
     const result = await sendWeeklyDigest({ now: monday, trigger: 'manual' });
     expect(result).toMatchObject({ week: '2041-W10', skipped: false, failed: 0 });
     expect(result.sent).toBeGreaterThan(0);
-    expect(mailsTo(sup.user.email!).filter((m) => m.subject === 'Weekly contamination digest: 2041-W10')).toHaveLength(1);
+    expect(mailsTo(sup.user.email!).filter((m) => m.subject === 'Weekly contamination digest: 2041-W10')).toHaveLength(
+      1,
+    );
   });
 
   it('lets an admin send the digest now from the API', async () => {
@@ -123,6 +165,8 @@ describe('weekly digest', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ skipped: false, failed: 0 });
     expect(res.body.week).toMatch(/^\d{4}-W\d{2}$/);
-    expect(mailsTo(admin.user.email!).filter((m) => m.subject === `Weekly contamination digest: ${res.body.week}`)).toHaveLength(1);
+    expect(
+      mailsTo(admin.user.email!).filter((m) => m.subject === `Weekly contamination digest: ${res.body.week}`),
+    ).toHaveLength(1);
   });
 });

@@ -36,14 +36,26 @@ describe('/api/mail/preferences', () => {
   it('starts with every kind on, saves a change with an audit event, and names a bad field', async () => {
     const tech = await signedIn(app, 'technician');
     const initial = await tech.agent.get('/api/mail/preferences').expect(200);
-    expect(initial.body).toEqual({ 'new-incident': true, 'cluster-alert': true, retraining: true, 'weekly-digest': true });
+    expect(initial.body).toEqual({
+      'new-incident': true,
+      'cluster-alert': true,
+      retraining: true,
+      'weekly-digest': true,
+    });
     const res = await optOut(tech, { 'weekly-digest': false });
     expect(res.body['weekly-digest']).toBe(false);
     expect((await tech.agent.get('/api/mail/preferences')).body['weekly-digest']).toBe(false);
-    const audit = await dataSource.manager.findOneBy(AuditEvent, { recordType: 'user', recordId: String(tech.user.id), field: 'mail:weekly-digest' });
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'user',
+      recordId: String(tech.user.id),
+      field: 'mail:weekly-digest',
+    });
     expect(audit).toMatchObject({ oldValue: 'true', newValue: 'false' });
 
-    const bad = await tech.agent.put('/api/mail/preferences').set('X-CSRF-Token', tech.token()).send({ retraining: 'no' });
+    const bad = await tech.agent
+      .put('/api/mail/preferences')
+      .set('X-CSRF-Token', tech.token())
+      .send({ retraining: 'no' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0].path).toBe('retraining');
     const unknown = await tech.agent.put('/api/mail/preferences').set('X-CSRF-Token', tech.token()).send({ sms: true });
@@ -68,7 +80,9 @@ describe('/api/mail/sent', () => {
     const incident = await makeIncident(jars, { foundOn: '2024-06-10' });
     await notifyIncidentCreated(incident.id);
     const res = await admin.agent.get('/api/mail/sent?kind=new-incident&pageSize=200').expect(200);
-    const row = res.body.items.find((m: { to: string; subject: string }) => m.to === sup.user.email && m.subject.includes(`#${incident.id}`));
+    const row = res.body.items.find(
+      (m: { to: string; subject: string }) => m.to === sup.user.email && m.subject.includes(`#${incident.id}`),
+    );
     expect(row).toMatchObject({ kind: 'new-incident', status: 'sent', toUserId: sup.user.id });
     const detail = await admin.agent.get(`/api/mail/sent/${row.id}`).expect(200);
     expect(detail.body.text).toContain(jars[0]!.label);
@@ -86,7 +100,12 @@ describe('mail on a new incident', () => {
     const run = await makeCookRun();
     const session = await makeSession({ heldOn: '2024-07-01' });
     const culture = await makeCulture();
-    const jars = await makeJars(2, { inoculatedOn: '2024-07-01', cookRunId: run.id, sessionId: session.id, cultureId: culture.id });
+    const jars = await makeJars(2, {
+      inoculatedOn: '2024-07-01',
+      cookRunId: run.id,
+      sessionId: session.id,
+      cultureId: culture.id,
+    });
     const incident = await makeIncident(jars, { foundOn: '2024-07-08', contaminant: 'trichoderma' });
 
     const outcome = await notifyIncidentCreated(incident.id);
@@ -100,8 +119,12 @@ describe('mail on a new incident', () => {
 
     const mail = mailsTo(sup.user.email!).find((m) => m.subject === subject)!;
     expect(mail.kind).toBe('new-incident');
-    expect(mail.text).toContain(`Test finder filed incident #${incident.id} on 2024-07-08: green mould (Trichoderma), 2 jars`);
-    expect(mail.text).toContain(`${jars[0]!.label} — cook run ${run.code}, session ${session.code}, culture ${culture.code}`);
+    expect(mail.text).toContain(
+      `Test finder filed incident #${incident.id} on 2024-07-08: green mould (Trichoderma), 2 jars`,
+    );
+    expect(mail.text).toContain(
+      `${jars[0]!.label} — cook run ${run.code}, session ${session.code}, culture ${culture.code}`,
+    );
     expect(mail.text).toContain('Do not open contaminated jars indoors');
     expect(mail.html).toContain(`/incidents/${incident.id}`);
   });
@@ -111,8 +134,18 @@ describe('mail on a new incident', () => {
     registerMailListeners();
     const jars = await makeJars(1, { inoculatedOn: '2024-07-15' });
     const incident = await makeIncident(jars, { foundOn: '2024-07-20', contaminant: 'bacterial' });
-    emitIncidentCreated({ id: incident.id, contaminant: 'bacterial', severity: 'medium', stage: 'incubation', foundAt: incident.foundAt.toISOString(), foundByName: 'Test finder', jarLabels: [jars[0]!.label] });
-    const got = await waitForMail((m) => m.to.includes(sup.user.email!) && m.subject.startsWith(`New incident #${incident.id}:`));
+    emitIncidentCreated({
+      id: incident.id,
+      contaminant: 'bacterial',
+      severity: 'medium',
+      stage: 'incubation',
+      foundAt: incident.foundAt.toISOString(),
+      foundByName: 'Test finder',
+      jarLabels: [jars[0]!.label],
+    });
+    const got = await waitForMail(
+      (m) => m.to.includes(sup.user.email!) && m.subject.startsWith(`New incident #${incident.id}:`),
+    );
     expect(got.map((m) => m.subject)).toEqual([`New incident #${incident.id}: bacterial (wet spot), 1 jar`]);
   });
 
@@ -164,21 +197,33 @@ describe('cluster alerts', () => {
     for (const [i, foundOn] of ['2024-08-05', '2024-08-07', '2024-08-11', '2024-08-11'].entries()) {
       const session = await makeSession({ heldOn: '2024-08-01' });
       const culture = await makeCulture();
-      const jars = await makeJars(i === 0 ? 2 : 1, { inoculatedOn: '2024-08-01', cookRunId: run.id, sessionId: session.id, cultureId: culture.id });
+      const jars = await makeJars(i === 0 ? 2 : 1, {
+        inoculatedOn: '2024-08-01',
+        cookRunId: run.id,
+        sessionId: session.id,
+        cultureId: culture.id,
+      });
       incidents.push(await makeIncident(jars, { foundOn, contaminant: 'bacterial' }));
     }
     // A ruled-out incident in the window does not count towards the cluster.
-    const ruledOut = await makeIncident(await makeJars(1, { inoculatedOn: '2024-08-01', cookRunId: run.id }), { foundOn: '2024-08-06', verdict: 'ruled-out' });
+    const ruledOut = await makeIncident(await makeJars(1, { inoculatedOn: '2024-08-01', cookRunId: run.id }), {
+      foundOn: '2024-08-06',
+      verdict: 'ruled-out',
+    });
 
     expect((await notifyIncidentCreated(incidents[0]!.id)).clusters).toEqual([]);
     expect((await notifyIncidentCreated(ruledOut.id)).clusters).toEqual([]);
     expect((await notifyIncidentCreated(incidents[1]!.id)).clusters).toEqual([]);
     // The third and fourth arrive together: the lock lets exactly one of them alert.
-    const outcomes = await Promise.all([notifyIncidentCreated(incidents[2]!.id), notifyIncidentCreated(incidents[3]!.id)]);
+    const outcomes = await Promise.all([
+      notifyIncidentCreated(incidents[2]!.id),
+      notifyIncidentCreated(incidents[3]!.id),
+    ]);
     expect(outcomes.flatMap((o) => o.clusters).map((c) => c.dimension)).toEqual(['cookRun']);
 
     const subjectStart = `Cluster alert: `;
-    const ofRun = (email: string) => mailsTo(email).filter((m) => m.subject.startsWith(subjectStart) && m.subject.includes(run.code));
+    const ofRun = (email: string) =>
+      mailsTo(email).filter((m) => m.subject.startsWith(subjectStart) && m.subject.includes(run.code));
     expect(ofRun(sup.user.email!)).toHaveLength(1);
     expect(ofRun(trainer.user.email!)).toHaveLength(1);
     expect(ofRun(quiet.user.email!)).toHaveLength(0);
@@ -188,13 +233,17 @@ describe('cluster alerts', () => {
     const mail = ofRun(sup.user.email!)[0]!;
     const count = mail.subject.includes('4 incidents') ? 4 : 3;
     expect(mail.subject).toBe(`Cluster alert: ${count} incidents from cook run ${run.code} within 7 days`);
-    expect(mail.text).toContain(`${count} incidents from cook run ${run.code} were found between 2024-08-05 and 2024-08-11, ${count + 1} jars in all. The lab alerts at 3 incidents within 7 days.`);
+    expect(mail.text).toContain(
+      `${count} incidents from cook run ${run.code} were found between 2024-08-05 and 2024-08-11, ${count + 1} jars in all. The lab alerts at 3 incidents within 7 days.`,
+    );
     expect(mail.text).toContain(`#${incidents[0]!.id}`);
     expect(mail.text).not.toContain(`#${ruledOut.id} `);
     expect(mail.text).toContain('sterilisation cycle');
 
     // A later incident that extends the same cluster does not mail again.
-    const later = await makeIncident(await makeJars(1, { inoculatedOn: '2024-08-01', cookRunId: run.id }), { foundOn: '2024-08-12' });
+    const later = await makeIncident(await makeJars(1, { inoculatedOn: '2024-08-01', cookRunId: run.id }), {
+      foundOn: '2024-08-12',
+    });
     expect((await notifyIncidentCreated(later.id)).clusters).toEqual([]);
     expect(ofRun(sup.user.email!)).toHaveLength(1);
   });

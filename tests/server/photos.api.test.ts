@@ -17,7 +17,9 @@ const app = createTestApp();
 function storedFiles(): string[] {
   const walk = (dir: string): string[] => {
     try {
-      return readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)]));
+      return readdirSync(dir, { withFileTypes: true }).flatMap((e) =>
+        e.isDirectory() ? walk(path.join(dir, e.name)) : [path.join(dir, e.name)],
+      );
     } catch {
       return [];
     }
@@ -25,7 +27,11 @@ function storedFiles(): string[] {
   return walk(path.resolve(config().UPLOAD_DIR));
 }
 
-async function upload(client: Awaited<ReturnType<typeof signedIn>>, files: { bytes: Buffer; name: string }[], field = 'photos') {
+async function upload(
+  client: Awaited<ReturnType<typeof signedIn>>,
+  files: { bytes: Buffer; name: string }[],
+  field = 'photos',
+) {
   let req = client.agent.post('/api/photos').set('X-CSRF-Token', client.token());
   for (const f of files) req = req.attach(field, f.bytes, f.name);
   return req;
@@ -47,7 +53,12 @@ describe('POST /api/photos', () => {
     expect(res.status).toBe(201);
     const [photo] = res.body;
     // SHA-256 as specified by NIST FIPS 180-4; node's crypto is the reference implementation here.
-    expect(photo).toMatchObject({ sha256: createHash('sha256').update(bytes).digest('hex'), width: 800, height: 600, mime: 'image/jpeg' });
+    expect(photo).toMatchObject({
+      sha256: createHash('sha256').update(bytes).digest('hex'),
+      width: 800,
+      height: 600,
+      mime: 'image/jpeg',
+    });
     expect(photo.url).toBe(`/api/photos/${photo.id}/original`);
     expect(await auditCount('photo', photo.id)).toBe(1);
 
@@ -105,7 +116,10 @@ describe('POST /api/photos', () => {
   it('answers 413 for more than six photos at once', async () => {
     const tech = await signedIn(app, 'technician');
     const jpeg = await makeJpeg(40, 30);
-    const res = await upload(tech, Array.from({ length: 7 }, (_, i) => ({ bytes: jpeg, name: `p${i}.jpg` })));
+    const res = await upload(
+      tech,
+      Array.from({ length: 7 }, (_, i) => ({ bytes: jpeg, name: `p${i}.jpg` })),
+    );
     expect(res.status).toBe(413);
   });
 
@@ -124,7 +138,10 @@ describe('POST /api/photos', () => {
     const bytes = await makeJpeg(200, 100);
     const sha = createHash('sha256').update(bytes).digest('hex');
     const first = await upload(tech, [{ bytes, name: 'a.jpg' }]);
-    const second = await upload(tech, [{ bytes, name: 'b.jpg' }, { bytes, name: 'c.jpg' }]);
+    const second = await upload(tech, [
+      { bytes, name: 'b.jpg' },
+      { bytes, name: 'c.jpg' },
+    ]);
     expect(first.status).toBe(201);
     expect(second.status).toBe(201);
     expect(second.body.map((p: { id: number }) => p.id)).toEqual([first.body[0].id, first.body[0].id]);

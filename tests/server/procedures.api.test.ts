@@ -52,8 +52,22 @@ describe('procedures: role checks', () => {
     const client = await signedIn(app, role);
     const t = client.token();
     expect((await client.agent.post('/api/procedures').set('X-CSRF-Token', t).send(newProcedure())).status).toBe(403);
-    expect((await client.agent.post(`/api/procedures/${proc.id}/versions`).set('X-CSRF-Token', t).send({ changeNote: 'x', steps })).status).toBe(403);
-    expect((await client.agent.post('/api/incidents/1/step-links').set('X-CSRF-Token', t).send({ stepId: step!.id, note: 'x' })).status).toBe(403);
+    expect(
+      (
+        await client.agent
+          .post(`/api/procedures/${proc.id}/versions`)
+          .set('X-CSRF-Token', t)
+          .send({ changeNote: 'x', steps })
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await client.agent
+          .post('/api/incidents/1/step-links')
+          .set('X-CSRF-Token', t)
+          .send({ stepId: step!.id, note: 'x' })
+      ).status,
+    ).toBe(403);
     expect((await client.agent.delete('/api/step-links/1').set('X-CSRF-Token', t)).status).toBe(403);
     // Reading stays open to every role.
     expect((await client.agent.get(`/api/procedures/${proc.id}`)).status).toBe(200);
@@ -91,7 +105,10 @@ describe('procedures: validation and missing records', () => {
   it('answers 400 naming changeNote when a new version gives no reason', async () => {
     const trainer = await signedIn(app, 'trainer');
     const proc = await create(trainer);
-    const res = await trainer.agent.post(`/api/procedures/${proc.id}/versions`).set('X-CSRF-Token', trainer.token()).send({ steps });
+    const res = await trainer.agent
+      .post(`/api/procedures/${proc.id}/versions`)
+      .set('X-CSRF-Token', trainer.token())
+      .send({ steps });
     expect(res.status).toBe(400);
     expect(res.body.error.issues[0].path).toBe('changeNote');
   });
@@ -102,8 +119,22 @@ describe('procedures: validation and missing records', () => {
     expect((await trainer.agent.get('/api/procedures/999999')).status).toBe(404);
     expect((await trainer.agent.get('/api/procedure-versions/999999')).status).toBe(404);
     expect((await trainer.agent.get('/api/procedure-steps/999999/stats')).status).toBe(404);
-    expect((await trainer.agent.post('/api/procedures/999999/versions').set('X-CSRF-Token', t).send({ changeNote: 'x', steps })).status).toBe(404);
-    expect((await trainer.agent.post('/api/incidents/999999/step-links').set('X-CSRF-Token', t).send({ stepId: 1, note: 'x' })).status).toBe(404);
+    expect(
+      (
+        await trainer.agent
+          .post('/api/procedures/999999/versions')
+          .set('X-CSRF-Token', t)
+          .send({ changeNote: 'x', steps })
+      ).status,
+    ).toBe(404);
+    expect(
+      (
+        await trainer.agent
+          .post('/api/incidents/999999/step-links')
+          .set('X-CSRF-Token', t)
+          .send({ stepId: 1, note: 'x' })
+      ).status,
+    ).toBe(404);
     expect((await trainer.agent.delete('/api/step-links/999999').set('X-CSRF-Token', t)).status).toBe(404);
   });
 });
@@ -132,7 +163,11 @@ describe('procedures: versions', () => {
     const detail = (await trainer.agent.get(`/api/procedures/${proc.id}`).expect(200)).body;
     expect(detail.currentVersion).toBe(2);
     expect(detail.versions.map((v: { version: number }) => v.version)).toEqual([2, 1]);
-    const audit = await dataSource.manager.findOneBy(AuditEvent, { recordType: 'procedure', recordId: String(proc.id), action: 'publish-version' });
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'procedure',
+      recordId: String(proc.id),
+      action: 'publish-version',
+    });
     expect(audit).toMatchObject({ oldValue: '1', reason: 'Flaming between jars made a step of its own.' });
   });
 
@@ -160,8 +195,18 @@ describe('procedures: incident–step links and step statistics', () => {
       .set('X-CSRF-Token', trainer.token())
       .send({ stepId: flame!.id, note: 'Needle not re-flamed between jars.' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ incidentId: incident.id, stepId: flame!.id, stepPosition: 2, version: 1, linkedByName: 'Test trainer' });
-    const audit = await dataSource.manager.findOneBy(AuditEvent, { recordType: 'incident', recordId: String(incident.id), action: 'link-step' });
+    expect(res.body).toMatchObject({
+      incidentId: incident.id,
+      stepId: flame!.id,
+      stepPosition: 2,
+      version: 1,
+      linkedByName: 'Test trainer',
+    });
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'incident',
+      recordId: String(incident.id),
+      action: 'link-step',
+    });
     expect(audit?.reason).toBe('Needle not re-flamed between jars.');
 
     const again = await trainer.agent
@@ -175,15 +220,24 @@ describe('procedures: incident–step links and step statistics', () => {
     const list = await trainer.agent.get(`/api/incidents/${incident.id}/step-links`).expect(200);
     expect(list.body.items).toHaveLength(1);
 
-    expect((await trainer.agent.delete(`/api/step-links/${res.body.id}`).set('X-CSRF-Token', trainer.token())).status).toBe(204);
+    expect(
+      (await trainer.agent.delete(`/api/step-links/${res.body.id}`).set('X-CSRF-Token', trainer.token())).status,
+    ).toBe(204);
     expect((await stepsOf(trainer, proc.currentVersionId))[1]!.incidentsLinked).toBe(0);
-    const unlink = await dataSource.manager.findOneBy(AuditEvent, { recordType: 'incident', recordId: String(incident.id), action: 'unlink-step' });
+    const unlink = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'incident',
+      recordId: String(incident.id),
+      action: 'unlink-step',
+    });
     expect(unlink).not.toBeNull();
   });
 
   it('answers 400 naming note and stepId for a bad link body', async () => {
     const trainer = await signedIn(app, 'trainer');
-    const res = await trainer.agent.post('/api/incidents/1/step-links').set('X-CSRF-Token', trainer.token()).send({ stepId: 'x', note: '' });
+    const res = await trainer.agent
+      .post('/api/incidents/1/step-links')
+      .set('X-CSRF-Token', trainer.token())
+      .send({ stepId: 'x', note: '' });
     expect(res.status).toBe(400);
     expect(res.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(['note', 'stepId']);
   });
@@ -195,8 +249,16 @@ describe('procedures: incident–step links and step statistics', () => {
     const proc = await create(trainer);
     const [wipe, flame] = await stepsOf(trainer, proc.currentVersionId);
     const old = '2024-03-04';
-    const ticked = await makeSession({ heldOn: old, versionId: proc.currentVersionId, checks: { [wipe!.id]: true, [flame!.id]: true } });
-    const skipped = await makeSession({ heldOn: old, versionId: proc.currentVersionId, checks: { [wipe!.id]: true, [flame!.id]: false } });
+    const ticked = await makeSession({
+      heldOn: old,
+      versionId: proc.currentVersionId,
+      checks: { [wipe!.id]: true, [flame!.id]: true },
+    });
+    const skipped = await makeSession({
+      heldOn: old,
+      versionId: proc.currentVersionId,
+      checks: { [wipe!.id]: true, [flame!.id]: false },
+    });
     const elsewhere = await makeSession({ heldOn: old });
     const tickedJars = await makeJars(4, { inoculatedOn: old, sessionId: ticked.id });
     const skippedJars = await makeJars(4, { inoculatedOn: old, sessionId: skipped.id });

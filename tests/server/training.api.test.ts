@@ -10,7 +10,10 @@ import { mailsTo } from '../setup/mail-sink';
 const app = createTestApp();
 type Client = Awaited<ReturnType<typeof signedIn>>;
 
-const steps = [{ text: 'Wipe lids with 70 % isopropyl alcohol and let them dry.' }, { text: 'Flame the needle until it glows; let it cool.' }];
+const steps = [
+  { text: 'Wipe lids with 70 % isopropyl alcohol and let them dry.' },
+  { text: 'Flame the needle until it glows; let it cool.' },
+];
 
 async function procedure(trainer: Client) {
   const res = await trainer.agent
@@ -22,12 +25,18 @@ async function procedure(trainer: Client) {
 }
 
 const train = (client: Client, userId: number, procedureVersionId: number, trainedOn = '2026-01-12') =>
-  client.agent.post('/api/training-records').set('X-CSRF-Token', client.token()).send({ userId, procedureVersionId, trainedOn });
+  client.agent
+    .post('/api/training-records')
+    .set('X-CSRF-Token', client.token())
+    .send({ userId, procedureVersionId, trainedOn });
 
 describe('training: role checks', () => {
-  it.each(['/api/training-records', '/api/training/operators', '/api/training/retrain-requests'])('answers 401 to GET %s without a session', async (url) => {
-    expect((await supertest(app).get(url)).status).toBe(401);
-  });
+  it.each(['/api/training-records', '/api/training/operators', '/api/training/retrain-requests'])(
+    'answers 401 to GET %s without a session',
+    async (url) => {
+      expect((await supertest(app).get(url)).status).toBe(401);
+    },
+  );
 
   it.each(['technician', 'supervisor'] as const)('refuses to let a %s write training records', async (role) => {
     const trainer = await signedIn(app, 'trainer');
@@ -77,8 +86,17 @@ describe('training: records', () => {
     const other = await signedIn(app, 'technician');
     const res = await train(trainer, tech.user.id, proc.currentVersionId);
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ userId: tech.user.id, personName: 'Test technician', version: 1, trainerId: trainer.user.id, trainerName: 'Test trainer', trainedOn: '2026-01-12' });
-    expect(await dataSource.manager.existsBy(AuditEvent, { recordType: 'training-record', recordId: String(res.body.id) })).toBe(true);
+    expect(res.body).toMatchObject({
+      userId: tech.user.id,
+      personName: 'Test technician',
+      version: 1,
+      trainerId: trainer.user.id,
+      trainerName: 'Test trainer',
+      trainedOn: '2026-01-12',
+    });
+    expect(
+      await dataSource.manager.existsBy(AuditEvent, { recordType: 'training-record', recordId: String(res.body.id) }),
+    ).toBe(true);
     await train(trainer, other.user.id, proc.currentVersionId).expect(201);
 
     const mine = await tech.agent.get(`/api/training-records?procedureId=${proc.id}`).expect(200);
@@ -93,7 +111,11 @@ describe('training: operators view', () => {
     const trainer = await signedIn(app, 'trainer');
     const proc = await procedure(trainer);
     const tech = await signedIn(app, 'technician');
-    const session = await makeSession({ heldOn: '2024-05-06', operatorId: tech.user.id, versionId: proc.currentVersionId });
+    const session = await makeSession({
+      heldOn: '2024-05-06',
+      operatorId: tech.user.id,
+      versionId: proc.currentVersionId,
+    });
     const jars = await makeJars(5, { inoculatedOn: '2024-05-06', sessionId: session.id });
     await makeIncident(jars.slice(0, 2), { foundOn: '2024-05-13' });
     await makeIncident(jars.slice(2, 3), { foundOn: '2024-05-14' });
@@ -102,15 +124,28 @@ describe('training: operators view', () => {
 
     const row = async () => {
       const res = await trainer.agent.get(`/api/training/operators?procedureId=${proc.id}`).expect(200);
-      return { procedure: res.body.procedure, me: res.body.operators.find((o: { userId: number }) => o.userId === tech.user.id) };
+      return {
+        procedure: res.body.procedure,
+        me: res.body.operators.find((o: { userId: number }) => o.userId === tech.user.id),
+      };
     };
     const first = await row();
-    expect(first.me).toMatchObject({ sessions: 1, jars: 5, contaminatedJars: 3, incidents: 2, trainedVersion: 1, trainedOnCurrent: true });
+    expect(first.me).toMatchObject({
+      sessions: 1,
+      jars: 5,
+      contaminatedJars: 3,
+      incidents: 2,
+      trainedVersion: 1,
+      trainedOnCurrent: true,
+    });
 
     await trainer.agent
       .post(`/api/procedures/${proc.id}/versions`)
       .set('X-CSRF-Token', trainer.token())
-      .send({ changeNote: 'Added a cooling step.', steps: [...steps, { text: 'Let the needle cool before the port.' }] })
+      .send({
+        changeNote: 'Added a cooling step.',
+        steps: [...steps, { text: 'Let the needle cool before the port.' }],
+      })
       .expect(201);
     const second = await row();
     expect(second.procedure.currentVersion).toBe(2);
@@ -128,9 +163,19 @@ describe('training: retraining requests', () => {
     const res = await sup.agent
       .post('/api/training/retrain-requests')
       .set('X-CSRF-Token', sup.token())
-      .send({ userId: tech.user.id, procedureVersionId: proc.currentVersionId, reason: 'Three port contaminations in session S-17.' });
+      .send({
+        userId: tech.user.id,
+        procedureVersionId: proc.currentVersionId,
+        reason: 'Three port contaminations in session S-17.',
+      });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ userId: tech.user.id, version: 1, requestedById: sup.user.id, doneAt: null, mailed: true });
+    expect(res.body).toMatchObject({
+      userId: tech.user.id,
+      version: 1,
+      requestedById: sup.user.id,
+      doneAt: null,
+      mailed: true,
+    });
 
     const mails = mailsTo(tech.user.email!);
     expect(mails).toHaveLength(1);
@@ -154,7 +199,11 @@ describe('training: retraining requests', () => {
     const trainer = await signedIn(app, 'trainer');
     const proc = await procedure(trainer);
     const tech = await signedIn(app, 'technician');
-    await tech.agent.put('/api/mail/preferences').set('X-CSRF-Token', tech.token()).send({ retraining: false }).expect(200);
+    await tech.agent
+      .put('/api/mail/preferences')
+      .set('X-CSRF-Token', tech.token())
+      .send({ retraining: false })
+      .expect(200);
     const res = await trainer.agent
       .post('/api/training/retrain-requests')
       .set('X-CSRF-Token', trainer.token())
@@ -169,10 +218,16 @@ describe('training: retraining requests', () => {
     const tech = await signedIn(app, 'technician');
     const proc = await procedure(trainer);
     const t = trainer.token();
-    const bad = await trainer.agent.post('/api/training/retrain-requests').set('X-CSRF-Token', t).send({ userId: tech.user.id, procedureVersionId: proc.currentVersionId, reason: ' ' });
+    const bad = await trainer.agent
+      .post('/api/training/retrain-requests')
+      .set('X-CSRF-Token', t)
+      .send({ userId: tech.user.id, procedureVersionId: proc.currentVersionId, reason: ' ' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0].path).toBe('reason');
-    const missing = await trainer.agent.post('/api/training/retrain-requests').set('X-CSRF-Token', t).send({ userId: tech.user.id, procedureVersionId: 999999, reason: 'x' });
+    const missing = await trainer.agent
+      .post('/api/training/retrain-requests')
+      .set('X-CSRF-Token', t)
+      .send({ userId: tech.user.id, procedureVersionId: 999999, reason: 'x' });
     expect(missing.status).toBe(404);
   });
 });

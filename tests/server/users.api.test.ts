@@ -6,7 +6,12 @@ import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 
 const app = createTestApp();
-const newUser = () => ({ username: uniqueName('new'), displayName: 'New Person', role: 'technician', password: 'long-enough-pass' });
+const newUser = () => ({
+  username: uniqueName('new'),
+  displayName: 'New Person',
+  role: 'technician',
+  password: 'long-enough-pass',
+});
 
 describe('/api/users', () => {
   it('answers 401 without a session', async () => {
@@ -27,7 +32,11 @@ describe('/api/users', () => {
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ username: body.username, role: 'technician', active: true });
     expect(res.body.passwordHash).toBeUndefined();
-    const audit = await dataSource.manager.findOneBy(AuditEvent, { recordType: 'user', recordId: String(res.body.id), action: 'create' });
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'user',
+      recordId: String(res.body.id),
+      action: 'create',
+    });
     expect(audit?.userName).toBe('Test admin');
   });
 
@@ -42,29 +51,43 @@ describe('/api/users', () => {
 
   it('answers 400 naming the field for a bad role', async () => {
     const admin = await signedIn(app, 'admin');
-    const res = await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send({ ...newUser(), role: 'owner' });
+    const res = await admin.agent
+      .post('/api/users')
+      .set('X-CSRF-Token', admin.token())
+      .send({ ...newUser(), role: 'owner' });
     expect(res.status).toBe(400);
     expect(res.body.error.issues[0].path).toBe('role');
   });
 
   it('answers 404 for an unknown user id', async () => {
     const admin = await signedIn(app, 'admin');
-    const res = await admin.agent.patch('/api/users/999999').set('X-CSRF-Token', admin.token()).send({ role: 'trainer' });
+    const res = await admin.agent
+      .patch('/api/users/999999')
+      .set('X-CSRF-Token', admin.token())
+      .send({ role: 'trainer' });
     expect(res.status).toBe(404);
   });
 
   it('changes the role with an audit event holding old and new value', async () => {
     const admin = await signedIn(app, 'admin');
     const created = await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(newUser());
-    const res = await admin.agent.patch(`/api/users/${created.body.id}`).set('X-CSRF-Token', admin.token()).send({ role: 'supervisor' });
+    const res = await admin.agent
+      .patch(`/api/users/${created.body.id}`)
+      .set('X-CSRF-Token', admin.token())
+      .send({ role: 'supervisor' });
     expect(res.body.role).toBe('supervisor');
-    const audit = await dataSource.manager.findOneBy(AuditEvent, { recordType: 'user', recordId: String(created.body.id), field: 'role' });
+    const audit = await dataSource.manager.findOneBy(AuditEvent, {
+      recordType: 'user',
+      recordId: String(created.body.id),
+      field: 'role',
+    });
     expect(audit).toMatchObject({ oldValue: 'technician', newValue: 'supervisor' });
   });
 
   it('pages and sorts on the server', async () => {
     const admin = await signedIn(app, 'admin');
-    for (let i = 0; i < 3; i += 1) await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(newUser());
+    for (let i = 0; i < 3; i += 1)
+      await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(newUser());
     const res = await admin.agent.get('/api/users?page=1&pageSize=2&sort=-username');
     expect(res.status).toBe(200);
     expect(res.body.items).toHaveLength(2);
@@ -76,7 +99,10 @@ describe('/api/users', () => {
 
   it('will not let an admin deactivate their own account', async () => {
     const admin = await signedIn(app, 'admin');
-    const res = await admin.agent.patch(`/api/users/${admin.user.id}`).set('X-CSRF-Token', admin.token()).send({ active: false });
+    const res = await admin.agent
+      .patch(`/api/users/${admin.user.id}`)
+      .set('X-CSRF-Token', admin.token())
+      .send({ active: false });
     expect(res.status).toBe(400);
     expect(res.body.error.issues[0].path).toBe('active');
   });

@@ -24,7 +24,12 @@ export const makeCookRun = (minutes = 90) =>
 
 export const makeCulture = () => m().save(m().create(Culture, { code: uniqueName('LC'), state: 'released' }));
 
-export async function makeSession(options: { heldOn: string; operatorId?: number | null; versionId?: number | null; checks?: Record<number, boolean> }) {
+export async function makeSession(options: {
+  heldOn: string;
+  operatorId?: number | null;
+  versionId?: number | null;
+  checks?: Record<number, boolean>;
+}) {
   const session = await m().save(
     m().create(InoculationSession, {
       code: uniqueName('S'),
@@ -45,7 +50,10 @@ export async function makeSession(options: { heldOn: string; operatorId?: number
   return session;
 }
 
-export async function makeJars(count: number, at: { inoculatedOn: string; sessionId?: number; cookRunId?: number; cultureId?: number; grain?: string }) {
+export async function makeJars(
+  count: number,
+  at: { inoculatedOn: string; sessionId?: number; cookRunId?: number; cultureId?: number; grain?: string },
+) {
   const gid = await grainId(at.grain);
   const jars: Jar[] = [];
   for (let i = 0; i < count; i += 1) {

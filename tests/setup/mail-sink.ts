@@ -20,16 +20,24 @@ declare module 'vitest' {
 }
 
 function decodeWords(value: string): string {
-  return value.replace(/=\?([^?]+)\?([QqBb])\?([^?]*)\?=(\s+(?==\?))?/g, (_m, _charset: string, enc: string, data: string) => {
-    if (enc.toUpperCase() === 'B') return Buffer.from(data, 'base64').toString('utf8');
-    const bytes = data.replace(/_/g, ' ').replace(/=([0-9A-Fa-f]{2})/g, (_x, h: string) => String.fromCharCode(parseInt(h, 16)));
-    return Buffer.from(bytes, 'latin1').toString('utf8');
-  });
+  return value.replace(
+    /=\?([^?]+)\?([QqBb])\?([^?]*)\?=(\s+(?==\?))?/g,
+    (_m, _charset: string, enc: string, data: string) => {
+      if (enc.toUpperCase() === 'B') return Buffer.from(data, 'base64').toString('utf8');
+      const bytes = data
+        .replace(/_/g, ' ')
+        .replace(/=([0-9A-Fa-f]{2})/g, (_x, h: string) => String.fromCharCode(parseInt(h, 16)));
+      return Buffer.from(bytes, 'latin1').toString('utf8');
+    },
+  );
 }
 
 function parseHeaders(block: string): Map<string, string> {
   const headers = new Map<string, string>();
-  for (const line of block.replace(/\r\n/g, '\n').replace(/\n[ \t]+/g, ' ').split('\n')) {
+  for (const line of block
+    .replace(/\r\n/g, '\n')
+    .replace(/\n[ \t]+/g, ' ')
+    .split('\n')) {
     const i = line.indexOf(':');
     if (i > 0) headers.set(line.slice(0, i).trim().toLowerCase(), line.slice(i + 1).trim());
   }
@@ -40,7 +48,9 @@ function decodeBody(body: string, encoding: string | undefined): string {
   const enc = (encoding ?? '7bit').toLowerCase();
   if (enc === 'base64') return Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8');
   if (enc === 'quoted-printable') {
-    const bytes = body.replace(/=\r?\n/g, '').replace(/=([0-9A-Fa-f]{2})/g, (_x, h: string) => String.fromCharCode(parseInt(h, 16)));
+    const bytes = body
+      .replace(/=\r?\n/g, '')
+      .replace(/=([0-9A-Fa-f]{2})/g, (_x, h: string) => String.fromCharCode(parseInt(h, 16)));
     return Buffer.from(bytes, 'latin1').toString('utf8');
   }
   return body;
@@ -58,7 +68,10 @@ export function parseEml(raw: string, file = ''): SinkMail {
   const h = parseHeaders(head);
   const mail: SinkMail = {
     file,
-    to: (h.get('to') ?? '').split(',').map((a) => (/<([^>]+)>/.exec(a)?.[1] ?? a).trim().toLowerCase()).filter(Boolean),
+    to: (h.get('to') ?? '')
+      .split(',')
+      .map((a) => (/<([^>]+)>/.exec(a)?.[1] ?? a).trim().toLowerCase())
+      .filter(Boolean),
     from: decodeWords(h.get('from') ?? ''),
     subject: decodeWords(h.get('subject') ?? ''),
     kind: h.get('x-asepta-kind'),
@@ -90,7 +103,8 @@ export function readMailSink(dir = mailSinkDir()): SinkMail[] {
   return files.sort().map((f) => parseEml(readFileSync(path.join(dir, f), 'utf8'), f));
 }
 
-export const mailsTo = (address: string, mails = readMailSink()) => mails.filter((m) => m.to.includes(address.toLowerCase()));
+export const mailsTo = (address: string, mails = readMailSink()) =>
+  mails.filter((m) => m.to.includes(address.toLowerCase()));
 
 /** Polls the sink for mail sent by an after-commit listener that the request did not wait for. */
 export async function waitForMail(match: (m: SinkMail) => boolean, timeoutMs = 5000): Promise<SinkMail[]> {

@@ -14,7 +14,9 @@ export function createTestApp(): Express {
 export type Agent = ReturnType<typeof supertest.agent>;
 
 /** A cookie-keeping client that carries a fresh CSRF token on every state-changing call. */
-export async function csrfAgent(app: Express): Promise<{ agent: Agent; token: () => string; refresh: () => Promise<void> }> {
+export async function csrfAgent(
+  app: Express,
+): Promise<{ agent: Agent; token: () => string; refresh: () => Promise<void> }> {
   const agent = supertest.agent(app);
   let token = '';
   const refresh = async () => {

@@ -20,14 +20,19 @@ export function ErrorFallback({ error, onRetry }: ErrorFallbackProps) {
           <div className="flex flex-wrap gap-3">
             <Button onClick={onRetry ?? (() => window.location.reload())}>Try again</Button>
             {/* A plain link: this fallback may show outside the router. */}
-            <a href={paths.home.to()} className="inline-flex min-h-touch items-center px-2 font-semibold text-accent underline">
+            <a
+              href={paths.home.to()}
+              className="inline-flex min-h-touch items-center px-2 font-semibold text-accent underline"
+            >
               Go to the start page
             </a>
           </div>
         }
       >
         <p>{error ? errorMessage(error) : 'An unexpected error occurred.'}</p>
-        <p className="mt-1 text-muted">Anything you had already saved is kept. Unsaved entries on this screen may be lost.</p>
+        <p className="mt-1 text-muted">
+          Anything you had already saved is kept. Unsaved entries on this screen may be lost.
+        </p>
       </Notice>
     </div>
   );

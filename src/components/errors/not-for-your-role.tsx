@@ -18,8 +18,8 @@ export function NotForYourRole({ role, allowed }: { role: Role; allowed: readonl
         </Link>
       }
     >
-      Your role is {roleLabels[role].toLowerCase()}; this screen is for {who}. If you need it for your
-      work, ask an administrator to change your role.
+      Your role is {roleLabels[role].toLowerCase()}; this screen is for {who}. If you need it for your work, ask an
+      administrator to change your role.
     </EmptyState>
   );
 }

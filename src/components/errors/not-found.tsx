@@ -15,8 +15,8 @@ export function NotFound() {
         </Link>
       }
     >
-      The link may be mistyped, or the record it pointed to may have moved. Check the address, or start again from
-      the start page.
+      The link may be mistyped, or the record it pointed to may have moved. Check the address, or start again from the
+      start page.
     </EmptyState>
   );
 }

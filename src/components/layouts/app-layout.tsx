@@ -50,7 +50,10 @@ export function AppLayout({ user, onSignOut, signingOut, children }: AppLayoutPr
       <header data-chrome className="no-print sticky top-0 z-30 border-b border-line bg-surface-raised">
         {loading && <div className="absolute inset-x-0 top-0 h-1 animate-pulse bg-accent" aria-hidden="true" />}
         <div className="flex min-h-16 items-center gap-3 px-4">
-          <Link to={paths.home.to()} className="flex min-h-touch items-center gap-2 rounded-md text-xl font-bold text-accent-strong">
+          <Link
+            to={paths.home.to()}
+            className="flex min-h-touch items-center gap-2 rounded-md text-xl font-bold text-accent-strong"
+          >
             <svg viewBox="0 0 32 32" width="28" height="28" aria-hidden="true">
               <circle cx="16" cy="16" r="12" fill="none" stroke="currentColor" strokeWidth="4" />
               <circle cx="16" cy="16" r="4" fill="currentColor" />

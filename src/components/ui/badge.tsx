@@ -11,7 +11,15 @@ const tones: Record<BadgeTone, string> = {
   danger: 'bg-danger-soft text-danger border-danger/30',
 };
 
-export function Badge({ tone = 'neutral', children, className }: { tone?: BadgeTone; children: ReactNode; className?: string }) {
+export function Badge({
+  tone = 'neutral',
+  children,
+  className,
+}: {
+  tone?: BadgeTone;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
     <span
       className={cx(

@@ -31,7 +31,12 @@ export function Form<S extends Schema>({ schema, onSubmit, options, children, cl
   const methods = useForm<z.input<S>, unknown, z.output<S>>({ ...options, resolver });
   const formError = methods.formState.errors.root?.server?.message;
   return (
-    <form noValidate className={cx('flex flex-col gap-5', className)} onSubmit={methods.handleSubmit((values) => onSubmit(values, methods))} {...props}>
+    <form
+      noValidate
+      className={cx('flex flex-col gap-5', className)}
+      onSubmit={methods.handleSubmit((values) => onSubmit(values, methods))}
+      {...props}
+    >
       {/* Kept in the page while empty so screen readers announce the message when it appears. */}
       <div role="alert" aria-atomic="true">
         {formError && <Notice tone="danger">{formError}</Notice>}

@@ -52,10 +52,18 @@ export function ToastProvider({ children }: { children: ReactNode }) {
       {/* Sits above the phone's bottom bar; polite for news, assertive only for failures. */}
       <div className="no-print pointer-events-none fixed inset-x-0 bottom-20 z-50 flex flex-col items-center gap-2 px-3 sm:right-4 sm:bottom-4 sm:left-auto sm:items-end">
         <div aria-live="polite" className="contents">
-          {toasts.filter((t) => t.tone !== 'danger').map((t) => <ToastCard key={t.id} toast={t} onDismiss={dismiss} />)}
+          {toasts
+            .filter((t) => t.tone !== 'danger')
+            .map((t) => (
+              <ToastCard key={t.id} toast={t} onDismiss={dismiss} />
+            ))}
         </div>
         <div role="alert" className="contents">
-          {toasts.filter((t) => t.tone === 'danger').map((t) => <ToastCard key={t.id} toast={t} onDismiss={dismiss} />)}
+          {toasts
+            .filter((t) => t.tone === 'danger')
+            .map((t) => (
+              <ToastCard key={t.id} toast={t} onDismiss={dismiss} />
+            ))}
         </div>
       </div>
     </ToastContext>

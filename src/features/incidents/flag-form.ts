@@ -17,7 +17,14 @@ export type FlagFormInput = z.input<typeof flagFormSchema>;
 export type FlagFormValues = z.output<typeof flagFormSchema>;
 
 export function splitLabels(text: string): string[] {
-  return [...new Set(text.split(/[\s,;]+/).map((l) => l.trim()).filter(Boolean))];
+  return [
+    ...new Set(
+      text
+        .split(/[\s,;]+/)
+        .map((l) => l.trim())
+        .filter(Boolean),
+    ),
+  ];
 }
 
 export function toCreateInput({ jarText, ...rest }: FlagFormValues): CreateIncidentInput {
@@ -27,6 +34,8 @@ export function toCreateInput({ jarText, ...rest }: FlagFormValues): CreateIncid
 /** The server names jarLabels.N; on this form that is the one label box. */
 export function onFlagForm(error: unknown): unknown {
   if (!(error instanceof ApiError)) return error;
-  const issues = error.issues.map((i) => (i.path.startsWith('jarLabels') || i.path.startsWith('jarIds') ? { ...i, path: 'jarText' } : i));
+  const issues = error.issues.map((i) =>
+    i.path.startsWith('jarLabels') || i.path.startsWith('jarIds') ? { ...i, path: 'jarText' } : i,
+  );
   return new ApiError(error.status, error.code, error.message, issues, error.requestId);
 }

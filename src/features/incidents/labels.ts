@@ -1,11 +1,29 @@
-import { contaminantNames, type CauseCategory, type IncidentStatus, type StageFound, type Verdict } from '../../../shared/enums';
+import {
+  contaminantNames,
+  type CauseCategory,
+  type IncidentStatus,
+  type StageFound,
+  type Verdict,
+} from '../../../shared/enums';
 import type { IncidentSeverity } from '../../../shared/schemas/incidents';
 import type { BadgeTone } from '../../components/ui/badge';
 
-export const statusLabels: Record<IncidentStatus, string> = { open: 'Open', 'in-review': 'In review', closed: 'Closed' };
-export const statusTones: Record<IncidentStatus, BadgeTone> = { open: 'warn', 'in-review': 'accent', closed: 'neutral' };
+export const statusLabels: Record<IncidentStatus, string> = {
+  open: 'Open',
+  'in-review': 'In review',
+  closed: 'Closed',
+};
+export const statusTones: Record<IncidentStatus, BadgeTone> = {
+  open: 'warn',
+  'in-review': 'accent',
+  closed: 'neutral',
+};
 
-export const verdictLabels: Record<Verdict, string> = { pending: 'Pending', confirmed: 'Confirmed', 'ruled-out': 'Ruled out' };
+export const verdictLabels: Record<Verdict, string> = {
+  pending: 'Pending',
+  confirmed: 'Confirmed',
+  'ruled-out': 'Ruled out',
+};
 export const verdictTones: Record<Verdict, BadgeTone> = { pending: 'neutral', confirmed: 'danger', 'ruled-out': 'ok' };
 
 export const stageLabels: Record<StageFound, string> = {
@@ -57,7 +75,15 @@ export const fieldLabels: Record<string, string> = {
   owner: 'Owner',
 };
 
-const allLabels: Record<string, string> = { ...contaminantNames, ...statusLabels, ...verdictLabels, ...stageLabels, ...severityLabels, true: 'yes', false: 'no' };
+const allLabels: Record<string, string> = {
+  ...contaminantNames,
+  ...statusLabels,
+  ...verdictLabels,
+  ...stageLabels,
+  ...severityLabels,
+  true: 'yes',
+  false: 'no',
+};
 
 /** Audit values are stored as text; show enum codes by their names. */
 export const valueLabel = (value: string | null) => (value === null ? '—' : (allLabels[value] ?? value));

@@ -40,7 +40,12 @@ export function Pager({ page, pageSize, total, onChange, sizes = pageSizes }: Pa
           </select>
         </div>
         <div className="flex items-center gap-2">
-          <Button variant="secondary" icon="chevron-left" disabled={page <= 1} onClick={() => onChange({ page: page - 1 })}>
+          <Button
+            variant="secondary"
+            icon="chevron-left"
+            disabled={page <= 1}
+            onClick={() => onChange({ page: page - 1 })}
+          >
             <span className="sr-only">Previous page</span>
           </Button>
           <span className="min-w-20 text-center tabular-nums">

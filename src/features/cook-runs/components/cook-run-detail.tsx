@@ -6,7 +6,7 @@ import { BackLink } from '../../../components/ui/text-link';
 import { PageHeader } from '../../../components/ui/page-header';
 import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
-import { formatDate } from '../../../lib/format';
+import { formatDate, formatDateTime } from '../../../lib/format';
 import { cookRunsQueries } from '../api/cook-runs-queries';
 import { formatF0 } from './lethality-figure';
 import { PressureCaution } from './pressure-caution';
@@ -58,7 +58,7 @@ export function CookRunDetail({ id, canWrite }: { id: number; canWrite: boolean 
           <section aria-label="Cycle" className="rounded-lg border border-line bg-surface-raised p-4">
             <Facts>
               <Fact term="Date">{run.cookedOn ? formatDate(run.cookedOn) : '—'}</Fact>
-              <Fact term="Start time">{run.startedAt ? new Date(run.startedAt).toLocaleString() : '—'}</Fact>
+              <Fact term="Start time">{run.startedAt ? formatDateTime(run.startedAt) : '—'}</Fact>
               <Fact term="Container">{orDash(run.container)}</Fact>
               <Fact term="Minutes at pressure">{run.minutesAtPressure}</Fact>
               <Fact term="Gauge">

@@ -9,10 +9,10 @@ import { grainQueries } from '../api/grain-queries';
 import { useCreateGrain } from '../api/use-create-grain';
 import { useCreateGrainLot } from '../api/use-create-grain-lot';
 import { useCreatePrepBatch } from '../api/use-create-prep-batch';
+import { todayIso } from '../../../lib/format';
 
 const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
 const requiredId = (v: unknown) => (v === '' || v === undefined ? undefined : Number(v));
-const today = () => new Date().toLocaleDateString('en-CA');
 
 interface DialogProps {
   open: boolean;
@@ -70,7 +70,7 @@ export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
       submitLabel="Record lot"
       submitIcon="plus"
       schema={createGrainLotSchema}
-      options={{ defaultValues: { supplierLotCode: '', receivedOn: today(), notes: '' } }}
+      options={{ defaultValues: { supplierLotCode: '', receivedOn: todayIso(), notes: '' } }}
       serverFields={['grainId', 'supplierLotCode', 'receivedOn', 'notes']}
       onSubmit={async (values) => {
         const lot = await create.mutateAsync(values);
@@ -122,7 +122,7 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
       submitLabel="Record batch"
       submitIcon="plus"
       schema={createPrepBatchSchema}
-      options={{ defaultValues: { code: '', grainLotId: lotId, preparedOn: today(), notes: '' } }}
+      options={{ defaultValues: { code: '', grainLotId: lotId, preparedOn: todayIso(), notes: '' } }}
       serverFields={['code', 'grainLotId', 'preparedOn', 'soakHours', 'simmerMinutes', 'drainMinutes', 'notes']}
       onSubmit={async (values) => {
         const created = await create.mutateAsync(values);

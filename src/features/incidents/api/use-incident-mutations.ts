@@ -31,19 +31,29 @@ export const useCreateIncident = () =>
   useIncidentMutation((input: CreateIncidentInput) => api.post('/incidents', input, { schema: incidentDetailSchema }));
 
 export const useUpdateIncident = (id: number) =>
-  useIncidentMutation((input: UpdateIncidentInput) => api.patch(`/incidents/${id}`, input, { schema: incidentDetailSchema }));
+  useIncidentMutation((input: UpdateIncidentInput) =>
+    api.patch(`/incidents/${id}`, input, { schema: incidentDetailSchema }),
+  );
 
 export const useReviewIncident = (id: number) =>
-  useIncidentMutation((input: ReviewIncidentInput) => api.post(`/incidents/${id}/review`, input, { schema: incidentDetailSchema }));
+  useIncidentMutation((input: ReviewIncidentInput) =>
+    api.post(`/incidents/${id}/review`, input, { schema: incidentDetailSchema }),
+  );
 
 export const useVoidIncident = (id: number) =>
-  useIncidentMutation((input: VoidIncidentInput) => api.post(`/incidents/${id}/void`, input, { schema: incidentDetailSchema }));
+  useIncidentMutation((input: VoidIncidentInput) =>
+    api.post(`/incidents/${id}/void`, input, { schema: incidentDetailSchema }),
+  );
 
 export const useAddIncidentPhotos = (id: number) =>
-  useIncidentMutation((input: AddIncidentPhotosInput) => api.post(`/incidents/${id}/photos`, input, { schema: incidentDetailSchema }));
+  useIncidentMutation((input: AddIncidentPhotosInput) =>
+    api.post(`/incidents/${id}/photos`, input, { schema: incidentDetailSchema }),
+  );
 
 export const useCreateAction = (incidentId: number) =>
-  useIncidentMutation((input: CreateActionInput) => api.post(`/incidents/${incidentId}/actions`, input, { schema: correctiveActionSchema }));
+  useIncidentMutation((input: CreateActionInput) =>
+    api.post(`/incidents/${incidentId}/actions`, input, { schema: correctiveActionSchema }),
+  );
 
 export const useUpdateAction = () =>
   useIncidentMutation(({ id, ...input }: UpdateActionInput & { id: number }) =>

@@ -6,11 +6,9 @@ import { Button } from '../../../components/ui/button';
 import { applyServerErrors, Form } from '../../../components/ui/form';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
-import { formatDate } from '../../../lib/format';
+import { formatDate, todayIso } from '../../../lib/format';
 import { useCreateAction, useUpdateAction } from '../api/use-incident-mutations';
 import { NotesField } from './notes-field';
-
-const today = () => new Date().toLocaleDateString('en-CA');
 
 function CompleteForm({ action, onDone }: { action: CorrectiveActionDto; onDone: () => void }) {
   const update = useUpdateAction();
@@ -18,15 +16,22 @@ function CompleteForm({ action, onDone }: { action: CorrectiveActionDto; onDone:
     <Form
       schema={updateActionSchema}
       className="mt-2 gap-3 rounded-md bg-surface-sunken p-3"
-      options={{ defaultValues: { doneOn: today(), verification: '' } }}
+      options={{ defaultValues: { doneOn: todayIso(), verification: '' } }}
       onSubmit={(values, { setError }) =>
-        update.mutateAsync({ id: action.id, ...values }).then(onDone, (error: unknown) => applyServerErrors(error, setError, ['doneOn', 'verification']))
+        update
+          .mutateAsync({ id: action.id, ...values })
+          .then(onDone, (error: unknown) => applyServerErrors(error, setError, ['doneOn', 'verification']))
       }
     >
       {({ register, formState: { errors, isSubmitting } }) => (
         <>
           <TextInput label="Done on" type="date" error={errors.doneOn?.message} {...register('doneOn')} />
-          <NotesField label="How was the fix verified?" hint="For example: gauge checked against a reference; next three runs clean." error={errors.verification?.message} {...register('verification')} />
+          <NotesField
+            label="How was the fix verified?"
+            hint="For example: gauge checked against a reference; next three runs clean."
+            error={errors.verification?.message}
+            {...register('verification')}
+          />
           <div className="flex gap-2">
             <Button type="submit" pending={isSubmitting}>
               Mark done
@@ -64,7 +69,11 @@ function AddActionForm({ incidentId }: { incidentId: number }) {
         <>
           <NotesField label="What will be done" error={errors.what?.message} {...register('what')} />
           <div className="grid gap-3 sm:grid-cols-2">
-            <TextInput label="Owner" error={errors.ownerName?.message} {...register('ownerName', { setValueAs: (v: string) => v.trim() || undefined })} />
+            <TextInput
+              label="Owner"
+              error={errors.ownerName?.message}
+              {...register('ownerName', { setValueAs: (v: string) => v.trim() || undefined })}
+            />
             <TextInput label="Due on" type="date" error={errors.dueOn?.message} {...register('dueOn')} />
           </div>
           <div>
@@ -78,7 +87,15 @@ function AddActionForm({ incidentId }: { incidentId: number }) {
   );
 }
 
-export function ActionsPanel({ incidentId, actions, canManage }: { incidentId: number; actions: CorrectiveActionDto[]; canManage: boolean }) {
+export function ActionsPanel({
+  incidentId,
+  actions,
+  canManage,
+}: {
+  incidentId: number;
+  actions: CorrectiveActionDto[];
+  canManage: boolean;
+}) {
   const [completing, setCompleting] = useState<number | null>(null);
   return (
     <div className="flex flex-col gap-4">

@@ -14,11 +14,26 @@ interface ChoiceTilesProps<V extends string> {
 }
 
 /** Radio buttons drawn as big tap targets, for one-handed use on the shelf. */
-export function ChoiceTiles<V extends string>({ legend, name, options, value, onChange, clearable, size = 'large', columns, error }: ChoiceTilesProps<V>) {
+export function ChoiceTiles<V extends string>({
+  legend,
+  name,
+  options,
+  value,
+  onChange,
+  clearable,
+  size = 'large',
+  columns,
+  error,
+}: ChoiceTilesProps<V>) {
   return (
     <fieldset className="flex flex-col gap-2" aria-invalid={error ? true : undefined}>
       <legend className="mb-2 font-medium">{legend}</legend>
-      <div className={cx('gap-2', size === 'large' ? cx('grid', columns ?? 'grid-cols-2 sm:grid-cols-3') : 'flex flex-wrap')}>
+      <div
+        className={cx(
+          'gap-2',
+          size === 'large' ? cx('grid', columns ?? 'grid-cols-2 sm:grid-cols-3') : 'flex flex-wrap',
+        )}
+      >
         {options.map((o) => {
           const checked = value === o.value;
           return (

@@ -17,7 +17,18 @@ import { ChoiceTiles } from './choice-tiles';
 import { NotesField } from './notes-field';
 import { SporeCautions } from './spore-cautions';
 
-const formFields = ['jarText', 'contaminant', 'severity', 'stage', 'signColour', 'signSmell', 'signTexture', 'notes', 'photoIds', 'foundAt'] as const;
+const formFields = [
+  'jarText',
+  'contaminant',
+  'severity',
+  'stage',
+  'signColour',
+  'signSmell',
+  'signTexture',
+  'notes',
+  'photoIds',
+  'foundAt',
+] as const;
 const chips = (values: readonly string[]) => values.map((v) => ({ value: v, label: v }));
 
 export function FlagJarScreen({ jarLabel }: { jarLabel: string | undefined }) {
@@ -32,7 +43,14 @@ export function FlagJarScreen({ jarLabel }: { jarLabel: string | undefined }) {
       <Form
         schema={flagFormSchema}
         options={{
-          defaultValues: { jarText: jarLabel ?? '', severity: 'medium', stage: 'incubation', sealed: false, sterilisedBeforeDisposal: false, photoIds: [] } satisfies Partial<FlagFormInput>,
+          defaultValues: {
+            jarText: jarLabel ?? '',
+            severity: 'medium',
+            stage: 'incubation',
+            sealed: false,
+            sterilisedBeforeDisposal: false,
+            photoIds: [],
+          } satisfies Partial<FlagFormInput>,
         }}
         className="mx-auto max-w-2xl pb-28"
         onSubmit={(values, { setError }) =>
@@ -59,7 +77,11 @@ export function FlagJarScreen({ jarLabel }: { jarLabel: string | undefined }) {
                 error={errors.jarText?.message}
                 {...register('jarText')}
               />
-              {labels.length > 1 && <p className="-mt-3 text-sm text-muted">{labels.length} jars: {labels.join(', ')}</p>}
+              {labels.length > 1 && (
+                <p className="-mt-3 text-sm text-muted">
+                  {labels.length} jars: {labels.join(', ')}
+                </p>
+              )}
               <ChoiceTiles
                 legend="What is growing?"
                 name="contaminant"
@@ -77,7 +99,15 @@ export function FlagJarScreen({ jarLabel }: { jarLabel: string | undefined }) {
                 value={watch('signColour')}
                 onChange={(v) => setValue('signColour', v)}
               />
-              <ChoiceTiles legend="Smell" name="signSmell" size="chip" clearable options={chips(signSuggestions.signSmell)} value={watch('signSmell')} onChange={(v) => setValue('signSmell', v)} />
+              <ChoiceTiles
+                legend="Smell"
+                name="signSmell"
+                size="chip"
+                clearable
+                options={chips(signSuggestions.signSmell)}
+                value={watch('signSmell')}
+                onChange={(v) => setValue('signSmell', v)}
+              />
               <ChoiceTiles
                 legend="Texture"
                 name="signTexture"
@@ -95,16 +125,20 @@ export function FlagJarScreen({ jarLabel }: { jarLabel: string | undefined }) {
                 value={watch('severity')}
                 onChange={(v) => v && setValue('severity', v)}
               />
-              <ChoiceTiles legend="Found" name="stage" size="chip" options={stagesFound.map((s) => ({ value: s, label: stageLabels[s] }))} value={watch('stage')} onChange={(v) => v && setValue('stage', v)} />
+              <ChoiceTiles
+                legend="Found"
+                name="stage"
+                size="chip"
+                options={stagesFound.map((s) => ({ value: s, label: stageLabels[s] }))}
+                value={watch('stage')}
+                onChange={(v) => v && setValue('stage', v)}
+              />
               <fieldset className="flex flex-col gap-1">
                 <legend className="mb-1 font-medium">Containment done</legend>
                 <Checkbox label="Sealed (lid closed, tape over the port)" {...register('sealed')} />
                 <Checkbox label="Sterilised before disposal" {...register('sterilisedBeforeDisposal')} />
               </fieldset>
-              <PhotoPicker
-                onChange={(ids) => setValue('photoIds', ids)}
-                onBusyChange={setUploading}
-              />
+              <PhotoPicker onChange={(ids) => setValue('photoIds', ids)} onBusyChange={setUploading} />
               <NotesField label="Notes" optional error={errors.notes?.message} {...register('notes')} />
               <div className="fixed inset-x-0 bottom-16 z-30 border-t border-line bg-surface-raised/95 p-3 sm:static sm:border-0 sm:bg-transparent sm:p-0">
                 <Button type="submit" className="w-full" pending={create.isPending} disabled={uploading}>

@@ -22,6 +22,7 @@ import { IncidentPhotos } from './incident-photos';
 import { ReviewPanel } from './review-panel';
 import { SporeCautions } from './spore-cautions';
 import { VoidDialog } from './void-dialog';
+import { formatDateTime } from '../../../lib/format';
 
 function Section({ title, children, className }: { title: string; children: ReactNode; className?: string }) {
   return (
@@ -96,7 +97,7 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
               <Fact term="Contaminant">{contaminantNames[i.contaminant]}</Fact>
               <Fact term="Severity">{severityLabels[i.severity]}</Fact>
               <Fact term="Stage">{stageLabels[i.stage]}</Fact>
-              <Fact term="Found">{new Date(i.foundAt).toLocaleString()}</Fact>
+              <Fact term="Found">{formatDateTime(i.foundAt)}</Fact>
               <Fact term="Found by">{i.foundByName}</Fact>
               <Fact term="Signs">{[i.signColour, i.signSmell, i.signTexture].filter(Boolean).join(', ') || '—'}</Fact>
               <Fact term="Sealed">{yesNo(i.sealed)}</Fact>

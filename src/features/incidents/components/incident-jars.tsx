@@ -22,7 +22,15 @@ export function IncidentJars({ jars }: { jars: IncidentJarDto[] }) {
           <dl className="mt-2 grid grid-cols-1 gap-x-6 gap-y-1 text-sm sm:grid-cols-3">
             <div>
               <dt className="text-muted">Cook run</dt>
-              <dd>{jar.cookRun ? <Link className={linkClass} to={paths.incidents.to({ cookRunId: jar.cookRun.id })}>{jar.cookRun.code}</Link> : '—'}</dd>
+              <dd>
+                {jar.cookRun ? (
+                  <Link className={linkClass} to={paths.incidents.to({ cookRunId: jar.cookRun.id })}>
+                    {jar.cookRun.code}
+                  </Link>
+                ) : (
+                  '—'
+                )}
+              </dd>
             </div>
             <div>
               <dt className="text-muted">Session</dt>

@@ -1,5 +1,6 @@
 import type { IncidentPhotoDto } from '../../../../shared/schemas/incidents';
 import { apiUrl } from '../../../lib/api-client';
+import { formatDateTime } from '../../../lib/format';
 
 export function IncidentPhotos({ photos }: { photos: IncidentPhotoDto[] }) {
   if (photos.length === 0) return <p className="text-muted">No photos.</p>;
@@ -18,7 +19,7 @@ export function IncidentPhotos({ photos }: { photos: IncidentPhotoDto[] }) {
             />
           </a>
           <span className="text-sm text-muted">
-            {p.width && p.height ? `${p.width}×${p.height}` : ''} · added {new Date(p.addedAt).toLocaleString()}
+            {p.width && p.height ? `${p.width}×${p.height}` : ''} · added {formatDateTime(p.addedAt)}
           </span>
         </li>
       ))}

@@ -42,7 +42,10 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
       }}
       onSubmit={(values, { setError }) =>
         review.mutateAsync(values).then(
-          (next) => toast.success(`Incident ${next.id}: ${statusLabels[next.status].toLowerCase()}, ${verdictLabels[next.verdict].toLowerCase()}.`),
+          (next) =>
+            toast.success(
+              `Incident ${next.id}: ${statusLabels[next.status].toLowerCase()}, ${verdictLabels[next.verdict].toLowerCase()}.`,
+            ),
           (error: unknown) => applyServerErrors(error, setError, fields),
         )
       }
@@ -53,7 +56,8 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
           // A closed incident only reopens; otherwise the move saves together with what is chosen below.
           const input = closed ? { status: to, reason, version } : { ...rest, status: to, reason, version };
           review.mutate(input, {
-            onSuccess: (next) => toast.success(`Incident ${next.id} is now ${statusLabels[next.status].toLowerCase()}.`),
+            onSuccess: (next) =>
+              toast.success(`Incident ${next.id} is now ${statusLabels[next.status].toLowerCase()}.`),
             onError: (error) => applyServerErrors(error, setError, fields),
           });
         };
@@ -61,13 +65,20 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
           <>
             <div className="flex flex-wrap gap-2">
               {moves[incident.status].map((m) => (
-                <Button key={m.to} variant={m.to === 'closed' ? 'primary' : 'secondary'} onClick={() => move(m.to)} pending={review.isPending && review.variables.status === m.to}>
+                <Button
+                  key={m.to}
+                  variant={m.to === 'closed' ? 'primary' : 'secondary'}
+                  onClick={() => move(m.to)}
+                  pending={review.isPending && review.variables.status === m.to}
+                >
                   {m.label}
                 </Button>
               ))}
             </div>
             {closed ? (
-              <p className="text-muted">Closed incidents are reopened before their verdict or cause changes; give the reason below.</p>
+              <p className="text-muted">
+                Closed incidents are reopened before their verdict or cause changes; give the reason below.
+              </p>
             ) : (
               <>
                 <ChoiceTiles
@@ -84,13 +95,29 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
                   hint="Ishikawa’s six Ms. A lead from the register is a hint, not a diagnosis."
                   optional
                   error={errors.causeCategory?.message}
-                  options={[{ value: '', label: 'Not decided' }, ...causeCategories.map((c) => ({ value: c, label: `${causeLabels[c].label} — ${causeLabels[c].hint}` }))]}
+                  options={[
+                    { value: '', label: 'Not decided' },
+                    ...causeCategories.map((c) => ({
+                      value: c,
+                      label: `${causeLabels[c].label} — ${causeLabels[c].hint}`,
+                    })),
+                  ]}
                   {...register('causeCategory', { setValueAs: (v: string) => (v === '' ? null : v) })}
                 />
-                <NotesField label="Root-cause notes" optional error={errors.rootCauseNotes?.message} {...register('rootCauseNotes')} />
+                <NotesField
+                  label="Root-cause notes"
+                  optional
+                  error={errors.rootCauseNotes?.message}
+                  {...register('rootCauseNotes')}
+                />
               </>
             )}
-            <TextInput label="Reason for the change" optional error={errors.reason?.message} {...register('reason', { setValueAs: (v: string) => v.trim() || undefined })} />
+            <TextInput
+              label="Reason for the change"
+              optional
+              error={errors.reason?.message}
+              {...register('reason', { setValueAs: (v: string) => v.trim() || undefined })}
+            />
             {!closed && (
               <div>
                 <Button type="submit" pending={isSubmitting}>

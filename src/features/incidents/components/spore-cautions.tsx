@@ -8,8 +8,8 @@ export function SporeCautions({ compact = false }: { compact?: boolean }) {
       <ul className="list-disc space-y-1 pl-5">
         <li>Keep it closed: never open a contaminated jar indoors.</li>
         <li>
-          Sporulating moulds can cause allergy and lung inflammation; <i>Aspergillus</i> is a risk to anyone with weak immunity. Staff who
-          are sensitive wear a fitted respirator (N95 / FFP2 or better).
+          Sporulating moulds can cause allergy and lung inflammation; <i>Aspergillus</i> is a risk to anyone with weak
+          immunity. Staff who are sensitive wear a fitted respirator (N95 / FFP2 or better).
         </li>
         <li>Sterilise the jar sealed in the pressure cooker before it is emptied, thrown out or washed.</li>
       </ul>

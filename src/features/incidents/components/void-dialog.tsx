@@ -43,8 +43,8 @@ export function VoidDialog({ incidentId, version, open, onClose }: VoidDialogPro
       error={voidIncident.error ? errorMessage(voidIncident.error) : undefined}
     >
       <p>
-        The incident stays in the register and keeps its history, but its jars no longer count as contaminated and get back the status they
-        had before. This cannot be undone.
+        The incident stays in the register and keeps its history, but its jars no longer count as contaminated and get
+        back the status they had before. This cannot be undone.
       </p>
       <NotesField
         label="Reason"

@@ -1,12 +1,17 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { digestResultSchema, mailPreferencesSchema, type UpdateMailPreferencesInput } from '../../../../shared/schemas/mail';
+import {
+  digestResultSchema,
+  mailPreferencesSchema,
+  type UpdateMailPreferencesInput,
+} from '../../../../shared/schemas/mail';
 import { api } from '../../../lib/api-client';
 import { mailQueries } from './mail-queries';
 
 export function useUpdateMailPreferences() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: UpdateMailPreferencesInput) => api.put('/mail/preferences', input, { schema: mailPreferencesSchema }),
+    mutationFn: (input: UpdateMailPreferencesInput) =>
+      api.put('/mail/preferences', input, { schema: mailPreferencesSchema }),
     onSuccess: (prefs) => queryClient.setQueryData(mailQueries.preferences().queryKey, prefs),
   });
 }

@@ -14,11 +14,17 @@ import { errorMessage } from '../../../lib/api-client';
 import { patchParams, readTableState } from '../../../lib/list-params';
 import { mailQueries } from '../api/mail-queries';
 import { useSendDigest } from '../api/use-mail-mutations';
+import { formatDateTime } from '../../../lib/format';
 
 function SentMailDialog({ id, onClose }: { id: number | null; onClose: () => void }) {
   const detail = useQuery({ ...mailQueries.sentDetail(id ?? 0), enabled: id !== null });
   return (
-    <Dialog open={id !== null} onClose={onClose} title={detail.data?.subject ?? 'Message'} description={detail.data ? `To ${detail.data.to}` : undefined}>
+    <Dialog
+      open={id !== null}
+      onClose={onClose}
+      title={detail.data?.subject ?? 'Message'}
+      description={detail.data ? `To ${detail.data.to}` : undefined}
+    >
       {detail.isPending && <Spinner label="Loading the message" />}
       {detail.data && <pre className="whitespace-pre-wrap break-words font-mono text-sm">{detail.data.text}</pre>}
     </Dialog>
@@ -71,10 +77,14 @@ export function SentMailScreen() {
             <tbody>
               {sent.data.items.map((m) => (
                 <tr key={m.id} className="border-b border-line last:border-0">
-                  <td className="whitespace-nowrap px-3 py-2">{new Date(m.createdAt).toLocaleString()}</td>
+                  <td className="whitespace-nowrap px-3 py-2">{formatDateTime(m.createdAt)}</td>
                   <td className="px-3 py-2">{m.to}</td>
                   <td className="px-3 py-2">
-                    <button type="button" className="text-left text-accent underline-offset-2 hover:underline" onClick={() => setOpen(m.id)}>
+                    <button
+                      type="button"
+                      className="text-left text-accent underline-offset-2 hover:underline"
+                      onClick={() => setOpen(m.id)}
+                    >
                       {m.subject}
                     </button>
                   </td>
@@ -86,7 +96,12 @@ export function SentMailScreen() {
               ))}
             </tbody>
           </table>
-          <Pager page={page} pageSize={pageSize} total={sent.data.total} onChange={(patch) => setParams(patchParams(params, patch))} />
+          <Pager
+            page={page}
+            pageSize={pageSize}
+            total={sent.data.total}
+            onChange={(patch) => setParams(patchParams(params, patch))}
+          />
         </div>
       )}
       <SentMailDialog id={open} onClose={() => setOpen(null)} />

@@ -34,7 +34,8 @@ export function PhotoPicker({ onChange, onBusyChange, label = 'Take or add photo
   const input = useRef<HTMLInputElement>(null);
   const uploadPhoto = useUploadPhoto();
 
-  const update = (key: number, patch: Partial<Item>) => setItems((all) => all.map((i) => (i.key === key ? { ...i, ...patch } : i)));
+  const update = (key: number, patch: Partial<Item>) =>
+    setItems((all) => all.map((i) => (i.key === key ? { ...i, ...patch } : i)));
 
   // The latest callbacks, so a parent passing inline functions does not re-run the report.
   const report = useRef({ onChange, onBusyChange });
@@ -63,7 +64,13 @@ export function PhotoPicker({ onChange, onBusyChange, label = 'Take or add photo
   const add = (files: FileList | null) => {
     const picked = Array.from(files ?? []).slice(0, Math.max(0, max - items.length));
     for (const file of picked) {
-      const item: Item = { key: nextKey.current++, file, preview: URL.createObjectURL(file), progress: 0, abort: new AbortController() };
+      const item: Item = {
+        key: nextKey.current++,
+        file,
+        preview: URL.createObjectURL(file),
+        progress: 0,
+        abort: new AbortController(),
+      };
       setItems((all) => [...all, item]);
       if (file.size > photoMaxBytes) {
         update(item.key, { error: `Larger than ${megabytes} MB.` });
@@ -106,12 +113,19 @@ export function PhotoPicker({ onChange, onBusyChange, label = 'Take or add photo
           onChange={(e) => add(e.target.files)}
         />
       </label>
-      <p className="text-sm text-muted">JPEG, PNG or WebP, up to {megabytes} MB each, at most {max}. On iPhone choose the “Most Compatible” camera format.</p>
+      <p className="text-sm text-muted">
+        JPEG, PNG or WebP, up to {megabytes} MB each, at most {max}. On iPhone choose the “Most Compatible” camera
+        format.
+      </p>
       {items.length > 0 && (
         <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3" aria-label="Photos">
           {items.map((item) => (
             <li key={item.key} className="flex flex-col gap-1 rounded-md border border-line bg-surface-raised p-2">
-              <img src={item.preview} alt={`Preview of ${item.file.name}`} className="aspect-square w-full rounded object-cover" />
+              <img
+                src={item.preview}
+                alt={`Preview of ${item.file.name}`}
+                className="aspect-square w-full rounded object-cover"
+              />
               <span className="truncate text-sm" title={item.file.name}>
                 {item.file.name}
               </span>

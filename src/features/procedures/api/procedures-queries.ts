@@ -1,7 +1,13 @@
 import { queryOptions } from '@tanstack/react-query';
 import { z } from 'zod';
 import { pageOf } from '../../../../shared/schemas/common';
-import { procedureDetailSchema, procedureSchema, procedureVersionSchema, stepLinkSchema, stepStatsSchema } from '../../../../shared/schemas/procedures';
+import {
+  procedureDetailSchema,
+  procedureSchema,
+  procedureVersionSchema,
+  stepLinkSchema,
+  stepStatsSchema,
+} from '../../../../shared/schemas/procedures';
 import { api } from '../../../lib/api-client';
 
 const procedurePageSchema = pageOf(procedureSchema);
@@ -13,7 +19,8 @@ export const proceduresQueries = {
   list: () =>
     queryOptions({
       queryKey: [...proceduresQueries.lists()] as const,
-      queryFn: ({ signal }) => api.get('/procedures', { query: { pageSize: 200, sort: 'title' }, signal, schema: procedurePageSchema }),
+      queryFn: ({ signal }) =>
+        api.get('/procedures', { query: { pageSize: 200, sort: 'title' }, signal, schema: procedurePageSchema }),
     }),
   detail: (id: number) =>
     queryOptions({

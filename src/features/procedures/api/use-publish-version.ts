@@ -6,7 +6,8 @@ import { proceduresQueries } from './procedures-queries';
 export function usePublishVersion(procedureId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: PublishVersionInput) => api.post(`/procedures/${procedureId}/versions`, input, { schema: procedureVersionSchema }),
+    mutationFn: (input: PublishVersionInput) =>
+      api.post(`/procedures/${procedureId}/versions`, input, { schema: procedureVersionSchema }),
     // Every cached version's isCurrent flag may have changed.
     onSuccess: () => queryClient.invalidateQueries({ queryKey: proceduresQueries.all }),
   });

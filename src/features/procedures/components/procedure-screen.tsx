@@ -41,7 +41,10 @@ export function ProcedureScreen({ id, role }: { id: number; role: Role }) {
         {p.versions.map((v) => (
           <li key={v.id} className="rounded-lg border border-line bg-surface-raised p-4">
             <div className="flex flex-wrap items-center gap-3">
-              <Link to={paths.procedureVersion.to(v.id)} className="font-semibold text-accent underline-offset-2 hover:underline">
+              <Link
+                to={paths.procedureVersion.to(v.id)}
+                className="font-semibold text-accent underline-offset-2 hover:underline"
+              >
                 Version {v.version}: {v.title}
               </Link>
               {v.id === p.currentVersionId ? <Badge tone="ok">current</Badge> : <Badge>superseded</Badge>}
@@ -54,7 +57,9 @@ export function ProcedureScreen({ id, role }: { id: number; role: Role }) {
           </li>
         ))}
       </ol>
-      {current.data && <PublishVersionDialog current={current.data} open={publishing} onClose={() => setPublishing(false)} />}
+      {current.data && (
+        <PublishVersionDialog current={current.data} open={publishing} onClose={() => setPublishing(false)} />
+      )}
     </>
   );
 }

@@ -34,12 +34,17 @@ export function ProceduresScreen({ role }: { role: Role }) {
       />
       {list.isPending && <Spinner label="Loading procedures" />}
       {list.error && <Notice tone="danger">{errorMessage(list.error)}</Notice>}
-      {list.data && list.data.items.length === 0 && <EmptyState title="No procedures yet">Trainers publish the first one here.</EmptyState>}
+      {list.data && list.data.items.length === 0 && (
+        <EmptyState title="No procedures yet">Trainers publish the first one here.</EmptyState>
+      )}
       {list.data && list.data.items.length > 0 && (
         <ul className="grid gap-3 sm:grid-cols-2">
           {list.data.items.map((p) => (
             <li key={p.id} className="rounded-lg border border-line bg-surface-raised p-4">
-              <Link to={paths.procedure.to(p.id)} className="text-lg font-semibold text-accent underline-offset-2 hover:underline">
+              <Link
+                to={paths.procedure.to(p.id)}
+                className="text-lg font-semibold text-accent underline-offset-2 hover:underline"
+              >
                 {p.title}
               </Link>
               <p className="text-muted">

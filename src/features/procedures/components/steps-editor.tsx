@@ -23,7 +23,11 @@ export function StepsEditor({ control, register, errors }: StepsEditorProps) {
       <ol className="flex flex-col gap-4">
         {fields.map((field, i) => (
           <li key={field.id} className="rounded-lg border border-line p-3">
-            <TextInput label={`Step ${i + 1}`} error={errors.steps?.[i]?.text?.message} {...register(`steps.${i}.text`)} />
+            <TextInput
+              label={`Step ${i + 1}`}
+              error={errors.steps?.[i]?.text?.message}
+              {...register(`steps.${i}.text`)}
+            />
             <TextInput
               label={`Caution for step ${i + 1}`}
               optional

@@ -43,9 +43,9 @@ export function VersionScreen({ id, role }: { id: number; role: Role }) {
       )}
       {v.changeNote && <p className="mb-4">Change: {v.changeNote}</p>}
       <Notice className="mb-4" title="Reading the step figures">
-        Jars from sessions where the step was ticked against jars where it was not, with Fisher’s exact test. Jars of one session are not independent,
-        so a small p is a lead for a trainer to follow, not proof of a cause. 70 % isopropyl alcohol is flammable: let it dry before any flame. Local
-        codes and licensed practice come first.
+        Jars from sessions where the step was ticked against jars where it was not, with Fisher’s exact test. Jars of
+        one session are not independent, so a small p is a lead for a trainer to follow, not proof of a cause. 70 %
+        isopropyl alcohol is flammable: let it dry before any flame. Local codes and licensed practice come first.
       </Notice>
       <ol className="flex flex-col gap-3">
         {v.steps.map((s) => (

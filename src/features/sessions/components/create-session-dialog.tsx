@@ -14,6 +14,7 @@ import { paths } from '../../../config/paths';
 import { sessionsQueries } from '../api/sessions-queries';
 import { useCreateSession } from '../api/use-create-session';
 import { FlameCaution } from './flame-caution';
+import { todayIso } from '../../../lib/format';
 
 const fields = [
   'code',
@@ -81,7 +82,7 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
   ];
   const defaults: CreateSessionInput = {
     code: '',
-    heldOn: new Date().toLocaleDateString('en-CA'),
+    heldOn: todayIso(),
     operatorId: me.id,
     workspace: 'flow-hood',
     procedureVersionId: null,

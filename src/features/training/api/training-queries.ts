@@ -11,16 +11,23 @@ export const trainingQueries = {
   operators: (procedureId: number | undefined) =>
     queryOptions({
       queryKey: [...trainingQueries.all, 'operators', procedureId ?? null] as const,
-      queryFn: ({ signal }) => api.get('/training/operators', { query: { procedureId }, signal, schema: operatorsSchema }),
+      queryFn: ({ signal }) =>
+        api.get('/training/operators', { query: { procedureId }, signal, schema: operatorsSchema }),
     }),
   records: (procedureId: number | undefined) =>
     queryOptions({
       queryKey: [...trainingQueries.all, 'records', procedureId ?? null] as const,
-      queryFn: ({ signal }) => api.get('/training-records', { query: { procedureId, pageSize: 50 }, signal, schema: recordPageSchema }),
+      queryFn: ({ signal }) =>
+        api.get('/training-records', { query: { procedureId, pageSize: 50 }, signal, schema: recordPageSchema }),
     }),
   openRequests: () =>
     queryOptions({
       queryKey: [...trainingQueries.all, 'requests', 'open'] as const,
-      queryFn: ({ signal }) => api.get('/training/retrain-requests', { query: { open: 'true', pageSize: 50 }, signal, schema: requestPageSchema }),
+      queryFn: ({ signal }) =>
+        api.get('/training/retrain-requests', {
+          query: { open: 'true', pageSize: 50 },
+          signal,
+          schema: requestPageSchema,
+        }),
     }),
 };

@@ -6,7 +6,8 @@ import { trainingQueries } from './training-queries';
 export function useRecordTraining() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateTrainingRecordInput) => api.post('/training-records', input, { schema: trainingRecordSchema }),
+    mutationFn: (input: CreateTrainingRecordInput) =>
+      api.post('/training-records', input, { schema: trainingRecordSchema }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: trainingQueries.all }),
   });
 }

@@ -6,7 +6,8 @@ import { trainingQueries } from './training-queries';
 export function useRequestRetraining() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CreateRetrainRequestInput) => api.post('/training/retrain-requests', input, { schema: retrainRequestSchema }),
+    mutationFn: (input: CreateRetrainRequestInput) =>
+      api.post('/training/retrain-requests', input, { schema: retrainRequestSchema }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: trainingQueries.all }),
   });
 }

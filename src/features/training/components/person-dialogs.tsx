@@ -9,6 +9,7 @@ import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { useRecordTraining } from '../api/use-record-training';
 import { useRequestRetraining } from '../api/use-request-retraining';
+import { todayIso } from '../../../lib/format';
 
 interface PersonDialogProps {
   person: OperatorRowDto | null;
@@ -19,7 +20,6 @@ interface PersonDialogProps {
 
 const trainingForm = createTrainingRecordSchema.pick({ trainedOn: true, notes: true });
 const retrainForm = z.object({ reason: createRetrainRequestSchema.shape.reason });
-const today = () => new Date().toLocaleDateString('en-CA');
 
 export function RecordTrainingDialog({ person, versionId, version, onClose }: PersonDialogProps) {
   const record = useRecordTraining();
@@ -33,7 +33,7 @@ export function RecordTrainingDialog({ person, versionId, version, onClose }: Pe
       description={`On version ${version}, with you as the trainer. Open retraining requests for this procedure close with it.`}
       submitLabel="Record training"
       schema={trainingForm}
-      options={{ defaultValues: { trainedOn: today(), notes: '' } }}
+      options={{ defaultValues: { trainedOn: todayIso(), notes: '' } }}
       serverFields={['trainedOn', 'notes']}
       onSubmit={async (values) => {
         if (!person) return;

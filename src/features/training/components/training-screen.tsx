@@ -104,8 +104,18 @@ export function TrainingScreen({ role, procedureId }: { role: Role; procedureId:
       )}
       {procedure && versionId !== null && (
         <>
-          <RecordTrainingDialog person={training} versionId={versionId} version={procedure.currentVersion ?? 0} onClose={() => setTraining(null)} />
-          <RetrainDialog person={retrain} versionId={versionId} version={procedure.currentVersion ?? 0} onClose={() => setRetrain(null)} />
+          <RecordTrainingDialog
+            person={training}
+            versionId={versionId}
+            version={procedure.currentVersion ?? 0}
+            onClose={() => setTraining(null)}
+          />
+          <RetrainDialog
+            person={retrain}
+            versionId={versionId}
+            version={procedure.currentVersion ?? 0}
+            onClose={() => setRetrain(null)}
+          />
         </>
       )}
     </>

@@ -22,7 +22,9 @@ export function SetActiveDialog({ user, onClose }: { user: UserDto | undefined; 
       { id: user.id, input: { active: !user.active } },
       {
         onSuccess: () => {
-          toast.success(deactivating ? `${user.displayName} can no longer sign in.` : `${user.displayName} can sign in again.`);
+          toast.success(
+            deactivating ? `${user.displayName} can no longer sign in.` : `${user.displayName} can sign in again.`,
+          );
           close();
         },
       },
@@ -42,7 +44,10 @@ export function SetActiveDialog({ user, onClose }: { user: UserDto | undefined; 
     >
       {deactivating ? (
         <>
-          <p>They will not be able to sign in. Jars, incidents and other records they made stay as they are, under their name.</p>
+          <p>
+            They will not be able to sign in. Jars, incidents and other records they made stay as they are, under their
+            name.
+          </p>
           <p className="text-muted">You can reactivate the account later.</p>
         </>
       ) : (
