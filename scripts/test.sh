@@ -9,6 +9,7 @@ bash scripts/ensure-mariadb.sh
 bash scripts/ensure-chromium.sh
 echo "== typecheck"; npm run --silent typecheck
 echo "== lint"; npm run --silent lint
+echo "== format"; node_modules/.bin/prettier --check --log-level warn .
 echo "== build"; node_modules/.bin/vite build --logLevel warn
 echo "== tests"
 NODE_ENV=test node_modules/.bin/vitest run "$@"

@@ -160,14 +160,11 @@ describe('training: retraining requests', () => {
     const proc = await procedure(trainer);
     const tech = await signedIn(app, 'technician');
     const sup = await signedIn(app, 'supervisor');
-    const res = await sup.agent
-      .post('/api/training/retrain-requests')
-      .set('X-CSRF-Token', sup.token())
-      .send({
-        userId: tech.user.id,
-        procedureVersionId: proc.currentVersionId,
-        reason: 'Three port contaminations in session S-17.',
-      });
+    const res = await sup.agent.post('/api/training/retrain-requests').set('X-CSRF-Token', sup.token()).send({
+      userId: tech.user.id,
+      procedureVersionId: proc.currentVersionId,
+      reason: 'Three port contaminations in session S-17.',
+    });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
       userId: tech.user.id,
