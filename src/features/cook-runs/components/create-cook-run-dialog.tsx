@@ -3,6 +3,7 @@ import { useNavigate } from 'react-router';
 import { createCookRunSchema, defaultGaugeKPa, type CreateCookRunInput } from '../../../../shared/schemas/cook-runs';
 import { kPaToPsi } from '../../../../shared/stats/steam';
 import { FormDialog } from '../../../components/ui/form-dialog';
+import { OperatorChoice } from '../../../components/ui/operator-choice';
 import { controlClasses, Field } from '../../../components/ui/field';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
@@ -159,33 +160,18 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
                 {...register('altitudeM', { setValueAs: number })}
               />
             </div>
-            <fieldset className="flex flex-col gap-3">
-              <legend className="mb-2 font-medium">Operator</legend>
-              <label className="flex min-h-touch items-center gap-3">
-                <input
-                  type="radio"
-                  className="size-5 accent-accent"
-                  checked={byUser}
-                  onChange={() => {
-                    setValue('operatorId', me.id);
-                    setValue('operatorName', undefined);
-                  }}
-                />
-                I ran it ({me.displayName})
-              </label>
-              <label className="flex min-h-touch items-center gap-3">
-                <input
-                  type="radio"
-                  className="size-5 accent-accent"
-                  checked={!byUser}
-                  onChange={() => setValue('operatorId', undefined)}
-                />
-                Someone else
-              </label>
-              {!byUser && (
-                <TextInput label="Staff name" error={errors.operatorName?.message} {...register('operatorName')} />
-              )}
-            </fieldset>
+            <OperatorChoice
+              selfLabel="I ran it"
+              selfName={me.displayName}
+              bySelf={byUser}
+              onChooseSelf={() => {
+                setValue('operatorId', me.id);
+                setValue('operatorName', undefined);
+              }}
+              onChooseOther={() => setValue('operatorId', undefined)}
+              staffName={register('operatorName')}
+              error={errors.operatorName?.message}
+            />
             <Field label="Notes" optional error={errors.notes?.message}>
               {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
             </Field>

@@ -5,6 +5,7 @@ import { workspaces } from '../../../../shared/enums';
 import { createSessionSchema, workspaceLabels, type CreateSessionInput } from '../../../../shared/schemas/sessions';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { FormDialog } from '../../../components/ui/form-dialog';
+import { OperatorChoice } from '../../../components/ui/operator-choice';
 import { controlClasses, Field } from '../../../components/ui/field';
 import type { FormMethods } from '../../../components/ui/form';
 import { Select } from '../../../components/ui/select';
@@ -137,37 +138,18 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
                 {...register('workspace')}
               />
             </div>
-            <fieldset className="flex flex-col gap-3">
-              <legend className="mb-2 font-medium">Operator</legend>
-              <label className="flex min-h-touch items-center gap-3">
-                <input
-                  type="radio"
-                  className="size-5 accent-accent"
-                  checked={byUser}
-                  onChange={() => {
-                    setValue('operatorId', me.id);
-                    setValue('operatorName', undefined);
-                  }}
-                />
-                I inoculated ({me.displayName})
-              </label>
-              <label className="flex min-h-touch items-center gap-3">
-                <input
-                  type="radio"
-                  className="size-5 accent-accent"
-                  checked={!byUser}
-                  onChange={() => setValue('operatorId', undefined)}
-                />
-                Someone else
-              </label>
-              {!byUser && (
-                <TextInput
-                  label="Staff name"
-                  error={errors.operatorName?.message ?? errors.operatorId?.message}
-                  {...register('operatorName')}
-                />
-              )}
-            </fieldset>
+            <OperatorChoice
+              selfLabel="I inoculated"
+              selfName={me.displayName}
+              bySelf={byUser}
+              onChooseSelf={() => {
+                setValue('operatorId', me.id);
+                setValue('operatorName', undefined);
+              }}
+              onChooseOther={() => setValue('operatorId', undefined)}
+              staffName={register('operatorName')}
+              error={errors.operatorName?.message ?? errors.operatorId?.message}
+            />
             <Select
               label="Procedure followed"
               optional
