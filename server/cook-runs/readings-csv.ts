@@ -9,6 +9,8 @@ export interface LineError {
 }
 
 export const maxReadings = 20_000;
+/** Heat-up, hold and cool-down of one load fit in two days; a longer span is a typo (and 1e400 is Infinity). */
+export const maxLogMinutes = 2880;
 
 const newlines = (s: string) => s.match(/\r\n|\n|\r/g)?.length ?? 0;
 
@@ -88,7 +90,13 @@ export function parseReadingsCsv(text: string): { samples: TemperatureSample[]; 
         message: `must be a number of minutes (got "${record[minuteAt] ?? ''}")`,
       });
     else if (minute < 0) errors.push({ line, column: minuteName, message: 'must not be negative' });
-    else if (previous !== null && minute <= previous) {
+    else if (minute > maxLogMinutes) {
+      errors.push({
+        line,
+        column: minuteName,
+        message: `must be at most ${maxLogMinutes} minutes (48 h) after the start`,
+      });
+    } else if (previous !== null && minute <= previous) {
       errors.push({ line, column: minuteName, message: `must be later than the row before (${previous})` });
     }
     if (celsius === null)
@@ -99,8 +107,9 @@ export function parseReadingsCsv(text: string): { samples: TemperatureSample[]; 
       });
     else if (celsius < -50 || celsius > 200)
       errors.push({ line, column: celsiusName, message: 'must be between -50 and 200 °C' });
-    if (minute !== null && minute >= 0) previous = Math.max(previous ?? minute, minute);
-    if (minute !== null && celsius !== null) samples.push({ minute, celsius });
+    if (minute !== null && minute >= 0 && minute <= maxLogMinutes) previous = Math.max(previous ?? minute, minute);
+    if (minute !== null && celsius !== null && Number.isFinite(minute) && Number.isFinite(celsius))
+      samples.push({ minute, celsius });
   }
   return { samples: errors.length ? [] : samples, errors };
 }

@@ -3,6 +3,22 @@ import type { Page, PageQuery } from '../../shared/schemas/common';
 import { badRequest } from './errors';
 
 /**
+ * The column expression for `field` or `-field`. Own keys only: a plain object also answers
+ * `constructor` or `toString` from Object.prototype, which would reach the query as a function.
+ */
+export function sortColumn(sortable: Record<string, string>, sort: string): { column: string; desc: boolean } {
+  const desc = sort.startsWith('-');
+  const key = sort.replace(/^-/, '');
+  const column = Object.hasOwn(sortable, key) ? sortable[key] : undefined;
+  if (typeof column !== 'string') {
+    throw badRequest(`sort: cannot sort by "${key}"`, [
+      { path: 'sort', message: `must be one of ${Object.keys(sortable).join(', ')} (prefix - for descending)` },
+    ]);
+  }
+  return { column, desc };
+}
+
+/**
  * Applies `sort` (field or -field, from a whitelist of column expressions) and page/pageSize,
  * with a stable tie-break so that paging never repeats or skips a row.
  */
@@ -13,15 +29,7 @@ export function applySortAndPage<T extends ObjectLiteral>(
   defaultSort: string,
   tieBreak: string,
 ): SelectQueryBuilder<T> {
-  const sort = q.sort ?? defaultSort;
-  const desc = sort.startsWith('-');
-  const key = sort.replace(/^-/, '');
-  const column = sortable[key];
-  if (!column) {
-    throw badRequest(`sort: cannot sort by "${key}"`, [
-      { path: 'sort', message: `must be one of ${Object.keys(sortable).join(', ')} (prefix - for descending)` },
-    ]);
-  }
+  const { column, desc } = sortColumn(sortable, q.sort ?? defaultSort);
   return qb
     .orderBy(column, desc ? 'DESC' : 'ASC')
     .addOrderBy(tieBreak, desc ? 'DESC' : 'ASC')

@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { UserListQuery } from '../../shared/schemas/users';
+import { sortColumn } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { User } from './user.entity';
 
@@ -21,9 +22,8 @@ export const usersRepository = {
     if (q.role) qb.andWhere('u.role = :role', { role: q.role });
     if (q.active) qb.andWhere('u.active = :active', { active: q.active === 'true' });
     if (q.q) qb.andWhere('(u.username LIKE :q OR u.displayName LIKE :q)', { q: `%${q.q}%` });
-    const desc = q.sort?.startsWith('-') ?? false;
-    const key = (q.sort?.replace(/^-/, '') ?? 'username') as keyof typeof sortable;
-    qb.orderBy(sortable[key] ?? sortable.username, desc ? 'DESC' : 'ASC').addOrderBy('u.id', 'ASC');
+    const { column, desc } = sortColumn(sortable, q.sort ?? 'username');
+    qb.orderBy(column, desc ? 'DESC' : 'ASC').addOrderBy('u.id', 'ASC');
     return qb
       .skip((q.page - 1) * q.pageSize)
       .take(q.pageSize)

@@ -40,7 +40,7 @@ export const jarsBehindQuerySchema = periodBase
     factor: factorSchema,
     level: z.string().min(1, 'name the level').max(120),
     only: z.enum(['all', 'contaminated', 'incubating']).default('all'),
-    page: z.coerce.number().int().min(1).default(1),
+    page: z.coerce.number().int().min(1).max(1_000_000).default(1),
     pageSize: z.coerce.number().int().min(1).max(200).default(50),
   })
   .refine((q) => inOrder(q), orderIssue);

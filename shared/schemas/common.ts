@@ -6,7 +6,7 @@ export const idParamsSchema = z.object({ id: idSchema });
 export const localDateSchema = z.iso.date({ error: 'must be a date written YYYY-MM-DD' });
 
 export const pageQuerySchema = z.object({
-  page: z.coerce.number().int().min(1).default(1),
+  page: z.coerce.number().int().min(1).max(1_000_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(25),
   sort: z
     .string()
