@@ -6,6 +6,7 @@ import {
   type HistoryColumn,
   type ImportError,
 } from '../../shared/schemas/imports';
+import { isDateTooFarAhead } from '../../shared/schemas/common';
 import type { CsvRecord } from './history-csv';
 
 /** Values that failed their own check are '' (NaN for minutes), so later checks skip them. */
@@ -115,6 +116,10 @@ export function readRow(record: CsvRecord, header: HeaderMap, errors: ImportErro
       fail(column, `"${v}" is not a calendar date written YYYY-MM-DD`);
       return '';
     }
+    if (v && isDateTooFarAhead(v)) {
+      fail(column, `${v} is more than a day in the future`);
+      return '';
+    }
     return v;
   };
 
@@ -170,7 +175,8 @@ export function readRow(record: CsvRecord, header: HeaderMap, errors: ImportErro
     culture,
     outcome: outcome ?? null,
     contaminant,
-    foundOn: outcome === 'contaminated' && isCalendarDate(foundText) ? foundText : null,
+    foundOn:
+      outcome === 'contaminated' && isCalendarDate(foundText) && !isDateTooFarAhead(foundText) ? foundText : null,
   };
 }
 

@@ -5,6 +5,24 @@ export const idParamsSchema = z.object({ id: idSchema });
 
 export const localDateSchema = z.iso.date({ error: 'must be a date written YYYY-MM-DD' });
 
+const dayMs = 86_400_000;
+export const tooFarAhead = 'cannot be more than a day in the future';
+
+/** Strict ISO 8601 with its offset (2026-03-01T09:30:00Z, …+01:00): no calendar roll-over, no numbers. */
+export const instantSchema = z.iso.datetime({
+  offset: true,
+  error: 'must be a date and time with its offset, such as 2026-03-01T09:30:00Z',
+});
+
+/** A moment something happened: a day's slack covers clocks and zones, more is a typing slip. */
+export const recordedInstantSchema = instantSchema.refine((v) => Date.parse(v) <= Date.now() + dayMs, tooFarAhead);
+
+/** A local date is too far ahead when it has begun nowhere on Earth (UTC+14) within a day from now. */
+export const isDateTooFarAhead = (date: string, now = Date.now()) => Date.parse(`${date}T00:00:00+14:00`) > now + dayMs;
+
+/** The local date something happened on. */
+export const recordedDateSchema = localDateSchema.refine((v) => !isDateTooFarAhead(v), tooFarAhead);
+
 export const pageQuerySchema = z.object({
   page: z.coerce.number().int().min(1).max(1_000_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(25),

@@ -1,5 +1,12 @@
 import { z } from 'zod';
-import { dateRangeShape, listQueryOf, localDateSchema, oneOperator, operatorShape } from './common';
+import {
+  dateRangeShape,
+  listQueryOf,
+  oneOperator,
+  operatorShape,
+  recordedDateSchema,
+  recordedInstantSchema,
+} from './common';
 import { registerCodeSchema } from './grain';
 
 export const f0Sources = ['log', 'estimate'] as const;
@@ -47,8 +54,8 @@ export type CookRunDetailDto = z.infer<typeof cookRunDetailSchema>;
 const cookRunFields = {
   code: registerCodeSchema,
   vessel: z.string().trim().max(80).nullish(),
-  startedAt: z.iso.datetime({ offset: true, error: 'must be a date and time such as 2026-03-01T09:30:00Z' }).nullish(),
-  cookedOn: localDateSchema.nullish(),
+  startedAt: recordedInstantSchema.nullish(),
+  cookedOn: recordedDateSchema.nullish(),
   minutesAtPressure: z.number().int('must be whole minutes').min(1, 'must be at least 1 minute').max(600),
   gaugeKPa: z.number().min(0, 'must not be negative').max(350, 'must be at most 350 kPa').nullish(),
   ventingMinutes: z.number().int('must be whole minutes').min(0).max(120).nullish(),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { cultureStateSchema, cultureStates, type CultureState } from '../enums';
-import { idSchema, listQueryOf, localDateSchema } from './common';
+import { idSchema, listQueryOf, recordedDateSchema } from './common';
 import { registerCodeSchema } from './grain';
 
 export const agarResults = ['clean', 'contaminated', 'inconclusive'] as const;
@@ -57,7 +57,7 @@ const cultureFields = {
   code: registerCodeSchema,
   species: z.string().trim().min(1).max(120).nullish(),
   strain: z.string().trim().max(120).nullish(),
-  preparedOn: localDateSchema.nullish(),
+  preparedOn: recordedDateSchema.nullish(),
   generation: z.number().int('must be a whole number').min(0).max(99).nullish(),
   volumeMl: z.number().positive('must be more than 0 ml').max(100000).nullish(),
   parentCultureId: idSchema.nullish(),
@@ -79,7 +79,7 @@ export const changeCultureStateSchema = z.object({
 export type ChangeCultureStateInput = z.infer<typeof changeCultureStateSchema>;
 
 export const createAgarTestSchema = z.object({
-  testedOn: localDateSchema,
+  testedOn: recordedDateSchema,
   result: agarResultSchema,
   notes: z.string().trim().max(2000).nullish(),
   photoId: idSchema.nullish(),

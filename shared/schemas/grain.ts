@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { idSchema, pageQuerySchema, recordedDateSchema } from './common';
 
 const optionalText = (max: number) => z.string().trim().max(max).nullish();
 
@@ -34,7 +34,7 @@ export type GrainLotDto = z.infer<typeof grainLotSchema>;
 export const createGrainLotSchema = z.object({
   grainId: idSchema,
   supplierLotCode: z.string().trim().min(1, 'enter the supplier lot code').max(80),
-  receivedOn: localDateSchema,
+  receivedOn: recordedDateSchema,
   notes: optionalText(2000),
 });
 export type CreateGrainLotInput = z.infer<typeof createGrainLotSchema>;
@@ -64,7 +64,7 @@ export type PrepBatchDto = z.infer<typeof prepBatchSchema>;
 export const createPrepBatchSchema = z.object({
   code: registerCodeSchema,
   grainLotId: idSchema,
-  preparedOn: localDateSchema,
+  preparedOn: recordedDateSchema,
   soakHours: z.number().min(0).max(96, 'must be at most 96 hours').nullish(),
   simmerMinutes: z.number().int('must be whole minutes').min(0).max(240).nullish(),
   drainMinutes: z.number().int('must be whole minutes').min(0).max(1440).nullish(),

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { jarStatusSchema, jarStatuses, type JarStatus } from '../enums';
-import { dateRangeShape, idSchema, pageQuerySchema } from './common';
+import { dateRangeShape, idSchema, pageQuerySchema, recordedInstantSchema } from './common';
 
 export const releasedTargets = ['grow-room', 'customer'] as const;
 export const releasedToSchema = z.enum(releasedTargets);
@@ -17,7 +17,7 @@ const reason = z
   .trim()
   .min(3, 'give a reason of at least 3 characters')
   .max(500, 'use at most 500 characters');
-const instant = z.coerce.date({ error: 'must be a date and time' });
+const instant = recordedInstantSchema.transform((v) => new Date(v));
 /** Lets the client send '' from an empty input. */
 const optionalId = z.preprocess((v) => (v === '' || v === null ? undefined : v), idSchema.optional());
 
@@ -69,6 +69,8 @@ export const createJarBatchSchema = z
     }
   });
 export type CreateJarBatchInput = z.infer<typeof createJarBatchSchema>;
+/** What a form holds before parsing: times still as text. */
+export type CreateJarBatchFields = z.input<typeof createJarBatchSchema>;
 
 const statusList = z
   .string()
@@ -189,6 +191,7 @@ export const jarEventInputSchema = z.discriminatedUnion(
   { error: `type: use one of ${jarEventInputTypes.join(', ')}` },
 );
 export type JarEventInput = z.infer<typeof jarEventInputSchema>;
+export type JarEventFields = z.input<typeof jarEventInputSchema>;
 
 export const jarEventSchema = z.object({
   id: z.number().int(),

@@ -1,6 +1,14 @@
 import { z } from 'zod';
 import { workspaceSchema } from '../enums';
-import { dateRangeShape, idSchema, listQueryOf, localDateSchema, oneOperator, operatorShape } from './common';
+import {
+  dateRangeShape,
+  idSchema,
+  listQueryOf,
+  oneOperator,
+  operatorShape,
+  recordedDateSchema,
+  recordedInstantSchema,
+} from './common';
 import { registerCodeSchema } from './grain';
 
 export const workspaceLabels = {
@@ -53,8 +61,8 @@ const checklistSchema = z
 
 const sessionFields = {
   code: registerCodeSchema,
-  heldOn: localDateSchema,
-  startedAt: z.iso.datetime({ offset: true, error: 'must be a date and time such as 2026-03-01T09:30:00Z' }).nullish(),
+  heldOn: recordedDateSchema,
+  startedAt: recordedInstantSchema.nullish(),
   ...operatorShape,
   workspace: workspaceSchema,
   procedureVersionId: idSchema.nullish(),

@@ -1,11 +1,11 @@
 import { z } from 'zod';
 import { roleSchema } from '../enums';
-import { idSchema, localDateSchema, pageQuerySchema } from './common';
+import { idSchema, pageQuerySchema, recordedDateSchema } from './common';
 
 export const createTrainingRecordSchema = z.object({
   userId: idSchema,
   procedureVersionId: idSchema,
-  trainedOn: localDateSchema,
+  trainedOn: recordedDateSchema,
   notes: z
     .string()
     .trim()

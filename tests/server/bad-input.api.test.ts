@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
+import { jarFixtures } from './jars.fixtures';
 import { postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 
 const app = createTestApp();
@@ -63,5 +64,76 @@ describe('temperature log numbers out of physical range', () => {
     const res = await postCsvAs(supervisor, `/api/cook-runs/${run.id}/readings`, csv);
     expect(res.status).toBe(422);
     expect(res.body.error.issues[0].message).toMatch(/^line 3, celsius:/);
+  });
+});
+
+describe('dates and times', () => {
+  const days = (n: number) => new Date(Date.now() + n * 86_400_000);
+  const batch = async (inoculatedAt: unknown) => {
+    const session = await jarFixtures.session();
+    const culture = await jarFixtures.culture();
+    return sendAs(supervisor, 'post', '/api/jars/batch', {
+      sessionId: session.id,
+      count: 1,
+      grainId: await jarFixtures.grainId(),
+      cultureId: culture.id,
+      inoculatedAt,
+    });
+  };
+
+  it.each([
+    ['an impossible calendar date', '2026-11-31T12:00:00Z'],
+    ['a boolean', true],
+    ['a number', -1],
+    ['a time without an offset', '2026-05-04T10:30:00'],
+    ['a date alone', '2026-05-04'],
+    ['two days ahead', days(2).toISOString()],
+  ])('refuses %s as inoculatedAt with 400 naming the field', async (_what, value) => {
+    const res = await batch(value);
+    expect(res.status).toBe(400);
+    expect(res.body.error.issues[0].path).toBe('inoculatedAt');
+  });
+
+  it('keeps the offset a time was written with', async () => {
+    const res = await batch('2026-05-04T10:30:00+02:00');
+    expect(res.status).toBe(201);
+    expect(new Date(res.body.jars[0].inoculatedAt).toISOString()).toBe('2026-05-04T08:30:00.000Z');
+  });
+
+  it.each([true, -1, '2026-02-29T08:00:00Z'])('refuses %s as a jar event time', async (at) => {
+    const made = await batch('2026-05-04T10:30:00Z');
+    const res = await sendAs(supervisor, 'post', `/api/jars/${made.body.jars[0].id}/events`, { type: 'shaken', at });
+    expect(res.status).toBe(400);
+    expect(res.body.error.issues[0]).toMatchObject({
+      path: 'at',
+      message: expect.stringMatching(/^must be a date and time/),
+    });
+  });
+
+  it.each([
+    ['cookedOn', { cookedOn: '2099-01-01' }],
+    ['startedAt', { startedAt: days(3).toISOString() }],
+  ])('refuses a cook run %s more than a day ahead', async (field, over) => {
+    const res = await sendAs(supervisor, 'post', '/api/cook-runs', {
+      code: uniqueName('CR'),
+      cookedOn: '2026-03-02',
+      minutesAtPressure: 90,
+      container: '1 L jar',
+      ...over,
+    });
+    expect(res.status).toBe(400);
+    expect(res.body.error.issues[0]).toEqual({ path: field, message: 'cannot be more than a day in the future' });
+  });
+
+  it('refuses an imported date more than a day ahead, naming line and column', async () => {
+    const tag = uniqueName('FUT');
+    const csv =
+      'jar_label,grain,cook_run,cook_minutes,inoculated_on,session,operator,culture,outcome,contaminant,found_on\n' +
+      `${tag}-1,rye,${tag}-CR,90,2099-01-01,${tag}-S,Invented Person,${tag}-LC,clean,,\n`;
+    const res = await postCsvAs(supervisor, '/api/imports/history', csv);
+    expect(res.status).toBe(422);
+    expect(res.body.errors).toEqual([
+      { line: 2, column: 'inoculated_on', message: '2099-01-01 is more than a day in the future' },
+    ]);
   });
 });

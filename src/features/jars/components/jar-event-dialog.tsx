@@ -1,5 +1,5 @@
 import type { FieldErrors } from 'react-hook-form';
-import { jarEventInputSchema, type JarEventInput, type JarEventInputType } from '../../../../shared/schemas/jars';
+import { jarEventInputSchema, type JarEventFields, type JarEventInputType } from '../../../../shared/schemas/jars';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
 import { Select } from '../../../components/ui/select';
@@ -41,7 +41,7 @@ export function JarEventDialog({ jar, type, onClose }: Props) {
     room: jar.room ?? '',
     shelf: jar.shelf ?? '',
     releasedTo: 'grow-room',
-  } as unknown as JarEventInput;
+  } as unknown as JarEventFields;
 
   return (
     <FormDialog

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Link } from 'react-router';
 import {
   createJarBatchSchema,
-  type CreateJarBatchInput,
+  type CreateJarBatchFields,
   type JarBatchResultDto,
 } from '../../../../shared/schemas/jars';
 import { Button, buttonClasses } from '../../../components/ui/button';
@@ -35,6 +35,12 @@ const fields = [
 ] as const;
 const blankToUndefined = (v: unknown) => (v === '' ? undefined : v);
 const idOrUndefined = (v: unknown) => (v === '' || v === undefined ? undefined : Number(v));
+/** The input's wall-clock value as an instant with the browser's offset; the server takes no other form. */
+const instantOfLocal = (v: unknown) => {
+  if (typeof v !== 'string' || !v) return undefined;
+  const at = new Date(v);
+  return Number.isNaN(at.getTime()) ? v : at.toISOString();
+};
 const nowLocal = () => {
   const d = new Date();
   d.setMinutes(d.getMinutes() - d.getTimezoneOffset());
@@ -116,7 +122,7 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
       <Form
         schema={createJarBatchSchema}
         options={{
-          defaultValues: { sessionId, count: 12, inoculatedAt: nowLocal() } as unknown as CreateJarBatchInput,
+          defaultValues: { sessionId, count: 12 } as unknown as CreateJarBatchFields,
         }}
         onSubmit={async (values, { setError }) => {
           try {
@@ -184,7 +190,9 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
                 label="Inoculated at"
                 type="datetime-local"
                 error={errors.inoculatedAt?.message}
-                {...register('inoculatedAt')}
+                // Not in defaultValues: react-hook-form reads it from the input through setValueAs.
+                defaultValue={nowLocal()}
+                {...register('inoculatedAt', { setValueAs: instantOfLocal })}
               />
             </div>
             <fieldset className="space-y-3">
