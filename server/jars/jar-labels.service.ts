@@ -1,9 +1,28 @@
 import QRCode from 'qrcode';
+import type { EntityManager } from 'typeorm';
 import type { JarLabelDto, LabelSheetQuery } from '../../shared/schemas/jars';
-import { notFound } from '../core/errors';
+import { conflict, notFound } from '../core/errors';
 import { jarPageUrl } from './jar-story.service';
 import { jarsRepository } from './jars.repository';
 import { toJarRow } from './jars.mapper';
+import { defaultLabelFormat, labelFormatOf, labelsAfter } from './label-sequence';
+
+const labelMaxLength = 40;
+
+/**
+ * One format for every jar: new labels take the prefix and width of the lab's latest numbered
+ * label (imported or demo labels included) and continue the highest number under that prefix.
+ * Call inside the transaction that holds the sequence lock.
+ */
+export async function nextJarLabels(m: EntityManager, count: number): Promise<string[]> {
+  const latest = await jarsRepository.latestSequencedLabel(m);
+  const format = (latest ? labelFormatOf(latest) : null) ?? defaultLabelFormat;
+  const labels = labelsAfter(format, await jarsRepository.highestLabelDigits(m, format.prefix), count);
+  if (labels.some((l) => l.length > labelMaxLength)) {
+    throw conflict(`The label sequence ${format.prefix}… has run past ${labelMaxLength} characters.`);
+  }
+  return labels;
+}
 
 /** Level M survives a smudged or slightly torn label; a one-module margin keeps it small on a roll. */
 export async function jarQrSvg(jarId: number): Promise<string> {

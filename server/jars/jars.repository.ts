@@ -13,10 +13,7 @@ import { LabSettings } from '../settings/lab-settings.entity';
 import { JarEvent } from './jar-event.entity';
 import { Jar } from './jar.entity';
 import type { JarRawRow } from './jars.mapper';
-
-export const labelPrefix = 'J-';
-const labelDigits = 6;
-export const formatLabel = (n: number) => `${labelPrefix}${String(n).padStart(labelDigits, '0')}`;
+import { sequencedLabelSql } from './label-sequence';
 
 const sortable = {
   label: 'j.label',
@@ -137,14 +134,34 @@ export const jarsRepository = {
       .getRawOne();
   },
 
-  /** Call after lockSequences; continues after any stored J- label, imported ones included. */
-  async nextLabelNumber(m: EntityManager): Promise<number> {
+  /** The label of the latest jar numbered in sequence: it sets the lab's label format. */
+  async latestSequencedLabel(m: EntityManager): Promise<string | null> {
     const raw = await m
       .createQueryBuilder(Jar, 'j')
-      .select('MAX(CAST(SUBSTRING(j.label, :from) AS UNSIGNED))', 'n')
-      .where('j.label REGEXP :pattern', { from: labelPrefix.length + 1, pattern: `^${labelPrefix}[0-9]+$` })
-      .getRawOne<{ n: string | number | null }>();
-    return Number(raw?.n ?? 0) + 1;
+      .select('j.label', 'label')
+      .where('j.label REGEXP :pattern', { pattern: sequencedLabelSql })
+      .orderBy('j.id', 'DESC')
+      .limit(1)
+      .getRawOne<{ label: string }>();
+    return raw?.label ?? null;
+  },
+
+  /**
+   * The digits of the highest label under the prefix, compared as text (length, then value) so that
+   * no number is ever rounded; call after lockSequences.
+   */
+  async highestLabelDigits(m: EntityManager, prefix: string): Promise<string | null> {
+    const digits = `TRIM(LEADING '0' FROM SUBSTRING(j.label, ${prefix.length + 1}))`;
+    const raw = await m
+      .createQueryBuilder(Jar, 'j')
+      .select(digits, 'digits')
+      .where('j.label LIKE :start', { start: likePrefix(prefix) })
+      .andWhere('j.label REGEXP :pattern', { pattern: `^${prefix}[0-9]+$` })
+      .orderBy(`CHAR_LENGTH(${digits})`, 'DESC')
+      .addOrderBy(digits, 'DESC')
+      .limit(1)
+      .getRawOne<{ digits: string }>();
+    return raw ? raw.digits || '0' : null;
   },
 
   /** Call after lockSequences. */

@@ -15,7 +15,8 @@ import { pageResult } from '../core/paging';
 import { cultureUseWarning } from '../cultures/cultures.service';
 import { dataSource } from '../db/data-source';
 import type { Jar } from './jar.entity';
-import { formatLabel, jarsRepository } from './jars.repository';
+import { nextJarLabels } from './jar-labels.service';
+import { jarsRepository } from './jars.repository';
 import { dateOnly, toJarRow } from './jars.mapper';
 
 const missing = (path: string, what: string) =>
@@ -94,11 +95,11 @@ export async function createJarBatch(actor: Actor, input: CreateJarBatchInput): 
       );
     }
 
-    const first = await jarsRepository.nextLabelNumber(m);
+    const labels = await nextJarLabels(m, input.count);
     const firstPlace =
       input.room && input.shelf ? await jarsRepository.nextShelfPosition(m, input.room, input.shelf) : null;
     const rows: Partial<Jar>[] = Array.from({ length: input.count }, (_, i) => ({
-      label: formatLabel(first + i),
+      label: labels[i],
       grainId,
       prepBatchId: input.prepBatchId ?? null,
       cookRunId: input.cookRunId ?? null,
