@@ -9,7 +9,7 @@ import { passport } from './passport';
 export const authRouter = Router();
 
 authRouter.get('/csrf', (req, res) => {
-  res.json({ token: generateToken(req, true) });
+  res.json({ token: generateToken(req, res) });
 });
 
 authRouter.post('/login', validate({ body: loginSchema }), (req: Request, res: Response, next: NextFunction) => {
@@ -33,6 +33,6 @@ authRouter.get('/me', requireUser, (req, res) => {
 });
 
 authRouter.post('/password', requireUser, validate({ body: changePasswordSchema }), async (req, res) => {
-  await changePassword(currentUser(req), req.body);
+  await changePassword(currentUser(req), req.body, { address: req.ip ?? 'unknown', sessionId: req.sessionID });
   res.status(204).end();
 });

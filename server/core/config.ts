@@ -32,6 +32,7 @@ const configSchema = z.object({
   SESSION_MAX_AGE_HOURS: z.coerce.number().positive().default(12),
   PASSWORD_HASH_ROUNDS: z.coerce.number().int().min(4).max(15).default(11),
   LOGIN_FAILURE_LIMIT: z.coerce.number().int().min(1).default(10),
+  LOGIN_ADDRESS_FAILURE_LIMIT: z.coerce.number().int().min(1).default(50),
   LOGIN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   TRUST_PROXY: boolish.default(false),
   UPLOAD_DIR: z.string().default('.data/uploads'),
