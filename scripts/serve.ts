@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { config } from '../server/core/config';
+import { installProcessGuards } from '../server/core/process-guards';
 import { dataSource } from '../server/db/data-source';
 import { startServer } from '../server/main';
 import { loadDemoLab } from '../seed/demo-lab';
@@ -8,6 +9,7 @@ import { startLocalMailFake } from './local-mail';
 
 // npm start: the lab's own MariaDB → migrations → demo lab → app; Ctrl-C or SIGTERM stops all of it.
 const c = config();
+installProcessGuards();
 const db = await startLocalDb();
 const mail = await startLocalMailFake();
 let stopping = false;

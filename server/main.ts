@@ -1,9 +1,11 @@
 import 'reflect-metadata';
 import type { Server } from 'node:http';
 import { createApp } from './app';
+import { startAuthMaintenance } from './auth/auth-maintenance';
 import { createSessionStore } from './auth/session';
 import { config } from './core/config';
 import { logger } from './core/logger';
+import { installProcessGuards } from './core/process-guards';
 import { dataSource } from './db/data-source';
 import { startDigestScheduler } from './mail/digest-scheduler';
 import { registerMailListeners } from './mail/mail-listeners';
@@ -23,6 +25,8 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
   const app = createApp({ sessionStore });
   const stopMailListeners = registerMailListeners();
   const digest = (options.digest ?? c.NODE_ENV !== 'test') ? startDigestScheduler() : undefined;
+  const maintenance = startAuthMaintenance();
+  void maintenance.run();
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(c.PORT, c.HOST, () => resolve(s)).once('error', reject);
   });
@@ -37,6 +41,7 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
       server.closeAllConnections();
       await closed;
       digest?.stop();
+      maintenance.stop();
       stopMailListeners();
       closeMailTransport();
       await sessionStore.close();
@@ -47,6 +52,7 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
 
 const isEntryPoint = process.argv[1]?.endsWith('server/main.ts');
 if (isEntryPoint) {
+  installProcessGuards();
   const running = await startServer();
   const stop = () => void running.close().then(() => process.exit(0));
   process.once('SIGINT', stop);

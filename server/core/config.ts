@@ -34,6 +34,7 @@ const configSchema = z.object({
   LOGIN_FAILURE_LIMIT: z.coerce.number().int().min(1).default(10),
   LOGIN_ADDRESS_FAILURE_LIMIT: z.coerce.number().int().min(1).default(50),
   LOGIN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
+  MAINTENANCE_INTERVAL_SECONDS: z.coerce.number().int().min(1).max(86_400).default(900),
   TRUST_PROXY: boolish.default(false),
   UPLOAD_DIR: z.string().default('.data/uploads'),
   MAIL_SINK_DIR: z.string().default('.data/mail'),

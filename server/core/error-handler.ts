@@ -17,6 +17,23 @@ function isDuplicateKey(
   return err instanceof QueryFailedError && (err.driverError as { code?: string }).code === 'ER_DUP_ENTRY';
 }
 
+// The driver's codes for "MariaDB is not there right now": a 503 the client may retry, not a bug.
+const unavailableCodes = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'PROTOCOL_CONNECTION_LOST',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CON_COUNT_ERROR',
+]);
+
+function isDatabaseUnavailable(err: unknown): boolean {
+  const direct = (err as { code?: unknown }).code;
+  const driver = err instanceof QueryFailedError ? (err.driverError as { code?: unknown }).code : undefined;
+  return [direct, driver].some((c) => typeof c === 'string' && unavailableCodes.has(c));
+}
+
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (res.headersSent) return;
   if (err instanceof AppError)
@@ -47,6 +64,13 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     const errorCode =
       typeof code === 'string' ? code : type === 'entity.parse.failed' ? 'malformed-body' : 'bad-request';
     return send(res, status, { code: errorCode, message });
+  }
+  if (isDatabaseUnavailable(err)) {
+    logger.warn({ err, method: req.method, url: req.originalUrl }, 'database unavailable');
+    return send(res, 503, {
+      code: 'database-unavailable',
+      message: 'The database is not answering; try again shortly.',
+    });
   }
   const requestId = randomUUID();
   logger.error({ err, requestId, method: req.method, url: req.originalUrl }, 'unhandled error');

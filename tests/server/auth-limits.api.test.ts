@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs';
 import supertest from 'supertest';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { startAuthMaintenance } from '../../server/auth/auth-maintenance';
 import { LoginFailure } from '../../server/auth/login-failure.entity';
 import { SessionRecord } from '../../server/auth/session-record.entity';
 import { config } from '../../server/core/config';
@@ -107,5 +108,27 @@ describe('anonymous traffic', () => {
     });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('csrf-invalid');
+  });
+});
+
+describe('auth maintenance', () => {
+  it('prunes sign-in failures older than a day and expired sessions, and keeps the rest', async () => {
+    const m = dataSource.manager;
+    const tag = uniqueName('old');
+    await m.insert(LoginFailure, [
+      { username: `${tag}-stale`, address: '192.0.2.1', failedAt: new Date(Date.now() - 2 * 86_400_000) },
+      { username: `${tag}-recent`, address: '192.0.2.1', failedAt: new Date() },
+    ]);
+    await m.insert(SessionRecord, [
+      { sessionId: `${tag}-expired`, expires: Math.floor(Date.now() / 1000) - 60, data: '{}' },
+      { sessionId: `${tag}-live`, expires: Math.floor(Date.now() / 1000) + 3600, data: '{}' },
+    ]);
+    const maintenance = startAuthMaintenance();
+    await maintenance.run();
+    maintenance.stop();
+    expect(await m.countBy(LoginFailure, { username: `${tag}-stale` })).toBe(0);
+    expect(await m.countBy(LoginFailure, { username: `${tag}-recent` })).toBe(1);
+    expect(await m.countBy(SessionRecord, { sessionId: `${tag}-expired` })).toBe(0);
+    expect(await m.countBy(SessionRecord, { sessionId: `${tag}-live` })).toBe(1);
   });
 });
