@@ -49,7 +49,7 @@ analysisRouter.get('/crosstab', validate({ query: crosstabQuerySchema }), async 
 
 analysisRouter.get('/causes', validate({ query: causesQuerySchema }), async (req, res) => {
   const q = query<CausesQuery>(req);
-  answer(res, q.format, await analysis.causes(q, q.minJars), csv.causesCsv);
+  answer(res, q.format, await analysis.causes(q, q.minJars, q), csv.causesCsv);
 });
 
 analysisRouter.get('/weekly', validate({ query: periodQuerySchema }), async (req, res) => {

@@ -36,7 +36,13 @@ const BEFORE_AFTER_MAX_DAYS = 90;
 
 export async function frameFor(p: Period, today = todayLocal()): Promise<Frame> {
   const s = await getLabSettings();
-  return { from: p.from, to: p.to, windowStart: addDays(today, -s.observationWindowDays), edges: s.cookBucketEdges };
+  return {
+    from: p.from,
+    to: p.to,
+    windowStart: addDays(today, -s.observationWindowDays),
+    windowDays: s.observationWindowDays,
+    edges: s.cookBucketEdges,
+  };
 }
 
 export function tally(c: CountRow): Tally {
@@ -112,9 +118,25 @@ export async function crosstab(rowFactor: Factor, colFactor: Factor, p: Period):
   };
 }
 
-export async function causes(p: Period, minJars: number): Promise<CausesDto> {
+export async function causes(
+  p: Period,
+  minJars: number,
+  paging: { page?: number | undefined; pageSize: number } = { pageSize: 25 },
+): Promise<CausesDto> {
   const combos = await analysisRepository.combinations(await frameFor(p));
-  return { from: p.from ?? null, to: p.to ?? null, minJars, causes: buildCauses(combos, minJars) };
+  const { leads, rows } = buildCauses(combos, minJars);
+  const page = paging.page ?? null;
+  const shown = page === null ? rows : rows.slice((page - 1) * paging.pageSize, page * paging.pageSize);
+  return {
+    from: p.from ?? null,
+    to: p.to ?? null,
+    minJars,
+    leads,
+    causes: shown,
+    total: rows.length,
+    page,
+    pageSize: page === null ? null : paging.pageSize,
+  };
 }
 
 /** Default period: the last twelve ISO weeks, the current one included. */

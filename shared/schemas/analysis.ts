@@ -23,7 +23,12 @@ export const crosstabQuerySchema = periodBase
 export type CrosstabQuery = z.infer<typeof crosstabQuerySchema>;
 
 export const causesQuerySchema = periodBase
-  .extend({ minJars: z.coerce.number().int().min(1).max(1_000_000).default(1) })
+  .extend({
+    minJars: z.coerce.number().int().min(1).max(1_000_000).default(1),
+    /** Without page, every row; with page (and pageSize, default 25, at most 200), that page. */
+    page: z.coerce.number().int().min(1).optional(),
+    pageSize: z.coerce.number().int().min(1).max(200).default(25),
+  })
   .refine((q) => inOrder(q), orderIssue);
 export type CausesQuery = z.infer<typeof causesQuerySchema>;
 
@@ -39,7 +44,7 @@ export const jarsBehindQuerySchema = periodBase
   .extend({
     factor: factorSchema,
     level: z.string().min(1, 'name the level').max(120),
-    only: z.enum(['all', 'contaminated', 'incubating']).default('all'),
+    only: z.enum(['all', 'settled', 'contaminated', 'incubating']).default('all'),
     page: z.coerce.number().int().min(1).default(1),
     pageSize: z.coerce.number().int().min(1).max(200).default(50),
   })
@@ -88,6 +93,20 @@ export interface FactorLevel {
   level: string;
 }
 
+/** DESIGN.md §4.3: where a row stands once the leads are chosen. */
+export const standings = ['lead', 'same-jars', 'explained', 'elevated', 'not-elevated'] as const;
+export type Standing = (typeof standings)[number];
+
+/** Mantel–Haenszel relative risk of a level against its rest, stratified by the leads in `given`. */
+export interface AdjustedRisk {
+  given: FactorLevel[];
+  relativeRisk: number;
+  rr95: Interval;
+  /** Two-sided Cochran–Mantel–Haenszel test with the continuity correction. */
+  pValue: number;
+}
+
+/** Settled jars only (DESIGN.md §3); `incubating` counts the level's jars left out as still at risk. */
 export interface CauseRow extends FactorLevel {
   jars: number;
   contaminated: number;
@@ -101,6 +120,10 @@ export interface CauseRow extends FactorLevel {
   pValue: number;
   qValue: number;
   confoundedWith: FactorLevel[];
+  standing: Standing;
+  /** The leads this level shares ≥ 90 % of its settled jars with, both ways. */
+  sameJarsAs: FactorLevel[];
+  adjusted: AdjustedRisk | null;
   hint: string | null;
   /** Where the hint comes from: the trade's common practice, or a named source beside it. */
   hintBasis: string | null;
@@ -109,11 +132,21 @@ export interface CauseRow extends FactorLevel {
   medianDaysToDetection: number | null;
 }
 
+/** A lead in the order chosen, its row, and the levels that hold the same jars as it. */
+export interface LeadDto extends FactorLevel {
+  row: CauseRow;
+  sameJars: FactorLevel[];
+}
+
 export interface CausesDto {
   from: string | null;
   to: string | null;
   minJars: number;
+  leads: LeadDto[];
   causes: CauseRow[];
+  total: number;
+  page: number | null;
+  pageSize: number | null;
 }
 
 export interface WeeklyGrain {
