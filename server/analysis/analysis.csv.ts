@@ -110,11 +110,24 @@ export const weeklyCsv = (d: WeeklyDto): CsvTable => ({
     'ucl',
     'lcl',
     'out_of_control',
+    'below_lcl',
     'provisional',
   ],
   rows: d.weeks.flatMap((w) => [
-    [w.week, '(all grains)', w.jars, w.contaminated, w.incubating, w.rate, w.ucl, w.lcl, w.outOfControl, w.provisional],
-    ...w.grains.map((g) => [w.week, g.grain, g.jars, g.contaminated, g.incubating, g.rate, '', '', '', '']),
+    [
+      w.week,
+      '(all grains)',
+      w.jars,
+      w.contaminated,
+      w.incubating,
+      w.rate,
+      w.ucl,
+      w.lcl,
+      w.outOfControl,
+      w.belowLcl,
+      w.provisional,
+    ],
+    ...w.grains.map((g) => [w.week, g.grain, g.jars, g.contaminated, g.incubating, g.rate, '', '', '', '', '']),
   ]),
 });
 

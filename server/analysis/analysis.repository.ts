@@ -194,7 +194,12 @@ export const analysisRepository = {
   /** Days to colonisation per grain; jars that did not colonise are censored at their last known day. */
   async colonisation(p: Period, today: string): Promise<ColonisationRow[]> {
     // A jar marked colonised or released without a colonisation date (imported history) has no known day.
-    const { where, params } = periodWhere(p, ["NOT (j.colonisedOn IS NULL AND j.status IN ('colonised', 'released'))"]);
+    // Imported history has no colonisation days, and its contaminated jars no censoring day worth
+    // trusting: leaving only one kind out would bias the curve, so all imported jars stay out.
+    const { where, params } = periodWhere(p, [
+      'j.imported = 0',
+      "NOT (j.colonisedOn IS NULL AND j.status IN ('colonised', 'released'))",
+    ]);
     const colonised = 'j.colonisedOn IS NOT NULL AND (cj.foundOn IS NULL OR j.colonisedOn <= cj.foundOn)';
     const raw = await dataSource.query<Raw>(
       `SELECT g.name AS grain, (${colonised}) AS colonised,

@@ -165,6 +165,7 @@ export async function weeklyTable(p: Period = {}): Promise<WeeklyDto> {
     const limits = chart.limits[i] ?? { ucl: 1, lcl: 0 };
     const rate = w.total.contaminated / w.total.jars;
     const isProvisional = provisional[i] ?? false;
+    const charted = !isProvisional && !Number.isNaN(chart.pBar);
     return {
       week: w.week,
       jars: w.total.jars,
@@ -173,7 +174,9 @@ export async function weeklyTable(p: Period = {}): Promise<WeeklyDto> {
       rate,
       ucl: limits.ucl,
       lcl: limits.lcl,
-      outOfControl: !isProvisional && !Number.isNaN(chart.pBar) && (rate > limits.ucl || rate < limits.lcl),
+      // DESIGN.md §4.4: only above the upper limit is out of control; below the lower one is a good signal.
+      outOfControl: charted && rate > limits.ucl,
+      belowLcl: charted && rate < limits.lcl,
       provisional: isProvisional,
       grains: w.grains.map((g) => ({
         grain: g.grain,

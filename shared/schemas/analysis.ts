@@ -165,7 +165,10 @@ export interface WeeklyRow {
   rate: number;
   ucl: number;
   lcl: number;
+  /** Above the upper limit: unusually many contaminated jars. */
   outOfControl: boolean;
+  /** Below the lower limit: unusually few, a good signal and never an alarm. */
+  belowLcl: boolean;
   provisional: boolean;
   grains: WeeklyGrain[];
 }

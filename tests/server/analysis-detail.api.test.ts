@@ -190,6 +190,21 @@ describe('GET /api/analysis/colonisation', () => {
     expect(maize).toMatchObject({ jars: 1, colonised: 0, censored: 1, medianDays: null });
     expect(maize.steps).toEqual([{ day: 4, atRisk: 1, colonised: 0, censored: 1, stillColonising: 1 }]);
   });
+
+  it('leaves imported jars out, contaminated and clean alike (they carry no colonisation day)', async () => {
+    const day = '2024-03-04';
+    const wheat = await grainId('wheat');
+    const ids = await insertJars([
+      { label: 'PX-KM-OWN', grainId: wheat, inoculatedOn: day, status: 'colonised', colonisedOn: addDays(day, 12) },
+      { label: 'PX-KM-IMP-X', grainId: wheat, inoculatedOn: day, status: 'contaminated', endedOn: addDays(day, 5) },
+      { label: 'PX-KM-IMP-C', grainId: wheat, inoculatedOn: day, status: 'colonised' },
+    ]);
+    await dataSource.query('UPDATE jars SET imported = 1 WHERE id IN (?, ?)', [ids[1], ids[2]]);
+    await insertIncident([ids[1]!], addDays(day, 5));
+    const res = await reader.agent.get(`/api/analysis/colonisation?from=${day}&to=${day}`);
+    const curve = (res.body as ColonisationDto).curves.find((c) => c.grain === 'wheat')!;
+    expect(curve).toMatchObject({ jars: 1, colonised: 1, censored: 0, medianDays: 12 });
+  });
 });
 
 describe('GET /api/analysis/lethality', () => {

@@ -413,7 +413,9 @@ describe('GET /api/analysis/weekly', () => {
       const spread = 3 * Math.sqrt((pBar * (1 - pBar)) / w.jars);
       expectClose(w.ucl, Math.min(1, pBar + spread), 1e-12);
       expect(w.lcl).toBeCloseTo(Math.max(0, pBar - spread), 12);
-      expect(w.outOfControl).toBe(!w.provisional && (w.rate > w.ucl || w.rate < w.lcl));
+      // DESIGN.md §4.4 (revised for issue 9): only above the upper limit is out of control; below the lower is belowLcl.
+      expect(w.outOfControl).toBe(!w.provisional && w.rate > w.ucl);
+      expect(w.belowLcl).toBe(!w.provisional && w.rate < w.lcl);
     }
     const shortWeek = isoWeekLabel(addDays(planted.firstMonday, 7 * planted.shortRunWeek));
     expect(body.weeks.find((w) => w.week === shortWeek)!.outOfControl).toBe(true);
