@@ -1,4 +1,5 @@
 import type { Factor } from '../../shared/enums';
+import type { ActionSummary } from '../../shared/schemas/analysis';
 import { dataSource } from '../db/data-source';
 import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
@@ -141,7 +142,23 @@ export interface ActionRow {
   factor: Factor | null;
   level: string | null;
   doneOn: string | null;
-  createdAt: Date;
+  summary: ActionSummary;
+}
+
+const actionColumns = 'id, incidentId, what, ownerName, dueOn, doneOn, factor, level';
+
+function toAction(r: Record<string, unknown>): ActionRow {
+  const summary: ActionSummary = {
+    id: num(r.id),
+    incidentId: num(r.incidentId),
+    what: String(r.what),
+    ownerName: String(r.ownerName),
+    dueOn: dateText(r.dueOn) ?? '',
+    doneOn: dateText(r.doneOn),
+    factor: (r.factor as Factor | null) ?? null,
+    level: str(r.level),
+  };
+  return { id: summary.id, factor: summary.factor, level: summary.level, doneOn: summary.doneOn, summary };
 }
 
 type Raw = Record<string, unknown>[];
@@ -262,19 +279,20 @@ export const analysisRepository = {
   },
 
   async action(id: number): Promise<ActionRow | null> {
-    const raw = await dataSource.query<Raw>(
-      'SELECT id, factor, level, doneOn, createdAt FROM corrective_actions WHERE id = ?',
-      [id],
-    );
-    const r = raw[0];
-    if (!r) return null;
-    return {
-      id: num(r.id),
-      factor: (r.factor as Factor | null) ?? null,
-      level: str(r.level),
-      doneOn: dateText(r.doneOn),
-      createdAt: r.createdAt instanceof Date ? r.createdAt : new Date(String(r.createdAt)),
-    };
+    const raw = await dataSource.query<Raw>(`SELECT ${actionColumns} FROM corrective_actions WHERE id = ?`, [id]);
+    return raw[0] ? toAction(raw[0]) : null;
+  },
+
+  /** Corrective actions, the most recently done first and those not done yet last. */
+  async actions(page: { offset: number; limit: number }): Promise<{ items: ActionRow[]; total: number }> {
+    const [raw, count] = await Promise.all([
+      dataSource.query<Raw>(
+        `SELECT ${actionColumns} FROM corrective_actions ORDER BY doneOn IS NULL, doneOn DESC, id DESC LIMIT ? OFFSET ?`,
+        [page.limit, page.offset],
+      ),
+      dataSource.query<{ n: string | number }[]>('SELECT COUNT(*) AS n FROM corrective_actions'),
+    ]);
+    return { items: raw.map(toAction), total: num(count[0]?.n) };
   },
 
   /** Counts of one factor level's jars in a period; `settledOnly` leaves incubating jars out (before/after). */

@@ -40,6 +40,12 @@ export const beforeAfterQuerySchema = z.object({
 });
 export type BeforeAfterQuery = z.infer<typeof beforeAfterQuerySchema>;
 
+export const actionVerdictsQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(25),
+});
+export type ActionVerdictsQuery = z.infer<typeof actionVerdictsQuerySchema>;
+
 export const jarsBehindQuerySchema = periodBase
   .extend({
     factor: factorSchema,
@@ -242,8 +248,13 @@ export interface BeforeAfterDto extends RateComparison {
   actionId: number;
   factor: Factor;
   level: string;
+  /** The done date: it belongs to neither period. */
   pivot: string;
   days: number;
+  /** The after-period ended at least the observation window ago, so every jar in it is settled. */
+  settled: boolean;
+  /** Until then: days until it has; the comparison fields stay null. */
+  daysRemaining: number | null;
   before: PeriodCount;
   after: PeriodCount;
 }
@@ -263,6 +274,30 @@ export interface JarsBehindDto {
   factor: Factor;
   level: string;
   items: JarBehind[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface ActionSummary {
+  id: number;
+  incidentId: number;
+  what: string;
+  ownerName: string;
+  dueOn: string;
+  doneOn: string | null;
+  factor: Factor | null;
+  level: string | null;
+}
+
+/** A corrective action with its before/after verdict, or why there is none yet. */
+export interface ActionVerdictDto extends ActionSummary {
+  comparison: BeforeAfterDto | null;
+  unavailable: string | null;
+}
+
+export interface ActionVerdictsDto {
+  items: ActionVerdictDto[];
   total: number;
   page: number;
   pageSize: number;
