@@ -1,6 +1,7 @@
 import type {
   BeforeAfterDto,
   CausesDto,
+  FactorLevel,
   ColonisationDto,
   CrosstabDto,
   LethalityDto,
@@ -39,6 +40,8 @@ export const crosstabCsv = (d: CrosstabDto): CsvTable => ({
   rows: d.cells.map((c) => [c.row, c.col, c.jars, c.contaminated, c.incubating, c.rate, c.ci95[0], c.ci95[1]]),
 });
 
+const levelList = (ls: FactorLevel[]) => ls.map((x) => `${x.factor}=${x.level}`).join('; ');
+
 export const causesCsv = (d: CausesDto): CsvTable => ({
   filename: `likely-causes-${span(d)}.csv`,
   header: [
@@ -46,6 +49,7 @@ export const causesCsv = (d: CausesDto): CsvTable => ({
     'level',
     'jars',
     'contaminated',
+    'incubating',
     'rest_jars',
     'rest_contaminated',
     'rate',
@@ -56,6 +60,13 @@ export const causesCsv = (d: CausesDto): CsvTable => ({
     'p_value',
     'q_value',
     'confounded_with',
+    'standing',
+    'same_jars_as',
+    'adjusted_given',
+    'adjusted_relative_risk',
+    'adjusted_rr95_low',
+    'adjusted_rr95_high',
+    'adjusted_p_value',
     'hint',
     'hint_basis',
   ],
@@ -64,6 +75,7 @@ export const causesCsv = (d: CausesDto): CsvTable => ({
     c.level,
     c.jars,
     c.contaminated,
+    c.incubating,
     c.restJars,
     c.restContaminated,
     c.rate,
@@ -73,7 +85,14 @@ export const causesCsv = (d: CausesDto): CsvTable => ({
     c.rr95[1],
     c.pValue,
     c.qValue,
-    c.confoundedWith.map((x) => `${x.factor}=${x.level}`).join('; '),
+    levelList(c.confoundedWith),
+    c.standing,
+    levelList(c.sameJarsAs),
+    levelList(c.adjusted?.given ?? []),
+    c.adjusted?.relativeRisk ?? null,
+    c.adjusted?.rr95[0] ?? null,
+    c.adjusted?.rr95[1] ?? null,
+    c.adjusted?.pValue ?? null,
     c.hint,
     c.hintBasis,
   ]),
@@ -91,11 +110,24 @@ export const weeklyCsv = (d: WeeklyDto): CsvTable => ({
     'ucl',
     'lcl',
     'out_of_control',
+    'below_lcl',
     'provisional',
   ],
   rows: d.weeks.flatMap((w) => [
-    [w.week, '(all grains)', w.jars, w.contaminated, w.incubating, w.rate, w.ucl, w.lcl, w.outOfControl, w.provisional],
-    ...w.grains.map((g) => [w.week, g.grain, g.jars, g.contaminated, g.incubating, g.rate, '', '', '', '']),
+    [
+      w.week,
+      '(all grains)',
+      w.jars,
+      w.contaminated,
+      w.incubating,
+      w.rate,
+      w.ucl,
+      w.lcl,
+      w.outOfControl,
+      w.belowLcl,
+      w.provisional,
+    ],
+    ...w.grains.map((g) => [w.week, g.grain, g.jars, g.contaminated, g.incubating, g.rate, '', '', '', '', '']),
   ]),
 });
 

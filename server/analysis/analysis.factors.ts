@@ -1,9 +1,13 @@
 import type { Factor } from '../../shared/enums';
 import { cookBucketLabels } from '../../shared/schemas/settings';
+import { cultureKey, roomKey, transfersKey, transfersLevelSql, type JarKey } from './lineage-and-place';
 
 export interface FactorSql {
-  /** What the jars are grouped on first: a column (or date) of the jar itself, read from the analysis index. */
-  key: string;
+  /**
+   * What the jars are grouped on first: a column (or date) of the jar itself, read from the analysis
+   * index, corrected for transferred and moved jars where the factor needs it (lineage-and-place.ts).
+   */
+  key: JarKey;
   /** Joins from the grouped key to the names, made on the grouped rows rather than on every jar. */
   joins: string[];
   /** The level as a string; NULL where the jar does not record this attribute. */
@@ -30,7 +34,7 @@ export function cookBucketSql(edges: readonly number[], column = 'cr.minutesAtPr
  * `keyRef` is the grouped key's column; `p` suffixes the aliases so two factors can share a query.
  */
 export function factorSql(factor: Factor, edges: readonly number[], keyRef: string, p = ''): FactorSql {
-  const by = (key: string, table: string, alias: string, level: string, order = level): FactorSql => ({
+  const by = (key: JarKey, table: string, alias: string, level: string, order = level): FactorSql => ({
     key,
     joins: [`LEFT JOIN ${table} ${alias}${p} ON ${alias}${p}.id = ${keyRef}`],
     level: level.replaceAll('@', `${alias}${p}`),
@@ -38,23 +42,23 @@ export function factorSql(factor: Factor, edges: readonly number[], keyRef: stri
   });
   switch (factor) {
     case 'grain':
-      return by('j.grainId', 'grains', 'g', '@.name');
+      return by({ raw: 'j.grainId' }, 'grains', 'g', '@.name');
     case 'cookRun':
-      return by('j.cookRunId', 'cook_runs', 'cr', '@.code');
+      return by({ raw: 'j.cookRunId' }, 'cook_runs', 'cr', '@.code');
     case 'cookMinutes':
       return by(
-        'j.cookRunId',
+        { raw: 'j.cookRunId' },
         'cook_runs',
         'cr',
         cookBucketSql(edges, '@.minutesAtPressure'),
         'MIN(@.minutesAtPressure)',
       );
     case 'session':
-      return by('j.sessionId', 'inoculation_sessions', 's', '@.code');
+      return by({ raw: 'j.sessionId' }, 'inoculation_sessions', 's', '@.code');
     case 'operator': {
       const level = `NULLIF(COALESCE(s${p}.operatorName, ou${p}.displayName), '')`;
       return {
-        key: 'j.sessionId',
+        key: { raw: 'j.sessionId' },
         joins: [
           `LEFT JOIN inoculation_sessions s${p} ON s${p}.id = ${keyRef}`,
           `LEFT JOIN users ou${p} ON ou${p}.id = s${p}.operatorId`,
@@ -64,14 +68,16 @@ export function factorSql(factor: Factor, edges: readonly number[], keyRef: stri
       };
     }
     case 'culture':
-      return by('j.cultureId', 'cultures', 'c', '@.code');
+      return by(cultureKey, 'cultures', 'c', '@.code');
     case 'week':
-      return { key: 'j.inoculatedOn', joins: [], level: isoWeekOf(keyRef), order: isoWeekOf(keyRef) };
+      return { key: { raw: 'j.inoculatedOn' }, joins: [], level: isoWeekOf(keyRef), order: isoWeekOf(keyRef) };
+    case 'transfers':
+      return { key: transfersKey, joins: [], level: transfersLevelSql(keyRef), order: keyRef };
     case 'prepBatch':
-      return by('j.prepBatchId', 'prep_batches', 'pb', '@.code');
+      return by({ raw: 'j.prepBatchId' }, 'prep_batches', 'pb', '@.code');
     case 'workspace':
-      return by('j.sessionId', 'inoculation_sessions', 's', '@.workspace');
+      return by({ raw: 'j.sessionId' }, 'inoculation_sessions', 's', '@.workspace');
     case 'room':
-      return { key: 'j.room', joins: [], level: `NULLIF(${keyRef}, '')`, order: `NULLIF(${keyRef}, '')` };
+      return { key: roomKey, joins: [], level: `NULLIF(${keyRef}, '')`, order: `NULLIF(${keyRef}, '')` };
   }
 }

@@ -1,85 +1,31 @@
 import type { Factor } from '../../shared/enums';
+import type { ActionSummary } from '../../shared/schemas/analysis';
 import { dataSource } from '../db/data-source';
+import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
 import { dateText } from './dates';
+import { groupedJars, periodWhere, summedSql, type Frame, type Period, type SqlQuery } from './grouped-jars';
+import { cultureKey, keyOf, placedJarsCte, roomKey, transfersKey, transfersLevelSql } from './lineage-and-place';
 
-export interface Period {
-  from?: string | undefined;
-  to?: string | undefined;
-}
-
-/** What every counting query needs besides the period: today and the observation window, as local dates. */
-export interface Frame extends Period {
-  /** Jars inoculated after this local date are younger than the observation window. */
-  windowStart: string;
-  edges: readonly number[];
-}
-
-/**
- * One row per jar that is contaminated (DESIGN.md §3): it has an incident that is not voided and whose
- * verdict is not ruled out. The earliest such incident gives the detection day and contaminant.
- */
-export const contaminatedJarsSql = `
-  SELECT ij.jarId, MIN(i.foundOn) AS foundOn,
-         SUBSTRING(MIN(CONCAT(i.foundOn, i.contaminant)), 11) AS contaminant
-  FROM incident_jars ij
-  JOIN incidents i ON i.id = ij.incidentId
-  WHERE i.voided = 0 AND i.verdict <> 'ruled-out'
-  GROUP BY ij.jarId`;
-
-const countsSql = `COUNT(*) AS jars,
-  SUM(cj.jarId IS NOT NULL) AS contaminated,
-  SUM(cj.jarId IS NULL AND j.inoculatedOn > ?) AS incubating`;
-
-export interface SqlQuery {
-  sql: string;
-  params: unknown[];
-}
-
-function periodWhere(p: Period, extra: string[] = []): { where: string; params: string[] } {
-  const clauses = [...extra];
-  const params: string[] = [];
-  if (p.from) {
-    clauses.push('j.inoculatedOn >= ?');
-    params.push(p.from);
-  }
-  if (p.to) {
-    clauses.push('j.inoculatedOn <= ?');
-    params.push(p.to);
-  }
-  return { where: clauses.length ? `WHERE ${clauses.join(' AND ')}` : '', params };
-}
-
-/**
- * Jars grouped on their own key columns, in two set-based halves: every jar (read from the covering
- * analysis index, never the rows) and the few contaminated ones. The caller sums them per level:
- * incubating = young − young and contaminated. `detections` lists days:contaminant of contaminated jars.
- */
-function groupedJars(keys: string[], f: Frame, withDetections = false): SqlQuery {
-  const { where, params } = periodWhere(f);
-  const keyList = keys.map((k, i) => `${k} AS k${i + 1}`).join(', ');
-  const groupList = keys.map((_, i) => `k${i + 1}`).join(', ');
-  const detections = withDetections
-    ? "GROUP_CONCAT(CONCAT(DATEDIFF(cj.foundOn, j.inoculatedOn), ':', cj.contaminant))"
-    : 'NULL';
-  return {
-    sql: `SELECT ${keyList}, COUNT(*) AS jars, 0 AS contaminated, SUM(j.inoculatedOn > ?) AS young,
-          0 AS contaminatedYoung, NULL AS detections
-        FROM jars j FORCE INDEX (IDX_jars_analysis) ${where} GROUP BY ${groupList}
-      UNION ALL
-        SELECT ${keyList}, 0, COUNT(*), 0, SUM(j.inoculatedOn > ?), ${detections}
-        FROM (${contaminatedJarsSql}) cj JOIN jars j ON j.id = cj.jarId ${where} GROUP BY ${groupList}`,
-    params: [f.windowStart, ...params, f.windowStart, ...params],
-  };
-}
-
-const summedSql = `SUM(k.jars) AS jars, SUM(k.contaminated) AS contaminated,
-  SUM(k.young) - SUM(k.contaminatedYoung) AS incubating`;
+export type { Frame, Period, SqlQuery } from './grouped-jars';
 
 const num = (v: unknown) => Number(v ?? 0);
 
-/** A factor's level read off each jar, for the queries that pick out one level's jars. */
-const perJar = (factor: Factor, edges: readonly number[]) => factorSql(factor, edges, factorSql(factor, edges, '').key);
+/** A factor's level read off each jar (joined LEFT to placed sp where needed), for one level's jars. */
+function perJar(factor: Factor, f: Frame) {
+  const key = factorSql(factor, f.edges, '').key;
+  const fs = factorSql(factor, f.edges, keyOf(key));
+  const placed = key.placed !== undefined;
+  return {
+    ...fs,
+    cte: placed ? placedJarsCte(f.windowDays) : '',
+    joins: [...(placed ? ['LEFT JOIN placed sp ON sp.jarId = j.id'] : []), ...fs.joins],
+  };
+}
+
+const countsSql = `COUNT(*) AS jars,
+  SUM(cj.jarId IS NOT NULL) AS contaminated,
+  SUM(cj.jarId IS NULL AND ${jarIsYoungSql('j.inoculatedOn')}) AS incubating`;
 
 export interface CountRow {
   jars: number;
@@ -98,9 +44,9 @@ export function ratesQuery(by: Factor, f: Frame): SqlQuery {
   const fs = factorSql(by, f.edges, 'k.k1');
   const inner = groupedJars([fs.key], f);
   return {
-    sql: `SELECT ${fs.level} AS level, ${fs.order} AS sortKey, ${summedSql}
+    sql: `${inner.cte} SELECT ${fs.level} AS level, ${fs.order} AS sortKey, ${summedSql}
       FROM (${inner.sql}) k ${fs.joins.join(' ')}
-      GROUP BY level ORDER BY sortKey`,
+      GROUP BY level HAVING SUM(k.jars) > 0 ORDER BY sortKey`,
     params: inner.params,
   };
 }
@@ -110,9 +56,9 @@ export function crosstabQuery(rows: Factor, cols: Factor, f: Frame): SqlQuery {
   const c = factorSql(cols, f.edges, 'k.k2', '_c');
   const inner = groupedJars([r.key, c.key], f);
   return {
-    sql: `SELECT ${r.level} AS rowLevel, ${c.level} AS colLevel, ${r.order} AS rowOrder, ${c.order} AS colOrder, ${summedSql}
+    sql: `${inner.cte} SELECT ${r.level} AS rowLevel, ${c.level} AS colLevel, ${r.order} AS rowOrder, ${c.order} AS colOrder, ${summedSql}
       FROM (${inner.sql}) k ${r.joins.join(' ')} ${c.joins.join(' ')}
-      GROUP BY rowLevel, colLevel HAVING rowLevel IS NOT NULL AND colLevel IS NOT NULL`,
+      GROUP BY rowLevel, colLevel HAVING rowLevel IS NOT NULL AND colLevel IS NOT NULL AND SUM(k.jars) > 0`,
     params: inner.params,
   };
 }
@@ -124,21 +70,23 @@ export function crosstabQuery(rows: Factor, cols: Factor, f: Frame): SqlQuery {
 export function combinationsQuery(f: Frame): SqlQuery {
   const inner = groupedJars(
     [
-      'j.grainId',
-      'j.cookRunId',
-      'j.sessionId',
-      'j.cultureId',
-      'j.prepBatchId',
-      'j.room',
-      'YEARWEEK(j.inoculatedOn, 3)',
+      { raw: 'j.grainId' },
+      { raw: 'j.cookRunId' },
+      { raw: 'j.sessionId' },
+      cultureKey,
+      { raw: 'j.prepBatchId' },
+      roomKey,
+      { raw: 'YEARWEEK(j.inoculatedOn, 3)' },
+      transfersKey,
     ],
     f,
     true,
   );
   return {
-    sql: `SELECT g.name AS grain, cr.code AS cookRun, ${cookBucketSql(f.edges, 'cr.minutesAtPressure')} AS cookMinutes,
+    sql: `${inner.cte} SELECT g.name AS grain, cr.code AS cookRun, ${cookBucketSql(f.edges, 'cr.minutesAtPressure')} AS cookMinutes,
         s.code AS session, NULLIF(COALESCE(s.operatorName, ou.displayName), '') AS operator, c.code AS culture,
-        ${isoWeekFromYearWeek('k.k7')} AS week, pb.code AS prepBatch, s.workspace AS workspace, NULLIF(k.k6, '') AS room,
+        ${isoWeekFromYearWeek('k.k7')} AS week, ${transfersLevelSql('k.k8')} AS transfers, pb.code AS prepBatch,
+        s.workspace AS workspace, NULLIF(k.k6, '') AS room,
         ${summedSql}, GROUP_CONCAT(k.detections) AS detections
       FROM (${inner.sql}) k
       JOIN grains g ON g.id = k.k1
@@ -147,22 +95,27 @@ export function combinationsQuery(f: Frame): SqlQuery {
       LEFT JOIN users ou ON ou.id = s.operatorId
       LEFT JOIN cultures c ON c.id = k.k4
       LEFT JOIN prep_batches pb ON pb.id = k.k5
-      GROUP BY k.k1, k.k2, k.k3, k.k4, k.k5, k.k6, k.k7`,
+      GROUP BY k.k1, k.k2, k.k3, k.k4, k.k5, k.k6, k.k7, k.k8 HAVING SUM(k.jars) > 0`,
     params: inner.params,
   };
 }
 
 export function weeklyQuery(f: Frame): SqlQuery {
-  const inner = groupedJars(['YEARWEEK(j.inoculatedOn, 3)', 'j.grainId'], f);
+  const inner = groupedJars([{ raw: 'YEARWEEK(j.inoculatedOn, 3)' }, { raw: 'j.grainId' }], f);
   return {
-    sql: `SELECT ${isoWeekFromYearWeek('k.k1')} AS week, g.name AS grain, ${summedSql}
+    sql: `${inner.cte} SELECT ${isoWeekFromYearWeek('k.k1')} AS week, g.name AS grain, ${summedSql}
       FROM (${inner.sql}) k JOIN grains g ON g.id = k.k2
       GROUP BY k.k1, k.k2 ORDER BY k.k1, g.name`,
     params: inner.params,
   };
 }
 
-export type CombinationRow = Record<Factor, string | null> & CountRow & { detections: string | null };
+export type CombinationRow = Record<Factor, string | null> &
+  CountRow & {
+    /** Contaminated jars, and clean ones at least the observation window old (DESIGN.md §3). */
+    settled: number;
+    detections: string | null;
+  };
 
 export interface ColonisationRow {
   grain: string;
@@ -189,7 +142,23 @@ export interface ActionRow {
   factor: Factor | null;
   level: string | null;
   doneOn: string | null;
-  createdAt: Date;
+  summary: ActionSummary;
+}
+
+const actionColumns = 'id, incidentId, what, ownerName, dueOn, doneOn, factor, level';
+
+function toAction(r: Record<string, unknown>): ActionRow {
+  const summary: ActionSummary = {
+    id: num(r.id),
+    incidentId: num(r.incidentId),
+    what: String(r.what),
+    ownerName: String(r.ownerName),
+    dueOn: dateText(r.dueOn) ?? '',
+    doneOn: dateText(r.doneOn),
+    factor: (r.factor as Factor | null) ?? null,
+    level: str(r.level),
+  };
+  return { id: summary.id, factor: summary.factor, level: summary.level, doneOn: summary.doneOn, summary };
 }
 
 type Raw = Record<string, unknown>[];
@@ -227,7 +196,9 @@ export const analysisRepository = {
       prepBatch: str(r.prepBatch),
       workspace: str(r.workspace),
       room: str(r.room),
+      transfers: str(r.transfers),
       ...toCounts(r),
+      settled: num(r.settled),
       detections: str(r.detections),
     }));
   },
@@ -240,7 +211,12 @@ export const analysisRepository = {
   /** Days to colonisation per grain; jars that did not colonise are censored at their last known day. */
   async colonisation(p: Period, today: string): Promise<ColonisationRow[]> {
     // A jar marked colonised or released without a colonisation date (imported history) has no known day.
-    const { where, params } = periodWhere(p, ["NOT (j.colonisedOn IS NULL AND j.status IN ('colonised', 'released'))"]);
+    // Imported history has no colonisation days, and its contaminated jars no censoring day worth
+    // trusting: leaving only one kind out would bias the curve, so all imported jars stay out.
+    const { where, params } = periodWhere(p, [
+      'j.imported = 0',
+      "NOT (j.colonisedOn IS NULL AND j.status IN ('colonised', 'released'))",
+    ]);
     const colonised = 'j.colonisedOn IS NOT NULL AND (cj.foundOn IS NULL OR j.colonisedOn <= cj.foundOn)';
     const raw = await dataSource.query<Raw>(
       `SELECT g.name AS grain, (${colonised}) AS colonised,
@@ -303,29 +279,34 @@ export const analysisRepository = {
   },
 
   async action(id: number): Promise<ActionRow | null> {
-    const raw = await dataSource.query<Raw>(
-      'SELECT id, factor, level, doneOn, createdAt FROM corrective_actions WHERE id = ?',
-      [id],
-    );
-    const r = raw[0];
-    if (!r) return null;
-    return {
-      id: num(r.id),
-      factor: (r.factor as Factor | null) ?? null,
-      level: str(r.level),
-      doneOn: dateText(r.doneOn),
-      createdAt: r.createdAt instanceof Date ? r.createdAt : new Date(String(r.createdAt)),
-    };
+    const raw = await dataSource.query<Raw>(`SELECT ${actionColumns} FROM corrective_actions WHERE id = ?`, [id]);
+    return raw[0] ? toAction(raw[0]) : null;
   },
 
-  /** Counts of one factor level's jars in a period. */
-  async levelCounts(factor: Factor, level: string, f: Frame): Promise<CountRow> {
-    const fs = perJar(factor, f.edges);
-    const { where, params } = periodWhere(f, [`${fs.level} = ?`]);
+  /** Corrective actions, the most recently done first and those not done yet last. */
+  async actions(page: { offset: number; limit: number }): Promise<{ items: ActionRow[]; total: number }> {
+    const [raw, count] = await Promise.all([
+      dataSource.query<Raw>(
+        `SELECT ${actionColumns} FROM corrective_actions ORDER BY doneOn IS NULL, doneOn DESC, id DESC LIMIT ? OFFSET ?`,
+        [page.limit, page.offset],
+      ),
+      dataSource.query<{ n: string | number }[]>('SELECT COUNT(*) AS n FROM corrective_actions'),
+    ]);
+    return { items: raw.map(toAction), total: num(count[0]?.n) };
+  },
+
+  /** Counts of one factor level's jars in a period; `settledOnly` leaves incubating jars out (before/after). */
+  async levelCounts(factor: Factor, level: string, f: Frame, settledOnly = false): Promise<CountRow> {
+    const fs = perJar(factor, f);
+    const extra = [
+      `${fs.level} = ?`,
+      ...(settledOnly ? [jarIsSettledSql('j.inoculatedOn', 'cj.jarId IS NOT NULL')] : []),
+    ];
+    const { where, params } = periodWhere(f, extra);
     const raw = await run({
-      sql: `SELECT ${countsSql} FROM jars j ${fs.joins.join(' ')}
+      sql: `${fs.cte} SELECT ${countsSql} FROM jars j ${fs.joins.join(' ')}
         LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`,
-      params: [f.windowStart, level, ...params],
+      params: [f.windowStart, level, ...(settledOnly ? [f.windowStart] : []), ...params],
     });
     return toCounts(raw[0] ?? {});
   },
@@ -333,25 +314,27 @@ export const analysisRepository = {
   async jarsBehind(
     factor: Factor,
     level: string,
-    only: 'all' | 'contaminated' | 'incubating',
+    only: 'all' | 'settled' | 'contaminated' | 'incubating',
     f: Frame,
     page: { offset: number; limit: number },
   ) {
-    const fs = perJar(factor, f.edges);
+    const fs = perJar(factor, f);
     const extra = [`${fs.level} = ?`];
+    const young = jarIsYoungSql('j.inoculatedOn');
     if (only === 'contaminated') extra.push('cj.jarId IS NOT NULL');
-    if (only === 'incubating') extra.push('cj.jarId IS NULL AND j.inoculatedOn > ?');
+    if (only === 'incubating') extra.push(`cj.jarId IS NULL AND ${young}`);
+    if (only === 'settled') extra.push(jarIsSettledSql('j.inoculatedOn', 'cj.jarId IS NOT NULL'));
     const { where, params } = periodWhere(f, extra);
-    const bound = [level, ...(only === 'incubating' ? [f.windowStart] : []), ...params];
+    const bound = [level, ...(only === 'incubating' || only === 'settled' ? [f.windowStart] : []), ...params];
     const from = `FROM jars j ${fs.joins.join(' ')} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
     const [items, total] = await Promise.all([
       dataSource.query<Raw>(
-        `SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
-            (cj.jarId IS NULL AND j.inoculatedOn > ?) AS incubating, cj.contaminant, cj.foundOn
+        `${fs.cte} SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
+            (cj.jarId IS NULL AND ${young}) AS incubating, cj.contaminant, cj.foundOn
           ${from} ORDER BY j.inoculatedOn, j.label LIMIT ? OFFSET ?`,
         [f.windowStart, ...bound, page.limit, page.offset],
       ),
-      dataSource.query<{ n: string | number }[]>(`SELECT COUNT(*) AS n ${from}`, bound),
+      dataSource.query<{ n: string | number }[]>(`${fs.cte} SELECT COUNT(*) AS n ${from}`, bound),
     ]);
     return {
       items: items.map((r) => ({

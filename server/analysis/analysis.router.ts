@@ -1,11 +1,13 @@
 import { Router, type Response } from 'express';
 import {
+  actionVerdictsQuerySchema,
   beforeAfterQuerySchema,
   causesQuerySchema,
   crosstabQuerySchema,
   jarsBehindQuerySchema,
   periodQuerySchema,
   ratesQuerySchema,
+  type ActionVerdictsQuery,
   type BeforeAfterQuery,
   type CausesQuery,
   type CrosstabQuery,
@@ -49,7 +51,7 @@ analysisRouter.get('/crosstab', validate({ query: crosstabQuerySchema }), async 
 
 analysisRouter.get('/causes', validate({ query: causesQuerySchema }), async (req, res) => {
   const q = query<CausesQuery>(req);
-  answer(res, q.format, await analysis.causes(q, q.minJars), csv.causesCsv);
+  answer(res, q.format, await analysis.causes(q, q.minJars, q), csv.causesCsv);
 });
 
 analysisRouter.get('/weekly', validate({ query: periodQuerySchema }), async (req, res) => {
@@ -70,6 +72,10 @@ analysisRouter.get('/lethality', validate({ query: periodQuerySchema }), async (
 analysisRouter.get('/before-after', validate({ query: beforeAfterQuerySchema }), async (req, res) => {
   const q = query<BeforeAfterQuery>(req);
   answer(res, q.format, await analysis.beforeAfter(q), csv.beforeAfterCsv);
+});
+
+analysisRouter.get('/actions', validate({ query: actionVerdictsQuerySchema }), async (req, res) => {
+  res.json(await analysis.actionVerdicts(query<ActionVerdictsQuery>(req)));
 });
 
 analysisRouter.get('/jars', validate({ query: jarsBehindQuerySchema }), async (req, res) => {

@@ -1,16 +1,12 @@
 import type { Factor } from '../../shared/enums';
 import type {
-  BeforeAfterDto,
-  BeforeAfterQuery,
   CausesDto,
   ColonisationDto,
   CrosstabDto,
   JarsBehindDto,
   JarsBehindQuery,
   LethalityDto,
-  PeriodCount,
   RatesDto,
-  Tally,
   WeeklyDto,
   WeeklyRow,
 } from '../../shared/schemas/analysis';
@@ -18,36 +14,20 @@ import { kaplanMeier } from '../../shared/stats/kaplan-meier';
 import { f0AtConstant } from '../../shared/stats/lethality';
 import { pChartLimits } from '../../shared/stats/p-chart';
 import { psiToKPa, sterilisingTemperatureC } from '../../shared/stats/steam';
-import { wilsonInterval } from '../../shared/stats/wilson';
-import { notFound, unprocessable } from '../core/errors';
-import { localDate, todayLocal } from '../core/local-time';
+import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
-import { analysisRepository, type CountRow, type Frame, type Period } from './analysis.repository';
+import { analysisRepository, type CountRow, type Period } from './analysis.repository';
 import { buildCauses } from './causes';
-import { compareRates } from './comparison';
-import { addDays, daysBetween, isoWeekMonday } from './dates';
+import { addDays, isoWeekMonday } from './dates';
 
 export { compareRates } from './comparison';
+export { frameFor, tally } from './frame';
+import { frameFor, tally } from './frame';
+export { beforeAfter, actionVerdicts } from './before-after';
 
 /** The usual sterilising set-point (TRADE.md §1, common practice), assumed when a run has no gauge reading. */
 export const USUAL_GAUGE_PSI = 15;
 export const WEEKLY_DEFAULT_WEEKS = 12;
-const BEFORE_AFTER_MAX_DAYS = 90;
-
-export async function frameFor(p: Period, today = todayLocal()): Promise<Frame> {
-  const s = await getLabSettings();
-  return { from: p.from, to: p.to, windowStart: addDays(today, -s.observationWindowDays), edges: s.cookBucketEdges };
-}
-
-export function tally(c: CountRow): Tally {
-  return {
-    jars: c.jars,
-    contaminated: c.contaminated,
-    incubating: c.incubating,
-    rate: c.jars > 0 ? c.contaminated / c.jars : null,
-    ci95: wilsonInterval(c.contaminated, c.jars),
-  };
-}
 
 const sum = (rows: CountRow[]): CountRow =>
   rows.reduce(
@@ -112,9 +92,25 @@ export async function crosstab(rowFactor: Factor, colFactor: Factor, p: Period):
   };
 }
 
-export async function causes(p: Period, minJars: number): Promise<CausesDto> {
+export async function causes(
+  p: Period,
+  minJars: number,
+  paging: { page?: number | undefined; pageSize: number } = { pageSize: 25 },
+): Promise<CausesDto> {
   const combos = await analysisRepository.combinations(await frameFor(p));
-  return { from: p.from ?? null, to: p.to ?? null, minJars, causes: buildCauses(combos, minJars) };
+  const { leads, rows } = buildCauses(combos, minJars);
+  const page = paging.page ?? null;
+  const shown = page === null ? rows : rows.slice((page - 1) * paging.pageSize, page * paging.pageSize);
+  return {
+    from: p.from ?? null,
+    to: p.to ?? null,
+    minJars,
+    leads,
+    causes: shown,
+    total: rows.length,
+    page,
+    pageSize: page === null ? null : paging.pageSize,
+  };
 }
 
 /** Default period: the last twelve ISO weeks, the current one included. */
@@ -143,6 +139,7 @@ export async function weeklyTable(p: Period = {}): Promise<WeeklyDto> {
     const limits = chart.limits[i] ?? { ucl: 1, lcl: 0 };
     const rate = w.total.contaminated / w.total.jars;
     const isProvisional = provisional[i] ?? false;
+    const charted = !isProvisional && !Number.isNaN(chart.pBar);
     return {
       week: w.week,
       jars: w.total.jars,
@@ -151,7 +148,9 @@ export async function weeklyTable(p: Period = {}): Promise<WeeklyDto> {
       rate,
       ucl: limits.ucl,
       lcl: limits.lcl,
-      outOfControl: !isProvisional && !Number.isNaN(chart.pBar) && (rate > limits.ucl || rate < limits.lcl),
+      // DESIGN.md §4.4: only above the upper limit is out of control; below the lower one is a good signal.
+      outOfControl: charted && rate > limits.ucl,
+      belowLcl: charted && rate < limits.lcl,
       provisional: isProvisional,
       grains: w.grains.map((g) => ({
         grain: g.grain,
@@ -238,44 +237,6 @@ export async function lethality(p: Period): Promise<LethalityDto> {
         rate: r.jars > 0 ? r.contaminated / r.jars : null,
       };
     }),
-  };
-}
-
-function periodCount(from: string, to: string, c: CountRow): PeriodCount {
-  const t = tally(c);
-  return { from, to, ...t };
-}
-
-/**
- * Equal periods either side of the day the action was done (or recorded): that day itself belongs to
- * neither, since jars inoculated on it may predate the fix.
- */
-export async function beforeAfter(q: BeforeAfterQuery): Promise<BeforeAfterDto> {
-  const action = await analysisRepository.action(q.actionId);
-  if (!action) throw notFound('Corrective action');
-  if (!action.factor || !action.level) {
-    throw unprocessable('This corrective action names no factor level to compare.', [
-      { path: 'actionId', message: 'the action has no factor and level' },
-    ]);
-  }
-  const today = todayLocal();
-  const pivot = action.doneOn ?? localDate(action.createdAt);
-  const days = q.days ?? Math.min(BEFORE_AFTER_MAX_DAYS, Math.max(1, daysBetween(pivot, today)));
-  const before = { from: addDays(pivot, -days), to: addDays(pivot, -1) };
-  const after = { from: addDays(pivot, 1), to: addDays(pivot, days) };
-  const [b, a] = await Promise.all([
-    frameFor(before, today).then((f) => analysisRepository.levelCounts(action.factor!, action.level!, f)),
-    frameFor(after, today).then((f) => analysisRepository.levelCounts(action.factor!, action.level!, f)),
-  ]);
-  return {
-    actionId: action.id,
-    factor: action.factor,
-    level: action.level,
-    pivot,
-    days,
-    before: periodCount(before.from, before.to, b),
-    after: periodCount(after.from, after.to, a),
-    ...compareRates(b, a),
   };
 }
 

@@ -1,188 +1,24 @@
-import { contaminants, factors, type Contaminant, type Factor } from '../../shared/enums';
-import type { CauseRow, FactorLevel } from '../../shared/schemas/analysis';
+import { factors, type Factor } from '../../shared/enums';
+import type { AdjustedRisk, CauseRow, FactorLevel, LeadDto, Standing } from '../../shared/schemas/analysis';
 import { bhAdjust } from '../../shared/stats/benjamini-hochberg';
 import { fisherExactTwoSided } from '../../shared/stats/fisher';
 import { relativeRisk, type RelativeRisk } from '../../shared/stats/relative-risk';
 import type { CombinationRow } from './analysis.repository';
-import { hintFor, readDetections, type Detections } from './hints';
+import { confounded, detectionsOf, indexLevels, readAllDetections } from './cause-levels';
+import { hintFor } from './hints';
+import { selectLeads, type Candidate } from './lead-selection';
+import { adjustedRisk, countByStrata, sameJars, type Cells, type LevelRef } from './lead-strata';
 
-export const CONFOUNDED_SHARE = 0.9;
+export { CONFOUNDED_SHARE } from './cause-levels';
 
-const F = factors.length;
-const C = contaminants.length;
 const factorOrder = Object.fromEntries(factors.map((f, i) => [f, i])) as Record<Factor, number>;
-
-/** One factor's levels, numbered in the order they first appear; counts are indexed by level number. */
-interface FactorLevels {
-  names: string[];
-  jars: number[];
-  contaminated: number[];
-  incubating: number[];
-  /** The combinations holding each level, listed level by level: members[start[i]] … members[start[i + 1] − 1]. */
-  start: Int32Array;
-  members: Int32Array;
-}
-
-/** Contaminated jars of every combination, flat: combination ci owns entries detStart[ci] … detStart[ci + 1] − 1. */
-interface ComboDetections {
-  detStart: Int32Array;
-  days: Float64Array;
-  contaminant: Uint8Array;
-}
-
-function readAllDetections(combos: CombinationRow[]): ComboDetections {
-  const days: number[] = [];
-  const codes: number[] = [];
-  const detStart = new Int32Array(combos.length + 1);
-  combos.forEach((combo, ci) => {
-    readDetections(combo.detections, (d, c) => {
-      days.push(d);
-      codes.push(c);
-    });
-    detStart[ci + 1] = days.length;
-  });
-  return { detStart, days: Float64Array.from(days), contaminant: Uint8Array.from(codes) };
-}
-
-/**
- * Numbers each factor's levels and rolls the combinations up per level; each combination's jars count
- * once per factor. levelIdx[ci * F + fi] is combination ci's level of factor fi, −1 where not recorded.
- */
-function indexLevels(combos: CombinationRow[]): { levels: FactorLevels[]; levelIdx: Int32Array } {
-  const levelIdx = new Int32Array(combos.length * F);
-  const levels = factors.map((factor, fi) => {
-    const ids = new Map<string, number>();
-    const l: FactorLevels = {
-      names: [],
-      jars: [],
-      contaminated: [],
-      incubating: [],
-      start: new Int32Array(0),
-      members: new Int32Array(0),
-    };
-    for (let ci = 0; ci < combos.length; ci++) {
-      const combo = combos[ci]!;
-      const name = combo[factor];
-      if (name === null) {
-        levelIdx[ci * F + fi] = -1;
-        continue;
-      }
-      let id = ids.get(name);
-      if (id === undefined) {
-        id = l.names.length;
-        ids.set(name, id);
-        l.names.push(name);
-        l.jars.push(0);
-        l.contaminated.push(0);
-        l.incubating.push(0);
-      }
-      levelIdx[ci * F + fi] = id;
-      l.jars[id]! += combo.jars;
-      l.contaminated[id]! += combo.contaminated;
-      l.incubating[id]! += combo.incubating;
-    }
-    // A counting sort lists the combinations of each level together, for the per-level passes below.
-    const start = new Int32Array(l.names.length + 1);
-    for (let ci = 0; ci < combos.length; ci++) {
-      const id = levelIdx[ci * F + fi]!;
-      if (id >= 0) start[id + 1]!++;
-    }
-    for (let i = 0; i < l.names.length; i++) start[i + 1]! += start[i]!;
-    const members = new Int32Array(start[l.names.length]!);
-    const fill = start.slice(0, l.names.length);
-    for (let ci = 0; ci < combos.length; ci++) {
-      const id = levelIdx[ci * F + fi]!;
-      if (id >= 0) members[fill[id]!++] = ci;
-    }
-    l.start = start;
-    l.members = members;
-    return l;
-  });
-  return { levels, levelIdx };
-}
-
-/**
- * For each level of factor a, the level of each other factor holding ≥ 90 % of its jars. Such a level
- * holds most of them, so a weighted majority vote over the level's combinations names the one candidate
- * per factor, and a second pass counts its jars; candidates come out in factor order. Factors whose
- * largest level is smaller than 90 % of the level are skipped.
- */
-function confounded(comboJars: Float64Array, levels: FactorLevels[], levelIdx: Int32Array, a: number): FactorLevel[][] {
-  const la = levels[a]!;
-  const out: FactorLevel[][] = la.names.map(() => []);
-  const largest = levels.map((l) => l.jars.reduce((m, j) => Math.max(m, j), 0));
-  const candidate = new Int32Array(F);
-  const weight = new Float64Array(F);
-  const eligible = new Int32Array(F);
-  for (let ia = 0; ia < la.names.length; ia++) {
-    const from = la.start[ia]!;
-    const to = la.start[ia + 1]!;
-    const need = CONFOUNDED_SHARE * la.jars[ia]!;
-    let e = 0;
-    for (let b = 0; b < F; b++) if (b !== a && largest[b]! >= need) eligible[e++] = b;
-    if (e === 0) continue;
-    candidate.fill(-1);
-    weight.fill(0);
-    for (let m = from; m < to; m++) {
-      const ci = la.members[m]!;
-      const w = comboJars[ci]!;
-      for (let k = 0; k < e; k++) {
-        const b = eligible[k]!;
-        const ib = levelIdx[ci * F + b]!;
-        if (ib < 0) continue;
-        if (candidate[b] === ib) weight[b]! += w;
-        else if (weight[b]! >= w) weight[b]! -= w;
-        else {
-          candidate[b] = ib;
-          weight[b] = w - weight[b]!;
-        }
-      }
-    }
-    weight.fill(0);
-    for (let m = from; m < to; m++) {
-      const ci = la.members[m]!;
-      for (let k = 0; k < e; k++) {
-        const b = eligible[k]!;
-        if (levelIdx[ci * F + b] === candidate[b]) weight[b]! += comboJars[ci]!;
-      }
-    }
-    for (let k = 0; k < e; k++) {
-      const b = eligible[k]!;
-      if (candidate[b]! >= 0 && weight[b]! >= need)
-        out[ia]!.push({ factor: factors[b]!, level: levels[b]!.names[candidate[b]!]! });
-    }
-  }
-  return out;
-}
-
-/** Contaminants and the median days to detection over one level's contaminated jars. */
-function detectionsOf(l: FactorLevels, ia: number, det: ComboDetections, buffer: Float64Array): Detections {
-  const counts = new Int32Array(C);
-  let n = 0;
-  for (let m = l.start[ia]!; m < l.start[ia + 1]!; m++) {
-    const ci = l.members[m]!;
-    for (let k = det.detStart[ci]!; k < det.detStart[ci + 1]!; k++) {
-      buffer[n++] = det.days[k]!;
-      counts[det.contaminant[k]!]!++;
-    }
-  }
-  const byContaminant: Partial<Record<Contaminant, number>> = {};
-  for (let c = 0; c < C; c++) if (counts[c]! > 0) byContaminant[contaminants[c]!] = counts[c]!;
-  let medianDays: number | null = null;
-  if (n > 0) {
-    const s = buffer.subarray(0, n).sort();
-    const mid = n >> 1;
-    medianDays = n % 2 ? s[mid]! : (s[mid - 1]! + s[mid]!) / 2;
-  }
-  return { count: n, contaminants: byContaminant, medianDays };
-}
-
 const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+const faresWorse = (r: CauseRow) => r.rate > r.restRate;
 
-/** DESIGN.md §5: relativeRisk > 1 first, then q, relativeRisk descending, p, factor order, level. */
+/** DESIGN.md §5: rows that fare worse first (rate > restRate), then q, relativeRisk descending, p, factor order, level. */
 export function compareCauses(a: CauseRow, b: CauseRow): number {
   return (
-    Number(b.relativeRisk > 1) - Number(a.relativeRisk > 1) ||
+    Number(faresWorse(b)) - Number(faresWorse(a)) ||
     a.qValue - b.qValue ||
     b.relativeRisk - a.relativeRisk ||
     a.pValue - b.pValue ||
@@ -191,16 +27,39 @@ export function compareCauses(a: CauseRow, b: CauseRow): number {
   );
 }
 
+/** DESIGN.md §4.3: crude interval above 1 and adjusted not → explained; both → elevated. */
+function standingOf(row: CauseRow, isLead: boolean): Standing {
+  if (isLead) return 'lead';
+  if (row.sameJarsAs.length > 0) return 'same-jars';
+  const crudeAbove = row.rr95[0] > 1;
+  if (!crudeAbove) return 'not-elevated';
+  if (row.adjusted === null) return 'elevated';
+  return row.adjusted.rr95[0] > 1 ? 'elevated' : 'explained';
+}
+
+export interface Causes {
+  leads: LeadDto[];
+  rows: CauseRow[];
+}
+
 /**
- * Level vs rest for every level of every factor. The rest is the other jars that record the factor,
- * so a jar without a room never counts against or for any room.
+ * Level vs rest for every level of every factor, over settled jars. The rest is the other jars that
+ * record the factor, so a jar without a room never counts against or for any room. Then the leads,
+ * adjusted for each other, and every row's adjusted figures and standing.
  */
-export function buildCauses(combos: CombinationRow[], minJars: number): CauseRow[] {
+export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
   const { levels, levelIdx } = indexLevels(combos);
   const det = readAllDetections(combos);
   const buffer = new Float64Array(det.days.length);
-  const comboJars = Float64Array.from(combos, (c) => c.jars);
+  const cells: Cells = {
+    settled: Float64Array.from(combos, (c) => c.settled),
+    contaminated: Float64Array.from(combos, (c) => c.contaminated),
+    levels,
+    levelIdx,
+  };
   const rows: CauseRow[] = [];
+  const refs: LevelRef[] = [];
+  const confoundedBy = levels.map((_, fi) => confounded(cells.settled, levels, levelIdx, fi));
   levels.forEach((l, fi) => {
     const factor = factors[fi]!;
     let universeJars = 0;
@@ -209,7 +68,6 @@ export function buildCauses(combos: CombinationRow[], minJars: number): CauseRow
       universeJars += l.jars[i]!;
       universeContaminated += l.contaminated[i]!;
     }
-    const confoundedWith = confounded(comboJars, levels, levelIdx, fi);
     // Within a factor N and the contaminated total are fixed, so levels of equal size and count share one test.
     const tests = new Map<number, { rr: RelativeRisk; pValue: number }>();
     for (let i = 0; i < l.names.length; i++) {
@@ -217,7 +75,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): CauseRow
       const contaminated = l.contaminated[i]!;
       const restJars = universeJars - jars;
       const restContaminated = universeContaminated - contaminated;
-      if (jars < minJars || restJars < 1) continue;
+      if (jars < Math.max(1, minJars) || restJars < 1) continue;
       const key = jars * (universeContaminated + 1) + contaminated;
       let test = tests.get(key);
       if (!test) {
@@ -227,10 +85,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): CauseRow
         };
         tests.set(key, test);
       }
-      const { rr, pValue } = test;
       const detections = detectionsOf(l, i, det, buffer);
-      // Only a level that fares worse than its rest is a likely cause, so only it gets a trade hint.
-      const hint = rr.rr > 1 ? hintFor(factor, detections, confoundedWith[i]!) : null;
       rows.push({
         factor,
         level: l.names[i]!,
@@ -241,19 +96,93 @@ export function buildCauses(combos: CombinationRow[], minJars: number): CauseRow
         restContaminated,
         rate: contaminated / jars,
         restRate: restContaminated / restJars,
-        relativeRisk: rr.rr,
-        rr95: rr.ci95,
-        pValue,
+        relativeRisk: test.rr.rr,
+        rr95: test.rr.ci95,
+        pValue: test.pValue,
         qValue: 1,
-        confoundedWith: confoundedWith[i]!,
-        hint: hint?.hint ?? null,
-        hintBasis: hint?.basis ?? null,
+        confoundedWith: confoundedBy[fi]![i]!,
+        standing: 'not-elevated',
+        sameJarsAs: [],
+        adjusted: null,
+        hint: null,
+        hintBasis: null,
         contaminants: detections.contaminants,
         medianDaysToDetection: detections.medianDays,
       });
+      refs.push({ fi, id: i });
     }
   });
   const q = bhAdjust(rows.map((r) => r.pValue));
   rows.forEach((r, i) => (r.qValue = q[i] ?? 1));
-  return rows.sort(compareCauses);
+
+  const candidates: Candidate[] = [];
+  rows.forEach((r, i) => faresWorse(r) && candidates.push({ ...refs[i]!, name: r.level }));
+  const leads = selectLeads(cells, candidates);
+  const named = (l: LevelRef): FactorLevel => ({ factor: factors[l.fi]!, level: levels[l.fi]!.names[l.id]! });
+  const counts = countByStrata(cells, leads);
+  const all = counts.strata - 1;
+  const leadRows: CauseRow[] = [];
+  rows.forEach((row, i) => {
+    const ref = refs[i]!;
+    const leadIndex = leads.findIndex((l) => l.fi === ref.fi && l.id === ref.id);
+    let keep = all;
+    if (leadIndex >= 0) keep &= ~(1 << leadIndex);
+    leads.forEach((lead, k) => {
+      if (leadIndex < 0 && sameJars(counts, cells, ref, lead, k)) {
+        keep &= ~(1 << k);
+        row.sameJarsAs.push(named(lead));
+      }
+    });
+    row.adjusted = adjustedFigures(counts, ref, keep, leads.map(named));
+    row.standing = standingOf(row, leadIndex >= 0);
+    if (leadIndex >= 0) leadRows[leadIndex] = row;
+  });
+  addHints(rows);
+  return {
+    leads: leads.map((l, k) => ({
+      ...named(l),
+      row: leadRows[k]!,
+      sameJars: rows
+        .filter((r) => r.sameJarsAs.some((s) => s.factor === factors[l.fi] && s.level === levels[l.fi]!.names[l.id]))
+        .map((r) => ({ factor: r.factor, level: r.level })),
+    })),
+    rows: rows.sort(compareCauses),
+  };
+}
+
+function adjustedFigures(
+  counts: ReturnType<typeof countByStrata>,
+  ref: LevelRef,
+  keep: number,
+  leadNames: FactorLevel[],
+): AdjustedRisk | null {
+  if (keep === 0) return null;
+  const mh = adjustedRisk(counts, ref, keep);
+  if (mh.contributing === 0) return null;
+  return {
+    given: leadNames.filter((_, k) => keep & (1 << k)),
+    relativeRisk: mh.rr,
+    rr95: mh.ci95,
+    pValue: mh.pValue,
+  };
+}
+
+/**
+ * Only a level that fares worse gets a trade hint; it says the data cannot tell levels apart only for
+ * levels that hold each other's jars both ways (each in the other's confoundedWith).
+ */
+function addHints(rows: CauseRow[]) {
+  const key = (f: FactorLevel) => `${f.factor}\u0000${f.level}`;
+  const confoundedOf = new Map(rows.map((r) => [key(r), new Set(r.confoundedWith.map(key))]));
+  for (const r of rows) {
+    if (!faresWorse(r)) continue;
+    const mutual = r.confoundedWith.filter((c) => confoundedOf.get(key(c))?.has(key(r)) ?? false);
+    const hint = hintFor(
+      r.factor,
+      { count: r.contaminated, contaminants: r.contaminants, medianDays: r.medianDaysToDetection },
+      mutual,
+    );
+    r.hint = hint?.hint ?? null;
+    r.hintBasis = hint?.basis ?? null;
+  }
 }

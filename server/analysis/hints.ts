@@ -53,6 +53,7 @@ const factorWords: Record<Factor, string> = {
   operator: 'this operator',
   culture: 'this culture',
   week: 'this week',
+  transfers: 'this number of grain-to-grain transfers',
   prepBatch: 'this prep batch',
   workspace: 'this workspace',
   room: 'this room',
@@ -86,6 +87,8 @@ function lead(factor: Factor, contaminant: Contaminant, medianDays: number): str
       return `Contamination spread over ${where}'s jars across cook runs and cultures points to technique or the workspace: ports, gloves, needle flaming, hood or still-air box.`;
     case 'room':
       return 'Contamination gathered in one room points to the incubation conditions: temperature, air and cleanliness.';
+    case 'transfers':
+      return 'Contamination that grows with grain-to-grain transfers points to the transfers themselves: every step opens jars again; check technique at transfer and the parent jars.';
     case 'week':
       return 'Contamination gathered in one week: look at what changed that week (a cook run, a culture, a person, the room).';
   }
@@ -96,7 +99,8 @@ export interface Hint {
   basis: string;
 }
 
-export function hintFor(factor: Factor, detections: Detections, confoundedWith: FactorLevel[]): Hint | null {
+/** `sameJars`: levels of other factors that share ≥ 90 % of this level's jars both ways. */
+export function hintFor(factor: Factor, detections: Detections, sameJars: FactorLevel[]): Hint | null {
   const n = detections.count;
   if (n === 0) return null;
   if (n === 1) {
@@ -109,7 +113,7 @@ export function hintFor(factor: Factor, detections: Detections, confoundedWith: 
     lead(factor, top.contaminant, days),
     `Mostly ${contaminantNames[top.contaminant]} (${top.count} of ${n}), found after a median of ${days} days; it usually points to ${profile.pointsTo}.`,
   ];
-  const others = confoundedWith.filter((c) => c.factor !== factor);
+  const others = sameJars.filter((c) => c.factor !== factor);
   if (others.length > 0) {
     const names = others.map((c) => `${factorNames[c.factor]} ${c.level}`).join(', ');
     parts.push(`Its jars are also almost all ${names}: the data cannot tell these apart.`);

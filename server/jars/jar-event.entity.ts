@@ -6,6 +6,8 @@ export type JarEventType = (typeof jarEventTypes)[number];
 /** A jar's life after inoculation; a 'check' carries the colonisation percent. */
 @Entity({ name: 'jar_events' })
 @Index(['jarId', 'at'])
+/** Moves only, for the analysis's room at the time a jar was found (DESIGN.md §3). */
+@Index(['type', 'jarId', 'at'])
 export class JarEvent {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
@@ -33,6 +35,10 @@ export class JarEvent {
 
   @Column({ type: 'varchar', length: 40, nullable: true })
   room: string | null;
+
+  /** The room a move left: with it the analysis finds where a jar stood on any day (DESIGN.md §3). */
+  @Column({ type: 'varchar', length: 40, nullable: true })
+  fromRoom: string | null;
 
   @Column({ type: 'varchar', length: 40, nullable: true })
   shelf: string | null;

@@ -87,7 +87,7 @@ export async function applyEvent(
         shelf: input.shelf,
         shelfPosition: await jarsRepository.nextShelfPosition(m, input.room, input.shelf),
       });
-      Object.assign(event, { room: input.room, shelf: input.shelf });
+      Object.assign(event, { room: input.room, shelf: input.shelf, fromRoom: jar.room });
       for (const field of ['room', 'shelf', 'shelfPosition'] as const)
         entries.push({ ...base, field, oldValue: jar[field], newValue: changes[field] });
       break;

@@ -3,6 +3,7 @@ import { dataSource } from '../db/data-source';
 import { Grain } from '../grain/grain.entity';
 import { Jar } from '../jars/jar.entity';
 import { DigestRun } from './digest-run.entity';
+import { liveIncidentJarsSubquery } from '../incidents/live-incidents';
 
 export interface WeekGrainCount {
   week: string;
@@ -12,9 +13,7 @@ export interface WeekGrainCount {
   incubating: number;
 }
 
-// DESIGN.md §3: contaminated = an incident that is not voided and whose verdict is not ruled out.
-const contaminatedJars =
-  "(SELECT DISTINCT ij.jarId AS jarId FROM incident_jars ij JOIN incidents i ON i.id = ij.incidentId WHERE i.voided = 0 AND i.verdict <> 'ruled-out')";
+const contaminatedJars = `(${liveIncidentJarsSubquery()})`;
 
 const weekLabel = (yw: number) => `${Math.floor(yw / 100)}-W${String(yw % 100).padStart(2, '0')}`;
 

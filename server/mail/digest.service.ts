@@ -47,7 +47,8 @@ export async function buildDigestFacts(today: string): Promise<DigestFacts> {
   rows.forEach((r, i) => {
     const limit = chart.limits[i];
     if (!limit || r.provisional || r.rate === null) return;
-    r.outOfControl = r.rate > limit.ucl || r.rate < limit.lcl;
+    // Only above the upper limit is out of control: a week below the lower one is a good week (DESIGN.md §4.4).
+    r.outOfControl = r.rate > limit.ucl;
   });
   const reportWeek = isoWeekOf(lastDay);
   return {

@@ -8,6 +8,7 @@ import { Incident } from '../incidents/incident.entity';
 import { Jar } from '../jars/jar.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
 import { ClusterAlert, type ClusterDimension } from './cluster-alert.entity';
+import { liveIncidentSql } from '../incidents/live-incidents';
 
 export interface IncidentJarRow {
   label: string;
@@ -74,8 +75,7 @@ export const incidentMailRepository = {
         'COUNT(DISTINCT ij.jarId) AS jars',
       ])
       .where(`${dimensionColumn[dimension]} = :levelId`, { levelId })
-      .andWhere('i.voided = 0')
-      .andWhere("i.verdict <> 'ruled-out'")
+      .andWhere(liveIncidentSql('i'))
       .andWhere('i.foundOn BETWEEN :from AND :to', { from, to })
       .groupBy('i.id')
       .addGroupBy('i.foundOn')

@@ -9,6 +9,7 @@ import { mailRepository } from './mail.repository';
 import { clusterAlertMail, newIncidentMail } from './mail-templates';
 import { deliver, type DeliveryResult } from './mailer';
 import { withNamedLock } from './named-lock';
+import { isLiveIncident } from '../incidents/live-incidents';
 
 const audienceRoles = (kind: 'new-incident' | 'cluster-alert') => {
   const a = mailAudience[kind];
@@ -39,7 +40,7 @@ export interface IncidentMailOutcome {
 export async function notifyIncidentCreated(incidentId: number): Promise<IncidentMailOutcome> {
   const outcome: IncidentMailOutcome = { newIncident: { sent: 0, failed: 0 }, clusters: [] };
   const incident = await incidentMailRepository.findIncident(incidentId);
-  if (!incident || incident.imported || incident.voided || incident.verdict === 'ruled-out') return outcome;
+  if (!incident || incident.imported || !isLiveIncident(incident)) return outcome;
   const jars = await incidentMailRepository.jarsOf(incidentId);
   const base = config().publicUrl;
 

@@ -4,6 +4,7 @@ import { Incident } from '../incidents/incident.entity';
 import { Jar } from '../jars/jar.entity';
 import { SessionStepCheck } from '../sessions/session-step-check.entity';
 import { IncidentStepLink } from './incident-step-link.entity';
+import { liveIncidentJarsSubquery } from '../incidents/live-incidents';
 
 export interface GroupCounts {
   jars: number;
@@ -11,9 +12,7 @@ export interface GroupCounts {
   incubating: number;
 }
 
-// DESIGN.md §3: contaminated = an incident that is not voided and whose verdict is not ruled out.
-const contaminatedJars =
-  "(SELECT DISTINCT ij.jarId AS jarId FROM incident_jars ij JOIN incidents i ON i.id = ij.incidentId WHERE i.voided = 0 AND i.verdict <> 'ruled-out')";
+const contaminatedJars = `(${liveIncidentJarsSubquery()})`;
 
 export const stepStatsRepository = {
   /**

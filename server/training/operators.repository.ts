@@ -1,4 +1,5 @@
 import { dataSource } from '../db/data-source';
+import { liveIncidentJarPairsSql } from '../incidents/live-incidents';
 
 export interface OperatorCounts {
   sessions: number;
@@ -16,9 +17,7 @@ export interface OperatorTraining {
 type Raw = Record<string, unknown>;
 const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
 
-// DESIGN.md §3: contaminated = an incident that is not voided and whose verdict is not ruled out.
-const liveIncidentJars =
-  "(SELECT ij.jarId AS jarId, ij.incidentId AS incidentId FROM incident_jars ij JOIN incidents i ON i.id = ij.incidentId WHERE i.voided = 0 AND i.verdict <> 'ruled-out')";
+const liveIncidentJars = `(${liveIncidentJarPairsSql})`;
 
 export const operatorsRepository = {
   /** Active technicians and supervisors, and anyone else who has run a session. */

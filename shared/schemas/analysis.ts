@@ -23,7 +23,12 @@ export const crosstabQuerySchema = periodBase
 export type CrosstabQuery = z.infer<typeof crosstabQuerySchema>;
 
 export const causesQuerySchema = periodBase
-  .extend({ minJars: z.coerce.number().int().min(1).max(1_000_000).default(1) })
+  .extend({
+    minJars: z.coerce.number().int().min(1).max(1_000_000).default(1),
+    /** Without page, every row; with page (and pageSize, default 25, at most 200), that page. */
+    page: z.coerce.number().int().min(1).optional(),
+    pageSize: z.coerce.number().int().min(1).max(200).default(25),
+  })
   .refine((q) => inOrder(q), orderIssue);
 export type CausesQuery = z.infer<typeof causesQuerySchema>;
 
@@ -35,11 +40,17 @@ export const beforeAfterQuerySchema = z.object({
 });
 export type BeforeAfterQuery = z.infer<typeof beforeAfterQuerySchema>;
 
+export const actionVerdictsQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200).default(25),
+});
+export type ActionVerdictsQuery = z.infer<typeof actionVerdictsQuerySchema>;
+
 export const jarsBehindQuerySchema = periodBase
   .extend({
     factor: factorSchema,
     level: z.string().min(1, 'name the level').max(120),
-    only: z.enum(['all', 'contaminated', 'incubating']).default('all'),
+    only: z.enum(['all', 'settled', 'contaminated', 'incubating']).default('all'),
     page: z.coerce.number().int().min(1).max(1_000_000).default(1),
     pageSize: z.coerce.number().int().min(1).max(200).default(50),
   })
@@ -88,6 +99,20 @@ export interface FactorLevel {
   level: string;
 }
 
+/** DESIGN.md §4.3: where a row stands once the leads are chosen. */
+export const standings = ['lead', 'same-jars', 'explained', 'elevated', 'not-elevated'] as const;
+export type Standing = (typeof standings)[number];
+
+/** Mantel–Haenszel relative risk of a level against its rest, stratified by the leads in `given`. */
+export interface AdjustedRisk {
+  given: FactorLevel[];
+  relativeRisk: number;
+  rr95: Interval;
+  /** Two-sided Cochran–Mantel–Haenszel test with the continuity correction. */
+  pValue: number;
+}
+
+/** Settled jars only (DESIGN.md §3); `incubating` counts the level's jars left out as still at risk. */
 export interface CauseRow extends FactorLevel {
   jars: number;
   contaminated: number;
@@ -101,6 +126,10 @@ export interface CauseRow extends FactorLevel {
   pValue: number;
   qValue: number;
   confoundedWith: FactorLevel[];
+  standing: Standing;
+  /** The leads this level shares ≥ 90 % of its settled jars with, both ways. */
+  sameJarsAs: FactorLevel[];
+  adjusted: AdjustedRisk | null;
   hint: string | null;
   /** Where the hint comes from: the trade's common practice, or a named source beside it. */
   hintBasis: string | null;
@@ -109,11 +138,21 @@ export interface CauseRow extends FactorLevel {
   medianDaysToDetection: number | null;
 }
 
+/** A lead in the order chosen, its row, and the levels that hold the same jars as it. */
+export interface LeadDto extends FactorLevel {
+  row: CauseRow;
+  sameJars: FactorLevel[];
+}
+
 export interface CausesDto {
   from: string | null;
   to: string | null;
   minJars: number;
+  leads: LeadDto[];
   causes: CauseRow[];
+  total: number;
+  page: number | null;
+  pageSize: number | null;
 }
 
 export interface WeeklyGrain {
@@ -132,7 +171,10 @@ export interface WeeklyRow {
   rate: number;
   ucl: number;
   lcl: number;
+  /** Above the upper limit: unusually many contaminated jars. */
   outOfControl: boolean;
+  /** Below the lower limit: unusually few, a good signal and never an alarm. */
+  belowLcl: boolean;
   provisional: boolean;
   grains: WeeklyGrain[];
 }
@@ -206,8 +248,13 @@ export interface BeforeAfterDto extends RateComparison {
   actionId: number;
   factor: Factor;
   level: string;
+  /** The done date: it belongs to neither period. */
   pivot: string;
   days: number;
+  /** The after-period ended at least the observation window ago, so every jar in it is settled. */
+  settled: boolean;
+  /** Until then: days until it has; the comparison fields stay null. */
+  daysRemaining: number | null;
   before: PeriodCount;
   after: PeriodCount;
 }
@@ -227,6 +274,30 @@ export interface JarsBehindDto {
   factor: Factor;
   level: string;
   items: JarBehind[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface ActionSummary {
+  id: number;
+  incidentId: number;
+  what: string;
+  ownerName: string;
+  dueOn: string;
+  doneOn: string | null;
+  factor: Factor | null;
+  level: string | null;
+}
+
+/** A corrective action with its before/after verdict, or why there is none yet. */
+export interface ActionVerdictDto extends ActionSummary {
+  comparison: BeforeAfterDto | null;
+  unavailable: string | null;
+}
+
+export interface ActionVerdictsDto {
+  items: ActionVerdictDto[];
   total: number;
   page: number;
   pageSize: number;

@@ -1,6 +1,7 @@
 import pmf from '@stdlib/stats-base-dists-hypergeometric-pmf';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type {
+  ActionVerdictsDto,
   BeforeAfterDto,
   ColonisationDto,
   JarsBehindDto,
@@ -8,6 +9,7 @@ import type {
   RatesDto,
 } from '../../shared/schemas/analysis';
 import { psiToKPa } from '../../shared/stats/steam';
+import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
@@ -190,6 +192,21 @@ describe('GET /api/analysis/colonisation', () => {
     expect(maize).toMatchObject({ jars: 1, colonised: 0, censored: 1, medianDays: null });
     expect(maize.steps).toEqual([{ day: 4, atRisk: 1, colonised: 0, censored: 1, stillColonising: 1 }]);
   });
+
+  it('leaves imported jars out, contaminated and clean alike (they carry no colonisation day)', async () => {
+    const day = '2024-03-04';
+    const wheat = await grainId('wheat');
+    const ids = await insertJars([
+      { label: 'PX-KM-OWN', grainId: wheat, inoculatedOn: day, status: 'colonised', colonisedOn: addDays(day, 12) },
+      { label: 'PX-KM-IMP-X', grainId: wheat, inoculatedOn: day, status: 'contaminated', endedOn: addDays(day, 5) },
+      { label: 'PX-KM-IMP-C', grainId: wheat, inoculatedOn: day, status: 'colonised' },
+    ]);
+    await dataSource.query('UPDATE jars SET imported = 1 WHERE id IN (?, ?)', [ids[1], ids[2]]);
+    await insertIncident([ids[1]!], addDays(day, 5));
+    const res = await reader.agent.get(`/api/analysis/colonisation?from=${day}&to=${day}`);
+    const curve = (res.body as ColonisationDto).curves.find((c) => c.grain === 'wheat')!;
+    expect(curve).toMatchObject({ jars: 1, colonised: 1, censored: 0, medianDays: 12 });
+  });
 });
 
 describe('GET /api/analysis/lethality', () => {
@@ -294,6 +311,47 @@ describe('GET /api/analysis/before-after', () => {
     const bad = await reader.agent.get('/api/analysis/before-after?actionId=x');
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0].path).toBe('actionId');
+  });
+
+  it('waits for the after-period to settle: recent jars count for nothing yet, and the days remaining are given', async () => {
+    const today = localDate(new Date());
+    const doneOn = addDays(today, -10);
+    const run = await insertCookRun('PX-BA-NOW', 90);
+    const rye = await grainId('rye');
+    const jarIds = await insertJars(
+      [-5, 3].map((d, i) => ({
+        label: `PX-BA-NOW-${i}`,
+        grainId: rye,
+        cookRunId: run,
+        inoculatedOn: addDays(doneOn, d),
+        status: 'incubating',
+      })),
+    );
+    const incidentId = await insertIncident([jarIds[0]!], addDays(doneOn, -1));
+    const res = await dataSource.query<{ insertId: number }>(
+      `INSERT INTO corrective_actions (incidentId, what, ownerName, dueOn, doneOn, factor, level) VALUES (?, 'Longer cook', 'Test owner', ?, ?, 'cookRun', 'PX-BA-NOW')`,
+      [incidentId, doneOn, doneOn],
+    );
+    const body = (await reader.agent.get(`/api/analysis/before-after?actionId=${Number(res.insertId)}`))
+      .body as BeforeAfterDto;
+    // Shortest comparison 7 days each side; the after-period ends on doneOn + 7, settled 21 days later.
+    expect(body).toMatchObject({ days: 7, settled: false, daysRemaining: 7 + 21 - 10, difference: null });
+    // The jar inoculated 3 days after the action is younger than the window and clean: not settled, left out.
+    expect(body.after).toMatchObject({ jars: 0, contaminated: 0 });
+    expect(body.before).toMatchObject({ jars: 1, contaminated: 1 });
+  });
+
+  it('lists every corrective action with its verdict, or why there is none', async () => {
+    const res = await reader.agent.get('/api/analysis/actions?pageSize=200');
+    expect(res.status).toBe(200);
+    const body = res.body as ActionVerdictsDto;
+    const done = body.items.find((a) => a.id === actionId)!;
+    expect(done.comparison).toMatchObject({ settled: true, before: { jars: 80 }, after: { jars: 70 } });
+    const bare = body.items.find((a) => a.id === bareActionId)!;
+    expect(bare.comparison).toBeNull();
+    expect(bare.unavailable).toMatch(/no factor level/);
+    expect(body.total).toBe(body.items.length);
+    expect((await reader.agent.get('/api/analysis/actions?pageSize=500')).status).toBe(400);
   });
 
   it('lists the jars behind a number, page by page', async () => {

@@ -64,3 +64,17 @@ describe('pChartLimits', () => {
     expect(() => pChartLimits([4], [3])).toThrow(RangeError);
   });
 });
+
+describe('pChartLimits on a published example', () => {
+  // Montgomery D.C., Introduction to Statistical Quality Control, ch. 7, the frozen orange-juice can
+  // example: samples of n = 50 with p̄ = 0.2313 give UCL = 0.4102, LCL = 0.0524 [from memory, TRADE.md §4].
+  // Counts chosen so that Σx/Σn = 0.2313 exactly (2313 of 10,000 cans over 200 samples of 50).
+  it('reproduces the limits 0.0524–0.4102 for n = 50 around p̄ = 0.2313', () => {
+    const n = Array.from({ length: 200 }, () => 50);
+    const x = n.map((_, i) => (i < 113 ? 12 : 11));
+    const { pBar, limits } = pChartLimits(x, n);
+    expect(pBar).toBeCloseTo(0.2313, 10);
+    expect(limits[0]?.lcl).toBeCloseTo(0.0524, 4);
+    expect(limits[0]?.ucl).toBeCloseTo(0.4102, 4);
+  });
+});

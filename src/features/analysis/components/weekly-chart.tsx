@@ -33,6 +33,19 @@ function WeekDot({ cx, cy, payload }: DotProps) {
       />
     );
   }
+  if (payload.belowLcl) {
+    return (
+      <circle
+        cx={cx}
+        cy={cy}
+        r={6}
+        fill="#1d6b3a"
+        stroke="#ffffff"
+        strokeWidth={2}
+        aria-label={`${payload.week} below the lower limit`}
+      />
+    );
+  }
   if (payload.provisional) return <circle cx={cx} cy={cy} r={5} fill="#ffffff" stroke="#13627a" strokeWidth={2} />;
   return <circle cx={cx} cy={cy} r={4} fill="#13627a" />;
 }

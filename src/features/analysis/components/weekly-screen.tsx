@@ -132,6 +132,8 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                     <td className={td}>
                       {w.outOfControl ? (
                         <Badge tone="danger">Out of control</Badge>
+                      ) : w.belowLcl ? (
+                        <Badge tone="ok">Below the lower limit: a good week</Badge>
                       ) : w.provisional ? (
                         <Badge tone="warn">Provisional</Badge>
                       ) : (

@@ -1,0 +1,98 @@
+import { mantelHaenszel, type MantelHaenszel, type Stratum } from '../../shared/stats/mantel-haenszel';
+import { CONFOUNDED_SHARE, F, type FactorLevels } from './cause-levels';
+
+/** A level by number: factor index and level number within it. */
+export interface LevelRef {
+  fi: number;
+  id: number;
+}
+
+/** What the stratified passes read: each combination's settled and contaminated jars and its levels. */
+export interface Cells {
+  settled: Float64Array;
+  contaminated: Float64Array;
+  levels: FactorLevels[];
+  levelIdx: Int32Array;
+}
+
+/**
+ * Settled and contaminated jars per level per stratum, and per factor per stratum (over the jars that
+ * record the factor, the level's rest included). A jar's stratum is its membership pattern in the
+ * leads: bit k set when it belongs to lead k. One pass over the cells.
+ */
+export interface StrataCounts {
+  strata: number;
+  levelJars: Float64Array[];
+  levelContaminated: Float64Array[];
+  totalJars: Float64Array[];
+  totalContaminated: Float64Array[];
+}
+
+export function countByStrata(cells: Cells, leads: LevelRef[]): StrataCounts {
+  const S = 1 << leads.length;
+  const { levels, levelIdx, settled, contaminated } = cells;
+  const out: StrataCounts = {
+    strata: S,
+    levelJars: levels.map((l) => new Float64Array(l.names.length * S)),
+    levelContaminated: levels.map((l) => new Float64Array(l.names.length * S)),
+    totalJars: levels.map(() => new Float64Array(S)),
+    totalContaminated: levels.map(() => new Float64Array(S)),
+  };
+  for (let ci = 0; ci < settled.length; ci++) {
+    const n = settled[ci]!;
+    if (n === 0) continue;
+    const x = contaminated[ci]!;
+    let s = 0;
+    for (let k = 0; k < leads.length; k++) if (levelIdx[ci * F + leads[k]!.fi] === leads[k]!.id) s |= 1 << k;
+    for (let fi = 0; fi < F; fi++) {
+      const id = levelIdx[ci * F + fi]!;
+      if (id < 0) continue;
+      out.levelJars[fi]![id * S + s]! += n;
+      out.levelContaminated[fi]![id * S + s]! += x;
+      out.totalJars[fi]![s]! += n;
+      out.totalContaminated[fi]![s]! += x;
+    }
+  }
+  return out;
+}
+
+/**
+ * The level-vs-rest strata given only the leads whose bits are in `keep`: strata that differ in the
+ * other bits are added together.
+ */
+export function strataOf(c: StrataCounts, level: LevelRef, keep: number): Stratum[] {
+  const merged = new Map<number, Stratum>();
+  const base = level.id * c.strata;
+  for (let s = 0; s < c.strata; s++) {
+    const t = s & keep;
+    const m = merged.get(t) ?? { a: 0, n1: 0, c: 0, n0: 0 };
+    const n1 = c.levelJars[level.fi]![base + s]!;
+    const a = c.levelContaminated[level.fi]![base + s]!;
+    m.a += a;
+    m.n1 += n1;
+    m.c += c.totalContaminated[level.fi]![s]! - a;
+    m.n0 += c.totalJars[level.fi]![s]! - n1;
+    merged.set(t, m);
+  }
+  return [...merged.values()];
+}
+
+export function adjustedRisk(c: StrataCounts, level: LevelRef, keep: number): MantelHaenszel {
+  return mantelHaenszel(strataOf(c, level, keep));
+}
+
+/** Settled jars of the level that also belong to lead k (bit k of the strata). */
+export function overlap(c: StrataCounts, level: LevelRef, k: number): number {
+  let n = 0;
+  const base = level.id * c.strata;
+  for (let s = 0; s < c.strata; s++) if (s & (1 << k)) n += c.levelJars[level.fi]![base + s]!;
+  return n;
+}
+
+/** DESIGN.md §4.3: two levels are same-jars when each holds ≥ 90 % of the other's settled jars. */
+export function sameJars(c: StrataCounts, cells: Cells, level: LevelRef, lead: LevelRef, k: number): boolean {
+  if (level.fi === lead.fi) return false;
+  const shared = overlap(c, level, k);
+  const jarsOf = (l: LevelRef) => cells.levels[l.fi]!.jars[l.id]!;
+  return shared >= CONFOUNDED_SHARE * jarsOf(level) && shared >= CONFOUNDED_SHARE * jarsOf(lead);
+}
