@@ -1,11 +1,57 @@
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 const apiPort = process.env.PORT ?? '5180';
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [
+    react(),
+    tailwindcss(),
+    VitePWA({
+      injectRegister: null,
+      registerType: 'autoUpdate',
+      manifest: {
+        name: 'Asepta',
+        short_name: 'Asepta',
+        description: 'Contamination incident register for spawn labs',
+        start_url: '/',
+        scope: '/',
+        display: 'standalone',
+        background_color: '#f3f5f4',
+        theme_color: '#13627a',
+        icons: [
+          { src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png', purpose: 'any maskable' },
+          { src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png', purpose: 'any maskable' },
+        ],
+      },
+      workbox: {
+        // The whole shell, the shelf screens and the scanner's reader: they open with no signal.
+        globPatterns: ['**/*.{js,css,html,woff2,png,svg,wasm}'],
+        maximumFileSizeToCacheInBytes: 6 * 1024 * 1024,
+        navigateFallback: '/index.html',
+        navigateFallbackDenylist: [/^\/api\//],
+        cleanupOutdatedCaches: true,
+        runtimeCaching: [
+          {
+            // Reads seen once (the user, a jar's page, a shelf) stay readable offline; fresh data wins when it comes.
+            urlPattern: ({ url, request }) =>
+              request.method === 'GET' &&
+              url.pathname.startsWith('/api/') &&
+              url.pathname !== '/api/auth/csrf' &&
+              !url.pathname.startsWith('/api/photos/'),
+            handler: 'NetworkFirst',
+            options: {
+              cacheName: 'asepta-api',
+              networkTimeoutSeconds: 4,
+              expiration: { maxEntries: 400, maxAgeSeconds: 14 * 24 * 60 * 60 },
+            },
+          },
+        ],
+      },
+    }),
+  ],
   server: {
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/j': `http://127.0.0.1:${apiPort}` },

@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
+import compression from 'compression';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -12,6 +13,7 @@ import { config } from './core/config';
 import { AppError } from './core/errors';
 import { errorHandler } from './core/error-handler';
 import { logger } from './core/logger';
+import { serveClient } from './core/static-assets';
 import { cookRunsRouter } from './cook-runs/cook-runs.router';
 import { culturesRouter } from './cultures/cultures.router';
 import { grainLotsRouter, grainsRouter, prepBatchesRouter } from './grain/grain.router';
@@ -49,6 +51,8 @@ export function createApp({ sessionStore }: AppDeps): Express {
       strictTransportSecurity: c.publicUrl.startsWith('https:'),
     }),
   );
+  // Scripts and JSON shrink to about a third; a weak signal in an incubation room feels every kilobyte.
+  app.use(compression());
   if (c.NODE_ENV !== 'test') app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   app.use('/api/health', healthRouter);
@@ -83,10 +87,7 @@ export function createApp({ sessionStore }: AppDeps): Express {
   app.use('/api', api);
 
   const staticDir = path.resolve(c.STATIC_DIR);
-  if (existsSync(path.join(staticDir, 'index.html'))) {
-    app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(staticDir, 'index.html')));
-  }
+  if (existsSync(path.join(staticDir, 'index.html'))) serveClient(app, staticDir);
   app.use(errorHandler);
   return app;
 }

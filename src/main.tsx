@@ -7,9 +7,14 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
+import { startOutbox } from './lib/outbox/start-outbox';
+import { registerServiceWorker } from './lib/service-worker';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
+
+registerServiceWorker();
+startOutbox();
 
 createRoot(root).render(
   <StrictMode>

@@ -9,6 +9,7 @@ import { GrainLot } from '../grain/grain-lot.entity';
 import { Grain } from '../grain/grain.entity';
 import { PrepBatch } from '../grain/prep-batch.entity';
 import { CorrectiveAction } from '../incidents/corrective-action.entity';
+import { IdempotentRequest } from '../idempotency/idempotent-request.entity';
 import { IncidentJar } from '../incidents/incident-jar.entity';
 import { IncidentPhoto } from '../incidents/incident-photo.entity';
 import { Incident } from '../incidents/incident.entity';
@@ -63,4 +64,5 @@ export const entities = [
   MailPreference,
   ClusterAlert,
   DigestRun,
+  IdempotentRequest,
 ];

@@ -8,8 +8,11 @@ import {
   updateIncidentSchema,
   voidIncidentSchema,
 } from '../../shared/schemas/incidents';
-import { requireRole } from '../core/auth-guards';
-import { createRoute, csvExportRoute, detailRoute, listRoute, writeRoute } from '../core/record-routes';
+import { currentUser, requireRole } from '../core/auth-guards';
+import { csvExportRoute, detailRoute, idParam, listRoute, requireWriter, writeRoute } from '../core/record-routes';
+import { validate } from '../core/validate';
+import { idempotentHandler } from '../idempotency/idempotent-route';
+import { idParamsSchema } from '../../shared/schemas/common';
 import { createAction } from './corrective-actions.service';
 import { incidentCsv } from './incidents-export';
 import { reviewIncident, voidIncident } from './incident-review.service';
@@ -22,9 +25,21 @@ const supervisor = { guard: requireRole('supervisor') };
 incidentsRouter.get('/', ...listRoute(incidentListQuerySchema, listIncidents));
 incidentsRouter.get('/export.csv', ...csvExportRoute(incidentListQuerySchema, incidentCsv));
 incidentsRouter.get('/:id', ...detailRoute(getIncident));
-incidentsRouter.post('/', ...createRoute(createIncidentSchema, createIncident));
+incidentsRouter.post(
+  '/',
+  requireWriter,
+  validate({ body: createIncidentSchema }),
+  idempotentHandler('incident', 201, (req, claim) => createIncident(currentUser(req), req.body, claim)),
+);
 incidentsRouter.patch('/:id', ...writeRoute(updateIncidentSchema, updateIncident));
 incidentsRouter.post('/:id/review', ...writeRoute(reviewIncidentSchema, reviewIncident, supervisor));
 incidentsRouter.post('/:id/void', ...writeRoute(voidIncidentSchema, voidIncident, supervisor));
-incidentsRouter.post('/:id/photos', ...writeRoute(addIncidentPhotosSchema, addIncidentPhotos));
+incidentsRouter.post(
+  '/:id/photos',
+  requireWriter,
+  validate({ params: idParamsSchema, body: addIncidentPhotosSchema }),
+  idempotentHandler('incident-photos', 200, (req, claim) =>
+    addIncidentPhotos(currentUser(req), idParam(req), req.body, claim),
+  ),
+);
 incidentsRouter.post('/:id/actions', ...writeRoute(createActionSchema, createAction, { ...supervisor, status: 201 }));

@@ -15,6 +15,7 @@ import type { SessionUser } from '../core/auth-guards';
 import { forbidden, notFound, unprocessable } from '../core/errors';
 import { localDate, todayLocal } from '../core/local-time';
 import { dataSource } from '../db/data-source';
+import { attachRecord, claimKey, type IdempotencyClaim } from '../idempotency/idempotency.service';
 import type { Jar } from '../jars/jar.entity';
 import { toPhotoDto } from '../photos/photos.mapper';
 import { requirePhotos } from '../photos/photos.service';
@@ -47,10 +48,15 @@ async function resolveJars(m: EntityManager, input: Pick<CreateIncidentInput, 'j
   return [...new Map([...byLabel, ...byId].map((j) => [j.id, j])).values()];
 }
 
-export async function createIncident(user: SessionUser, input: CreateIncidentInput): Promise<IncidentDetailDto> {
+export async function createIncident(
+  user: SessionUser,
+  input: CreateIncidentInput,
+  claim?: IdempotencyClaim,
+): Promise<IncidentDetailDto> {
   const foundAt = input.foundAt ? new Date(input.foundAt) : new Date();
   const foundOn = localDate(foundAt);
   const created = await dataSource.transaction(async (m) => {
+    await claimKey(m, claim);
     const jars = await resolveJars(m, input);
     checkFoundAt(foundAt, foundOn, jars);
     const photos = input.photoIds?.length ? await requirePhotos(m, input.photoIds, 'photoIds') : [];
@@ -72,6 +78,7 @@ export async function createIncident(user: SessionUser, input: CreateIncidentInp
         notes: input.notes || null,
       }),
     );
+    await attachRecord(m, claim, incident.id);
     await m.insert(
       IncidentJar,
       jars.map((j) => ({ incidentId: incident.id, jarId: j.id })),
@@ -185,8 +192,10 @@ export async function addIncidentPhotos(
   user: SessionUser,
   id: number,
   input: AddIncidentPhotosInput,
+  claim?: IdempotencyClaim,
 ): Promise<IncidentDetailDto> {
   await dataSource.transaction(async (m) => {
+    await claimKey(m, claim, id);
     const incident = await loadForChange(m, id);
     if (!canEditDescriptive(user, incident)) throw notYours();
     const photos = await requirePhotos(m, input.photoIds, 'photoIds');

@@ -109,17 +109,42 @@ export const jarsRepository = {
       .getRawMany<JarRawRow>();
   },
 
-  /** Jars still in the lab on one shelf, in the order a technician walks them. */
+  /** Jars still incubating on one shelf, in the order a technician walks them. */
   shelf(room: string, shelf: string): Promise<JarRawRow[]> {
     return rowQuery(dataSource.manager)
       .where('j.room = :room AND j.shelf = :shelf', { room, shelf })
       .andWhere('j.endedOn IS NULL')
-      .andWhere('j.status NOT IN (:...ended)', { ended: ['discarded', 'released'] })
+      .andWhere("j.status = 'incubating'")
       .orderBy('j.shelfPosition IS NULL', 'ASC')
       .addOrderBy('j.shelfPosition', 'ASC')
       .addOrderBy('j.label', 'ASC')
       .getRawMany<JarRawRow>();
   },
+
+  /** The lab's own rooms and shelves that hold incubating jars, for the walk's pickers. */
+  async shelfPlaces(): Promise<{ room: string; shelf: string; incubating: number }[]> {
+    const rows = await dataSource.manager
+      .createQueryBuilder(Jar, 'j')
+      .select('j.room', 'room')
+      .addSelect('j.shelf', 'shelf')
+      .addSelect('COUNT(*)', 'incubating')
+      .where("j.status = 'incubating' AND j.endedOn IS NULL")
+      .andWhere('j.room IS NOT NULL AND j.shelf IS NOT NULL')
+      .groupBy('j.room')
+      .addGroupBy('j.shelf')
+      .orderBy('j.room', 'ASC')
+      .addOrderBy('j.shelf', 'ASC')
+      .getRawMany<{ room: string; shelf: string; incubating: string | number }>();
+    return rows.map((r) => ({ room: r.room, shelf: r.shelf, incubating: Number(r.incubating) }));
+  },
+
+  async lastEventId(m: EntityManager, jarId: number): Promise<number | null> {
+    const e = await m.findOne(JarEvent, { where: { jarId }, order: { id: 'DESC' }, select: { id: true } });
+    return e?.id ?? null;
+  },
+
+  findEvent: (m: EntityManager, id: number) => m.findOneBy(JarEvent, { id }),
+  deleteEvent: (m: EntityManager, id: number) => m.delete(JarEvent, { id }),
 
   /**
    * Locks the settings row as the lab-wide mutex for label numbers and shelf positions: two batches

@@ -8,6 +8,7 @@ import {
   labelSheetQuerySchema,
   shelfQuerySchema,
   shelfWalkSchema,
+  undoShelfMarkSchema,
   type ShelfQuery,
 } from '../../shared/schemas/jars';
 import { currentUser, requireUser } from '../core/auth-guards';
@@ -24,10 +25,12 @@ import {
 } from '../core/record-routes';
 import { validate } from '../core/validate';
 import { recordJarEvent } from './jar-events.service';
+import { idempotentHandler } from '../idempotency/idempotent-route';
 import { recordShelfWalk } from './shelf-walk.service';
+import { undoShelfMark } from './shelf-mark-undo.service';
 import { jarQrSvg, labelSheet } from './jar-labels.service';
 import { jarStory } from './jar-story.service';
-import { createJarBatch, exportJars, listJars, shelfJars } from './jars.service';
+import { createJarBatch, exportJars, listJars, shelfJars, shelfPlaces } from './jars.service';
 import { jarCsvHeader, jarCsvRow } from './jars.mapper';
 
 export const jarsRouter = Router();
@@ -48,8 +51,19 @@ jarsRouter.get('/shelf', requireUser, validate({ query: shelfQuerySchema }), asy
   res.json({ items: await shelfJars(req.query as unknown as ShelfQuery) });
 });
 
-jarsRouter.post('/shelf-walk', requireWriter, validate({ body: shelfWalkSchema }), async (req, res) => {
-  res.json(await recordShelfWalk(currentUser(req), req.body));
+jarsRouter.get('/shelves', requireUser, async (_req, res) => {
+  res.json({ items: await shelfPlaces() });
+});
+
+jarsRouter.post(
+  '/shelf-walk',
+  requireWriter,
+  validate({ body: shelfWalkSchema }),
+  idempotentHandler('shelf-mark', 200, (req, claim) => recordShelfWalk(currentUser(req), req.body, claim)),
+);
+
+jarsRouter.post('/shelf-walk/undo', requireWriter, validate({ body: undoShelfMarkSchema }), async (req, res) => {
+  res.json(await undoShelfMark(currentUser(req), req.body));
 });
 
 jarsRouter.get('/labels', requireUser, validate({ query: labelSheetQuerySchema }), async (req, res) => {

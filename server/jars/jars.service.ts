@@ -151,3 +151,5 @@ export async function exportJars(q: JarExportQuery): Promise<JarRowDto[]> {
 export async function shelfJars(q: ShelfQuery): Promise<JarRowDto[]> {
   return (await jarsRepository.shelf(q.room, q.shelf)).map(toJarRow);
 }
+
+export const shelfPlaces = () => jarsRepository.shelfPlaces();

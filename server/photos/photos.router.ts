@@ -5,6 +5,7 @@ import { photoField, photoMaxBytes, photoMaxFiles } from '../../shared/schemas/p
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { AppError } from '../core/errors';
 import { validate } from '../core/validate';
+import { idempotentHandler } from '../idempotency/idempotent-route';
 import { getPhoto, openPhoto, uploadPhotos } from './photos.service';
 
 export const photosRouter = Router();
@@ -35,11 +36,14 @@ const receivePhotos: RequestHandler = (req, res, next) => {
 
 const writers = requireRole('technician', 'supervisor', 'admin');
 
-photosRouter.post('/', writers, receivePhotos, async (req, res) => {
-  const files = Array.isArray(req.files) ? req.files : [];
-  const user = currentUser(req);
-  res.status(201).json(await uploadPhotos(user, files));
-});
+photosRouter.post(
+  '/',
+  writers,
+  receivePhotos,
+  idempotentHandler('photos', 201, (req, claim) =>
+    uploadPhotos(currentUser(req), Array.isArray(req.files) ? req.files : [], claim),
+  ),
+);
 
 photosRouter.get('/:id', requireUser, validate({ params: idParamsSchema }), async (req, res) => {
   res.json(await getPhoto(Number(req.params.id)));

@@ -6,6 +6,7 @@ import { heicRefusal, photoAcceptedTypes, photoField, type PhotoDto } from '../.
 import { recordAudit, type Actor } from '../audit/audit.service';
 import { AppError, badRequest, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
+import { claimKey, isKeyClash, type IdempotencyClaim } from '../idempotency/idempotency.service';
 import { Photo } from './photo.entity';
 import { toPhotoDto } from './photos.mapper';
 import { photosRepository } from './photos.repository';
@@ -72,7 +73,11 @@ async function decode(c: Checked, index: number): Promise<DecodedPhoto> {
  * Stores each photo once by its SHA-256. Every file is checked before any is stored, so a
  * refused file leaves nothing behind; files written for a failed transaction are removed again.
  */
-export async function uploadPhotos(actor: Actor & { id: number }, files: UploadedFile[]): Promise<PhotoDto[]> {
+export async function uploadPhotos(
+  actor: Actor & { id: number },
+  files: UploadedFile[],
+  claim?: IdempotencyClaim,
+): Promise<PhotoDto[]> {
   if (files.length === 0)
     throw badRequest(`${photoField}: attach at least one photo`, [
       { path: photoField, message: 'attach at least one photo' },
@@ -102,6 +107,7 @@ export async function uploadPhotos(actor: Actor & { id: number }, files: Uploade
       }
     }
     await dataSource.transaction(async (m) => {
+      await claimKey(m, claim);
       for (const { c, d } of decoded) {
         const photo = await m.save(
           m.create(Photo, {
@@ -131,7 +137,7 @@ export async function uploadPhotos(actor: Actor & { id: number }, files: Uploade
     const referenced = new Set(stored.flatMap((p) => [p.storageKey, p.thumbKey]));
     for (const key of written) if (!referenced.has(key)) await storage.remove(key);
     // Someone stored the same photo a moment ago: theirs is the one copy.
-    if (!isDuplicate(err)) throw err;
+    if (!isDuplicate(err) || isKeyClash(err)) throw err;
     for (const p of stored) known.set(p.sha256, p);
   }
   return checked.map((c) => {

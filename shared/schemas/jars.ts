@@ -428,3 +428,10 @@ export const holdResultSchema = z.object({
   unchanged: z.array(z.object({ label: z.string(), status: jarStatusSchema })),
 });
 export type HoldResultDto = z.infer<typeof holdResultSchema>;
+
+/** A room and shelf that hold jars still incubating, for the shelf walk's pickers. */
+export const shelfPlaceSchema = z.object({ room: z.string(), shelf: z.string(), incubating: z.number().int() });
+export type ShelfPlaceDto = z.infer<typeof shelfPlaceSchema>;
+
+export const undoShelfMarkSchema = z.object({ key: z.string().trim().min(1, 'name the mark to undo').max(100) });
+export type UndoShelfMarkInput = z.infer<typeof undoShelfMarkSchema>;

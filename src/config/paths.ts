@@ -22,6 +22,8 @@ export const paths = {
     to: (next?: string) => withQuery('/sign-in', { next: next && next !== '/' ? next : undefined }),
   },
   account: { pattern: '/account', to: () => '/account' },
+  /** What this phone still holds for the server: flags, photos and shelf marks. */
+  outbox: { pattern: '/outbox', to: () => '/outbox' },
   users: { pattern: '/users', to: (query?: Query) => withQuery('/users', query) },
   historyImport: { pattern: '/imports/history', to: () => '/imports/history' },
   cookRuns: { pattern: '/cook-runs', to: (query?: Query) => withQuery('/cook-runs', query) },

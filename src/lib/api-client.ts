@@ -107,10 +107,12 @@ interface RequestOptions<T> {
   query?: QueryParams;
   signal?: AbortSignal;
   schema?: z.ZodType<T>;
+  /** Extra headers, e.g. an Idempotency-Key on writes from the shelf. */
+  headers?: Record<string, string>;
 }
 
 async function request<T>(method: Method, path: string, options: RequestOptions<T> = {}, retried = false): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: 'application/json', ...options.headers };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers['X-CSRF-Token'] = await getCsrfToken();
 

@@ -5,6 +5,7 @@ export interface UploadOptions {
   /** Called with 0…1 as the body goes out. */
   onProgress?: (fraction: number) => void;
   signal?: AbortSignal;
+  headers?: Record<string, string>;
 }
 
 function send(path: string, body: FormData | Blob, token: string, options: UploadOptions) {
@@ -13,6 +14,7 @@ function send(path: string, body: FormData | Blob, token: string, options: Uploa
     xhr.open(options.method ?? 'POST', apiUrl(path));
     xhr.setRequestHeader('Accept', 'application/json');
     xhr.setRequestHeader('X-CSRF-Token', token);
+    for (const [name, value] of Object.entries(options.headers ?? {})) xhr.setRequestHeader(name, value);
     // FormData sets its own multipart boundary; a bare Blob (a CSV file) says its own type.
     if (!(body instanceof FormData) && body.type) xhr.setRequestHeader('Content-Type', body.type);
     xhr.upload.onprogress = (event) => {

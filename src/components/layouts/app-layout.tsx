@@ -9,6 +9,7 @@ import { Button } from '../ui/button';
 import { Dialog } from '../ui/dialog';
 import { Icon } from '../ui/icon';
 import { BottomBar, SideNav } from './nav-links';
+import { OutboxBar } from './outbox-bar';
 
 interface AppLayoutProps {
   user: { displayName: string; role: Role };
@@ -74,6 +75,7 @@ export function AppLayout({ user, onSignOut, signingOut, children }: AppLayoutPr
           </div>
         </div>
       </header>
+      <OutboxBar />
       <div className="flex">
         <SideNav items={items} />
         <main

@@ -87,3 +87,11 @@ const allLabels: Record<string, string> = {
 
 /** Audit values are stored as text; show enum codes by their names. */
 export const valueLabel = (value: string | null) => (value === null ? '—' : (allLabels[value] ?? value));
+
+/** The tile names on a phone: the display name before any parenthesis, as the import also accepts. */
+export const contaminantShortNames = Object.fromEntries(
+  Object.entries(contaminantNames).map(([code, name]) => {
+    const short = name.split('(')[0]!.trim();
+    return [code, short.charAt(0).toUpperCase() + short.slice(1)];
+  }),
+) as Record<keyof typeof contaminantNames, string>;

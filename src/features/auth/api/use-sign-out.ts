@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router';
 import { paths } from '../../../config/paths';
 import { api, isApiError, refreshCsrfToken } from '../../../lib/api-client';
+import { forgetCachedReads } from '../../../lib/service-worker';
 import { authQueries } from './auth-queries';
 
 export const signOutKey = [...authQueries.all, 'sign-out'] as const;
@@ -16,6 +17,7 @@ export function useSignOut() {
     queryClient.setQueryData(authQueries.me().queryKey, null);
     queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authQueries.all[0] });
     void refreshCsrfToken().catch(() => undefined);
+    await forgetCachedReads().catch(() => undefined);
     await navigate(paths.signIn.to(), { replace: true });
   };
 

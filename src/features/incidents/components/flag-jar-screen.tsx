@@ -1,154 +1,131 @@
 import { useState } from 'react';
-import { useNavigate } from 'react-router';
-import { contaminantNames, contaminants, stagesFound } from '../../../../shared/enums';
-import { incidentSeverities, signSuggestions } from '../../../../shared/schemas/incidents';
+import { Link, useLocation, useNavigate } from 'react-router';
+import { contaminants } from '../../../../shared/enums';
 import { Button } from '../../../components/ui/button';
-import { Checkbox } from '../../../components/ui/checkbox';
 import { applyServerErrors, Form } from '../../../components/ui/form';
-import { PageHeader } from '../../../components/ui/page-header';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
-import { PhotoPicker } from '../../photos/components/photo-picker';
-import { useCreateIncident } from '../api/use-incident-mutations';
+import { sendFlag } from '../flag-outbox';
 import { flagFormSchema, onFlagForm, splitLabels, toCreateInput, type FlagFormInput } from '../flag-form';
-import { severityLabels, stageLabels } from '../labels';
+import { contaminantShortNames } from '../labels';
 import { ChoiceTiles } from './choice-tiles';
-import { NotesField } from './notes-field';
-import { SporeCautions } from './spore-cautions';
+import { CompactCautions } from './compact-cautions';
+import { FlagDetails } from './flag-details';
+import { HeldPhotos, type HeldPhoto } from './held-photos';
+import { OpenIncidentNotice } from './open-incident-notice';
 
-const formFields = [
-  'jarText',
-  'contaminant',
-  'severity',
-  'stage',
-  'signColour',
-  'signSmell',
-  'signTexture',
-  'notes',
-  'photoIds',
-  'foundAt',
-] as const;
-const chips = (values: readonly string[]) => values.map((v) => ({ value: v, label: v }));
+const formFields = ['jarText', 'contaminant', 'severity', 'stage', 'notes', 'foundAt'] as const;
 
-export function FlagJarScreen({ jarLabel }: { jarLabel: string | undefined }) {
-  const create = useCreateIncident();
+export interface OpenIncident {
+  id: number;
+  foundOn: string;
+  label: string;
+}
+
+interface Props {
+  jarLabel: string | undefined;
+  /** The jar's incident that is still open, if it has one: a second flag is most often a mistake. */
+  openIncident?: OpenIncident;
+}
+
+/** With or without signal: the flag goes to the outbox on the phone and is sent from there. */
+export function FlagJarScreen({ jarLabel, openIncident }: Props) {
   const navigate = useNavigate();
+  const back = (useLocation().state as { back?: string } | null)?.back;
   const toast = useToast();
-  const [uploading, setUploading] = useState(false);
+  const [photos, setPhotos] = useState<HeldPhoto[]>([]);
+  const refused = photos.some((p) => p.refusal);
+  const checking = photos.some((p) => p.refusal === undefined);
 
   return (
-    <>
-      <PageHeader title="Flag a jar" description="Pick what you see, add a photo, send. A supervisor reviews it." />
-      <Form
-        schema={flagFormSchema}
-        options={{
-          defaultValues: {
-            jarText: jarLabel ?? '',
-            severity: 'medium',
-            stage: 'incubation',
-            sealed: false,
-            sterilisedBeforeDisposal: false,
-            photoIds: [],
-          } satisfies Partial<FlagFormInput>,
-        }}
-        className="mx-auto max-w-2xl pb-28"
-        onSubmit={(values, { setError }) =>
-          create.mutateAsync(toCreateInput(values)).then(
-            (incident) => {
-              toast.success(`Incident ${incident.id} recorded for ${incident.jars.map((j) => j.label).join(', ')}.`);
-              void navigate(paths.incident.to(incident.id));
-            },
-            (error: unknown) => applyServerErrors(onFlagForm(error), setError, formFields),
-          )
+    <Form
+      schema={flagFormSchema}
+      options={{
+        defaultValues: {
+          jarText: jarLabel ?? '',
+          severity: 'medium',
+          stage: 'incubation',
+          sealed: false,
+          sterilisedBeforeDisposal: false,
+          photoIds: [],
+        } satisfies Partial<FlagFormInput>,
+      }}
+      className="mx-auto max-w-2xl gap-4 pb-28"
+      aria-label="Flag a jar"
+      onSubmit={async (values, { setError }) => {
+        if (refused || checking) return;
+        try {
+          const { photoIds: _none, ...input } = toCreateInput(values);
+          const outcome = await sendFlag(
+            input,
+            photos.map((p) => p.file),
+          );
+          const jars = input.jarLabels?.join(', ') ?? '';
+          if (outcome.sent) toast.success(`Incident ${outcome.incidentId} recorded for ${jars}.`);
+          else toast.success(`No connection: the flag of ${jars} is kept on this phone and sends itself later.`);
+          if (back) void navigate(back);
+          else if (outcome.sent) void navigate(paths.incident.to(outcome.incidentId));
+          else void navigate(paths.outbox.to());
+        } catch (error) {
+          applyServerErrors(onFlagForm(error), setError, formFields);
         }
-      >
-        {({ register, watch, setValue, formState: { errors } }) => {
-          const labels = splitLabels(watch('jarText') ?? '');
-          return (
-            <>
-              <SporeCautions compact />
-              <TextInput
-                label="Jar label"
-                hint="Scan or type it. Several jars in one incident: separate the labels with spaces or commas."
-                autoComplete="off"
-                autoCapitalize="characters"
-                spellCheck={false}
-                error={errors.jarText?.message}
-                {...register('jarText')}
-              />
-              {labels.length > 1 && (
-                <p className="-mt-3 text-sm text-muted">
-                  {labels.length} jars: {labels.join(', ')}
+      }}
+    >
+      {(form) => {
+        const {
+          register,
+          watch,
+          setValue,
+          formState: { errors, isSubmitting },
+        } = form;
+        const labels = splitLabels(watch('jarText') ?? '');
+        return (
+          <>
+            <h1 className="text-2xl font-semibold">Flag a jar</h1>
+            <TextInput
+              label="Jar label"
+              hint={labels.length > 1 ? `${labels.length} jars: ${labels.join(', ')}` : undefined}
+              autoComplete="off"
+              autoCapitalize="characters"
+              spellCheck={false}
+              error={errors.jarText?.message}
+              {...register('jarText')}
+            />
+            {openIncident && (
+              <OpenIncidentNotice incident={openIncident} files={photos.map((p) => p.file)} blocked={refused} />
+            )}
+            <ChoiceTiles
+              legend="What is growing?"
+              name="contaminant"
+              columns="grid-cols-3"
+              options={contaminants.map((c) => ({ value: c, label: contaminantShortNames[c] }))}
+              value={watch('contaminant')}
+              onChange={(v) => v && setValue('contaminant', v, { shouldValidate: true })}
+              error={errors.contaminant ? 'Pick what you see; “unknown” is fine.' : undefined}
+            />
+            <HeldPhotos photos={photos} onChange={setPhotos} />
+            <CompactCautions />
+            <FlagDetails form={form} />
+            <p className="text-sm text-muted">
+              Flags are kept on this phone until the server has them.{' '}
+              <Link className="text-accent underline" to={paths.outbox.to()}>
+                Waiting to send
+              </Link>
+            </p>
+            <div className="fixed inset-x-0 bottom-16 z-30 border-t border-line bg-surface-raised/95 p-3 sm:static sm:border-0 sm:bg-transparent sm:p-0">
+              {refused && (
+                <p role="alert" className="mb-2 text-sm font-medium text-danger">
+                  Remove or replace the refused photo to flag the jar.
                 </p>
               )}
-              <ChoiceTiles
-                legend="What is growing?"
-                name="contaminant"
-                options={contaminants.map((c) => ({ value: c, label: contaminantNames[c] }))}
-                value={watch('contaminant')}
-                onChange={(v) => v && setValue('contaminant', v, { shouldValidate: true })}
-                error={errors.contaminant ? 'Pick what you see; “unknown” is fine.' : undefined}
-              />
-              <ChoiceTiles
-                legend="Colour"
-                name="signColour"
-                size="chip"
-                clearable
-                options={chips(signSuggestions.signColour)}
-                value={watch('signColour')}
-                onChange={(v) => setValue('signColour', v)}
-              />
-              <ChoiceTiles
-                legend="Smell"
-                name="signSmell"
-                size="chip"
-                clearable
-                options={chips(signSuggestions.signSmell)}
-                value={watch('signSmell')}
-                onChange={(v) => setValue('signSmell', v)}
-              />
-              <ChoiceTiles
-                legend="Texture"
-                name="signTexture"
-                size="chip"
-                clearable
-                options={chips(signSuggestions.signTexture)}
-                value={watch('signTexture')}
-                onChange={(v) => setValue('signTexture', v)}
-              />
-              <ChoiceTiles
-                legend="Severity"
-                name="severity"
-                columns="grid-cols-3"
-                options={incidentSeverities.map((s) => ({ value: s, label: severityLabels[s] }))}
-                value={watch('severity')}
-                onChange={(v) => v && setValue('severity', v)}
-              />
-              <ChoiceTiles
-                legend="Found"
-                name="stage"
-                size="chip"
-                options={stagesFound.map((s) => ({ value: s, label: stageLabels[s] }))}
-                value={watch('stage')}
-                onChange={(v) => v && setValue('stage', v)}
-              />
-              <fieldset className="flex flex-col gap-1">
-                <legend className="mb-1 font-medium">Containment done</legend>
-                <Checkbox label="Sealed (lid closed, tape over the port)" {...register('sealed')} />
-                <Checkbox label="Sterilised before disposal" {...register('sterilisedBeforeDisposal')} />
-              </fieldset>
-              <PhotoPicker onChange={(ids) => setValue('photoIds', ids)} onBusyChange={setUploading} />
-              <NotesField label="Notes" optional error={errors.notes?.message} {...register('notes')} />
-              <div className="fixed inset-x-0 bottom-16 z-30 border-t border-line bg-surface-raised/95 p-3 sm:static sm:border-0 sm:bg-transparent sm:p-0">
-                <Button type="submit" className="w-full" pending={create.isPending} disabled={uploading}>
-                  {uploading ? 'Waiting for photos…' : 'Flag jar'}
-                </Button>
-              </div>
-            </>
-          );
-        }}
-      </Form>
-    </>
+              <Button type="submit" className="w-full" pending={isSubmitting} disabled={refused || checking}>
+                Flag jar
+              </Button>
+            </div>
+          </>
+        );
+      }}
+    </Form>
   );
 }

@@ -9,6 +9,7 @@ import {
   jarSortFields,
   jarStorySchema,
   lineageNodeSchema,
+  shelfPlaceSchema,
   type LineageTreeDto,
 } from '../../../../shared/schemas/jars';
 import { api, apiUrl } from '../../../lib/api-client';
@@ -76,6 +77,11 @@ export const jarsQueries = {
       queryKey: [...jarsQueries.all, 'shelf', room, shelf] as const,
       queryFn: ({ signal }) =>
         api.get('/jars/shelf', { query: { room, shelf }, signal, schema: itemsOf(jarRowSchema) }),
+    }),
+  shelves: () =>
+    queryOptions({
+      queryKey: [...jarsQueries.all, 'shelves'] as const,
+      queryFn: ({ signal }) => api.get('/jars/shelves', { signal, schema: itemsOf(shelfPlaceSchema) }),
     }),
   labels: (query: { sessionId?: number; ids?: string }) =>
     queryOptions({

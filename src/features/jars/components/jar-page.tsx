@@ -8,7 +8,6 @@ import {
   type JarEventInputType,
   type JarStoryDto,
 } from '../../../../shared/schemas/jars';
-import { NotFound } from '../../../components/errors/not-found';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { FullPageSpinner } from '../../../components/ui/spinner';
@@ -20,6 +19,7 @@ import { jarsQueries } from '../api/jars-queries';
 import { eventActions, JarEventDialog } from './jar-event-dialog';
 import { JarStatusBadge } from './jar-status-badge';
 import { JarTimeline } from './jar-timeline';
+import { NoSuchJar } from './no-such-jar';
 
 interface Props {
   label: string;
@@ -96,7 +96,7 @@ export function JarPage({ label, role, canWrite, canFlag }: Props) {
   const story = useQuery(jarsQueries.byLabel(label));
   const [action, setAction] = useState<JarEventInputType | null>(null);
   if (story.isPending) return <FullPageSpinner />;
-  if (isApiError(story.error, 404)) return <NotFound />;
+  if (isApiError(story.error, 404)) return <NoSuchJar label={label} />;
   if (story.error)
     return (
       <Notice tone="danger" title="The jar could not be loaded.">

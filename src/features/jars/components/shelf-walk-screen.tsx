@@ -1,133 +1,120 @@
-import { useQuery } from '@tanstack/react-query';
-import { useState, type FormEvent } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router';
-import { jarEventAllowedFrom, type JarRowDto, type ShelfMark } from '../../../../shared/schemas/jars';
+import type { ShelfMark } from '../../../../shared/schemas/jars';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
-import { Spinner } from '../../../components/ui/spinner';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/api-client';
+import { useOutbox } from '../../../lib/outbox/use-outbox';
 import { jarsQueries } from '../api/jars-queries';
-import { useRecordShelfWalk } from '../api/use-record-shelf-walk';
-import { JarStatusBadge } from './jar-status-badge';
+import { queueMark, undoMark } from '../walk-outbox';
+import { useWalk, type Walk } from '../walk-state';
+import { ShelfChooser } from './shelf-chooser';
 
-const markEvent: Record<ShelfMark, 'check' | 'colonised' | 'shaken'> = {
-  clean: 'check',
-  colonised: 'colonised',
-  shaken: 'shaken',
-};
 const markLabels: Record<ShelfMark, string> = { clean: 'Clean', colonised: 'Colonised', shaken: 'Shaken' };
-const canMark = (jar: JarRowDto, mark: ShelfMark) => jarEventAllowedFrom[markEvent[mark]].includes(jar.status);
 
-function ChooseShelf({ onChoose }: { onChoose: (room: string, shelf: string) => void }) {
-  const submit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const data = new FormData(event.currentTarget);
-    const text = (key: string) => {
-      const value = data.get(key);
-      return typeof value === 'string' ? value.trim() : '';
-    };
-    const room = text('room');
-    const shelf = text('shelf');
-    if (room && shelf) onChoose(room, shelf);
-  };
-  return (
-    <form onSubmit={submit} className="grid gap-4 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-      <TextInput label="Room" name="room" required autoComplete="off" />
-      <TextInput label="Shelf" name="shelf" required autoComplete="off" />
-      <Button type="submit" className="min-h-14 text-lg">
-        Start the walk
-      </Button>
-    </form>
-  );
-}
-
-/** One jar at a time, one tap each; the marks are saved together in one go. */
+/** One jar at a time, one tap each; every mark is saved as it is made, and the walk survives leaving it. */
 export function ShelfWalkScreen({ canFlag }: { canFlag: boolean }) {
+  const [walk, setWalk] = useWalk();
   const [params, setParams] = useSearchParams();
-  const room = params.get('room')?.trim() ?? '';
-  const shelf = params.get('shelf')?.trim() ?? '';
-  const chosen = Boolean(room && shelf);
-  const jars = useQuery({ ...jarsQueries.shelf(room, shelf), enabled: chosen, staleTime: Infinity });
-  const [index, setIndex] = useState(0);
-  const [marks, setMarks] = useState<Map<number, ShelfMark>>(new Map());
-  const save = useRecordShelfWalk();
-  const toast = useToast();
+  const queryClient = useQueryClient();
   const navigate = useNavigate();
+  const { items: queue } = useOutbox();
+  const [starting, setStarting] = useState(false);
+  const [error, setError] = useState<string>();
+  const [busy, setBusy] = useState(false);
 
-  const restart = (nextRoom?: string, nextShelf?: string) => {
-    setIndex(0);
-    setMarks(new Map());
-    save.reset();
-    setParams(nextRoom && nextShelf ? { room: nextRoom, shelf: nextShelf } : {});
-  };
-  const submit = async () => {
-    const body = { marks: [...marks].map(([jarId, mark]) => ({ jarId, mark })) };
-    if (body.marks.length === 0) return true;
+  const start = async (room: string, shelf: string) => {
+    setStarting(true);
+    setError(undefined);
     try {
-      const res = await save.mutateAsync(body);
-      toast.success(`${res.marked} ${res.marked === 1 ? 'jar' : 'jars'} marked on ${room} / ${shelf}.`);
-      return true;
-    } catch {
-      return false;
+      const { items } = await queryClient.fetchQuery({ ...jarsQueries.shelf(room, shelf), staleTime: 0 });
+      setWalk({ room, shelf, jars: items, index: 0, marks: [] });
+      setParams({ room, shelf }, { replace: true });
+    } catch (e) {
+      setError(errorMessage(e));
+    } finally {
+      setStarting(false);
     }
   };
 
-  const list = jars.data?.items ?? [];
-  const jar = list[index];
-  const done = chosen && jars.data && index >= list.length;
-  const mark = (m: ShelfMark) => {
-    if (!jar) return;
-    setMarks(new Map(marks).set(jar.id, m));
-    setIndex(index + 1);
+  // A link to a shelf (from the jars list) preselects it; a walk in progress always resumes first.
+  const wanted = { room: params.get('room')?.trim() ?? '', shelf: params.get('shelf')?.trim() ?? '' };
+
+  const update = (patch: Partial<Walk>) => walk && setWalk({ ...walk, ...patch });
+  const jar = walk?.jars[walk.index];
+  const waiting = new Set(queue?.filter((i) => i.kind === 'mark').map((i) => i.id));
+  const unsent = walk?.marks.filter((m) => waiting.has(m.key)).length ?? 0;
+  const last = walk?.marks.at(-1);
+
+  const mark = async (m: ShelfMark) => {
+    if (!walk || !jar || busy) return;
+    setBusy(true);
+    try {
+      const made = await queueMark(jar, m);
+      update({ marks: [...walk.marks, made], index: walk.index + 1 });
+    } finally {
+      setBusy(false);
+    }
+  };
+  const undo = async () => {
+    if (!walk || !last || busy) return;
+    setBusy(true);
+    try {
+      await undoMark(last);
+      const at = walk.jars.findIndex((j) => j.id === last.jarId);
+      update({ marks: walk.marks.slice(0, -1), index: at >= 0 ? at : walk.index });
+    } finally {
+      setBusy(false);
+    }
+  };
+  const end = () => {
+    setWalk(null);
+    setParams({}, { replace: true });
   };
 
   return (
-    <div className="mx-auto max-w-xl space-y-6">
+    <div className="mx-auto max-w-xl space-y-5">
       <PageHeader
         title="Shelf walk"
-        description={chosen ? `${room} / ${shelf}` : 'Go along a shelf and mark each jar with one tap.'}
+        description={
+          walk ? `${walk.room} / ${walk.shelf}` : 'Go along a shelf and mark each incubating jar with one tap.'
+        }
         actions={
-          chosen && (
-            <Button variant="ghost" onClick={() => restart()}>
+          walk && (
+            <Button variant="ghost" onClick={end}>
               Change shelf
             </Button>
           )
         }
       />
-      {!chosen && <ChooseShelf onChoose={(r, s) => restart(r, s)} />}
-      {chosen && jars.isPending && <Spinner label="Loading the shelf" />}
-      {jars.error && (
+      {error && (
         <Notice tone="danger" title="The shelf could not be loaded.">
-          {errorMessage(jars.error)}
+          {error}
         </Notice>
       )}
-      {chosen && jars.data && list.length === 0 && <EmptyState title="No jars on this shelf." />}
+      {!walk && <ShelfChooser initial={wanted} onChoose={(r, s) => void start(r, s)} busy={starting} />}
+      {walk && walk.jars.length === 0 && <EmptyState title="No jars are incubating on this shelf." />}
 
-      {jar && (
+      {walk && jar && (
         <section
-          aria-label={`Jar ${index + 1} of ${list.length}`}
-          className="space-y-5 rounded-xl border border-line bg-surface-raised p-5"
+          aria-label={`Jar ${walk.index + 1} of ${walk.jars.length}`}
+          className="space-y-4 rounded-xl border border-line bg-surface-raised p-4"
         >
           <p className="text-lg font-medium text-muted" aria-live="polite">
-            {index + 1} of {list.length}
+            {walk.index + 1} of {walk.jars.length}
           </p>
           <div className="space-y-1">
-            <Link
-              to={paths.jarPage.to(jar.label)}
-              className="font-mono text-4xl font-semibold text-accent underline-offset-4 hover:underline"
-            >
+            <Link to={paths.jarPage.to(jar.label)} className="font-mono text-4xl font-semibold text-accent">
               {jar.label}
             </Link>
             <p className="text-muted">
               {jar.grain} · {jar.cultureCode ?? (jar.parentJarLabel ? `from ${jar.parentJarLabel}` : '—')}
               {jar.shelfPosition ? ` · place ${jar.shelfPosition}` : ''}
             </p>
-            <JarStatusBadge status={jar.status} />
           </div>
           <div className="grid grid-cols-3 gap-3">
             {(['clean', 'colonised', 'shaken'] as const).map((m) => (
@@ -135,8 +122,8 @@ export function ShelfWalkScreen({ canFlag }: { canFlag: boolean }) {
                 key={m}
                 className="min-h-16 text-lg"
                 variant={m === 'clean' ? 'primary' : 'secondary'}
-                disabled={!canMark(jar, m)}
-                onClick={() => mark(m)}
+                disabled={busy}
+                onClick={() => void mark(m)}
               >
                 {markLabels[m]}
               </Button>
@@ -147,52 +134,50 @@ export function ShelfWalkScreen({ canFlag }: { canFlag: boolean }) {
               <Button
                 variant="danger"
                 className="min-h-14 text-lg"
-                pending={save.isPending}
-                onClick={async () => {
-                  if (await submit()) void navigate(paths.flagJar.to(jar.label));
+                onClick={() => {
+                  update({ index: walk.index + 1 });
+                  void navigate(paths.flagJar.to(jar.label), { state: { back: paths.shelfWalk.to() } });
                 }}
               >
                 Flag
               </Button>
             )}
-            <Button variant="ghost" className="min-h-14 text-lg" onClick={() => setIndex(index + 1)}>
-              Next
+            <Button variant="ghost" className="min-h-14 text-lg" onClick={() => update({ index: walk.index + 1 })}>
+              Skip
             </Button>
           </div>
-          {marks.size > 0 && (
-            <p className="text-muted">{marks.size} marked so far; they are saved at the end of the shelf.</p>
-          )}
         </section>
       )}
 
-      {done && list.length > 0 && (
-        <section className="space-y-4">
+      {walk && walk.jars.length > 0 && !jar && (
+        <section className="space-y-3">
           <p className="text-lg font-medium">
-            End of the shelf: {marks.size} of {list.length} marked.
+            End of the shelf: {walk.marks.length} of {walk.jars.length} marked.
           </p>
-          {save.error && (
-            <Notice tone="danger" title="The walk was not saved; nothing was written.">
-              {errorMessage(save.error)}
-            </Notice>
-          )}
-          {save.isSuccess ? (
-            <Link to={paths.jars.to({ room, shelf })} className={buttonClasses('secondary', 'w-full')}>
-              See this shelf’s jars
-            </Link>
-          ) : (
-            <Button
-              className="min-h-14 w-full text-lg"
-              pending={save.isPending}
-              disabled={marks.size === 0}
-              onClick={() => void submit()}
-            >
-              Save {marks.size} {marks.size === 1 ? 'mark' : 'marks'}
-            </Button>
-          )}
-          <Button variant="ghost" className="w-full" onClick={() => restart(room, shelf)}>
-            Walk the shelf again from the start
+          <Link
+            to={paths.jars.to({ room: walk.room, shelf: walk.shelf })}
+            className={buttonClasses('secondary', 'w-full')}
+          >
+            See this shelf’s jars
+          </Link>
+          <Button variant="ghost" className="w-full" onClick={end}>
+            Walk another shelf
           </Button>
         </section>
+      )}
+
+      {walk && (
+        <div className="flex items-center justify-between gap-3">
+          <p className="text-sm text-muted" data-testid="walk-saved">
+            {walk.marks.length} marked
+            {unsent ? ` · ${unsent} waiting to send` : walk.marks.length ? ' · all saved' : ''}
+          </p>
+          {last && (
+            <Button variant="secondary" disabled={busy} onClick={() => void undo()}>
+              Undo {last.label} ({markLabels[last.mark].toLowerCase()})
+            </Button>
+          )}
+        </div>
       )}
     </div>
   );

@@ -1,0 +1,28 @@
+import path from 'node:path';
+import express, { type Express } from 'express';
+
+const year = 365 * 24 * 60 * 60;
+
+/**
+ * The built client. Vite names every file under assets/ by its content hash, so those never change
+ * and are cached for a year; the page, the service worker and the manifest are checked every time
+ * so a new version reaches phones at once.
+ */
+export function serveClient(app: Express, staticDir: string): void {
+  app.use(
+    express.static(staticDir, {
+      index: false,
+      setHeaders(res, file) {
+        const rel = path.relative(staticDir, file).split(path.sep).join('/');
+        if (rel.startsWith('assets/')) res.setHeader('Cache-Control', `public, max-age=${year}, immutable`);
+        else if (rel === 'sw.js' || rel.endsWith('.webmanifest') || rel.endsWith('.html'))
+          res.setHeader('Cache-Control', 'no-cache');
+        else res.setHeader('Cache-Control', 'public, max-age=86400');
+      },
+    }),
+  );
+  app.get('/{*splat}', (_req, res) => {
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(path.join(staticDir, 'index.html'));
+  });
+}
