@@ -1,5 +1,6 @@
 import type { Factor } from '../../shared/enums';
 import type { ActionSummary } from '../../shared/schemas/analysis';
+import type { LogPlacement } from '../../shared/stats/cook-verdict';
 import { dataSource } from '../db/data-source';
 import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
@@ -133,6 +134,7 @@ export interface LethalityRawRow {
   altitudeM: number;
   f0: number | null;
   f0Source: 'log' | 'estimate' | null;
+  logPlacement: LogPlacement | null;
   jars: number;
   contaminated: number;
 }
@@ -255,7 +257,7 @@ export const analysisRepository = {
     const jarFilter = on.length ? `AND ${on.join(' AND ')}` : '';
     const having = on.length ? `HAVING COUNT(j.id) > 0 OR (${cooked.join(' AND ')})` : '';
     const raw = await dataSource.query<Raw>(
-      `SELECT cr.code, cr.cookedOn, cr.container, cr.minutesAtPressure, cr.gaugeKPa, cr.altitudeM, cr.f0, cr.f0Source,
+      `SELECT cr.code, cr.cookedOn, cr.container, cr.minutesAtPressure, cr.gaugeKPa, cr.altitudeM, cr.f0, cr.f0Source, cr.logPlacement,
           COUNT(j.id) AS jars, SUM(cj.jarId IS NOT NULL) AS contaminated
         FROM cook_runs cr
         LEFT JOIN jars j ON j.cookRunId = cr.id ${jarFilter}
@@ -273,6 +275,7 @@ export const analysisRepository = {
       altitudeM: num(r.altitudeM),
       f0: r.f0 === null ? null : num(r.f0),
       f0Source: (r.f0Source as LethalityRawRow['f0Source']) ?? null,
+      logPlacement: (r.logPlacement as LogPlacement | null) ?? null,
       jars: num(r.jars),
       contaminated: num(r.contaminated),
     }));

@@ -11,6 +11,7 @@ import type {
   WeeklyRow,
 } from '../../shared/schemas/analysis';
 import { kaplanMeier } from '../../shared/stats/kaplan-meier';
+import { judgeCook } from '../../shared/stats/cook-verdict';
 import { f0AtConstant } from '../../shared/stats/lethality';
 import { pChartLimits } from '../../shared/stats/p-chart';
 import { psiToKPa, sterilisingTemperatureC } from '../../shared/stats/steam';
@@ -151,6 +152,7 @@ export async function weeklyTable(p: Period = {}): Promise<WeeklyDto> {
       // DESIGN.md §4.4: only above the upper limit is out of control; below the lower one is a good signal.
       outOfControl: charted && rate > limits.ucl,
       belowLcl: charted && rate < limits.lcl,
+      aboveTarget: !isProvisional && rate > settings.contaminationTarget,
       provisional: isProvisional,
       grains: w.grains.map((g) => ({
         grain: g.grain,
@@ -165,6 +167,7 @@ export async function weeklyTable(p: Period = {}): Promise<WeeklyDto> {
     from: period.from,
     to: period.to,
     pBar: Number.isNaN(chart.pBar) ? null : chart.pBar,
+    target: settings.contaminationTarget,
     observationWindowDays: settings.observationWindowDays,
     weeks: rows,
   };
@@ -213,14 +216,16 @@ function estimateF0(minutes: number, gaugeKPa: number, altitudeM: number): numbe
 
 export async function lethality(p: Period): Promise<LethalityDto> {
   const [settings, runs] = await Promise.all([getLabSettings(), analysisRepository.lethality(p)]);
-  const target = settings.lethalityTarget;
+  const rule = { lethalityTarget: settings.lethalityTarget, containerMinutes: settings.containerMinutes };
   return {
     from: p.from ?? null,
     to: p.to ?? null,
-    target,
+    target: rule.lethalityTarget,
+    containerMinutes: rule.containerMinutes,
     runs: runs.map((r) => {
       const assumedGauge = r.f0 === null && r.gaugeKPa === null;
       const f0 = r.f0 ?? estimateF0(r.minutesAtPressure, r.gaugeKPa ?? psiToKPa(USUAL_GAUGE_PSI), r.altitudeM);
+      const f0Source = r.f0 !== null ? r.f0Source : f0 === null ? null : 'estimate';
       return {
         cookRun: r.code,
         cookedOn: r.cookedOn,
@@ -229,9 +234,10 @@ export async function lethality(p: Period): Promise<LethalityDto> {
         gaugeKPa: r.gaugeKPa,
         altitudeM: r.altitudeM,
         f0,
-        f0Source: r.f0 !== null ? r.f0Source : f0 === null ? null : 'estimate',
+        f0Source,
+        logPlacement: r.logPlacement,
         assumedGauge,
-        belowTarget: f0 !== null && f0 < target,
+        ...judgeCook({ ...r, f0, f0Source }, rule),
         jars: r.jars,
         contaminated: r.contaminated,
         rate: r.jars > 0 ? r.contaminated / r.jars : null,

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { logPlacements, type LogPlacement } from '../../shared/stats/cook-verdict';
 
 @Entity({ name: 'cook_runs' })
 export class CookRun {
@@ -50,6 +51,10 @@ export class CookRun {
 
   @Column({ type: 'enum', enum: ['log', 'estimate'], nullable: true })
   f0Source: 'log' | 'estimate' | null;
+
+  /** Where the logged probe sat: only a jar-centre log is held to the F0 target (DESIGN §4.6). */
+  @Column({ type: 'enum', enum: logPlacements, nullable: true })
+  logPlacement: LogPlacement | null;
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;

@@ -1,6 +1,7 @@
 import type { EntityManager, SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { CookRunFilters, CookRunListQuery } from '../../shared/schemas/cook-runs';
+import type { CookRule } from '../../shared/stats/cook-verdict';
 import type { TemperatureSample } from '../../shared/stats/lethality';
 import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
 import { dataSource } from '../db/data-source';
@@ -19,13 +20,35 @@ const sort: SortSpec = {
   tieBreak: 'cr.id',
 };
 
-function filtered(f: CookRunFilters, lethalityTarget: number): SelectQueryBuilder<CookRun> {
+/**
+ * The SQL twin of judgeCook (shared/stats/cook-verdict.ts): a centre-probe log against the F0 target,
+ * anything else by minutes against the container's minimum; a container with no minimum is not judged.
+ */
+function belowTargetSql(rule: CookRule): { sql: string; params: Record<string, unknown> } {
+  const params: Record<string, unknown> = { target: rule.lethalityTarget };
+  const whens = Object.entries(rule.containerMinutes).map(([name, minutes], i) => {
+    params[`cn${i}`] = name.trim().toLowerCase();
+    params[`cm${i}`] = minutes;
+    return `WHEN LOWER(TRIM(cr.container)) = :cn${i} THEN :cm${i}`;
+  });
+  const minimum = whens.length ? `(CASE ${whens.join(' ')} ELSE NULL END)` : 'NULL';
+  const centre = "cr.f0Source = 'log' AND cr.logPlacement = 'centre' AND cr.f0 IS NOT NULL";
+  return {
+    sql: `COALESCE(CASE WHEN ${centre} THEN cr.f0 < :target ELSE cr.minutesAtPressure < ${minimum} END, 0) = 1`,
+    params,
+  };
+}
+
+function filtered(f: CookRunFilters, rule: CookRule): SelectQueryBuilder<CookRun> {
   const qb = dataSource.manager.createQueryBuilder(CookRun, 'cr');
   whereContains(qb, ['cr.code', 'cr.vessel', 'cr.operatorName', 'cr.notes'], f.q);
   if (f.container) qb.andWhere('cr.container = :container', { container: f.container });
   whereDateRange(qb, 'cr.cookedOn', f);
-  if (f.lowLethality === 'true') qb.andWhere('cr.f0 < :target', { target: lethalityTarget });
-  if (f.lowLethality === 'false') qb.andWhere('cr.f0 >= :target', { target: lethalityTarget });
+  const below = f.belowTarget ?? f.lowLethality;
+  if (below) {
+    const { sql, params } = belowTargetSql(rule);
+    qb.andWhere(below === 'true' ? sql : `NOT (${sql})`, params);
+  }
   return qb;
 }
 
@@ -33,10 +56,9 @@ export const cookRunsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { id }),
   findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { code }),
 
-  list: (q: CookRunListQuery, lethalityTarget: number): Promise<[CookRun[], number]> =>
-    pageSorted(filtered(q, lethalityTarget), q, sort),
-  all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, lethalityTarget: number) =>
-    allSorted(() => filtered(q, lethalityTarget), q.sort, sort),
+  list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], number]> => pageSorted(filtered(q, rule), q, sort),
+  all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, rule: CookRule) =>
+    allSorted(() => filtered(q, rule), q.sort, sort),
 
   readingsCount: (cookRunId: number) => dataSource.manager.countBy(CookRunReading, { cookRunId }),
   readings: (cookRunId: number) =>

@@ -1,6 +1,11 @@
 import express, { Router, type RequestHandler } from 'express';
 import multer from 'multer';
-import { cookRunListQuerySchema, createCookRunSchema, updateCookRunSchema } from '../../shared/schemas/cook-runs';
+import {
+  cookRunListQuerySchema,
+  createCookRunSchema,
+  readingsUploadQuerySchema,
+  updateCookRunSchema,
+} from '../../shared/schemas/cook-runs';
 import { currentUser } from '../core/auth-guards';
 import { badRequest, unprocessable } from '../core/errors';
 import {
@@ -57,6 +62,8 @@ cookRunsRouter.post('/:id/readings', requireWriter, validId, readLog, async (req
       { path: 'file', message: 'is missing: send a CSV of elapsed minutes and °C' },
     ]);
   }
+  // The placement travels in the query (raw CSV body) or beside the file (multipart).
+  const { placement } = readingsUploadQuerySchema.parse({ ...req.query, ...(req.file ? req.body : {}) });
   const { samples, errors } = parseReadingsCsv(text);
   if (errors.length) {
     const issues = errors.slice(0, shownIssues).map((e) => ({
@@ -70,7 +77,7 @@ cookRunsRouter.post('/:id/readings', requireWriter, validId, readLog, async (req
       issues,
     );
   }
-  res.json(await replaceCookRunReadings(currentUser(req), id, samples));
+  res.json(await replaceCookRunReadings(currentUser(req), id, samples, placement));
 });
 
 cookRunsRouter.delete('/:id/readings', requireWriter, validId, async (req, res) => {

@@ -8,6 +8,7 @@ import type {
   CreateCookRunValues,
   UpdateCookRunInput,
 } from '../../shared/schemas/cook-runs';
+import type { CookRule, LogPlacement } from '../../shared/stats/cook-verdict';
 import { f0FromLog, lethalRate, type TemperatureSample } from '../../shared/stats/lethality';
 import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
@@ -21,7 +22,10 @@ import { CookRun } from './cook-run.entity';
 import { cookRunsRepository } from './cook-runs.repository';
 import { toCookRunDto } from './cook-runs.mapper';
 
-const target = async () => (await getLabSettings()).lethalityTarget;
+const target = async (): Promise<CookRule> => {
+  const s = await getLabSettings();
+  return { lethalityTarget: s.lethalityTarget, containerMinutes: s.containerMinutes };
+};
 
 export async function listCookRuns(q: CookRunListQuery): Promise<Page<CookRunDto>> {
   const t = await target();
@@ -137,6 +141,7 @@ export async function getCookRunReadings(id: number): Promise<CookRunReadingsDto
     cookRunId: id,
     f0: run.f0,
     f0Source: run.f0Source,
+    logPlacement: run.logPlacement,
     readings: rows.map((r) => ({ minute: r.minute, celsius: r.celsius, lethalRate: lethalRate(r.celsius) })),
   };
 }
@@ -150,6 +155,7 @@ export async function replaceCookRunReadings(
   actor: Actor,
   id: number,
   samples: TemperatureSample[],
+  placement: LogPlacement,
 ): Promise<CookRunDetailDto> {
   await dataSource.transaction(async (m) => {
     const run = await cookRunsRepository.findById(id, m);
@@ -166,6 +172,18 @@ export async function replaceCookRunReadings(
         newValue: f0,
         reason: `temperature log of ${samples.length} readings`,
       },
+      ...(run.logPlacement === placement
+        ? []
+        : [
+            {
+              action: 'readings',
+              recordType: 'cook-run',
+              recordId: id,
+              field: 'logPlacement',
+              oldValue: run.logPlacement,
+              newValue: placement,
+            },
+          ]),
       ...(run.f0Source === 'log'
         ? []
         : [
@@ -179,7 +197,7 @@ export async function replaceCookRunReadings(
             },
           ]),
     ]);
-    await m.update(CookRun, { id }, { f0, f0Source: 'log' });
+    await m.update(CookRun, { id }, { f0, f0Source: 'log', logPlacement: placement });
   });
   return getCookRun(id);
 }
@@ -210,7 +228,7 @@ export async function removeCookRunReadings(actor: Actor, id: number): Promise<C
         newValue: 'estimate',
       },
     ]);
-    await m.update(CookRun, { id }, { f0, f0Source: 'estimate' });
+    await m.update(CookRun, { id }, { f0, f0Source: 'estimate', logPlacement: null });
   });
   return getCookRun(id);
 }

@@ -100,6 +100,7 @@ export async function jarStory(find: { id: number } | { label: string }): Promis
           container: cookRun.container,
           f0: cookRun.f0,
           f0Source: cookRun.f0Source,
+          logPlacement: cookRun.logPlacement,
         }
       : null,
     session: session

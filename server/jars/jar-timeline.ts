@@ -40,7 +40,9 @@ export function buildTimeline(s: Omit<JarStoryDto, 'timeline' | 'pageUrl'>): Tim
     const f0 =
       cookRun.f0 === null
         ? null
-        : `F0 ${cookRun.f0.toFixed(1)} min (${cookRun.f0Source === 'log' ? 'from the temperature log' : 'estimate, an upper bound'})`;
+        : cookRun.f0Source === 'log' && cookRun.logPlacement === 'centre'
+          ? `F0 ${cookRun.f0.toFixed(1)} min (probe at the jar centre)`
+          : `F0 at most ${cookRun.f0.toFixed(1)} min (${cookRun.f0Source === 'log' ? 'chamber log' : 'estimate'}, an upper bound)`;
     t.push({
       at: cookRun.startedAt ?? cookRun.cookedOn ?? jar.inoculatedOn,
       kind: 'cook-run',

@@ -14,6 +14,17 @@ export class LabSettings {
   @Column({ type: 'double', default: 15 })
   lethalityTarget: number;
 
+  /**
+   * Least whole minutes at pressure per container, judging runs without a centre-probe log
+   * (DESIGN §4.6). Filled by the HonestLethalityTargets migration.
+   */
+  @Column({ type: 'json' })
+  containerMinutes: Record<string, number>;
+
+  /** The contamination rate the lab accepts, a fraction; weeks above it are marked (DESIGN §4.4). */
+  @Column({ type: 'double' })
+  contaminationTarget: number;
+
   @Column({ type: 'int', default: 21 })
   observationWindowDays: number;
 

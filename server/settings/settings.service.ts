@@ -14,6 +14,8 @@ export async function getLabSettings(manager: EntityManager = dataSource.manager
 export const toLabSettingsDto = (s: LabSettings): LabSettingsDto => ({
   cookBucketEdges: s.cookBucketEdges,
   lethalityTarget: s.lethalityTarget,
+  containerMinutes: s.containerMinutes,
+  contaminationTarget: s.contaminationTarget,
   observationWindowDays: s.observationWindowDays,
   clusterIncidents: s.clusterIncidents,
   clusterDays: s.clusterDays,

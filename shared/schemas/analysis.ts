@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { factorSchema, type Factor } from '../enums';
+import type { CookJudgedBy, LogPlacement } from '../stats/cook-verdict';
 import { idSchema, localDateSchema } from './common';
 
 const formatSchema = z.enum(['json', 'csv']).default('json');
@@ -175,6 +176,8 @@ export interface WeeklyRow {
   outOfControl: boolean;
   /** Below the lower limit: unusually few, a good signal and never an alarm. */
   belowLcl: boolean;
+  /** Settled and above the lab's accepted rate, in control or not (DESIGN §4.4). */
+  aboveTarget: boolean;
   provisional: boolean;
   grains: WeeklyGrain[];
 }
@@ -183,6 +186,8 @@ export interface WeeklyDto {
   from: string;
   to: string;
   pBar: number | null;
+  /** The contamination rate the lab accepts (a lab setting), a fraction. */
+  target: number;
   observationWindowDays: number;
   weeks: WeeklyRow[];
 }
@@ -212,8 +217,15 @@ export interface LethalityRow {
   f0: number | null;
   /** log: from the temperature log; estimate: minutes at the steam temperature (an upper bound). */
   f0Source: 'log' | 'estimate' | null;
+  /** Where the logged probe sat; null without a log. */
+  logPlacement: LogPlacement | null;
   /** The gauge was not recorded, so the estimate assumes the usual 15 psi set-point. */
   assumedGauge: boolean;
+  /** centre-probe: F0 against the target; minutes: minutes at pressure against the container's minimum. */
+  judgedBy: CookJudgedBy;
+  /** The F0 is a chamber figure or an estimate: an upper bound that cannot pass the run. */
+  f0UpperBound: boolean;
+  minimumMinutes: number | null;
   belowTarget: boolean;
   jars: number;
   contaminated: number;
@@ -224,6 +236,7 @@ export interface LethalityDto {
   from: string | null;
   to: string | null;
   target: number;
+  containerMinutes: Record<string, number>;
   runs: LethalityRow[];
 }
 

@@ -8,6 +8,11 @@ import {
   recordedInstantSchema,
 } from './common';
 import { registerCodeSchema } from './grain';
+import { logPlacements } from '../stats/cook-verdict';
+
+export const logPlacementSchema = z.enum(logPlacements, { error: 'must be chamber or centre' });
+/** How the screen names where the logged probe sat. */
+export const logPlacementLabels = { chamber: 'chamber probe', centre: 'probe at the jar centre' } as const;
 
 export const f0Sources = ['log', 'estimate'] as const;
 export type F0Source = (typeof f0Sources)[number];
@@ -42,6 +47,13 @@ export const cookRunSchema = z.object({
   /** Saturated-steam temperature at the gauge pressure (or 103.4 kPa when none was read) and site altitude. */
   sterilisingTemperatureC: z.number().nullable(),
   lethalityTarget: z.number(),
+  logPlacement: logPlacementSchema.nullable(),
+  /** centre-probe: F0 against the target; minutes: minutes at pressure against the container's minimum. */
+  judgedBy: z.enum(['centre-probe', 'minutes', 'unjudged']),
+  f0UpperBound: z.boolean(),
+  minimumMinutes: z.number().int().nullable(),
+  belowTarget: z.boolean(),
+  /** Same as belowTarget; kept for clients that read the older name. */
   lowLethality: z.boolean(),
   notes: z.string().nullable(),
   createdAt: z.string(),
@@ -88,6 +100,8 @@ export const cookRunFiltersSchema = z.object({
   q: z.string().trim().max(80).optional(),
   container: z.string().trim().max(40).optional(),
   ...dateRangeShape,
+  belowTarget: z.enum(['true', 'false']).optional(),
+  /** The older name of belowTarget. */
   lowLethality: z.enum(['true', 'false']).optional(),
 });
 export const cookRunListQuerySchema = listQueryOf(cookRunFiltersSchema);
@@ -101,9 +115,12 @@ export const cookRunReadingsSchema = z.object({
   cookRunId: z.number().int(),
   f0: z.number().nullable(),
   f0Source: z.enum(f0Sources).nullable(),
+  logPlacement: logPlacementSchema.nullable(),
   readings: z.array(cookRunReadingSchema),
 });
 export type CookRunReadingsDto = z.infer<typeof cookRunReadingsSchema>;
+
+export const readingsUploadQuerySchema = z.object({ placement: logPlacementSchema.default('chamber') });
 
 /** Column names a temperature log may use, compared case-insensitively. */
 export const readingMinuteHeaders = ['minute', 'minutes', 'elapsed_min'] as const;

@@ -350,6 +350,7 @@ export const jarStorySchema = z.object({
       container: z.string().nullable(),
       f0: z.number().nullable(),
       f0Source: z.enum(['log', 'estimate']).nullable(),
+      logPlacement: z.enum(['chamber', 'centre']).nullable(),
     })
     .nullable(),
   session: z

@@ -6,6 +6,7 @@ import { factors, type Factor } from '../../shared/enums';
 import type { CauseRow, CausesDto, CrosstabDto, RatesDto, WeeklyDto } from '../../shared/schemas/analysis';
 import { wilsonInterval } from '../../shared/stats/wilson';
 import { localDate } from '../../server/core/local-time';
+import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import {
@@ -419,6 +420,22 @@ describe('GET /api/analysis/weekly', () => {
     }
     const shortWeek = isoWeekLabel(addDays(planted.firstMonday, 7 * planted.shortRunWeek));
     expect(body.weeks.find((w) => w.week === shortWeek)!.outOfControl).toBe(true);
+  });
+
+  it('marks a settled week above the lab target even when it is in control (DESIGN §4.4)', async () => {
+    expect(body.target).toBe(0.05);
+    for (const w of body.weeks) expect(w.aboveTarget).toBe(!w.provisional && w.rate > body.target);
+    const calm = body.weeks.filter((w) => !w.provisional && !w.outOfControl && w.rate > 0);
+    const highest = calm.sort((a, b) => b.rate - a.rate)[0]!;
+    await dataSource.query('UPDATE lab_settings SET contaminationTarget = ? WHERE id = 1', [highest.rate / 2]);
+    try {
+      const res = await reader.agent.get(`/api/analysis/weekly?from=${planted.firstMonday}&to=${today}`);
+      const week = (res.body as WeeklyDto).weeks.find((w) => w.week === highest.week)!;
+      expect(week).toMatchObject({ outOfControl: false, aboveTarget: true });
+      expect((res.body as WeeklyDto).weeks.find((w) => w.provisional)!.aboveTarget).toBe(false);
+    } finally {
+      await dataSource.query('UPDATE lab_settings SET contaminationTarget = 0.05 WHERE id = 1');
+    }
   });
 
   it('defaults to the last twelve ISO weeks', async () => {

@@ -1,7 +1,8 @@
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { CookRunReading } from '../../server/cook-runs/cook-run-reading.entity';
 import { dataSource } from '../../server/db/data-source';
+import { defaultContainerMinutes } from '../../shared/stats/cook-verdict';
 import { createTestApp } from '../setup/test-app';
 import { anonymousStatuses, postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 
@@ -25,9 +26,17 @@ const cycleCelsius = [100, 105, 110, 115, 118, 120, ...Array<number>(10).fill(12
 const cycleCsv = (header: string, eol = '\n') => [header, ...cycleCelsius.map((c, m) => `${m},${c}`)].join(eol) + eol;
 
 let tech: Client;
+let admin: Client;
 beforeAll(async () => {
   tech = await signedIn(app, 'technician');
+  admin = await signedIn(app, 'admin');
 });
+// Other files sharing this worker's database read the default container minimums.
+afterAll(() =>
+  dataSource.query('UPDATE lab_settings SET containerMinutes = ? WHERE id = 1', [
+    JSON.stringify(defaultContainerMinutes),
+  ]),
+);
 
 const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/cook-runs', body);
 const postLog = (client: Client, id: number, csv: string) => postCsvAs(client, `/api/cook-runs/${id}/readings`, csv);
@@ -110,7 +119,7 @@ describe('/api/cook-runs lethality', () => {
     // 1 psi = 6894.757 Pa (NIST SP 811, 2008, appendix B.8 — quoted from memory), so 103.4 kPa reads as 15.00 psi.
     expect(res.body.gaugePsi).toBeCloseTo(15.0, 2);
     expect(res.body.readingsCount).toBe(0);
-    expect(res.body.lowLethality).toBe(false);
+    expect(res.body.belowTarget).toBe(false);
     expect(res.body.lethalityTarget).toBe(15);
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'cook-run',
@@ -129,18 +138,30 @@ describe('/api/cook-runs lethality', () => {
     expect(Math.round(res.body.f0)).toBe(47);
   });
 
-  it('flags a run below the lab target and filters on lowLethality', async () => {
-    // TRADE.md §3 [COMP]: 10 psig (68.95 kPa) at sea level → 115.20 °C; 10 min gives F0 ≈ 2.57, below the default 15.
+  it('judges a run without a jar-centre log by its minutes against the container minimum, whatever its F0', async () => {
+    // DESIGN §4.6: 45 min of 1 L jars has an estimated F0 ≈ 43.5 (120.95 °C, TRADE.md §3 [COMP]) — far above
+    // the F0 target of 15, yet below the 90-min minimum for 1 L jars (TRADE.md §1, common practice).
     const container = uniqueName('bag');
-    const low = (await create(tech, newRun({ gaugeKPa: 68.948, minutesAtPressure: 10, container }))).body;
+    await sendAs(admin, 'patch', '/api/settings', {
+      containerMinutes: { ...defaultContainerMinutes, [container]: 90 },
+    }).expect(200);
+    const short = (await create(tech, newRun({ minutesAtPressure: 45, container }))).body;
     const good = (await create(tech, newRun({ container }))).body;
-    expect(low.sterilisingTemperatureC).toBeCloseTo(115.2, 1);
-    expect(low.f0).toBeCloseTo(10 * 10 ** ((115.2 - 121.1) / 10), 1);
-    expect(low.lowLethality).toBe(true);
-    const flagged = await tech.agent.get(`/api/cook-runs?container=${encodeURIComponent(container)}&lowLethality=true`);
-    expect(flagged.body.items.map((r: { id: number }) => r.id)).toEqual([low.id]);
-    const fine = await tech.agent.get(`/api/cook-runs?container=${encodeURIComponent(container)}&lowLethality=false`);
-    expect(fine.body.items.map((r: { id: number }) => r.id)).toEqual([good.id]);
+    expect(short.f0).toBeCloseTo(45 * 10 ** ((120.95 - 121.1) / 10), 0);
+    expect(short).toMatchObject({ judgedBy: 'minutes', minimumMinutes: 90, f0UpperBound: true, belowTarget: true });
+    expect(good).toMatchObject({ judgedBy: 'minutes', belowTarget: false });
+    const ids = async (query: string) =>
+      (await tech.agent.get(`/api/cook-runs?container=${encodeURIComponent(container)}&${query}`)).body.items.map(
+        (r: { id: number }) => r.id,
+      );
+    expect(await ids('belowTarget=true')).toEqual([short.id]);
+    expect(await ids('belowTarget=false')).toEqual([good.id]);
+    expect(await ids('lowLethality=true')).toEqual([short.id]);
+  });
+
+  it('leaves a run unjudged when its container has no minimum', async () => {
+    const res = await create(tech, newRun({ minutesAtPressure: 5, container: uniqueName('crate') }));
+    expect(res.body).toMatchObject({ judgedBy: 'unjudged', minimumMinutes: null, belowTarget: false });
   });
 
   it('computes F0 from an uploaded log (text/csv, BOM, CRLF, any header case) and stores every reading', async () => {
@@ -151,7 +172,9 @@ describe('/api/cook-runs lethality', () => {
     expect(res.body.f0Source).toBe('log');
     expect(res.body.f0Label).toBe('from temperature log');
     expect(res.body.readingsCount).toBe(21);
-    expect(res.body.lowLethality).toBe(true);
+    // A log of unstated placement counts as a chamber log: an upper bound that cannot fail or pass on F0.
+    expect(res.body).toMatchObject({ logPlacement: 'chamber', judgedBy: 'minutes', f0UpperBound: true });
+    expect(res.body.belowTarget).toBe(false);
     const readings = await tech.agent.get(`/api/cook-runs/${run.id}/readings`);
     expect(readings.body.readings).toHaveLength(21);
     // L(115) = 0.24547 and L(121.0) = 0.97724 — TRADE.md §3 [COMP], same sources as above.
@@ -165,6 +188,18 @@ describe('/api/cook-runs lethality', () => {
       field: 'f0',
     });
     expect(Number(audit?.newValue)).toBeCloseTo(12.239, 3);
+  });
+
+  it('holds a jar-centre log to the F0 target and refuses an unknown placement', async () => {
+    const run = (await create(tech, newRun())).body;
+    const res = await postCsvAs(tech, `/api/cook-runs/${run.id}/readings?placement=centre`, cycleCsv('minute,celsius'));
+    expect(res.status).toBe(200);
+    // F0 12.239 from the cycle of TRADE.md §3 [COMP] is below the default target of 15.
+    expect(res.body).toMatchObject({ logPlacement: 'centre', judgedBy: 'centre-probe', f0UpperBound: false });
+    expect(res.body.belowTarget).toBe(true);
+    const bad = await postCsvAs(tech, `/api/cook-runs/${run.id}/readings?placement=lid`, cycleCsv('minute,celsius'));
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.issues[0].path).toBe('placement');
   });
 
   it('accepts the multipart field file and replaces an earlier log', async () => {
@@ -285,7 +320,7 @@ describe('/api/cook-runs editing, listing and export', () => {
       .trim()
       .split('\r\n');
     expect(lines[0]).toBe(
-      'code,cooked_on,started_at,vessel,container,minutes_at_pressure,gauge_kpa,gauge_psi,venting_minutes,altitude_m,load_count,operator,f0,f0_source,below_target,notes',
+      'code,cooked_on,started_at,vessel,container,minutes_at_pressure,gauge_kpa,gauge_psi,venting_minutes,altitude_m,load_count,operator,f0,f0_source,log_placement,judged_by,minimum_minutes,below_target,notes',
     );
     expect(lines).toHaveLength(3);
     const codes = [a.code, b.code].sort();

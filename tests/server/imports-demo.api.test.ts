@@ -1,6 +1,6 @@
 import { IsNull, Not } from 'typeorm';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { CausesDto, RatesDto } from '../../shared/schemas/analysis';
+import type { CausesDto, LethalityDto, RatesDto, WeeklyDto } from '../../shared/schemas/analysis';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
 import { GrainLot } from '../../server/grain/grain-lot.entity';
@@ -11,7 +11,7 @@ import { addDays, isoWeek, mondayOf } from '../../seed/demo-calendar';
 import { planDemoGrain } from '../../seed/demo-grain';
 import { demoWeeks, planDemoHistory, type PlanJar } from '../../seed/demo-history';
 import { loadDemoLab } from '../../seed/demo-lab';
-import { plantedProblems, sloppyIsoWeek } from '../../seed/planted-problems';
+import { plantedProblems, sloppyIsoWeek, weekBefore } from '../../seed/planted-problems';
 import { signedIn } from '../setup/factories';
 import { createTestApp } from '../setup/test-app';
 
@@ -224,6 +224,29 @@ describe('loadDemoLab', () => {
     const firstBatch = causes.findIndex((c) => c.factor === 'prepBatch');
     expect(rank(plantedProblems.shortCookRun.code)).toBeLessThan(firstBatch);
     expect(causes.slice(0, worstPlanted + 1).map((c) => `${c.factor} ${c.level}`)).toEqual(EXPECTED_LEAD);
+  });
+
+  it('lists the short cook run below its cook target although its estimated F0 passes 15 (DESIGN §4.6)', async () => {
+    const supervisor = await signedIn(app, 'supervisor');
+    const code = plantedProblems.shortCookRun.code;
+    const lethality = await supervisor.agent.get('/api/analysis/lethality').query({ from: firstDay, to: LOADED_ON });
+    const short = (lethality.body as LethalityDto).runs.find((r) => r.cookRun === code)!;
+    // 45 min at the steam temperature gives an upper-bound F0 near 42; 1 L jars need 90 min (TRADE.md §1, common practice).
+    expect(short.f0!).toBeGreaterThan(15);
+    expect(short).toMatchObject({ judgedBy: 'minutes', minimumMinutes: 90, f0UpperBound: true, belowTarget: true });
+    expect((lethality.body as LethalityDto).runs.filter((r) => r.belowTarget).map((r) => r.cookRun)).toEqual([code]);
+    const list = await supervisor.agent.get('/api/cook-runs').query({ belowTarget: 'true' });
+    expect(list.body.items.map((r: { code: string }) => r.code)).toEqual([code]);
+  });
+
+  it('marks settled weeks above the 5 % target, the short run’s week among them, in control or not', async () => {
+    const supervisor = await signedIn(app, 'supervisor');
+    const res = await supervisor.agent.get('/api/analysis/weekly').query({ from: firstDay, to: LOADED_ON });
+    const weekly = res.body as WeeklyDto;
+    expect(weekly.target).toBe(0.05);
+    const shortWeek = weekBefore(LOADED_ON, plantedProblems.shortCookRun.weeksBeforeCurrent);
+    expect(weekly.weeks.find((w) => w.week === shortWeek)).toMatchObject({ aboveTarget: true });
+    expect(weekly.weeks.some((w) => w.aboveTarget && !w.outOfControl)).toBe(true);
   });
 
   it('links grain-to-grain jars to their parent jar instead of a culture', async () => {

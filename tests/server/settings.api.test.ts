@@ -14,17 +14,22 @@ const defaults = {
   observationWindowDays: 21,
   clusterIncidents: 3,
   clusterDays: 7,
+  // DESIGN §4.4 and §4.6; 5 % and the container minutes are common practice (shared/TRADE.md §1).
+  contaminationTarget: 0.05,
+  containerMinutes: { '1 L jar': 90, '2 L jar': 120, '3 kg bag': 150 },
 };
 
 async function restoreDefaults() {
   await dataSource.query(
-    'UPDATE lab_settings SET cookBucketEdges = ?, lethalityTarget = ?, observationWindowDays = ?, clusterIncidents = ?, clusterDays = ? WHERE id = 1',
+    'UPDATE lab_settings SET cookBucketEdges = ?, lethalityTarget = ?, observationWindowDays = ?, clusterIncidents = ?, clusterDays = ?, contaminationTarget = ?, containerMinutes = ? WHERE id = 1',
     [
       JSON.stringify(defaults.cookBucketEdges),
       defaults.lethalityTarget,
       defaults.observationWindowDays,
       defaults.clusterIncidents,
       defaults.clusterDays,
+      defaults.contaminationTarget,
+      JSON.stringify(defaults.containerMinutes),
     ],
   );
 }
@@ -65,6 +70,9 @@ describe('/api/settings', () => {
     [{ observationWindowDays: 2.5 }, 'observationWindowDays'],
     [{ clusterIncidents: 1 }, 'clusterIncidents'],
     [{ clusterDays: 'seven' }, 'clusterDays'],
+    [{ contaminationTarget: 1.5 }, 'contaminationTarget'],
+    [{ containerMinutes: { '1 L jar': 0 } }, 'containerMinutes.1 L jar'],
+    [{ containerMinutes: { '1 L jar': 'long' } }, 'containerMinutes.1 L jar'],
     [{ colour: 'green' }, ''],
     [{}, ''],
   ])('answers 400 naming the field for %j', async (body, field) => {

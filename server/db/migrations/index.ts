@@ -3,6 +3,7 @@ import { ProductionRecord1796165459092 } from './1796165459092-ProductionRecord'
 import { LabDefaults1796165500000 } from './1796165500000-LabDefaults';
 import { MailRecords1796165832851 } from './1796165832851-MailRecords';
 import { JarsAnalysisIndex1796166996992 } from './1796166996992-JarsAnalysisIndex';
+import { HonestLethalityTargets1796218309144 } from './1796218309144-HonestLethalityTargets';
 import { JarMoveFromRoom1796218373512 } from './1796218373512-JarMoveFromRoom';
 import { IdempotentRequests1796218378129 } from './1796218378129-IdempotentRequests';
 import { JarEventsMoveIndex1796218450683 } from './1796218450683-JarEventsMoveIndex';
@@ -14,6 +15,7 @@ export const migrations = [
   LabDefaults1796165500000,
   MailRecords1796165832851,
   JarsAnalysisIndex1796166996992,
+  HonestLethalityTargets1796218309144,
   JarMoveFromRoom1796218373512,
   IdempotentRequests1796218378129,
   JarEventsMoveIndex1796218450683,

@@ -10,10 +10,17 @@ import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } fr
 import { percent } from './labels';
 
 function source(r: LethalityRow): string {
-  if (r.f0Source === 'log') return 'temperature log';
+  if (r.f0Source === 'log')
+    return r.logPlacement === 'centre' ? 'probe at the jar centre' : 'chamber log (upper bound)';
   if (r.f0Source === 'estimate')
-    return r.assumedGauge ? 'estimate, assuming 15 psi (no gauge recorded)' : 'estimate (upper bound)';
+    return r.assumedGauge ? 'estimate, assuming 15 psi (no gauge recorded; upper bound)' : 'estimate (upper bound)';
   return 'not enough recorded';
+}
+
+function judgement(r: LethalityRow): string {
+  if (r.judgedBy === 'centre-probe') return 'F0 against the target';
+  if (r.judgedBy === 'minutes') return `minutes against ${r.minimumMinutes} min for the container`;
+  return 'not judged: no minimum for this container';
 }
 
 /** Cook runs with their F0, low ones flagged against the lab's target. */
@@ -28,7 +35,7 @@ export function LethalityScreen() {
     <>
       <PageHeader
         title="Cook lethality"
-        description="F0 of each cook run: minutes at 121.1 °C its cycle is worth (z = 10 °C). Without a temperature log it is estimated from minutes at the steam temperature of the run’s pressure — an upper bound, since the centre of a jar lags the chamber."
+        description="F0 of each cook run: minutes at 121.1 °C its cycle is worth (z = 10 °C). Only a log from a probe at the jar centre measures what the grain received; a chamber log or the estimate from the steam temperature is an upper bound, so those runs are judged by their minutes at pressure against the container’s minimum."
         actions={<CsvLink href={csvUrl('lethality', { ...period })} />}
       />
       <AnalysisTabs />
@@ -49,8 +56,13 @@ export function LethalityScreen() {
         {data && (
           <>
             <p className="mb-3">
-              The lab’s target is F0 ≥ <strong>{data.target}</strong> min;{' '}
-              <strong>{data.runs.filter((r) => r.belowTarget).length}</strong> of {data.runs.length} runs fall below it.
+              Jar-centre logs are held to F0 ≥ <strong>{data.target}</strong> min; other runs to the container minimums
+              (
+              {Object.entries(data.containerMinutes)
+                .map(([name, minutes]) => `${name} ${minutes} min`)
+                .join(', ')}
+              ). <strong>{data.runs.filter((r) => r.belowTarget).length}</strong> of {data.runs.length} runs fall below
+              their target.
             </p>
             <Table caption="Cook runs with F0">
               <thead>
@@ -73,6 +85,9 @@ export function LethalityScreen() {
                   <th scope="col" className={th}>
                     From
                   </th>
+                  <th scope="col" className={th}>
+                    Judged by
+                  </th>
                   <th scope="col" className={`${th} ${num}`}>
                     Contaminated
                   </th>
@@ -88,10 +103,14 @@ export function LethalityScreen() {
                     <td className={td}>{r.container ?? '—'}</td>
                     <td className={`${td} ${num}`}>{r.minutesAtPressure}</td>
                     <td className={`${td} ${num}`}>
-                      <span className="font-semibold">{r.f0 === null ? '—' : r.f0.toFixed(1)}</span>{' '}
-                      {r.belowTarget && <Badge tone="danger">Below target</Badge>}
+                      <span className="font-semibold">
+                        {r.f0 === null ? '—' : `${r.f0UpperBound ? '≤ ' : ''}${r.f0.toFixed(1)}`}
+                      </span>
                     </td>
                     <td className={`${td} text-sm`}>{source(r)}</td>
+                    <td className={`${td} text-sm`}>
+                      {judgement(r)} {r.belowTarget && <Badge tone="danger">Below target</Badge>}
+                    </td>
                     <td className={`${td} ${num}`}>
                       {r.contaminated}/{r.jars} <span className="text-sm text-muted">{percent(r.rate)}</span>
                     </td>

@@ -55,7 +55,8 @@ export function WeeklyChart({ data }: { data: WeeklyDto }) {
   return (
     <figure className="mb-8 rounded-lg border-2 border-line bg-surface-raised p-4">
       <figcaption className="mb-2 font-semibold">
-        p-chart: contaminated share per ISO week{data.pBar !== null && <> · centre line p̄ = {percent(data.pBar)}</>}
+        p-chart: contaminated share per ISO week{data.pBar !== null && <> · centre line p̄ = {percent(data.pBar)}</>} ·
+        lab target {percent(data.target)}
       </figcaption>
       <div className="h-72 w-full">
         <ResponsiveContainer width="100%" height="100%">
@@ -85,6 +86,12 @@ export function WeeklyChart({ data }: { data: WeeklyDto }) {
             {data.pBar !== null && (
               <ReferenceLine y={data.pBar} stroke="#4f5c56" label={{ value: 'p̄', position: 'right' }} />
             )}
+            <ReferenceLine
+              y={data.target}
+              stroke="#a4261c"
+              strokeDasharray="2 3"
+              label={{ value: 'target', position: 'insideTopRight' }}
+            />
             <Line
               type="linear"
               dataKey="rate"
@@ -98,8 +105,8 @@ export function WeeklyChart({ data }: { data: WeeklyDto }) {
         </ResponsiveContainer>
       </div>
       <p className="mt-2 text-sm text-muted">
-        Red dots: weeks outside their limits. Hollow dots: provisional weeks that still hold incubating jars; they are
-        left out of p̄ and never flagged.
+        Red dots: weeks outside their limits. Red dotted line: the rate the lab accepts. Hollow dots: provisional weeks
+        that still hold incubating jars; they are left out of p̄ and never flagged.
       </p>
     </figure>
   );

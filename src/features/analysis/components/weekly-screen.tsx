@@ -17,6 +17,7 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
   const data = weekly.data;
   const grains = [...new Set(data?.weeks.flatMap((w) => w.grains.map((g) => g.grain)) ?? [])].sort();
   const flagged = data?.weeks.filter((w) => w.outOfControl) ?? [];
+  const aboveTarget = data?.weeks.filter((w) => w.aboveTarget) ?? [];
   // The settled weeks with the highest rates, so the worst ones lead even when none crosses its limit.
   const worst = [...(data?.weeks.filter((w) => !w.provisional && w.contaminated > 0) ?? [])]
     .sort((a, b) => b.rate - a.rate)
@@ -72,6 +73,13 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
               {data.observationWindowDays} days that have not turned.
               {flagged.length > 0 && (
                 <strong className="ml-1 text-danger">Out of control: {flagged.map((w) => w.week).join(', ')}.</strong>
+              )}
+            </p>
+            <p className="mb-4" data-testid="target-note">
+              The lab accepts up to <strong>{percent(data.target)}</strong>. “In control” means as usual for this lab;
+              “above target” means more than the lab accepts, and a week can be both.
+              {aboveTarget.length > 0 && (
+                <strong className="ml-1 text-danger">Above target: {aboveTarget.map((w) => w.week).join(', ')}.</strong>
               )}
             </p>
             {worst.length > 0 && (
@@ -137,8 +145,10 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                       ) : w.provisional ? (
                         <Badge tone="warn">Provisional</Badge>
                       ) : (
-                        <Badge tone="ok">In control</Badge>
-                      )}
+                        // Green would read as "fine": a week above the lab's target is not.
+                        <Badge tone={w.aboveTarget ? 'neutral' : 'ok'}>In control</Badge>
+                      )}{' '}
+                      {w.aboveTarget && <Badge tone="danger">Above target</Badge>}
                     </td>
                     {grains.map((g) => {
                       const cell = w.grains.find((x) => x.grain === g);

@@ -16,7 +16,7 @@ export interface CookRunListFilters extends TableState {
   container: string | undefined;
   from: string | undefined;
   to: string | undefined;
-  lowLethality: 'true' | undefined;
+  belowTarget: 'true' | undefined;
 }
 
 /** The URL is the list's source of truth; a filter the server would refuse is dropped, not sent. */
@@ -29,7 +29,7 @@ export function readCookRunFilters(params: URLSearchParams): CookRunListFilters 
     container: pick('container'),
     from: pick('from'),
     to: pick('to'),
-    lowLethality: params.get('lowLethality') === 'true' ? 'true' : undefined,
+    belowTarget: params.get('belowTarget') === 'true' ? 'true' : undefined,
   };
 }
 

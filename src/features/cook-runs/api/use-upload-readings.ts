@@ -1,13 +1,23 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { cookRunDetailSchema } from '../../../../shared/schemas/cook-runs';
+import type { LogPlacement } from '../../../../shared/stats/cook-verdict';
 import { upload } from '../../../lib/upload';
 import { cookRunsQueries } from './cook-runs-queries';
 
 export function useUploadReadings(cookRunId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ file, onProgress }: { file: File; onProgress: (fraction: number) => void }) => {
+    mutationFn: async ({
+      file,
+      placement,
+      onProgress,
+    }: {
+      file: File;
+      placement: LogPlacement;
+      onProgress: (fraction: number) => void;
+    }) => {
       const body = new FormData();
+      body.append('placement', placement);
       body.append('file', file);
       return cookRunDetailSchema.parse(await upload(`/cook-runs/${cookRunId}/readings`, body, { onProgress }));
     },

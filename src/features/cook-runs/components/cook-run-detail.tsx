@@ -1,5 +1,4 @@
 import { useQuery } from '@tanstack/react-query';
-import { Notice } from '../../../components/ui/notice';
 import { Fact, Facts } from '../../../components/ui/facts';
 import { LoadFailed } from '../../../components/ui/load-failed';
 import { BackLink } from '../../../components/ui/text-link';
@@ -8,7 +7,7 @@ import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
 import { formatDate, formatDateTime } from '../../../lib/format';
 import { cookRunsQueries } from '../api/cook-runs-queries';
-import { formatF0 } from './lethality-figure';
+import { CookVerdictPanel } from './cook-verdict-panel';
 import { PressureCaution } from './pressure-caution';
 import { ReadingsPanel } from './readings-panel';
 
@@ -34,27 +33,7 @@ export function CookRunDetail({ id, canWrite }: { id: number; canWrite: boolean 
       <PageHeader title={`Cook run ${run.code}`} description={run.vessel ?? undefined} />
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className="flex flex-col gap-6">
-          <section aria-label="Lethality" className="rounded-lg border border-line bg-surface-raised p-4">
-            <p className="text-3xl font-semibold tabular-nums">F0 {formatF0(run.f0)} min</p>
-            <p className="mt-1 font-medium">
-              {run.f0Source === 'log' ? 'From the temperature log' : 'Estimated upper bound'}
-            </p>
-            {run.f0Source !== 'log' && (
-              <p className="mt-1 text-muted">
-                Computed as if the whole hold were at {run.sterilisingTemperatureC?.toFixed(1)} °C, the temperature of
-                saturated steam at this gauge pressure and altitude. The centre of a jar heats more slowly than the
-                chamber, so the true F0 is lower.
-              </p>
-            )}
-            {run.lowLethality ? (
-              <Notice tone="danger" className="mt-3" title={`Below the lab’s target of F0 ${run.lethalityTarget}`}>
-                Jars from this run may not have been sterilised through. Watch them for early bacterial or pin-mould
-                growth.
-              </Notice>
-            ) : (
-              <p className="mt-2 text-sm text-muted">Lab target: F0 ≥ {run.lethalityTarget}.</p>
-            )}
-          </section>
+          <CookVerdictPanel run={run} />
           <section aria-label="Cycle" className="rounded-lg border border-line bg-surface-raised p-4">
             <Facts>
               <Fact term="Date">{run.cookedOn ? formatDate(run.cookedOn) : '—'}</Fact>

@@ -5,14 +5,14 @@ import { TextInput } from '../../../components/ui/text-input';
 import { clearedPatch, hasAnyFilter } from '../../../lib/list-params';
 import type { CookRunListFilters } from '../api/cook-runs-queries';
 
-type FilterKey = 'q' | 'container' | 'from' | 'to' | 'lowLethality';
+type FilterKey = 'q' | 'container' | 'from' | 'to' | 'belowTarget';
 
 interface CookRunsFiltersProps {
   filters: CookRunListFilters;
   onChange: (patch: Partial<Record<FilterKey, string | undefined>>) => void;
 }
 
-export const cookRunFilterKeys = ['q', 'container', 'from', 'to', 'lowLethality'] as const satisfies FilterKey[];
+export const cookRunFilterKeys = ['q', 'container', 'from', 'to', 'belowTarget'] as const satisfies FilterKey[];
 export const isCookRunFiltered = (filters: CookRunListFilters) => hasAnyFilter(filters, cookRunFilterKeys);
 
 export function CookRunsFilters({ filters, onChange }: CookRunsFiltersProps) {
@@ -43,9 +43,9 @@ export function CookRunsFilters({ filters, onChange }: CookRunsFiltersProps) {
       <DateFilter label="From" value={filters.from} onChange={(from) => onChange({ from })} />
       <DateFilter label="To" value={filters.to} onChange={(to) => onChange({ to })} />
       <Checkbox
-        label="Only runs below the lethality target"
-        checked={filters.lowLethality === 'true'}
-        onChange={(e) => onChange({ lowLethality: e.target.checked ? 'true' : undefined })}
+        label="Only runs below their cook target"
+        checked={filters.belowTarget === 'true'}
+        onChange={(e) => onChange({ belowTarget: e.target.checked ? 'true' : undefined })}
         className="md:col-span-3"
       />
       <ClearFilters shown={isCookRunFiltered(filters)} onClear={() => onChange(clearedPatch(cookRunFilterKeys))} />

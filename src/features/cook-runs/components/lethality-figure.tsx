@@ -3,13 +3,19 @@ import { Badge } from '../../../components/ui/badge';
 
 export const formatF0 = (f0: number | null) => (f0 === null ? '—' : f0.toFixed(1));
 
-/** F0 always travels with where it came from: an estimate can only overstate the jar centre's dose. */
-export function LethalityFigure({ run }: { run: Pick<CookRunDto, 'f0' | 'f0Source' | 'f0Label' | 'lowLethality'> }) {
+type Judged = Pick<CookRunDto, 'f0' | 'f0Label' | 'f0UpperBound' | 'judgedBy' | 'belowTarget'>;
+
+/** F0 always travels with where it came from: a chamber log or an estimate can only overstate the jar centre's dose. */
+export function LethalityFigure({ run }: { run: Judged }) {
   return (
     <span className="inline-flex flex-wrap items-center gap-2">
-      <span className="font-medium tabular-nums">F0 {formatF0(run.f0)}</span>
+      <span className="font-medium tabular-nums">
+        F0 {run.f0UpperBound ? '≤ ' : ''}
+        {formatF0(run.f0)}
+      </span>
       {run.f0Label && <span className="text-sm text-muted">{run.f0Label}</span>}
-      {run.lowLethality && <Badge tone="danger">Below target</Badge>}
+      {run.belowTarget && <Badge tone="danger">Below target</Badge>}
+      {run.judgedBy === 'unjudged' && <Badge tone="warn">No container minimum</Badge>}
     </span>
   );
 }

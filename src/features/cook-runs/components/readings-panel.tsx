@@ -2,12 +2,14 @@ import { useQuery } from '@tanstack/react-query';
 import { useId, useState, type FormEvent } from 'react';
 import {
   readingCelsiusHeaders,
+  logPlacementLabels,
   readingMinuteHeaders,
   type CookRunDetailDto,
 } from '../../../../shared/schemas/cook-runs';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Notice } from '../../../components/ui/notice';
+import { Select } from '../../../components/ui/select';
 import { useToast } from '../../../components/ui/toast';
 import { ApiError, errorMessage } from '../../../lib/api-client';
 import { cookRunsQueries } from '../api/cook-runs-queries';
@@ -15,6 +17,10 @@ import { useRemoveReadings } from '../api/use-remove-readings';
 import { useUploadReadings } from '../api/use-upload-readings';
 
 const shownRows = 40;
+const placementOptions = [
+  { value: 'chamber', label: 'In the chamber, or not known' },
+  { value: 'centre', label: 'At the centre of a jar' },
+];
 
 export function ReadingsPanel({ run, canWrite }: { run: CookRunDetailDto; canWrite: boolean }) {
   const fileId = useId();
@@ -29,11 +35,13 @@ export function ReadingsPanel({ run, canWrite }: { run: CookRunDetailDto; canWri
   const submit = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
     const form = event.currentTarget;
-    const file = new FormData(form).get('file');
+    const data = new FormData(form);
+    const file = data.get('file');
     if (!(file instanceof File) || file.size === 0) return;
+    const placement = data.get('placement') === 'centre' ? 'centre' : 'chamber';
     setProgress(0);
     uploadLog.mutate(
-      { file, onProgress: setProgress },
+      { file, placement, onProgress: setProgress },
       {
         onSuccess: (updated) => {
           toast.success(`Log stored: ${updated.readingsCount} readings, F0 ${updated.f0?.toFixed(1) ?? '—'}.`);
@@ -54,7 +62,7 @@ export function ReadingsPanel({ run, canWrite }: { run: CookRunDetailDto; canWri
       </h2>
       <p className="mt-1 text-muted">
         {run.readingsCount > 0
-          ? `${run.readingsCount} readings. F0 is summed from them (z = 10 °C, reference 121.1 °C).`
+          ? `${run.readingsCount} readings from a ${run.logPlacement ? logPlacementLabels[run.logPlacement] : 'probe'}. F0 is summed from them (z = 10 °C, reference 121.1 °C).`
           : 'No log yet, so F0 is the estimated upper bound. A probe log from the jar centre gives the real figure.'}
       </p>
 
@@ -67,6 +75,13 @@ export function ReadingsPanel({ run, canWrite }: { run: CookRunDetailDto; canWri
             Two columns: elapsed minutes ({readingMinuteHeaders.join(', ')}) and °C ({readingCelsiusHeaders.join(', ')}
             ). A new file replaces the whole log.
           </p>
+          <Select
+            name="placement"
+            label="Where the probe sat"
+            hint="Only a probe at the centre of a jar measures what the grain received; a chamber log cannot pass a run."
+            options={placementOptions}
+            defaultValue="chamber"
+          />
           <input
             id={fileId}
             name="file"

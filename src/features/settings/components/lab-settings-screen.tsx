@@ -3,6 +3,7 @@ import { z } from 'zod';
 import {
   cookBucketEdgesSchema,
   cookBucketLabels,
+  containerMinutesSchema,
   labSettingsSchema,
   type LabSettingsDto,
 } from '../../../../shared/schemas/settings';
@@ -28,9 +29,35 @@ const edgesText = z
   )
   .pipe(cookBucketEdgesSchema);
 
+/** "1 L jar: 90; 3 kg bag: 150" → { "1 L jar": 90, "3 kg bag": 150 } */
+const containerMinutesText = z
+  .string()
+  .trim()
+  .transform((text, ctx) => {
+    const out: Record<string, number> = {};
+    for (const part of text.split(/[;\n]+/).filter((p) => p.trim())) {
+      const m = /^(.+?)\s*[:=]\s*(\d+)\s*$/.exec(part.trim());
+      if (!m?.[1] || !m[2]) {
+        ctx.addIssue({ code: 'custom', message: `write “container: minutes”, not “${part.trim()}”` });
+        return z.NEVER;
+      }
+      out[m[1].trim()] = Number(m[2]);
+    }
+    return out;
+  })
+  .pipe(containerMinutesSchema);
+
+const percentText = z.coerce
+  .number<string>()
+  .min(0, 'must not be negative')
+  .max(100, 'must be at most 100 %')
+  .transform((v) => v / 100);
+
 const formSchema = z.object({
   cookBucketEdges: edgesText,
   lethalityTarget: z.coerce.number<string>().pipe(labSettingsSchema.shape.lethalityTarget),
+  containerMinutes: containerMinutesText,
+  contaminationTarget: percentText,
   observationWindowDays: z.coerce.number<string>().pipe(labSettingsSchema.shape.observationWindowDays),
   clusterIncidents: z.coerce.number<string>().pipe(labSettingsSchema.shape.clusterIncidents),
   clusterDays: z.coerce.number<string>().pipe(labSettingsSchema.shape.clusterDays),
@@ -38,6 +65,8 @@ const formSchema = z.object({
 const fields = [
   'cookBucketEdges',
   'lethalityTarget',
+  'containerMinutes',
+  'contaminationTarget',
   'observationWindowDays',
   'clusterIncidents',
   'clusterDays',
@@ -54,6 +83,10 @@ function SettingsForm({ settings }: { settings: LabSettingsDto }) {
         defaultValues: {
           cookBucketEdges: settings.cookBucketEdges.join(', '),
           lethalityTarget: String(settings.lethalityTarget),
+          containerMinutes: Object.entries(settings.containerMinutes)
+            .map(([name, minutes]) => `${name}: ${minutes}`)
+            .join('; '),
+          contaminationTarget: String(Math.round(settings.contaminationTarget * 1000) / 10),
           observationWindowDays: String(settings.observationWindowDays),
           clusterIncidents: String(settings.clusterIncidents),
           clusterDays: String(settings.clusterDays),
@@ -82,10 +115,23 @@ function SettingsForm({ settings }: { settings: LabSettingsDto }) {
             />
             <TextInput
               label="Lethality target (F0, minutes)"
-              hint="Cook runs whose F0 falls below this are flagged."
+              hint="Applies only to a temperature log from a probe at the jar centre: a chamber log or an estimate overstates what the grain received."
               inputMode="decimal"
               error={formState.errors.lethalityTarget?.message}
               {...register('lethalityTarget')}
+            />
+            <TextInput
+              label="Least minutes at pressure per container"
+              hint="Runs without a jar-centre log are judged by these, at about 103 kPa (15 psi) gauge. Defaults are common practice (1 L jar 90, 2 L jar 120, 3 kg bag 150); set your own from your own validation."
+              error={formState.errors.containerMinutes?.message}
+              {...register('containerMinutes')}
+            />
+            <TextInput
+              label="Accepted contamination rate (%)"
+              hint="Settled weeks above this are marked even when they are in control. 5 % is a common choice; common practice varies, and no published benchmark exists."
+              inputMode="decimal"
+              error={formState.errors.contaminationTarget?.message}
+              {...register('contaminationTarget')}
             />
             <TextInput
               label="Observation window (days)"
