@@ -5,6 +5,7 @@ import { JarsBehindScreen } from '../../features/analysis/components/jars-behind
 import { LethalityScreen } from '../../features/analysis/components/lethality-screen';
 import { RatesScreen } from '../../features/analysis/components/rates-screen';
 import { WeeklyScreen } from '../../features/analysis/components/weekly-screen';
+import { ActionVerdictsScreen } from '../../features/analysis/components/action-verdicts-screen';
 
 export function AnalysisWeeklyRoute() {
   return (
@@ -65,6 +66,15 @@ export function AnalysisJarsRoute() {
     <>
       <title>Jars behind a number · Asepta</title>
       <JarsBehindScreen />
+    </>
+  );
+}
+
+export function AnalysisActionsRoute() {
+  return (
+    <>
+      <title>Did it work? · Asepta</title>
+      <ActionVerdictsScreen />
     </>
   );
 }
