@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { CausesScreen } from '../../features/analysis/components/causes-screen';
 import { ColonisationScreen } from '../../features/analysis/components/colonisation-screen';
 import { CrosstabScreen } from '../../features/analysis/components/crosstab-screen';
@@ -6,6 +7,7 @@ import { LethalityScreen } from '../../features/analysis/components/lethality-sc
 import { RatesScreen } from '../../features/analysis/components/rates-screen';
 import { WeeklyScreen } from '../../features/analysis/components/weekly-screen';
 import { ActionVerdictsScreen } from '../../features/analysis/components/action-verdicts-screen';
+import { settingsQueries } from '../../features/settings/api/settings-queries';
 
 export function AnalysisWeeklyRoute() {
   return (
@@ -17,10 +19,11 @@ export function AnalysisWeeklyRoute() {
 }
 
 export function AnalysisCausesRoute() {
+  const settings = useQuery(settingsQueries.detail());
   return (
     <>
       <title>Likely causes · Asepta</title>
-      <CausesScreen />
+      <CausesScreen windowDays={settings.data?.observationWindowDays} />
     </>
   );
 }

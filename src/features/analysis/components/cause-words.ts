@@ -35,7 +35,7 @@ export function standingWords(r: CauseRow, leads: FactorLevel[]): string {
       return `Holds the same jars as ${levelList(r.sameJarsAs)}: the data cannot tell these apart.`;
     case 'explained':
       return r.adjusted
-        ? `Explained by ${levelList(r.adjusted.given)}: ${adjustedWords(r.adjusted)}.`
+        ? `Explained by ${levelList(r.adjusted.given)}: allowing for them, ${timesRest(r.adjusted.relativeRisk, r.adjusted.rr95)}.`
         : 'Explained by the leads.';
     case 'elevated':
       return r.adjusted

@@ -3,6 +3,7 @@ import { useSearchParams } from 'react-router';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Pager } from '../../../components/ui/table/pager';
 import { TextInput } from '../../../components/ui/text-input';
+import { todayIso } from '../../../lib/format';
 import { patchParams, type TableState } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
 import { AnalysisTabs, CsvLink, LeadNotProof, LoadState, PeriodPicker, Table, num, th } from './analysis-frame';
@@ -10,6 +11,9 @@ import { CauseRowView } from './cause-row';
 import { LeadCards } from './lead-cards';
 
 const pageSizes = [20, 50, 100] as const;
+
+const addDays = (date: string, days: number) =>
+  new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
 function whole(params: URLSearchParams, key: string, fallback: number): number {
   const n = Number(params.get(key));
@@ -25,13 +29,20 @@ const readPageSize = (params: URLSearchParams) => {
  * Likely causes: the leads first, in plain words, then every level by where it stands once the leads
  * are allowed for, a page at a time from the server.
  */
-export function CausesScreen() {
+export function CausesScreen({ windowDays }: { windowDays?: number | undefined }) {
   const [params, setParams] = useSearchParams();
-  const period = readPeriod(params);
+  const chosen = readPeriod(params);
+  // Recent jars settle only once lost, so a period running up to today shows recent levels at their
+  // worst; by default the screen stops at the last day whose jars have all settled.
+  const settledThrough = windowDays === undefined ? undefined : addDays(todayIso(), -windowDays);
+  const period = { from: chosen.from, to: chosen.to ?? settledThrough };
   const minJars = whole(params, 'minJars', 1);
   const page = whole(params, 'page', 1);
   const pageSize = readPageSize(params);
-  const causes = useQuery(analysisQueries.causes(period, minJars, page, pageSize));
+  const causes = useQuery({
+    ...analysisQueries.causes(period, minJars, page, pageSize),
+    enabled: chosen.to !== undefined || windowDays !== undefined,
+  });
   const data = causes.data;
   const leads = (data?.leads ?? []).map(({ factor, level }) => ({ factor, level }));
   const setPage = (patch: Partial<TableState>) => setParams(patchParams(params, patch));
@@ -45,7 +56,13 @@ export function CausesScreen() {
       />
       <AnalysisTabs />
       <LeadNotProof />
-      <PeriodPicker period={period}>
+      {!chosen.to && settledThrough && (
+        <p className="mb-4 text-sm" data-testid="settled-through">
+          Jars inoculated up to {settledThrough}: later ones are still at risk, and counting only those already lost
+          would make the newest weeks, runs and sessions look worse than they are. Set “To” to include them.
+        </p>
+      )}
+      <PeriodPicker period={chosen}>
         <TextInput
           type="number"
           label="Smallest level"
