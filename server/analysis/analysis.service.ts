@@ -18,7 +18,7 @@ import { psiToKPa, sterilisingTemperatureC } from '../../shared/stats/steam';
 import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
 import { analysisRepository, type CountRow, type Period } from './analysis.repository';
-import { buildCauses } from './causes';
+import { buildCauses, byStanding } from './causes';
 import { addDays, isoWeekMonday } from './dates';
 
 export { compareRates } from './comparison';
@@ -96,12 +96,14 @@ export async function crosstab(rowFactor: Factor, colFactor: Factor, p: Period):
 export async function causes(
   p: Period,
   minJars: number,
-  paging: { page?: number | undefined; pageSize: number } = { pageSize: 25 },
+  paging: { page?: number | undefined; pageSize: number; order?: 'rank' | 'standing' } = { pageSize: 25 },
 ): Promise<CausesDto> {
   const combos = await analysisRepository.combinations(await frameFor(p));
-  const { leads, rows } = buildCauses(combos, minJars);
+  const { leads, rows, describe } = buildCauses(combos, minJars);
+  if (paging.order === 'standing') rows.sort(byStanding);
   const page = paging.page ?? null;
   const shown = page === null ? rows : rows.slice((page - 1) * paging.pageSize, page * paging.pageSize);
+  describe([...shown, ...leads.map((l) => l.row)]);
   return {
     from: p.from ?? null,
     to: p.to ?? null,

@@ -27,6 +27,18 @@ export function compareCauses(a: CauseRow, b: CauseRow): number {
   );
 }
 
+const standingOrder: Record<Standing, number> = {
+  lead: 0,
+  'same-jars': 1,
+  elevated: 2,
+  explained: 3,
+  'not-elevated': 4,
+};
+
+/** The screen's order: by standing, then the order of DESIGN.md §5 within each (a stable sort keeps it). */
+export const byStanding = (a: CauseRow, b: CauseRow) =>
+  standingOrder[a.standing] - standingOrder[b.standing] || compareCauses(a, b);
+
 /** DESIGN.md §4.3: crude interval above 1 and adjusted not → explained; both → elevated. */
 function standingOf(row: CauseRow, isLead: boolean): Standing {
   if (isLead) return 'lead';
@@ -40,6 +52,8 @@ function standingOf(row: CauseRow, isLead: boolean): Standing {
 export interface Causes {
   leads: LeadDto[];
   rows: CauseRow[];
+  /** Fills in the contaminants, days to detection and hint of the rows about to be sent (work done per row shown). */
+  describe: (shown: CauseRow[]) => void;
 }
 
 /**
@@ -85,7 +99,6 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
         };
         tests.set(key, test);
       }
-      const detections = detectionsOf(l, i, det, buffer);
       rows.push({
         factor,
         level: l.names[i]!,
@@ -106,12 +119,13 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
         adjusted: null,
         hint: null,
         hintBasis: null,
-        contaminants: detections.contaminants,
-        medianDaysToDetection: detections.medianDays,
+        contaminants: {},
+        medianDaysToDetection: null,
       });
       refs.push({ fi, id: i });
     }
   });
+  const refOf = new Map(rows.map((r, i) => [r, refs[i]!]));
   const q = bhAdjust(rows.map((r) => r.pValue));
   rows.forEach((r, i) => (r.qValue = q[i] ?? 1));
 
@@ -137,8 +151,17 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
     row.standing = standingOf(row, leadIndex >= 0);
     if (leadIndex >= 0) leadRows[leadIndex] = row;
   });
-  addHints(rows);
+  const describe = (shown: CauseRow[]) => {
+    for (const r of shown) {
+      const ref = refOf.get(r)!;
+      const d = detectionsOf(levels[ref.fi]!, ref.id, det, buffer);
+      r.contaminants = d.contaminants;
+      r.medianDaysToDetection = d.medianDays;
+    }
+    addHints(rows, shown);
+  };
   return {
+    describe,
     leads: leads.map((l, k) => ({
       ...named(l),
       row: leadRows[k]!,
@@ -171,12 +194,15 @@ function adjustedFigures(
  * Only a level that fares worse gets a trade hint; it says the data cannot tell levels apart only for
  * levels that hold each other's jars both ways (each in the other's confoundedWith).
  */
-function addHints(rows: CauseRow[]) {
+function addHints(rows: CauseRow[], shown: CauseRow[]) {
   const key = (f: FactorLevel) => `${f.factor}\u0000${f.level}`;
-  const confoundedOf = new Map(rows.map((r) => [key(r), new Set(r.confoundedWith.map(key))]));
-  for (const r of rows) {
+  const byKey = new Map<string, CauseRow>();
+  for (const r of rows) if (r.confoundedWith.length > 0) byKey.set(key(r), r);
+  for (const r of shown) {
     if (!faresWorse(r)) continue;
-    const mutual = r.confoundedWith.filter((c) => confoundedOf.get(key(c))?.has(key(r)) ?? false);
+    const mutual = r.confoundedWith.filter(
+      (c) => byKey.get(key(c))?.confoundedWith.some((x) => x.factor === r.factor && x.level === r.level) ?? false,
+    );
     const hint = hintFor(
       r.factor,
       { count: r.contaminated, contaminants: r.contaminants, medianDays: r.medianDaysToDetection },

@@ -1,5 +1,8 @@
-import { mantelHaenszel, type MantelHaenszel, type Stratum } from '../../shared/stats/mantel-haenszel';
+import { mantelHaenszelArrays, type MantelHaenszel, type StrataArrays } from '../../shared/stats/mantel-haenszel';
 import { CONFOUNDED_SHARE, F, type FactorLevels } from './cause-levels';
+
+/** Leads are at most five (DESIGN.md §4.3), so strata at most 2^5. */
+export const MAX_STRATA_BITS = 5;
 
 /** A level by number: factor index and level number within it. */
 export interface LevelRef {
@@ -56,29 +59,43 @@ export function countByStrata(cells: Cells, leads: LevelRef[]): StrataCounts {
   return out;
 }
 
+// Scratch strata for one level at a time: at most 2^5 strata, reused so the passes allocate nothing.
+const scratch: StrataArrays = {
+  a: new Float64Array(1 << MAX_STRATA_BITS),
+  n1: new Float64Array(1 << MAX_STRATA_BITS),
+  c: new Float64Array(1 << MAX_STRATA_BITS),
+  n0: new Float64Array(1 << MAX_STRATA_BITS),
+  count: 0,
+};
+
 /**
  * The level-vs-rest strata given only the leads whose bits are in `keep`: strata that differ in the
- * other bits are added together.
+ * other bits are added together. Filled into the shared scratch arrays (read them before the next call).
  */
-export function strataOf(c: StrataCounts, level: LevelRef, keep: number): Stratum[] {
-  const merged = new Map<number, Stratum>();
+export function strataOf(c: StrataCounts, level: LevelRef, keep: number): StrataArrays {
+  const { a, n1, c: rest, n0 } = scratch;
+  a.fill(0, 0, c.strata);
+  n1.fill(0, 0, c.strata);
+  rest.fill(0, 0, c.strata);
+  n0.fill(0, 0, c.strata);
   const base = level.id * c.strata;
+  const lj = c.levelJars[level.fi]!;
+  const lc = c.levelContaminated[level.fi]!;
+  const tj = c.totalJars[level.fi]!;
+  const tc = c.totalContaminated[level.fi]!;
   for (let s = 0; s < c.strata; s++) {
     const t = s & keep;
-    const m = merged.get(t) ?? { a: 0, n1: 0, c: 0, n0: 0 };
-    const n1 = c.levelJars[level.fi]![base + s]!;
-    const a = c.levelContaminated[level.fi]![base + s]!;
-    m.a += a;
-    m.n1 += n1;
-    m.c += c.totalContaminated[level.fi]![s]! - a;
-    m.n0 += c.totalJars[level.fi]![s]! - n1;
-    merged.set(t, m);
+    a[t]! += lc[base + s]!;
+    n1[t]! += lj[base + s]!;
+    rest[t]! += tc[s]! - lc[base + s]!;
+    n0[t]! += tj[s]! - lj[base + s]!;
   }
-  return [...merged.values()];
+  scratch.count = c.strata;
+  return scratch;
 }
 
 export function adjustedRisk(c: StrataCounts, level: LevelRef, keep: number): MantelHaenszel {
-  return mantelHaenszel(strataOf(c, level, keep));
+  return mantelHaenszelArrays(strataOf(c, level, keep));
 }
 
 /** Settled jars of the level that also belong to lead k (bit k of the strata). */
@@ -92,7 +109,10 @@ export function overlap(c: StrataCounts, level: LevelRef, k: number): number {
 /** DESIGN.md §4.3: two levels are same-jars when each holds ≥ 90 % of the other's settled jars. */
 export function sameJars(c: StrataCounts, cells: Cells, level: LevelRef, lead: LevelRef, k: number): boolean {
   if (level.fi === lead.fi) return false;
+  const mine = cells.levels[level.fi]!.jars[level.id]!;
+  const theirs = cells.levels[lead.fi]!.jars[lead.id]!;
+  // Sizes alone rule most pairs out: neither can hold 90 % of a much larger one.
+  if (mine < CONFOUNDED_SHARE * theirs || theirs < CONFOUNDED_SHARE * mine) return false;
   const shared = overlap(c, level, k);
-  const jarsOf = (l: LevelRef) => cells.levels[l.fi]!.jars[l.id]!;
-  return shared >= CONFOUNDED_SHARE * jarsOf(level) && shared >= CONFOUNDED_SHARE * jarsOf(lead);
+  return shared >= CONFOUNDED_SHARE * mine && shared >= CONFOUNDED_SHARE * theirs;
 }

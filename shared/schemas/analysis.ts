@@ -29,6 +29,8 @@ export const causesQuerySchema = periodBase
     /** Without page, every row; with page (and pageSize, default 25, at most 200), that page. */
     page: z.coerce.number().int().min(1).optional(),
     pageSize: z.coerce.number().int().min(1).max(200).default(25),
+    /** rank: the order of DESIGN.md §5; standing: leads and their same-jars levels, then elevated, explained, not elevated. */
+    order: z.enum(['rank', 'standing']).default('rank'),
   })
   .refine((q) => inOrder(q), orderIssue);
 export type CausesQuery = z.infer<typeof causesQuerySchema>;

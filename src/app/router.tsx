@@ -228,6 +228,10 @@ export function createAppRouter(queryClient: QueryClient) {
                       lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisLethalityRoute })),
                     },
                     {
+                      path: paths.analysisActions.pattern,
+                      lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisActionsRoute })),
+                    },
+                    {
                       path: paths.analysisJars.pattern,
                       lazy: () => import('./routes/analysis').then((m) => ({ Component: m.AnalysisJarsRoute })),
                     },

@@ -64,6 +64,7 @@ export const paths = {
     to: (query?: Query) => withQuery('/analysis/colonisation', query),
   },
   analysisLethality: { pattern: '/analysis/lethality', to: (query?: Query) => withQuery('/analysis/lethality', query) },
+  analysisActions: { pattern: '/analysis/actions', to: (query?: Query) => withQuery('/analysis/actions', query) },
   analysisJars: { pattern: '/analysis/jars', to: (query?: Query) => withQuery('/analysis/jars', query) },
   labSettings: { pattern: '/settings', to: () => '/settings' },
 } as const;

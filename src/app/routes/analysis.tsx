@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { CausesScreen } from '../../features/analysis/components/causes-screen';
 import { ColonisationScreen } from '../../features/analysis/components/colonisation-screen';
 import { CrosstabScreen } from '../../features/analysis/components/crosstab-screen';
@@ -5,6 +6,8 @@ import { JarsBehindScreen } from '../../features/analysis/components/jars-behind
 import { LethalityScreen } from '../../features/analysis/components/lethality-screen';
 import { RatesScreen } from '../../features/analysis/components/rates-screen';
 import { WeeklyScreen } from '../../features/analysis/components/weekly-screen';
+import { ActionVerdictsScreen } from '../../features/analysis/components/action-verdicts-screen';
+import { settingsQueries } from '../../features/settings/api/settings-queries';
 
 export function AnalysisWeeklyRoute() {
   return (
@@ -16,10 +19,11 @@ export function AnalysisWeeklyRoute() {
 }
 
 export function AnalysisCausesRoute() {
+  const settings = useQuery(settingsQueries.detail());
   return (
     <>
       <title>Likely causes · Asepta</title>
-      <CausesScreen />
+      <CausesScreen windowDays={settings.data?.observationWindowDays} />
     </>
   );
 }
@@ -65,6 +69,15 @@ export function AnalysisJarsRoute() {
     <>
       <title>Jars behind a number · Asepta</title>
       <JarsBehindScreen />
+    </>
+  );
+}
+
+export function AnalysisActionsRoute() {
+  return (
+    <>
+      <title>Did it work? · Asepta</title>
+      <ActionVerdictsScreen />
     </>
   );
 }

@@ -1,6 +1,7 @@
 import { useParams } from 'react-router';
 import { NotFound } from '../../components/errors/not-found';
 import { useCurrentUser } from '../../features/auth/api/use-me';
+import { ActionVerdict } from '../../features/analysis/components/action-verdict';
 import { IncidentDetail } from '../../features/incidents/components/incident-detail';
 
 export function IncidentRoute() {
@@ -10,7 +11,7 @@ export function IncidentRoute() {
   return (
     <>
       <title>{`Incident ${id} · Asepta`}</title>
-      <IncidentDetail id={id} me={me} />
+      <IncidentDetail id={id} me={me} actionExtra={(a) => a.factor && <ActionVerdict actionId={a.id} />} />
     </>
   );
 }

@@ -1,6 +1,8 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import { factorSchema, type Factor } from '../../../../shared/enums';
 import type {
+  ActionVerdictsDto,
+  BeforeAfterDto,
   CausesDto,
   ColonisationDto,
   CrosstabDto,
@@ -33,7 +35,7 @@ export function readFactor(params: URLSearchParams, key: string, fallback: Facto
   return parsed.success ? parsed.data : fallback;
 }
 
-export type JarsOnly = 'all' | 'contaminated' | 'incubating';
+export type JarsOnly = 'all' | 'settled' | 'contaminated' | 'incubating';
 
 /** The address of a table's CSV export: the same route and filters, answered as a file. */
 export const csvUrl = (path: string, query: Record<string, string | number | undefined>) =>
@@ -62,11 +64,23 @@ export const analysisQueries = {
       queryFn: ({ signal }) => get<CrosstabDto>('crosstab', { rows, cols, ...p }, signal),
       placeholderData: keepPreviousData,
     }),
-  causes: (p: Period, minJars: number) =>
+  causes: (p: Period, minJars: number, page: number, pageSize: number) =>
     queryOptions({
-      queryKey: [...analysisQueries.all, 'causes', p, minJars] as const,
-      queryFn: ({ signal }) => get<CausesDto>('causes', { ...p, minJars }, signal),
+      queryKey: [...analysisQueries.all, 'causes', p, minJars, page, pageSize] as const,
+      queryFn: ({ signal }) => get<CausesDto>('causes', { ...p, minJars, page, pageSize, order: 'standing' }, signal),
       placeholderData: keepPreviousData,
+    }),
+  actions: (page: number, pageSize: number) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'actions', page, pageSize] as const,
+      queryFn: ({ signal }) => get<ActionVerdictsDto>('actions', { page, pageSize }, signal),
+      placeholderData: keepPreviousData,
+    }),
+  beforeAfter: (actionId: number) =>
+    queryOptions({
+      queryKey: [...analysisQueries.all, 'before-after', actionId] as const,
+      queryFn: ({ signal }) => get<BeforeAfterDto>('before-after', { actionId }, signal),
+      retry: false,
     }),
   colonisation: (p: Period) =>
     queryOptions({

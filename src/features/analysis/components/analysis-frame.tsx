@@ -18,6 +18,7 @@ const tabs = [
   { label: 'Cross-table', to: paths.analysisCrosstab.to },
   { label: 'Colonisation', to: paths.analysisColonisation.to },
   { label: 'Cook lethality', to: paths.analysisLethality.to },
+  { label: 'Did it work?', to: paths.analysisActions.to },
 ] as const;
 
 /** The analysis screens share one period, so switching screens keeps it. */

@@ -1,12 +1,21 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
-import type { CauseRow, FactorLevel } from '../../../../shared/schemas/analysis';
+import type { CauseRow, FactorLevel, Standing } from '../../../../shared/schemas/analysis';
 import { Badge } from '../../../components/ui/badge';
 import { paths } from '../../../config/paths';
 import { cx } from '../../../lib/cx';
 import type { Period } from '../api/analysis-queries';
 import { num } from './analysis-frame';
+import { standingWords } from './cause-words';
 import { factorLabels, formatP, percent, ratio } from './labels';
+
+const standingBadge: Record<Standing, { tone: 'danger' | 'warn' | 'neutral' | 'ok'; label: string }> = {
+  lead: { tone: 'danger', label: 'Lead' },
+  'same-jars': { tone: 'warn', label: 'Same jars as a lead' },
+  elevated: { tone: 'warn', label: 'Elevated' },
+  explained: { tone: 'neutral', label: 'Explained' },
+  'not-elevated': { tone: 'ok', label: 'Not elevated' },
+};
 
 // On phones each row becomes a card: the level on top, the three figures side by side, each led by its
 // column's name, then the hint.
@@ -26,7 +35,7 @@ function JarsLink({
 }: {
   row: CauseRow;
   period: Period;
-  only: 'all' | 'contaminated';
+  only: 'settled' | 'contaminated';
   children: ReactNode;
 }) {
   return (
@@ -76,8 +85,19 @@ function Hint({ hint, basis, sameJars }: { hint: string; basis: string | null; s
   );
 }
 
-export function CauseRowView({ row, rank, period }: { row: CauseRow; rank: number; period: Period }) {
-  const strong = row.relativeRisk > 1 && row.qValue < 0.05;
+export function CauseRowView({
+  row,
+  rank,
+  period,
+  leads,
+}: {
+  row: CauseRow;
+  rank: number;
+  period: Period;
+  leads: FactorLevel[];
+}) {
+  const strong = row.standing === 'lead' || row.standing === 'elevated';
+  const badge = standingBadge[row.standing];
   return (
     <tr
       data-testid="cause-row"
@@ -95,36 +115,45 @@ export function CauseRowView({ row, rank, period }: { row: CauseRow; rank: numbe
         <span className="font-semibold" data-testid="cause-level">
           {row.level}
         </span>
+        <span className="mt-1 block">
+          <Badge tone={badge.tone}>{badge.label}</Badge>
+        </span>
       </th>
       <td className={figure} data-label="Contaminated">
         <JarsLink row={row} period={period} only="contaminated">
           {row.contaminated}
         </JarsLink>{' '}
         of{' '}
-        <JarsLink row={row} period={period} only="all">
+        <JarsLink row={row} period={period} only="settled">
           {row.jars}
         </JarsLink>
         <span className="block text-sm text-muted">
           {percent(row.rate)} vs {percent(row.restRate)} in the rest
         </span>
+        {row.incubating > 0 && <span className="block text-sm text-muted">+{row.incubating} still incubating</span>}
       </td>
       <td className={figure} data-label="Relative risk">
         <span className="font-semibold">{ratio(row.relativeRisk)}</span>
         <span className="block text-sm text-muted">
           {ratio(row.rr95[0])} – {ratio(row.rr95[1])}
         </span>
+        {row.adjusted && (
+          <span className="block text-sm" data-testid="cause-adjusted">
+            adjusted {ratio(row.adjusted.relativeRisk)} ({ratio(row.adjusted.rr95[0])} – {ratio(row.adjusted.rr95[1])})
+          </span>
+        )}
       </td>
       <td className={figure} data-label="q (BH)">
         {formatP(row.qValue)}
         <span className="block text-sm text-muted">p {formatP(row.pValue)}</span>
       </td>
       <td className={cx(cell, wide, 'min-w-80')}>
-        {row.hint ? (
-          <Hint hint={row.hint} basis={row.hintBasis} sameJars={row.confoundedWith} />
-        ) : (
-          <span className="text-muted">—</span>
+        <p className="mb-1" data-testid="cause-standing">
+          {standingWords(row, leads)}
+        </p>
+        {row.hint && row.standing !== 'not-elevated' && (
+          <Hint hint={row.hint} basis={row.hintBasis} sameJars={row.sameJarsAs} />
         )}
-        {!row.hint && row.confoundedWith.length > 0 && <SameJars levels={row.confoundedWith} />}
       </td>
     </tr>
   );

@@ -1,19 +1,19 @@
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router';
-import { factorSchema, factors } from '../../../../shared/enums';
-import type { CauseRow } from '../../../../shared/schemas/analysis';
-import { Checkbox } from '../../../components/ui/checkbox';
 import { PageHeader } from '../../../components/ui/page-header';
-import { Select } from '../../../components/ui/select';
 import { Pager } from '../../../components/ui/table/pager';
 import { TextInput } from '../../../components/ui/text-input';
+import { todayIso } from '../../../lib/format';
 import { patchParams, type TableState } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
 import { AnalysisTabs, CsvLink, LeadNotProof, LoadState, PeriodPicker, Table, num, th } from './analysis-frame';
 import { CauseRowView } from './cause-row';
-import { factorLabels } from './labels';
+import { LeadCards } from './lead-cards';
 
 const pageSizes = [20, 50, 100] as const;
+
+const addDays = (date: string, days: number) =>
+  new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
 
 function whole(params: URLSearchParams, key: string, fallback: number): number {
   const n = Number(params.get(key));
@@ -25,80 +25,63 @@ const readPageSize = (params: URLSearchParams) => {
   return (pageSizes as readonly number[]).includes(size) ? size : pageSizes[0];
 };
 
-/** Levels per factor among the rows the other filters keep, for the factor picker. */
-function factorChoices(rows: CauseRow[]) {
-  const counts = new Map<string, number>();
-  for (const r of rows) counts.set(r.factor, (counts.get(r.factor) ?? 0) + 1);
-  return [
-    { value: '', label: `All factors (${rows.length})` },
-    ...factors
-      .filter((f) => counts.has(f))
-      .map((f) => ({ value: f, label: `${factorLabels[f]} (${counts.get(f) ?? 0})` })),
-  ];
-}
-
-/** Likely causes, ranked: each level against the rest of its factor. The answer arrives whole; it is paged here. */
-export function CausesScreen() {
+/**
+ * Likely causes: the leads first, in plain words, then every level by where it stands once the leads
+ * are allowed for, a page at a time from the server.
+ */
+export function CausesScreen({ windowDays }: { windowDays?: number | undefined }) {
   const [params, setParams] = useSearchParams();
-  const period = readPeriod(params);
+  const chosen = readPeriod(params);
+  // Recent jars settle only once lost, so a period running up to today shows recent levels at their
+  // worst; by default the screen stops at the last day whose jars have all settled.
+  const settledThrough = windowDays === undefined ? undefined : addDays(todayIso(), -windowDays);
+  const period = { from: chosen.from, to: chosen.to ?? settledThrough };
   const minJars = whole(params, 'minJars', 1);
-  const harmfulOnly = params.get('all') !== '1';
-  const factor = factorSchema.safeParse(params.get('factor')).data;
   const page = whole(params, 'page', 1);
   const pageSize = readPageSize(params);
-  const causes = useQuery(analysisQueries.causes(period, minJars));
-
-  const ranked = (causes.data?.causes ?? []).map((row, i) => ({ row, rank: i + 1 }));
-  const kept = ranked.filter(({ row }) => !harmfulOnly || row.relativeRisk > 1);
-  const shown = kept.filter(({ row }) => !factor || row.factor === factor);
-  const lastPage = Math.max(1, Math.ceil(shown.length / pageSize));
-  const pageRows = shown.slice((Math.min(page, lastPage) - 1) * pageSize, Math.min(page, lastPage) * pageSize);
+  const causes = useQuery({
+    ...analysisQueries.causes(period, minJars, page, pageSize),
+    enabled: chosen.to !== undefined || windowDays !== undefined,
+  });
+  const data = causes.data;
+  const leads = (data?.leads ?? []).map(({ factor, level }) => ({ factor, level }));
   const setPage = (patch: Partial<TableState>) => setParams(patchParams(params, patch));
 
   return (
     <>
       <PageHeader
         title="Likely causes"
-        description="Every level of every factor against the rest: its contamination rate, relative risk, and how surprising the difference would be by chance."
+        description="The levels that stand out once each is allowed for the others, then every level against the rest of its factor, over settled jars."
         actions={<CsvLink href={csvUrl('causes', { ...period, minJars })} />}
       />
       <AnalysisTabs />
       <LeadNotProof />
-      <PeriodPicker period={period}>
+      {!chosen.to && settledThrough && (
+        <p className="mb-4 text-sm" data-testid="settled-through">
+          Jars inoculated up to {settledThrough}: later ones are still at risk, and counting only those already lost
+          would make the newest weeks, runs and sessions look worse than they are. Set “To” to include them.
+        </p>
+      )}
+      <PeriodPicker period={chosen}>
         <TextInput
           type="number"
           label="Smallest level"
-          hint="Jars a level needs to be tested"
+          hint="Settled jars a level needs to be tested"
           min={1}
           value={minJars}
-          onChange={(e) => setParams(patchParams(params, { minJars: e.target.value || undefined }))}
+          onChange={(e) => setParams(patchParams(params, { minJars: e.target.value || undefined, page: undefined }))}
           className="w-44"
-        />
-        <Select
-          label="Factor"
-          options={factorChoices(kept.map((k) => k.row))}
-          value={factor ?? ''}
-          onChange={(e) => setParams(patchParams(params, { factor: e.target.value || undefined }))}
-          className="w-56"
-        />
-        <Checkbox
-          label="Only levels that fare worse than the rest"
-          checked={harmfulOnly}
-          onChange={(e) => setParams(patchParams(params, { all: e.target.checked ? undefined : '1' }))}
         />
       </PeriodPicker>
       <LoadState
         isPending={causes.isPending}
         error={causes.error}
         onRetry={() => void causes.refetch()}
-        isEmpty={shown.length === 0}
-        emptyTitle={
-          factor
-            ? `No ${factorLabels[factor].toLowerCase()} stands out in this period.`
-            : 'No level stands out in this period.'
-        }
+        isEmpty={!data || data.total === 0}
+        emptyTitle="No level has settled jars on both sides in this period."
       >
-        <Table caption="Likely causes, most likely first" tableClassName="max-sm:block">
+        {data && <LeadCards leads={data.leads} period={period} />}
+        <Table caption="Every level tested, by where it stands" tableClassName="max-sm:block">
           <thead className="max-sm:hidden">
             <tr>
               <th scope="col" className={`${th} ${num}`}>
@@ -108,7 +91,7 @@ export function CausesScreen() {
                 Level
               </th>
               <th scope="col" className={`${th} ${num}`}>
-                Contaminated jars
+                Contaminated of settled jars
               </th>
               <th scope="col" className={`${th} ${num}`}>
                 Relative risk (95 %)
@@ -117,29 +100,31 @@ export function CausesScreen() {
                 q (BH)
               </th>
               <th scope="col" className={th}>
-                Hint from the trade
+                Where it stands
               </th>
             </tr>
           </thead>
           <tbody className="max-sm:block">
-            {pageRows.map(({ row, rank }) => (
-              <CauseRowView key={`${row.factor}:${row.level}`} row={row} rank={rank} period={period} />
+            {(data?.causes ?? []).map((row, i) => (
+              <CauseRowView
+                key={`${row.factor}:${row.level}`}
+                row={row}
+                rank={(page - 1) * pageSize + i + 1}
+                period={period}
+                leads={leads}
+              />
             ))}
           </tbody>
         </Table>
-        {shown.length > pageSizes[0] && (
-          <Pager
-            page={Math.min(page, lastPage)}
-            pageSize={pageSize}
-            total={shown.length}
-            onChange={setPage}
-            sizes={pageSizes}
-          />
+        {data && data.total > pageSizes[0] && (
+          <Pager page={page} pageSize={pageSize} total={data.total} onChange={setPage} sizes={pageSizes} />
         )}
         <p className="mt-4 text-sm text-muted">
-          Fisher’s exact test, two-sided; q-values by Benjamini–Hochberg over every level tested; relative risk with the
-          log-method interval, adding 0.5 to each cell when one is zero. Hints are rules of thumb of the trade (common
-          practice unless a source is named) — check them against the jars, not instead of them.
+          Settled jars only: contaminated, or older than the observation window. Leads are chosen one at a time by the
+          Mantel–Haenszel relative risk stratified by the leads so far (Mantel & Haenszel 1959; interval by Greenland &
+          Robins 1985) and the Cochran–Mantel–Haenszel test against a Bonferroni bar; crude figures by Fisher’s exact
+          test with Benjamini–Hochberg q-values. Hints are rules of thumb of the trade (common practice unless a source
+          is named) — check them against the jars, not instead of them.
         </p>
       </LoadState>
     </>

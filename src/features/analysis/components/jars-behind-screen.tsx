@@ -12,6 +12,7 @@ import { factorLabels } from './labels';
 
 const onlyLabels: Record<JarsOnly, string> = {
   all: 'All jars',
+  settled: 'Settled jars',
   contaminated: 'Contaminated jars',
   incubating: 'Incubating jars',
 };
@@ -23,7 +24,8 @@ export function JarsBehindScreen() {
   const factor = readFactor(params, 'factor', 'grain');
   const level = params.get('level') ?? '';
   const onlyParam = params.get('only');
-  const only: JarsOnly = onlyParam === 'contaminated' || onlyParam === 'incubating' ? onlyParam : 'all';
+  const only: JarsOnly =
+    onlyParam === 'contaminated' || onlyParam === 'incubating' || onlyParam === 'settled' ? onlyParam : 'all';
   const page = Math.max(1, Number(params.get('page')) || 1);
   const jars = useQuery({ ...analysisQueries.jars(factor, level, only, period, page), enabled: level !== '' });
   const data = jars.data;

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { factorNames } from '../../../../shared/enums';
 import { createActionSchema, updateActionSchema, type CorrectiveActionDto } from '../../../../shared/schemas/incidents';
 import { Badge } from '../../../components/ui/badge';
@@ -91,10 +91,13 @@ export function ActionsPanel({
   incidentId,
   actions,
   canManage,
+  extra,
 }: {
   incidentId: number;
   actions: CorrectiveActionDto[];
   canManage: boolean;
+  /** What other features show on each action (the before/after verdict), composed by the route. */
+  extra?: ((action: CorrectiveActionDto) => ReactNode) | undefined;
 }) {
   const [completing, setCompleting] = useState<number | null>(null);
   return (
@@ -121,6 +124,7 @@ export function ActionsPanel({
               </Button>
             )}
             {completing === a.id && <CompleteForm action={a} onDone={() => setCompleting(null)} />}
+            {a.doneOn && extra?.(a)}
           </li>
         ))}
       </ul>

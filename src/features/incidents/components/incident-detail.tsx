@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { contaminantNames, type Role } from '../../../../shared/enums';
-import type { IncidentDetailDto } from '../../../../shared/schemas/incidents';
+import type { CorrectiveActionDto, IncidentDetailDto } from '../../../../shared/schemas/incidents';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { Fact, Facts } from '../../../components/ui/facts';
@@ -44,7 +44,15 @@ const canAddTo = (i: IncidentDetailDto, me: { id: number; role: Role }) =>
   (me.role === 'supervisor' ||
     ((me.role === 'technician' || me.role === 'admin') && i.status === 'open' && i.foundById === me.id));
 
-export function IncidentDetail({ id, me }: { id: number; me: { id: number; role: Role } }) {
+export function IncidentDetail({
+  id,
+  me,
+  actionExtra,
+}: {
+  id: number;
+  me: { id: number; role: Role };
+  actionExtra?: (action: CorrectiveActionDto) => ReactNode;
+}) {
   const detail = useQuery(incidentsQueries.detail(id));
   const [voiding, setVoiding] = useState(false);
   const [editing, setEditing] = useState(false);
@@ -138,7 +146,12 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
             </Section>
           )}
           <Section title="Corrective actions">
-            <ActionsPanel incidentId={i.id} actions={i.actions} canManage={supervisor && !i.voided} />
+            <ActionsPanel
+              incidentId={i.id}
+              actions={i.actions}
+              canManage={supervisor && !i.voided}
+              extra={actionExtra}
+            />
           </Section>
         </div>
         <div className="flex flex-col gap-6 print:mt-4">
