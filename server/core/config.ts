@@ -37,6 +37,7 @@ const configSchema = z.object({
   MAINTENANCE_INTERVAL_SECONDS: z.coerce.number().int().min(1).max(86_400).default(900),
   TRUST_PROXY: boolish.default(false),
   UPLOAD_DIR: z.string().default('.data/uploads'),
+  PHOTO_MAX_MEGAPIXELS: z.coerce.number().positive().max(1000).default(40),
   MAIL_SINK_DIR: z.string().default('.data/mail'),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
