@@ -26,6 +26,8 @@ const drainMs = 10_000;
 async function drain(server: Server): Promise<void> {
   const closed = new Promise<void>((resolve) => server.close(() => resolve()));
   server.closeIdleConnections();
+  // A connection that finishes its last request goes idle under keep-alive: close it then, not 5 s later.
+  const sweep = setInterval(() => server.closeIdleConnections(), 100);
   const cut = setTimeout(() => {
     logger.warn(`requests still running after ${drainMs / 1000} s; closing their connections`);
     server.closeAllConnections();
@@ -33,6 +35,7 @@ async function drain(server: Server): Promise<void> {
   cut.unref();
   await closed;
   clearTimeout(cut);
+  clearInterval(sweep);
 }
 
 /** Config → DataSource → migrations → app → listen; close() undoes it in reverse. */
