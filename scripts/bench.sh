@@ -5,4 +5,5 @@ cd "$(dirname "$0")/.."
 export PATH="/usr/sbin:$PATH"
 bash scripts/ensure-deps.sh
 bash scripts/ensure-mariadb.sh
+node_modules/.bin/tsx scripts/bench-fisher.ts
 exec node_modules/.bin/tsx scripts/bench-analysis.ts "$@"

@@ -1,4 +1,5 @@
 import { spawn, execFile, type ChildProcess } from 'node:child_process';
+import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -27,11 +28,23 @@ export interface MariaDbHandle {
 
 const isRoot = process.getuid?.() === 0;
 
+/**
+ * A temporary directory of this server's own: installs and servers started at the same moment
+ * otherwise share /tmp and clash on their temporary table names.
+ */
+function privateTmp(dataDir: string): string {
+  const dir = path.join(tmpdir(), `asepta-dbtmp-${createHash('sha1').update(dataDir).digest('hex').slice(0, 12)}`);
+  mkdirSync(dir, { recursive: true });
+  return dir;
+}
+
 async function initialise(dataDir: string) {
   mkdirSync(dataDir, { recursive: true });
   if (existsSync(path.join(dataDir, 'mysql'))) return;
   await run('mariadb-install-db', [
+    // --no-defaults must come first.
     '--no-defaults',
+    `--tmpdir=${privateTmp(dataDir)}`,
     `--datadir=${dataDir}`,
     '--auth-root-authentication-method=normal',
     '--skip-test-db',
@@ -82,6 +95,7 @@ export async function startMariaDb(opts: MariaDbOptions): Promise<MariaDbHandle>
     '--bind-address=127.0.0.1',
     `--socket=${socket}`,
     `--pid-file=${pidFile}`,
+    `--tmpdir=${privateTmp(dataDir)}`,
     '--character-set-server=utf8mb4',
     '--collation-server=utf8mb4_unicode_ci',
     '--skip-name-resolve',

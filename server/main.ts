@@ -13,7 +13,29 @@ import { closeMailTransport } from './mail/mail-transport';
 
 export interface RunningServer {
   url: string;
+  server: Server;
   close(): Promise<void>;
+}
+
+const drainMs = 10_000;
+
+/**
+ * Stops taking connections and lets requests in flight finish; idle keep-alive connections close at
+ * once, and whatever still runs after drainMs is cut so that a stop never hangs.
+ */
+async function drain(server: Server): Promise<void> {
+  const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+  server.closeIdleConnections();
+  // A connection that finishes its last request goes idle under keep-alive: close it then, not 5 s later.
+  const sweep = setInterval(() => server.closeIdleConnections(), 100);
+  const cut = setTimeout(() => {
+    logger.warn(`requests still running after ${drainMs / 1000} s; closing their connections`);
+    server.closeAllConnections();
+  }, drainMs);
+  cut.unref();
+  await closed;
+  clearTimeout(cut);
+  clearInterval(sweep);
 }
 
 /** Config → DataSource → migrations → app → listen; close() undoes it in reverse. */
@@ -36,10 +58,9 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
   logger.info(`Asepta is serving ${url}`);
   return {
     url,
+    server,
     async close() {
-      const closed = new Promise<void>((resolve) => server.close(() => resolve()));
-      server.closeAllConnections();
-      await closed;
+      await drain(server);
       digest?.stop();
       maintenance.stop();
       stopMailListeners();

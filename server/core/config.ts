@@ -1,4 +1,6 @@
+import path from 'node:path';
 import { z } from 'zod';
+import { publishedSecrets, readOrCreateSecret } from './session-secret';
 
 const boolish = z.enum(['0', '1', 'true', 'false']).transform((v) => v === '1' || v === 'true');
 
@@ -28,7 +30,15 @@ const configSchema = z.object({
   DB_USER: z.string().default('asepta'),
   DB_PASSWORD: z.string().default('asepta-local'),
   DB_DATA_DIR: z.string().default('.data/mariadb'),
-  SESSION_SECRET: z.string().min(16).default('asepta-development-session-secret'),
+  SESSION_SECRET: z
+    .string()
+    .min(16)
+    .refine(
+      (v) => !publishedSecrets.includes(v),
+      'is a published example value: unset it (a random one is made) or choose your own',
+    )
+    .optional(),
+  SESSION_SECRET_FILE: z.string().default('.data/session-secret'),
   SESSION_MAX_AGE_HOURS: z.coerce.number().positive().default(12),
   PASSWORD_HASH_ROUNDS: z.coerce.number().int().min(4).max(15).default(11),
   LOGIN_FAILURE_LIMIT: z.coerce.number().int().min(1).default(10),
@@ -37,6 +47,7 @@ const configSchema = z.object({
   MAINTENANCE_INTERVAL_SECONDS: z.coerce.number().int().min(1).max(86_400).default(900),
   TRUST_PROXY: boolish.default(false),
   UPLOAD_DIR: z.string().default('.data/uploads'),
+  PHOTO_MAX_MEGAPIXELS: z.coerce.number().positive().max(1000).default(40),
   MAIL_SINK_DIR: z.string().default('.data/mail'),
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
@@ -45,7 +56,7 @@ const configSchema = z.object({
   STATIC_DIR: z.string().default('dist'),
 });
 
-export type Config = z.infer<typeof configSchema> & { publicUrl: string };
+export type Config = z.infer<typeof configSchema> & { publicUrl: string; SESSION_SECRET: string };
 
 /** Fails fast with every bad key named, so a typo in the environment never starts a half-configured lab. */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -55,7 +66,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
   const c = parsed.data;
-  return { ...c, publicUrl: (c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`).replace(/\/$/, '') };
+  return {
+    ...c,
+    SESSION_SECRET: c.SESSION_SECRET ?? readOrCreateSecret(path.resolve(c.SESSION_SECRET_FILE)),
+    publicUrl: (c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`).replace(/\/$/, ''),
+  };
 }
 
 let current: Config | undefined;

@@ -10,6 +10,22 @@ export interface MailContent {
   html: string;
 }
 
+/** One message after its SMTP exchange and its sent_mails row. */
+export interface SettledMail {
+  kind: MailKind;
+  to: string;
+  subject: string;
+  status: 'sent' | 'failed';
+}
+
+const settledListeners = new Set<(mail: SettledMail) => void>();
+
+/** Lets a caller wait on a delivery instead of polling for it; answers an unsubscribe function. */
+export function onMailSettled(listener: (mail: SettledMail) => void): () => void {
+  settledListeners.add(listener);
+  return () => settledListeners.delete(listener);
+}
+
 export interface DeliveryResult {
   sent: number;
   failed: number;
@@ -54,6 +70,8 @@ export async function deliver(kind: MailKind, recipients: Recipient[], content: 
     }
     if (error) result.failed += 1;
     else result.sent += 1;
+    const settled: SettledMail = { kind, to: r.email, subject: content.subject, status: error ? 'failed' : 'sent' };
+    for (const listener of settledListeners) listener(settled);
   }
   return result;
 }

@@ -1,53 +1,24 @@
-import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
-import { fileTypeFromBuffer } from 'file-type';
 import { QueryFailedError, type EntityManager } from 'typeorm';
-import { heicRefusal, photoAcceptedTypes, photoField, type PhotoDto } from '../../shared/schemas/photos';
+import { photoAcceptedTypes, photoField, type PhotoDto } from '../../shared/schemas/photos';
 import { recordAudit, type Actor } from '../audit/audit.service';
 import { AppError, badRequest, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
 import { claimKey, isKeyClash, type IdempotencyClaim } from '../idempotency/idempotency.service';
+import { checkPixels, checkType, unreadable, type Checked, type UploadedFile } from './photo-checks';
 import { Photo } from './photo.entity';
 import { toPhotoDto } from './photos.mapper';
 import { photosRepository } from './photos.repository';
 import { photoStorage } from './photo-storage';
 import { thumbnailer, type DecodedPhoto } from './thumbnailer';
 
-export interface UploadedFile {
-  originalname: string;
-  buffer: Buffer;
-}
+export type { UploadedFile } from './photo-checks';
 
 const extensions: Record<(typeof photoAcceptedTypes)[number], string> = {
   'image/jpeg': 'jpg',
   'image/png': 'png',
   'image/webp': 'webp',
 };
-const heicTypes = new Set(['image/heic', 'image/heif', 'image/heic-sequence', 'image/heif-sequence']);
-
-const unsupported = (message: string, index: number) =>
-  new AppError(415, 'unsupported-media-type', message, [{ path: `${photoField}.${index}`, message }]);
-
-interface Checked {
-  file: UploadedFile;
-  mime: (typeof photoAcceptedTypes)[number];
-  sha256: string;
-}
-
-/** The type comes from the bytes, never from the name or the browser's Content-Type. */
-async function checkType(file: UploadedFile, index: number): Promise<Checked> {
-  const detected = await fileTypeFromBuffer(file.buffer);
-  if (detected && heicTypes.has(detected.mime)) throw unsupported(heicRefusal, index);
-  const mime = photoAcceptedTypes.find((t) => t === detected?.mime);
-  if (!mime) {
-    throw unsupported(
-      `${photoField}: "${file.originalname}" is not a JPEG, PNG or WebP image (found ${detected?.mime ?? 'no image'}).`,
-      index,
-    );
-  }
-  return { file, mime, sha256: createHash('sha256').update(file.buffer).digest('hex') };
-}
-
 const storageKeys = (sha256: string, mime: Checked['mime']) => ({
   storageKey: `originals/${sha256.slice(0, 2)}/${sha256}.${extensions[mime]}`,
   thumbKey: `thumbs/${sha256.slice(0, 2)}/${sha256}.jpg`,
@@ -58,14 +29,9 @@ const isDuplicate = (err: unknown) =>
 
 async function decode(c: Checked, index: number): Promise<DecodedPhoto> {
   try {
-    return await thumbnailer.decode(c.file.buffer);
+    return await thumbnailer.decode(c.file.buffer, c.mime);
   } catch {
-    throw new AppError(
-      422,
-      'unreadable-image',
-      `${photoField}: "${c.file.originalname}" could not be read as an image; it may be damaged.`,
-      [{ path: `${photoField}.${index}`, message: 'could not be read as an image' }],
-    );
+    throw unreadable(c, index);
   }
 }
 
@@ -83,6 +49,7 @@ export async function uploadPhotos(
       { path: photoField, message: 'attach at least one photo' },
     ]);
   const checked = await Promise.all(files.map(checkType));
+  checked.forEach(checkPixels);
   const known = new Map((await photosRepository.findBySha(checked.map((c) => c.sha256))).map((p) => [p.sha256, p]));
   const fresh = new Map<string, { c: Checked; index: number }>();
   checked.forEach((c, index) => {

@@ -1,5 +1,5 @@
 import { Worker } from 'node:worker_threads';
-import { jimpEntry, thumbnailWorkerSource } from './thumbnail-worker-source';
+import { jimpEntry, thumbnailWorkerSource, webpDecodeEntry, webpWasm } from './thumbnail-worker-source';
 
 export interface DecodedPhoto {
   width: number;
@@ -35,7 +35,12 @@ class Thumbnailer {
 
   private spawn(): Slot {
     const slot: Slot = {
-      worker: new Worker(thumbnailWorkerSource, { eval: true, workerData: { jimpEntry, thumbEdge } }),
+      worker: new Worker(thumbnailWorkerSource, {
+        eval: true,
+        workerData: { jimpEntry, webpDecodeEntry, webpWasm, thumbEdge },
+        // A second guard behind the pixel limit: a decoder that runs away ends its worker, not the server.
+        resourceLimits: { maxOldGenerationSizeMb: 256, maxYoungGenerationSizeMb: 48 },
+      }),
       jobs: new Map(),
     };
     slot.worker.unref();
@@ -77,13 +82,13 @@ class Thumbnailer {
   }
 
   /** Width and height as the photo is seen (EXIF orientation applied) and a JPEG thumbnail. */
-  decode(bytes: Buffer): Promise<DecodedPhoto> {
+  decode(bytes: Buffer, mime: string): Promise<DecodedPhoto> {
     const jobId = this.nextId++;
     const slot = this.pick();
     clearTimeout(slot.idle);
     return new Promise((resolve, reject) => {
       slot.jobs.set(jobId, { resolve, reject });
-      slot.worker.postMessage({ jobId, bytes });
+      slot.worker.postMessage({ jobId, bytes, mime });
     });
   }
 }

@@ -10,7 +10,7 @@ import { getLabSettings } from '../../server/settings/settings.service';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { makeCookRun, makeCulture, makeIncident, makeJars, makeSession } from '../setup/lab-rows';
-import { mailsTo, waitForMail } from '../setup/mail-sink';
+import { mailSettled, mailsTo, mailsWhere } from '../setup/mail-sink';
 
 const app = createTestApp();
 type Client = Awaited<ReturnType<typeof signedIn>>;
@@ -110,7 +110,9 @@ describe('mail on a new incident', () => {
 
     const outcome = await notifyIncidentCreated(incident.id);
     const subject = `New incident #${incident.id}: green mould (Trichoderma), 2 jars`;
-    const recipients = (await waitForMail((m) => m.subject === subject)).flatMap((m) => m.to).sort();
+    const recipients = mailsWhere((m) => m.subject === subject)
+      .flatMap((m) => m.to)
+      .sort();
     expect(recipients).toEqual(await eligible('new-incident', ['supervisor']));
     expect(recipients).toContain(sup.user.email);
     expect(recipients).not.toContain(quiet.user.email);
@@ -134,6 +136,9 @@ describe('mail on a new incident', () => {
     registerMailListeners();
     const jars = await makeJars(1, { inoculatedOn: '2024-07-15' });
     const incident = await makeIncident(jars, { foundOn: '2024-07-20', contaminant: 'bacterial' });
+    const delivered = mailSettled(
+      (m) => m.to === sup.user.email && m.subject.startsWith(`New incident #${incident.id}:`),
+    );
     emitIncidentCreated({
       id: incident.id,
       contaminant: 'bacterial',
@@ -143,7 +148,8 @@ describe('mail on a new incident', () => {
       foundByName: 'Test finder',
       jarLabels: [jars[0]!.label],
     });
-    const got = await waitForMail(
+    expect((await delivered).status).toBe('sent');
+    const got = mailsWhere(
       (m) => m.to.includes(sup.user.email!) && m.subject.startsWith(`New incident #${incident.id}:`),
     );
     expect(got.map((m) => m.subject)).toEqual([`New incident #${incident.id}: bacterial (wet spot), 1 jar`]);
@@ -227,7 +233,9 @@ describe('cluster alerts', () => {
     expect(ofRun(sup.user.email!)).toHaveLength(1);
     expect(ofRun(trainer.user.email!)).toHaveLength(1);
     expect(ofRun(quiet.user.email!)).toHaveLength(0);
-    const all = (await waitForMail((m) => m.subject.includes(run.code))).flatMap((m) => m.to).sort();
+    const all = mailsWhere((m) => m.subject.includes(run.code))
+      .flatMap((m) => m.to)
+      .sort();
     expect(all).toEqual(await eligible('cluster-alert', ['supervisor', 'trainer']));
 
     const mail = ofRun(sup.user.email!)[0]!;

@@ -2,9 +2,10 @@ import { createHash } from 'node:crypto';
 import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import supertest from 'supertest';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { Jimp } from 'jimp';
 import { Photo } from '../../server/photos/photo.entity';
+import { thumbnailer } from '../../server/photos/thumbnailer';
 import { config } from '../../server/core/config';
 import { dataSource } from '../../server/db/data-source';
 import { heicRefusal } from '../../shared/schemas/photos';
@@ -161,17 +162,25 @@ describe('POST /api/photos', () => {
   it('keeps answering other requests while a large photo is decoded', async () => {
     const tech = await signedIn(app, 'technician');
     const bytes = await makeJpeg(3000, 2000);
-    let uploadDone = 0;
-    const uploading = upload(tech, [{ bytes, name: 'large.jpg' }]).then((r) => {
-      uploadDone = Date.now();
-      return r;
+    // Events, not the clock: learn when decoding starts and whether it has finished.
+    const decode = thumbnailer.decode.bind(thumbnailer);
+    let decoded = false;
+    let started!: () => void;
+    const decoding = new Promise<void>((resolve) => (started = resolve));
+    const spy = vi.spyOn(thumbnailer, 'decode').mockImplementation((b, mime) => {
+      started();
+      return decode(b, mime).finally(() => (decoded = true));
     });
-    await new Promise((r) => setTimeout(r, 150));
-    await tech.agent.get('/api/auth/me').expect(200);
-    const otherDone = Date.now();
-    const res = await uploading;
-    expect(res.status).toBe(201);
-    expect(otherDone).toBeLessThan(uploadDone);
+    try {
+      const uploading = upload(tech, [{ bytes, name: 'large.jpg' }]);
+      await decoding;
+      await tech.agent.get('/api/auth/me').expect(200);
+      // Decoding a 6-megapixel JPEG takes the worker about a second; a sign-in check, milliseconds.
+      expect(decoded).toBe(false);
+      expect((await uploading).status).toBe(201);
+    } finally {
+      spy.mockRestore();
+    }
   });
 });
 

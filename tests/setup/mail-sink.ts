@@ -1,6 +1,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { inject } from 'vitest';
+import { onMailSettled, type SettledMail } from '../../server/mail/mailer';
 
 export interface SinkMail {
   file: string;
@@ -106,12 +107,19 @@ export function readMailSink(dir = mailSinkDir()): SinkMail[] {
 export const mailsTo = (address: string, mails = readMailSink()) =>
   mails.filter((m) => m.to.includes(address.toLowerCase()));
 
-/** Polls the sink for mail sent by an after-commit listener that the request did not wait for. */
-export async function waitForMail(match: (m: SinkMail) => boolean, timeoutMs = 5000): Promise<SinkMail[]> {
-  const until = Date.now() + timeoutMs;
-  for (;;) {
-    const found = readMailSink().filter(match);
-    if (found.length || Date.now() > until) return found;
-    await new Promise((r) => setTimeout(r, 50));
-  }
+/**
+ * Resolves once the app has sent (or failed to send) a matching message: an event, not a poll
+ * against the clock. Call it before the action that sends, so the event cannot be missed.
+ */
+export function mailSettled(match: (m: SettledMail) => boolean): Promise<SettledMail> {
+  return new Promise((resolve) => {
+    const off = onMailSettled((m) => {
+      if (!match(m)) return;
+      off();
+      resolve(m);
+    });
+  });
 }
+
+/** Messages in the sink that match; the fake writes each file before it answers the app. */
+export const mailsWhere = (match: (m: SinkMail) => boolean) => readMailSink().filter(match);

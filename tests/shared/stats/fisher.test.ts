@@ -69,10 +69,12 @@ describe('fisherExactTwoSided', () => {
     expect(fisherExactTwoSided(75000, 75000, 75000, 75000)).toBeLessThanOrEqual(1);
   });
 
-  it('runs well under a millisecond per call for a register of ~300 000 jars', () => {
-    const start = performance.now();
-    for (let i = 0; i < 200; i++) fisherExactTwoSided(300 + (i % 50), 9700, 9000, 281000);
-    expect((performance.now() - start) / 200).toBeLessThan(2);
+  it('answers a probability for every table of a register of ~300 000 jars (timings: npm run bench)', () => {
+    for (let i = 0; i < 200; i++) {
+      const p = fisherExactTwoSided(300 + (i % 50), 9700, 9000, 281000);
+      expect(p).toBeGreaterThanOrEqual(0);
+      expect(p).toBeLessThanOrEqual(1);
+    }
   });
 
   it('rejects negative or fractional cells', () => {
