@@ -38,6 +38,10 @@ export function createAppRouter(queryClient: QueryClient) {
               children: [
                 { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
                 {
+                  path: paths.scan.pattern,
+                  lazy: () => import('./routes/scan').then((m) => ({ Component: m.ScanRoute })),
+                },
+                {
                   path: paths.outbox.pattern,
                   lazy: () => import('./routes/outbox').then((m) => ({ Component: m.OutboxRoute })),
                 },
