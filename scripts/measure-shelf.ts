@@ -6,7 +6,7 @@
  */
 import 'reflect-metadata';
 import { Jimp } from 'jimp';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
 import { freePort } from './free-port';
 import { applyTestEnv } from '../tests/setup/test-env';
 import { startThrowawayDb } from '../tests/setup/throwaway-db';
@@ -83,7 +83,7 @@ try {
   // The flag flow as a technician does it; a tap on something below the fold would need a scroll first.
   let taps = 0;
   let scrolls = 0;
-  const tap = async (target: ReturnType<Page['getByRole']>) => {
+  const tap = async (target: Locator) => {
     const box = await target.boundingBox();
     if (!box || box.y + box.height > phone.height) scrolls += 1;
     taps += 1;
@@ -95,9 +95,9 @@ try {
   await tap(flagLink);
   await flagLink.click();
   const tile = page.getByText('Green mould', { exact: true });
-  await tap(tile as ReturnType<Page['getByRole']>);
+  await tap(tile);
   await tile.click();
-  await tap(page.getByText('Take a photo') as ReturnType<Page['getByRole']>);
+  await tap(page.getByText('Take a photo'));
   await page.locator('input[type=file]').setInputFiles({ name: 'jar.jpg', mimeType: 'image/jpeg', buffer: photo });
   await page.getByRole('img', { name: 'jar.jpg' }).waitFor();
   const send = page.getByRole('button', { name: 'Flag jar' });
