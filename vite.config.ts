@@ -56,7 +56,8 @@ export default defineConfig({
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/j': `http://127.0.0.1:${apiPort}` },
   },
-  build: { outDir: 'dist', sourcemap: true },
+  // The manifest tells the server which chunks a jar page needs, so it can preload them with the page.
+  build: { outDir: 'dist', sourcemap: true, manifest: true },
   test: {
     projects: [
       {

@@ -45,7 +45,12 @@ export function createApp({ sessionStore }: AppDeps): Express {
   app.use(
     helmet({
       contentSecurityPolicy: {
-        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'upgrade-insecure-requests': null },
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          // The scanner's QR reader is WebAssembly; this allows compiling it, not eval().
+          'script-src': ["'self'", "'wasm-unsafe-eval'"],
+          'upgrade-insecure-requests': null,
+        },
       },
       // HSTS on a plain-HTTP loopback address would pin browsers to HTTPS that is not there.
       strictTransportSecurity: c.publicUrl.startsWith('https:'),

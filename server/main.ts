@@ -1,11 +1,13 @@
 import 'reflect-metadata';
 import type { Server } from 'node:http';
+import { createServer as createHttpsServer } from 'node:https';
 import { createApp } from './app';
 import { startAuthMaintenance } from './auth/auth-maintenance';
 import { createSessionStore } from './auth/session';
 import { config } from './core/config';
 import { logger } from './core/logger';
 import { installProcessGuards } from './core/process-guards';
+import { labCertificate } from './core/tls';
 import { dataSource } from './db/data-source';
 import { startDigestScheduler } from './mail/digest-scheduler';
 import { registerMailListeners } from './mail/mail-listeners';
@@ -50,11 +52,14 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
   const maintenance = startAuthMaintenance();
   void maintenance.run();
   const server: Server = await new Promise((resolve, reject) => {
-    const s = app.listen(c.PORT, c.HOST, () => resolve(s)).once('error', reject);
+    const s = c.HTTPS
+      ? createHttpsServer(labCertificate(c.TLS_DIR, c.HOST), app).listen(c.PORT, c.HOST, () => resolve(s))
+      : app.listen(c.PORT, c.HOST, () => resolve(s));
+    s.once('error', reject);
   });
   const address = server.address();
   const port = typeof address === 'object' && address ? address.port : c.PORT;
-  const url = `http://${c.HOST}:${port}`;
+  const url = `${c.HTTPS ? 'https' : 'http'}://${c.HOST}:${port}`;
   logger.info(`Asepta is serving ${url}`);
   return {
     url,

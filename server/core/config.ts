@@ -9,6 +9,9 @@ const configSchema = z.object({
   HOST: z.string().min(1).default('127.0.0.1'),
   PORT: z.coerce.number().int().min(0).max(65535).default(5180),
   PUBLIC_URL: z.url().optional(),
+  /** Serve over HTTPS with a self-signed certificate made on first use: phones give camera access only to secure pages. */
+  HTTPS: boolish.default(false),
+  TLS_DIR: z.string().default('.data/tls'),
   ASEPTA_DEMO: boolish.default(true),
   LAB_TIME_ZONE: z
     .string()
@@ -66,10 +69,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
   const c = parsed.data;
+  const scheme = c.HTTPS ? 'https' : 'http';
   return {
     ...c,
     SESSION_SECRET: c.SESSION_SECRET ?? readOrCreateSecret(path.resolve(c.SESSION_SECRET_FILE)),
-    publicUrl: (c.PUBLIC_URL ?? `http://${c.HOST}:${c.PORT}`).replace(/\/$/, ''),
+    publicUrl: (c.PUBLIC_URL ?? `${scheme}://${c.HOST}:${c.PORT}`).replace(/\/$/, ''),
   };
 }
 

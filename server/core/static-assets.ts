@@ -1,5 +1,6 @@
 import path from 'node:path';
 import express, { type Express } from 'express';
+import { jarPageHtml } from './page-preloads';
 
 const year = 365 * 24 * 60 * 60;
 
@@ -21,6 +22,13 @@ export function serveClient(app: Express, staticDir: string): void {
       },
     }),
   );
+  const jarPage = jarPageHtml(staticDir);
+  app.get('/j/:label', (req, res, next) => {
+    const html = jarPage(String(req.params.label));
+    if (!html) return next();
+    res.setHeader('Cache-Control', 'no-cache');
+    res.type('html').send(html);
+  });
   app.get('/{*splat}', (_req, res) => {
     res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(path.join(staticDir, 'index.html'));

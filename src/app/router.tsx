@@ -6,6 +6,7 @@ import { FullPageSpinner } from '../components/ui/spinner';
 import { paths, safeReturnPath } from '../config/paths';
 import { access, productionRoles } from '../config/roles';
 import { authQueries } from '../features/auth/api/auth-queries';
+import { jarsQueries } from '../features/jars/api/jars-queries';
 import { RoleGate, SessionLayout, sessionLoader } from './session-guard';
 
 /** Someone already signed in who opens the sign-in page goes straight on. */
@@ -37,6 +38,10 @@ export function createAppRouter(queryClient: QueryClient) {
               errorElement: <RouteError />,
               children: [
                 { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
+                {
+                  path: paths.scan.pattern,
+                  lazy: () => import('./routes/scan').then((m) => ({ Component: m.ScanRoute })),
+                },
                 {
                   path: paths.outbox.pattern,
                   lazy: () => import('./routes/outbox').then((m) => ({ Component: m.OutboxRoute })),
@@ -177,6 +182,12 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
                 {
                   path: paths.jarPage.pattern,
+                  // Asks for the jar while the screen's code and the session check are still on their way:
+                  // on a weak signal every round trip saved is half a second.
+                  loader: ({ params }) => {
+                    if (params.label) void queryClient.prefetchQuery(jarsQueries.byLabel(params.label.trim()));
+                    return null;
+                  },
                   lazy: () => import('./routes/jar').then((m) => ({ Component: m.JarRoute })),
                 },
                 {

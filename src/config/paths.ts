@@ -24,6 +24,7 @@ export const paths = {
   account: { pattern: '/account', to: () => '/account' },
   /** What this phone still holds for the server: flags, photos and shelf marks. */
   outbox: { pattern: '/outbox', to: () => '/outbox' },
+  scan: { pattern: '/scan', to: () => '/scan' },
   users: { pattern: '/users', to: (query?: Query) => withQuery('/users', query) },
   historyImport: { pattern: '/imports/history', to: () => '/imports/history' },
   cookRuns: { pattern: '/cook-runs', to: (query?: Query) => withQuery('/cook-runs', query) },

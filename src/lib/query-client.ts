@@ -18,6 +18,8 @@ export function createQueryClient({ onUnauthenticated }: Options = {}): QueryCli
     defaultOptions: {
       queries: {
         staleTime: 30_000,
+        // Try the request even offline: the service worker answers reads it has seen from its cache.
+        networkMode: 'offlineFirst',
         retry: (failureCount, error) => !isClientError(error) && failureCount < 2,
       },
       mutations: { retry: false },

@@ -1,48 +1,14 @@
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { newPage, phone, shotsDir, signIn, useBrowser } from './support/browser';
+import { jarsOnAShelf } from './support/shelf-jars';
 
 const browser = useBrowser();
-let counter = 0;
-const stamp = () => `${Date.now().toString(36).toUpperCase()}${(counter += 1)}`;
-
-async function post<T>(page: Page, url: string, data: unknown): Promise<T> {
-  const { token } = (await (await page.request.get('/api/auth/csrf')).json()) as { token: string };
-  const res = await page.request.post(url, { headers: { 'X-CSRF-Token': token }, data });
-  if (!res.ok()) throw new Error(`${url}: ${res.status()} ${await res.text()}`);
-  return (await res.json()) as T;
-}
-
-/** Three invented jars on a shelf of their own, made through the API as the signed-in technician. */
-async function threeJarsOnAShelf(page: Page) {
-  const today = new Date().toISOString().slice(0, 10);
-  const tag = stamp();
-  const session = await post<{ id: number }>(page, '/api/sessions', {
-    code: `E2E-S-${tag}`,
-    heldOn: today,
-    operatorName: 'E2E operator',
-    workspace: 'flow-hood',
-  });
-  const culture = await post<{ id: number }>(page, '/api/cultures', { code: `E2E-LC-${tag}` });
-  const grains = (await (await page.request.get('/api/grains')).json()) as { id: number; name: string }[];
-  const shelf = `E2E-${tag}`;
-  const batch = await post<{ jars: { id: number; label: string }[] }>(page, '/api/jars/batch', {
-    sessionId: session.id,
-    count: 3,
-    grainId: grains.find((g) => g.name === 'rye')!.id,
-    cultureId: culture.id,
-    room: 'E2E room',
-    shelf,
-  });
-  return { jars: batch.jars, shelf };
-}
-
 describe('jars on a phone', () => {
   it('opens a jar from its QR address and walks a shelf of three jars', async () => {
     const { context, page } = await newPage(browser(), phone);
     await signIn(page, 'technician');
     await page.getByRole('navigation', { name: 'Main' }).first().waitFor();
-    const { jars, shelf } = await threeJarsOnAShelf(page);
+    const { jars, shelf } = await jarsOnAShelf(page, 3);
 
     // The address the QR code encodes is the jar's page.
     const story = (await (await page.request.get(`/api/jars/${jars[0]!.id}`)).json()) as { pageUrl: string };
@@ -56,14 +22,16 @@ describe('jars on a phone', () => {
     await page.screenshot({ path: `${shotsDir}/jar-page-phone.png`, fullPage: true });
 
     await page.goto(`/jars/shelf-walk?room=${encodeURIComponent('E2E room')}&shelf=${encodeURIComponent(shelf)}`);
+    await page.getByRole('button', { name: 'Start the walk' }).click();
     for (const [i, mark] of (['Clean', 'Colonised', 'Shaken'] as const).entries()) {
       await page.getByText(`${i + 1} of 3`, { exact: true }).waitFor();
       expect(await page.getByRole('link', { name: jars[i]!.label }).isVisible()).toBe(true);
       if (i === 1) await page.screenshot({ path: `${shotsDir}/shelf-walk-jar-phone.png` });
       await page.getByRole('button', { name: mark, exact: true }).click();
     }
-    await page.getByRole('button', { name: 'Save 3 marks' }).click();
+    // Each mark is saved as it is made: nothing to press at the end of the shelf.
     await page.getByRole('link', { name: 'See this shelf’s jars' }).waitFor();
+    await page.getByText('3 marked · all saved').waitFor();
     await page.screenshot({ path: `${shotsDir}/shelf-walk-phone.png`, fullPage: true });
 
     const after = (await (
@@ -85,7 +53,7 @@ describe('jars on a phone', () => {
     const { context, page } = await newPage(browser(), phone);
     await signIn(page, 'technician');
     await page.getByRole('navigation', { name: 'Main' }).first().waitFor();
-    const { jars } = await threeJarsOnAShelf(page);
+    const { jars } = await jarsOnAShelf(page, 3);
     await page.goto(`/jars/labels?ids=${jars.map((j) => j.id).join(',')}&layout=roll`);
     const images = page.getByRole('img', { name: /^QR code for / });
     await images.first().waitFor();

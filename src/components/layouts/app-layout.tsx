@@ -5,7 +5,7 @@ import { navigationFor, prioritisedFor } from '../../config/navigation';
 import { paths } from '../../config/paths';
 import { roleLabels } from '../../config/roles';
 import { Badge } from '../ui/badge';
-import { Button } from '../ui/button';
+import { Button, buttonClasses } from '../ui/button';
 import { Dialog } from '../ui/dialog';
 import { Icon } from '../ui/icon';
 import { BottomBar, SideNav } from './nav-links';
@@ -66,6 +66,10 @@ export function AppLayout({ user, onSignOut, signingOut, children }: AppLayoutPr
               <span className="block font-semibold">{user.displayName}</span>
               <span className="text-sm text-muted">{roleLabels[user.role]}</span>
             </p>
+            <Link to={paths.scan.to()} className={buttonClasses('secondary')} aria-label="Scan a jar label">
+              <Icon name="scan" size={22} />
+              <span className="sr-only sm:not-sr-only">Scan</span>
+            </Link>
             <Badge tone="accent" className="md:hidden">
               {roleLabels[user.role]}
             </Badge>

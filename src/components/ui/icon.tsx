@@ -16,6 +16,7 @@ const glyphs = {
   'sign-out': ['M14 4h5v16h-5', 'M10 8l-4 4 4 4', 'M6 12h10'],
   plus: ['M12 5v14', 'M5 12h14'],
   search: ['M11 18a7 7 0 1 0 0-14 7 7 0 0 0 0 14Z', 'M16 16l4.5 4.5'],
+  scan: ['M4 8V4h4', 'M16 4h4v4', 'M20 16v4h-4', 'M8 20H4v-4', 'M4 12h16'],
   'chevron-left': ['M15 5l-7 7 7 7'],
   'chevron-right': ['M9 5l7 7-7 7'],
   'sort-asc': ['M12 6l-5 6h10Z'],

@@ -6,7 +6,13 @@ import { getItem, putItem, removeItem } from '../../lib/outbox/outbox-store';
 
 export type Outcome = { sent: true; incidentId: number } | { sent: false };
 
-const held = (files: File[]): OutboxPhoto[] => files.map((blob) => ({ key: newKey(), name: blob.name, blob }));
+/** Each photo keeps the key it may already have been sent under, so it is stored once. */
+export interface PhotoToSend {
+  uploadKey: string;
+  file: File;
+}
+const held = (photos: PhotoToSend[]): OutboxPhoto[] =>
+  photos.map((p) => ({ key: p.uploadKey, name: p.file.name, blob: p.file }));
 
 /**
  * Puts the flag (or the photos for an open incident) in the outbox first, then tries to send it:
@@ -26,10 +32,10 @@ async function queueAndSend(item: Parameters<typeof putItem>[0]): Promise<Outcom
   return { sent: false };
 }
 
-export const sendFlag = (input: Omit<CreateIncidentInput, 'photoIds'>, files: File[]) =>
+export const sendFlag = (input: Omit<CreateIncidentInput, 'photoIds'>, files: PhotoToSend[]) =>
   queueAndSend({ id: newKey(), kind: 'flag', createdAt: Date.now(), state: 'waiting', input, photos: held(files) });
 
-export const sendPhotosTo = (incidentId: number, files: File[]) =>
+export const sendPhotosTo = (incidentId: number, files: PhotoToSend[]) =>
   queueAndSend({
     id: newKey(),
     kind: 'photos',

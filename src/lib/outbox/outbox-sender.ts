@@ -2,6 +2,7 @@ import { idempotencyHeader } from '../../../shared/schemas/idempotency';
 import { photoField } from '../../../shared/schemas/photos';
 import { api, ApiError } from '../api-client';
 import { upload } from '../upload';
+import { earlyUpload } from './early-uploads';
 import type { OutboxItem, OutboxPhoto } from './outbox-items';
 import { listItems, putItem, removeItem } from './outbox-store';
 import { setProgress } from './outbox-progress';
@@ -33,6 +34,12 @@ async function sendPhotos(item: OutboxItem & { photos: OutboxPhoto[] }): Promise
   const total = item.photos.length;
   for (const [i, photo] of item.photos.entries()) {
     if (photo.photoId) continue;
+    const early = await earlyUpload(photo.key);
+    if (early) {
+      photo.photoId = early;
+      await putItem(item);
+      continue;
+    }
     const body = new FormData();
     body.append(photoField, photo.blob, photo.name);
     const [stored] = await upload<{ id: number }[]>('/photos', body, {

@@ -11,7 +11,7 @@ export const shotsDir = path.resolve('.data/screenshots');
 const executablePath = process.env.CHROMIUM_PATH ?? '/usr/lib/chromium/chromium';
 
 /** One headless Debian chromium per test file; playwright gives each launch a fresh profile directory. */
-export function useBrowser(): () => Browser {
+export function useBrowser(extraArgs: string[] = []): () => Browser {
   let browser: Browser | undefined;
   beforeAll(async () => {
     mkdirSync(shotsDir, { recursive: true });
@@ -27,6 +27,7 @@ export function useBrowser(): () => Browser {
         '--disable-component-update',
         '--disable-sync',
         '--no-first-run',
+        ...extraArgs,
       ],
     });
   });

@@ -57,10 +57,7 @@ export function FlagJarScreen({ jarLabel, openIncident }: Props) {
         if (refused || checking) return;
         try {
           const { photoIds: _none, ...input } = toCreateInput(values);
-          const outcome = await sendFlag(
-            input,
-            photos.map((p) => p.file),
-          );
+          const outcome = await sendFlag(input, photos);
           const jars = input.jarLabels?.join(', ') ?? '';
           if (outcome.sent) toast.success(`Incident ${outcome.incidentId} recorded for ${jars}.`);
           else toast.success(`No connection: the flag of ${jars} is kept on this phone and sends itself later.`);
@@ -92,9 +89,7 @@ export function FlagJarScreen({ jarLabel, openIncident }: Props) {
               error={errors.jarText?.message}
               {...register('jarText')}
             />
-            {openIncident && (
-              <OpenIncidentNotice incident={openIncident} files={photos.map((p) => p.file)} blocked={refused} />
-            )}
+            {openIncident && <OpenIncidentNotice incident={openIncident} files={photos} blocked={refused} />}
             <ChoiceTiles
               legend="What is growing?"
               name="contaminant"

@@ -3,10 +3,14 @@ import { photoAcceptedTypes } from '../../../../shared/schemas/photos';
 import { Button } from '../../../components/ui/button';
 import { Icon } from '../../../components/ui/icon';
 import { cx } from '../../../lib/cx';
+import { uploadEarly } from '../../../lib/outbox/early-uploads';
+import { newKey } from '../../../lib/outbox/outbox-items';
 import { photoRefusal } from '../../../lib/photo-bytes';
 
 export interface HeldPhoto {
   key: number;
+  /** The photo's Idempotency-Key: sent early when there is signal, the flag's own send then gets the stored answer. */
+  uploadKey: string;
   file: File;
   preview: string;
   /** Why the photo cannot be sent; the form is blocked until it is removed or replaced. */
@@ -40,15 +44,22 @@ export function HeldPhotos({ photos, onChange, max = 6 }: Props) {
     const room = replace === null ? Math.max(0, max - photos.length) : 1;
     const picked = Array.from(files ?? [])
       .slice(0, room)
-      .map((file) => ({ key: nextKey.current++, file, preview: URL.createObjectURL(file), refusal: undefined }));
+      .map((file) => ({
+        key: nextKey.current++,
+        uploadKey: newKey(),
+        file,
+        preview: URL.createObjectURL(file),
+        refusal: undefined,
+      }));
     onChange((all) => {
       const kept = replace === null ? all : all.filter((p) => p.key !== replace);
       return [...kept, ...picked];
     });
     for (const p of picked) {
-      void photoRefusal(p.file).then((refusal) =>
-        onChange((all) => all.map((x) => (x.key === p.key ? { ...x, refusal } : x))),
-      );
+      void photoRefusal(p.file).then((refusal) => {
+        onChange((all) => all.map((x) => (x.key === p.key ? { ...x, refusal } : x)));
+        if (!refusal) uploadEarly(p.uploadKey, p.file);
+      });
     }
     if (input.current) input.current.value = '';
   };

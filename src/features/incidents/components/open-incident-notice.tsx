@@ -6,11 +6,11 @@ import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
-import { sendPhotosTo } from '../flag-outbox';
+import { sendPhotosTo, type PhotoToSend } from '../flag-outbox';
 
 interface Props {
   incident: { id: number; foundOn: string; label: string };
-  files: File[];
+  files: PhotoToSend[];
   blocked: boolean;
 }
 
