@@ -7,6 +7,7 @@ import { logger } from './core/logger';
 import { dataSource } from './db/data-source';
 import { startDigestScheduler } from './mail/digest-scheduler';
 import { registerMailListeners } from './mail/mail-listeners';
+import { startReminderScheduler } from './mail/reminder-scheduler';
 import { closeMailTransport } from './mail/mail-transport';
 
 export interface RunningServer {
@@ -23,6 +24,7 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
   const app = createApp({ sessionStore });
   const stopMailListeners = registerMailListeners();
   const digest = (options.digest ?? c.NODE_ENV !== 'test') ? startDigestScheduler() : undefined;
+  const reminders = (options.digest ?? c.NODE_ENV !== 'test') ? startReminderScheduler() : undefined;
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(c.PORT, c.HOST, () => resolve(s)).once('error', reject);
   });
@@ -37,6 +39,7 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
       server.closeAllConnections();
       await closed;
       digest?.stop();
+      reminders?.stop();
       stopMailListeners();
       closeMailTransport();
       await sessionStore.close();

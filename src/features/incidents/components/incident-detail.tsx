@@ -12,6 +12,7 @@ import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
 import { incidentsQueries } from '../api/incidents-queries';
 import { causeLabels, severityLabels, stageLabels } from '../labels';
+import type { PersonDto } from '../../../../shared/schemas/users';
 import { ActionsPanel } from './actions-panel';
 import { AddPhotos } from './add-photos';
 import { EditIncidentDialog } from './edit-incident-dialog';
@@ -44,7 +45,16 @@ const canAddTo = (i: IncidentDetailDto, me: { id: number; role: Role }) =>
   (me.role === 'supervisor' ||
     ((me.role === 'technician' || me.role === 'admin') && i.status === 'open' && i.foundById === me.id));
 
-export function IncidentDetail({ id, me }: { id: number; me: { id: number; role: Role } }) {
+export function IncidentDetail({
+  id,
+  me,
+  people = [],
+}: {
+  id: number;
+  me: { id: number; role: Role };
+  /** Who may own a corrective action. */
+  people?: PersonDto[];
+}) {
   const detail = useQuery(incidentsQueries.detail(id));
   const [voiding, setVoiding] = useState(false);
   const [editing, setEditing] = useState(false);
@@ -138,7 +148,7 @@ export function IncidentDetail({ id, me }: { id: number; me: { id: number; role:
             </Section>
           )}
           <Section title="Corrective actions">
-            <ActionsPanel incidentId={i.id} actions={i.actions} canManage={supervisor && !i.voided} />
+            <ActionsPanel incidentId={i.id} actions={i.actions} canManage={supervisor && !i.voided} people={people} />
           </Section>
         </div>
         <div className="flex flex-col gap-6 print:mt-4">
