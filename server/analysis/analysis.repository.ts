@@ -339,18 +339,25 @@ export const analysisRepository = {
     only: 'all' | 'contaminated' | 'incubating',
     f: Frame,
     page: { offset: number; limit: number },
+    and?: { factor: Factor; level: string },
   ) {
     const fs = perJar(factor, f.edges);
-    const extra = [`${fs.level} = ?`];
+    const second = and ? factorSql(and.factor, f.edges, factorSql(and.factor, f.edges, '').key, '2') : null;
+    const extra = [`${fs.level} = ?`, ...(second ? [`${second.level} = ?`] : [])];
     if (only === 'contaminated') extra.push('cj.jarId IS NOT NULL');
     if (only === 'incubating') extra.push('cj.jarId IS NULL AND j.inoculatedOn > ?');
     const { where, params } = periodWhere(f, extra);
-    const bound = [level, ...(only === 'incubating' ? [f.windowStart] : []), ...params];
-    const from = `FROM jars j ${fs.joins.join(' ')} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
+    const bound = [level, ...(and ? [and.level] : []), ...(only === 'incubating' ? [f.windowStart] : []), ...params];
+    const joins = [...fs.joins, ...(second?.joins ?? [])].join(' ');
+    const from = `FROM jars j ${joins} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
+    // The jar's first live incident, so the list can link it (DESIGN §3: not voided, not ruled out).
+    const incident = `(SELECT MIN(li.id) FROM incident_jars lij JOIN incidents li ON li.id = lij.incidentId
+        WHERE lij.jarId = j.id AND li.voided = 0 AND li.verdict <> 'ruled-out')`;
     const [items, total] = await Promise.all([
       dataSource.query<Raw>(
         `SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
-            (cj.jarId IS NULL AND j.inoculatedOn > ?) AS incubating, cj.contaminant, cj.foundOn
+            (cj.jarId IS NULL AND j.inoculatedOn > ?) AS incubating, cj.contaminant, cj.foundOn,
+            ${incident} AS incidentId
           ${from} ORDER BY j.inoculatedOn, j.label LIMIT ? OFFSET ?`,
         [f.windowStart, ...bound, page.limit, page.offset],
       ),
@@ -366,6 +373,7 @@ export const analysisRepository = {
         incubating: num(r.incubating) === 1,
         contaminant: str(r.contaminant),
         foundOn: dateText(r.foundOn),
+        incidentId: r.incidentId === null ? null : num(r.incidentId),
       })),
       total: num(total[0]?.n),
     };
