@@ -119,6 +119,8 @@ export const incidentListQuerySchema = pageQuerySchema
     sessionId: idSchema.optional(),
     operator: z.string().trim().min(1).max(120).optional(),
     jar: z.string().trim().min(1).max(40).optional(),
+    /** One box for a picker: an incident number with or without #, a jar label, an operator or a contaminant. */
+    q: z.string().trim().min(1).max(80).optional(),
     ...dateRangeShape,
     voided: boolQuery.optional(),
   })
