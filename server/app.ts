@@ -28,6 +28,7 @@ import { trainingRouter } from './training/training.router';
 import { usersRouter } from './users/users.router';
 import { incidentsRouter } from './incidents/incidents.router';
 import { correctiveActionsRouter } from './incidents/corrective-actions.router';
+import { queueRouter } from './queue/queue.router';
 import { photosRouter } from './photos/photos.router';
 import { analysisRouter } from './analysis/analysis.router';
 import { settingsRouter } from './settings/settings.router';
@@ -83,6 +84,7 @@ export function createApp({ sessionStore }: AppDeps): Express {
   api.use('/lineage', lineageRouter);
   api.use('/incidents', incidentsRouter);
   api.use('/corrective-actions', correctiveActionsRouter);
+  api.use('/queue', queueRouter);
   api.use('/photos', photosRouter);
   api.use('/imports', importsRouter);
   api.use(proceduresRouter);

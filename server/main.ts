@@ -11,6 +11,7 @@ import { labCertificate } from './core/tls';
 import { dataSource } from './db/data-source';
 import { startDigestScheduler } from './mail/digest-scheduler';
 import { registerMailListeners } from './mail/mail-listeners';
+import { startReminderScheduler } from './mail/reminder-scheduler';
 import { closeMailTransport } from './mail/mail-transport';
 
 export interface RunningServer {
@@ -51,6 +52,7 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
   const digest = (options.digest ?? c.NODE_ENV !== 'test') ? startDigestScheduler() : undefined;
   const maintenance = startAuthMaintenance();
   void maintenance.run();
+  const reminders = (options.digest ?? c.NODE_ENV !== 'test') ? startReminderScheduler() : undefined;
   const server: Server = await new Promise((resolve, reject) => {
     const s = c.HTTPS
       ? createHttpsServer(labCertificate(c.TLS_DIR, c.HOST), app).listen(c.PORT, c.HOST, () => resolve(s))
@@ -68,6 +70,7 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
       await drain(server);
       digest?.stop();
       maintenance.stop();
+      reminders?.stop();
       stopMailListeners();
       closeMailTransport();
       await sessionStore.close();

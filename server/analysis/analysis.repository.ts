@@ -2,7 +2,7 @@ import type { Factor } from '../../shared/enums';
 import type { ActionSummary } from '../../shared/schemas/analysis';
 import type { LogPlacement } from '../../shared/stats/cook-verdict';
 import { dataSource } from '../db/data-source';
-import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql } from '../incidents/live-incidents';
+import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql, liveIncidentSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
 import { dateText } from './dates';
 import { groupedJars, periodWhere, summedSql, type Frame, type Period, type SqlQuery } from './grouped-jars';
@@ -13,9 +13,9 @@ export type { Frame, Period, SqlQuery } from './grouped-jars';
 const num = (v: unknown) => Number(v ?? 0);
 
 /** A factor's level read off each jar (joined LEFT to placed sp where needed), for one level's jars. */
-function perJar(factor: Factor, f: Frame) {
+function perJar(factor: Factor, f: Frame, aliasSuffix = '') {
   const key = factorSql(factor, f.edges, '').key;
-  const fs = factorSql(factor, f.edges, keyOf(key));
+  const fs = factorSql(factor, f.edges, keyOf(key), aliasSuffix);
   const placed = key.placed !== undefined;
   return {
     ...fs,
@@ -320,24 +320,38 @@ export const analysisRepository = {
     only: 'all' | 'settled' | 'contaminated' | 'incubating',
     f: Frame,
     page: { offset: number; limit: number },
+    and?: { factor: Factor; level: string },
   ) {
     const fs = perJar(factor, f);
-    const extra = [`${fs.level} = ?`];
+    const second = and ? perJar(and.factor, f, '2') : null;
+    const extra = [`${fs.level} = ?`, ...(second ? [`${second.level} = ?`] : [])];
     const young = jarIsYoungSql('j.inoculatedOn');
     if (only === 'contaminated') extra.push('cj.jarId IS NOT NULL');
     if (only === 'incubating') extra.push(`cj.jarId IS NULL AND ${young}`);
     if (only === 'settled') extra.push(jarIsSettledSql('j.inoculatedOn', 'cj.jarId IS NOT NULL'));
     const { where, params } = periodWhere(f, extra);
-    const bound = [level, ...(only === 'incubating' || only === 'settled' ? [f.windowStart] : []), ...params];
-    const from = `FROM jars j ${fs.joins.join(' ')} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
+    const bound = [
+      level,
+      ...(and ? [and.level] : []),
+      ...(only === 'incubating' || only === 'settled' ? [f.windowStart] : []),
+      ...params,
+    ];
+    const cte = fs.cte || second?.cte || '';
+    // Both factors may need the placed CTE: join it once.
+    const joins = [...new Set([...fs.joins, ...(second?.joins ?? [])])].join(' ');
+    const from = `FROM jars j ${joins} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
+    // The jar's first live incident, so the list can link it.
+    const incident = `(SELECT MIN(li.id) FROM incident_jars lij JOIN incidents li ON li.id = lij.incidentId
+        WHERE lij.jarId = j.id AND ${liveIncidentSql('li')})`;
     const [items, total] = await Promise.all([
       dataSource.query<Raw>(
-        `${fs.cte} SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
-            (cj.jarId IS NULL AND ${young}) AS incubating, cj.contaminant, cj.foundOn
+        `${cte} SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
+            (cj.jarId IS NULL AND ${young}) AS incubating, cj.contaminant, cj.foundOn,
+            ${incident} AS incidentId
           ${from} ORDER BY j.inoculatedOn, j.label LIMIT ? OFFSET ?`,
         [f.windowStart, ...bound, page.limit, page.offset],
       ),
-      dataSource.query<{ n: string | number }[]>(`${fs.cte} SELECT COUNT(*) AS n ${from}`, bound),
+      dataSource.query<{ n: string | number }[]>(`${cte} SELECT COUNT(*) AS n ${from}`, bound),
     ]);
     return {
       items: items.map((r) => ({
@@ -349,6 +363,7 @@ export const analysisRepository = {
         incubating: num(r.incubating) === 1,
         contaminant: str(r.contaminant),
         foundOn: dateText(r.foundOn),
+        incidentId: r.incidentId === null ? null : num(r.incidentId),
       })),
       total: num(total[0]?.n),
     };

@@ -250,9 +250,17 @@ export async function lethality(p: Period): Promise<LethalityDto> {
 
 export async function jarsBehind(q: JarsBehindQuery): Promise<JarsBehindDto> {
   const f = await frameFor(q);
-  const { items, total } = await analysisRepository.jarsBehind(q.factor, q.level, q.only, f, {
-    offset: (q.page - 1) * q.pageSize,
-    limit: q.pageSize,
-  });
-  return { factor: q.factor, level: q.level, items, total, page: q.page, pageSize: q.pageSize };
+  const and = q.factor2 && q.level2 ? { factor: q.factor2, level: q.level2 } : undefined;
+  const page = { offset: (q.page - 1) * q.pageSize, limit: q.pageSize };
+  const { items, total } = await analysisRepository.jarsBehind(q.factor, q.level, q.only, f, page, and);
+  return {
+    factor: q.factor,
+    level: q.level,
+    factor2: and?.factor ?? null,
+    level2: and?.level ?? null,
+    items,
+    total,
+    page: q.page,
+    pageSize: q.pageSize,
+  };
 }

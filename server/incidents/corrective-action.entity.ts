@@ -2,6 +2,7 @@ import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 
 import { factors, type Factor } from '../../shared/enums';
 
 @Entity({ name: 'corrective_actions' })
+@Index(['doneOn', 'dueOn'])
 export class CorrectiveAction {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
@@ -19,6 +20,10 @@ export class CorrectiveAction {
   @Column({ type: 'varchar', length: 120 })
   ownerName: string;
 
+  /** Where a staff owner without an account is mailed; a user owner is mailed at their account's address. */
+  @Column({ type: 'varchar', length: 254, nullable: true })
+  ownerEmail: string | null;
+
   @Column({ type: 'date' })
   dueOn: string;
 
@@ -34,6 +39,14 @@ export class CorrectiveAction {
 
   @Column({ type: 'varchar', length: 120, nullable: true })
   level: string | null;
+
+  /** When the owner was last told the action is theirs. */
+  @Column({ type: 'datetime', precision: 6, nullable: true })
+  assignedMailAt: Date | null;
+
+  /** Set once, when the overdue reminder is claimed: a second instance finds it set and sends nothing. */
+  @Column({ type: 'datetime', precision: 6, nullable: true })
+  overdueMailAt: Date | null;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;

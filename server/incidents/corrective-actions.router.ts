@@ -1,10 +1,23 @@
 import { Router } from 'express';
+import { actionListQuerySchema, type ActionListQuery } from '../../shared/schemas/corrective-actions';
 import { updateActionSchema } from '../../shared/schemas/incidents';
-import { requireRole } from '../core/auth-guards';
+import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { writeRoute } from '../core/record-routes';
+import { validate } from '../core/validate';
+import { sendOverdueReminders } from '../mail/action-mail.service';
+import { listActions } from './corrective-actions-list.service';
 import { updateAction } from './corrective-actions.service';
 
 export const correctiveActionsRouter = Router();
+
+correctiveActionsRouter.get('/', requireUser, validate({ query: actionListQuerySchema }), async (req, res) => {
+  res.json(await listActions(currentUser(req), req.query as unknown as ActionListQuery));
+});
+
+// The scheduler sends these by itself; a supervisor or admin may send the due ones now.
+correctiveActionsRouter.post('/reminders', requireRole('supervisor', 'admin'), async (_req, res) => {
+  res.json(await sendOverdueReminders());
+});
 
 correctiveActionsRouter.patch(
   '/:id',

@@ -5,6 +5,7 @@ import type { SessionUser } from '../core/auth-guards';
 import { AppError, notFound, unprocessable } from '../core/errors';
 import { todayLocal } from '../core/local-time';
 import { dataSource } from '../db/data-source';
+import { notifyActionAssigned } from '../mail/action-mail.service';
 import { User } from '../users/user.entity';
 import { CorrectiveAction } from './corrective-action.entity';
 import { loadForChange } from './incident-rules';
@@ -24,7 +25,7 @@ export async function createAction(
   incidentId: number,
   input: CreateActionInput,
 ): Promise<CorrectiveActionDto> {
-  return dataSource.transaction(async (m) => {
+  const created = await dataSource.transaction(async (m) => {
     await loadForChange(m, incidentId);
     const name = input.ownerId !== undefined ? await ownerName(m, input.ownerId) : (input.ownerName ?? '');
     const action = await m.save(
@@ -33,6 +34,7 @@ export async function createAction(
         what: input.what,
         ownerId: input.ownerId ?? null,
         ownerName: name,
+        ownerEmail: input.ownerId !== undefined ? null : (input.ownerEmail ?? null),
         dueOn: input.dueOn,
         factor: input.factor ?? null,
         level: input.level ?? null,
@@ -49,6 +51,8 @@ export async function createAction(
     ]);
     return toActionDto(action, todayLocal());
   });
+  await notifyActionAssigned(created.id);
+  return created;
 }
 
 /** Marking an action done needs how the fix was verified (ISO 9001:2015 §10.2: check the action worked). */
@@ -73,7 +77,8 @@ export async function updateAction(
   id: number,
   input: UpdateActionInput,
 ): Promise<CorrectiveActionDto> {
-  return dataSource.transaction(async (m) => {
+  let reassigned = false;
+  const updated = await dataSource.transaction(async (m) => {
     const action = await m
       .createQueryBuilder(CorrectiveAction, 'a')
       .setLock('pessimistic_write')
@@ -87,10 +92,19 @@ export async function updateAction(
         throw new AppError(409, 'voided', `The incident of action ${id} is voided; its actions can no longer change.`);
       throw err;
     }
-    const { reason, ownerId, ownerName: typedOwner, ...rest } = input;
+    const { reason, ownerId, ownerName: typedOwner, ownerEmail, ...rest } = input;
     const changes: Partial<CorrectiveAction> = { ...rest };
-    if (ownerId !== undefined) Object.assign(changes, { ownerId, ownerName: await ownerName(m, ownerId) });
-    else if (typedOwner !== undefined) Object.assign(changes, { ownerId: null, ownerName: typedOwner });
+    if (ownerId !== undefined) {
+      Object.assign(changes, { ownerId, ownerName: await ownerName(m, ownerId), ownerEmail: null });
+    } else if (typedOwner !== undefined) {
+      Object.assign(changes, { ownerId: null, ownerName: typedOwner, ownerEmail: ownerEmail ?? null });
+    } else if (ownerEmail !== undefined) {
+      if (action.ownerId !== null)
+        throw unprocessable('ownerEmail: a user is mailed at their account’s address.', [
+          { path: 'ownerEmail', message: 'only a staff owner without an account takes an address' },
+        ]);
+      changes.ownerEmail = ownerEmail;
+    }
     const entries = diffEntries(
       { action: 'update', recordType: 'corrective-action', recordId: id, reason: reason ?? null },
       action,
@@ -98,10 +112,13 @@ export async function updateAction(
     );
     const today = todayLocal();
     if (entries.length === 0) return toActionDto(action, today);
+    reassigned = entries.some((e) => ['ownerId', 'ownerName', 'ownerEmail'].includes(e.field ?? ''));
     Object.assign(action, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
     checkMerged(action, today);
     await m.save(action);
     await recordAudit(m, user, entries);
     return toActionDto(action, today);
   });
+  if (reassigned && updated.doneOn === null) await notifyActionAssigned(id);
+  return updated;
 }

@@ -31,6 +31,7 @@ export const toActionDto = (a: CorrectiveAction, today: string): CorrectiveActio
   what: a.what,
   ownerId: a.ownerId,
   ownerName: a.ownerName,
+  ownerEmail: a.ownerEmail,
   dueOn: a.dueOn,
   doneOn: a.doneOn,
   verification: a.verification,

@@ -1,4 +1,5 @@
 import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { contaminantNames, contaminants } from '../../shared/enums';
 import type { IncidentFilters, IncidentListQuery } from '../../shared/schemas/incidents';
 import { AuditEvent } from '../audit/audit-event.entity';
 import { applySortAndPage, likePrefix, whereDateRange } from '../core/paging';
@@ -24,6 +25,26 @@ const sortable = {
 const anyJar = (condition: string) =>
   `EXISTS (SELECT 1 FROM incident_jars f_ij JOIN jars f_j ON f_j.id = f_ij.jarId LEFT JOIN inoculation_sessions f_s ON f_s.id = f_j.sessionId WHERE f_ij.incidentId = i.id AND ${condition})`;
 
+/** The picker's one box: "#88" or "88" is a number; else a jar label, an operator or a contaminant. */
+function whereFound(qb: SelectQueryBuilder<Incident>, q: string) {
+  const term = q.replace(/^#\s*/, '');
+  if (term !== q && /^\d+$/.test(term)) {
+    qb.andWhere('i.id = :qId', { qId: Number(term) });
+    return;
+  }
+  const lower = term.toLowerCase();
+  const codes = contaminants.filter((c) => c.includes(lower) || contaminantNames[c].toLowerCase().includes(lower));
+  const ors = [anyJar('(f_j.label LIKE :qJar OR f_s.operatorName LIKE :qOperator)')];
+  if (/^\d+$/.test(term)) ors.unshift('i.id = :qId');
+  if (codes.length) ors.push('i.contaminant IN (:...qCodes)');
+  qb.andWhere(`(${ors.join(' OR ')})`, {
+    qId: Number(term),
+    qJar: likePrefix(term),
+    qOperator: `%${term.replace(/[\\%_]/g, '\\$&')}%`,
+    qCodes: codes,
+  });
+}
+
 function filtered(f: IncidentFilters): SelectQueryBuilder<Incident> {
   const qb = dataSource.manager.createQueryBuilder(Incident, 'i');
   if (f.status) qb.andWhere('i.status = :status', { status: f.status });
@@ -36,6 +57,7 @@ function filtered(f: IncidentFilters): SelectQueryBuilder<Incident> {
   if (f.sessionId) qb.andWhere(anyJar('f_j.sessionId = :sessionId'), { sessionId: f.sessionId });
   if (f.operator) qb.andWhere(anyJar('f_s.operatorName = :operator'), { operator: f.operator });
   if (f.jar) qb.andWhere(anyJar('f_j.label LIKE :jar'), { jar: likePrefix(f.jar) });
+  if (f.q) whereFound(qb, f.q);
   return qb;
 }
 

@@ -33,4 +33,11 @@ export class ClusterAlert {
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   alertedAt: Date;
+
+  /** When a supervisor marked the alert looked at; until then it waits in their queue. */
+  @Column({ type: 'datetime', precision: 6, nullable: true })
+  seenAt: Date | null;
+
+  @Column({ type: 'varchar', length: 120, nullable: true })
+  seenByName: string | null;
 }

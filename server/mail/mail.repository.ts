@@ -8,7 +8,8 @@ import { MailPreference } from './mail-preference.entity';
 import { SentMail } from './sent-mail.entity';
 
 export interface Recipient {
-  userId: number;
+  /** null for a staff person without an account, mailed at the address kept with the record. */
+  userId: number | null;
   displayName: string;
   email: string;
 }

@@ -16,7 +16,7 @@ import {
   listProcedures,
   publishVersion,
 } from './procedures.service';
-import { linkStep, listStepLinks, unlinkStep } from './step-links.service';
+import { linkStep, listLinksOfStep, listStepLinks, unlinkStep } from './step-links.service';
 import { stepStats } from './step-stats.service';
 
 /** Mounted at /api: procedures, their versions and steps, and incident–step links. */
@@ -41,6 +41,10 @@ proceduresRouter.get(
   },
 );
 
+proceduresRouter.get(
+  '/procedure-steps/:id/links',
+  ...detailRoute(async (id) => ({ items: await listLinksOfStep(id) })),
+);
 proceduresRouter.get('/incidents/:id/step-links', ...detailRoute(async (id) => ({ items: await listStepLinks(id) })));
 proceduresRouter.post(
   '/incidents/:id/step-links',

@@ -70,6 +70,11 @@ export const stepLinksRepository = {
     return rows.map(toDto);
   },
 
+  async listForStep(stepId: number): Promise<StepLinkDto[]> {
+    const rows = await linkQuery(dataSource.manager).where('l.stepId = :stepId', { stepId }).getRawMany<LinkRaw>();
+    return rows.map(toDto);
+  },
+
   async findDto(id: number): Promise<StepLinkDto | undefined> {
     const row = await linkQuery(dataSource.manager).where('l.id = :id', { id }).getRawOne<LinkRaw>();
     return row ? toDto(row) : undefined;

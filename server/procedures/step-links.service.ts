@@ -17,6 +17,12 @@ export async function listStepLinks(incidentId: number): Promise<StepLinkDto[]> 
   return stepLinksRepository.listForIncident(incidentId);
 }
 
+/** The incidents linked to one step, oldest link first. */
+export async function listLinksOfStep(stepId: number): Promise<StepLinkDto[]> {
+  if (!(await stepLinksRepository.stepWithVersion(stepId))) throw notFound('Procedure step');
+  return stepLinksRepository.listForStep(stepId);
+}
+
 export async function linkStep(actor: Actor, incidentId: number, input: StepLinkInput): Promise<StepLinkDto> {
   const incident = await requireIncident(incidentId);
   if (incident.voided) throw conflict('This incident is voided; it cannot be linked to a step.');

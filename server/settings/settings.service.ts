@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { LabSettingsDto, UpdateLabSettingsInput } from '../../shared/schemas/settings';
 import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
+import { config } from '../core/config';
 import { dataSource } from '../db/data-source';
 import { LabSettings } from './lab-settings.entity';
 
@@ -20,6 +21,7 @@ export const toLabSettingsDto = (s: LabSettings): LabSettingsDto => ({
   clusterIncidents: s.clusterIncidents,
   clusterDays: s.clusterDays,
   updatedAt: s.updatedAt.toISOString(),
+  timeZone: config().LAB_TIME_ZONE,
 });
 
 export async function readLabSettings(): Promise<LabSettingsDto> {

@@ -16,6 +16,12 @@ export const usersRepository = {
   findActive: (id: number, manager: EntityManager = dataSource.manager) =>
     manager.findOneBy(User, { id, active: true }),
   findByUsername: (username: string) => dataSource.manager.findOneBy(User, { username }),
+  activePeople: () =>
+    dataSource.manager.find(User, {
+      select: { id: true, displayName: true, role: true },
+      where: { active: true },
+      order: { displayName: 'ASC', id: 'ASC' },
+    }),
 
   async list(q: UserListQuery): Promise<[User[], number]> {
     const qb = dataSource.manager.createQueryBuilder(User, 'u');

@@ -6,15 +6,20 @@ import {
   userListQuerySchema,
   type UserListQuery,
 } from '../../shared/schemas/users';
-import { currentUser, requireRole } from '../core/auth-guards';
+import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { validate } from '../core/validate';
-import { createUser, listUsers, updateUser } from './users.service';
+import { createUser, listPeople, listUsers, updateUser } from './users.service';
 
 export const usersRouter = Router();
 const admin = requireRole('admin');
 
 usersRouter.get('/', admin, validate({ query: userListQuerySchema }), async (req, res) => {
   res.json(await listUsers(req.query as unknown as UserListQuery));
+});
+
+// Every signed-in person may name a colleague (an action's owner); only names and roles are shown.
+usersRouter.get('/people', requireUser, async (_req, res) => {
+  res.json(await listPeople());
 });
 
 usersRouter.post('/', admin, validate({ body: createUserSchema }), async (req, res) => {

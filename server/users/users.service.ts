@@ -2,7 +2,7 @@ import bcrypt from 'bcryptjs';
 import type { EntityManager } from 'typeorm';
 import type { CreateUserInput, UpdateUserInput, UserListQuery } from '../../shared/schemas/users';
 import type { Page } from '../../shared/schemas/common';
-import type { UserDto } from '../../shared/schemas/users';
+import type { PersonDto, UserDto } from '../../shared/schemas/users';
 import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
 import { config } from '../core/config';
 import { badRequest, conflict, notFound } from '../core/errors';
@@ -38,6 +38,10 @@ export async function resolveOperator(
 }
 
 export const noOperator: OperatorFields = { operatorId: null, operatorName: null };
+
+export async function listPeople(): Promise<PersonDto[]> {
+  return (await usersRepository.activePeople()).map((u) => ({ id: u.id, displayName: u.displayName, role: u.role }));
+}
 
 export async function listUsers(q: UserListQuery): Promise<Page<UserDto>> {
   const [rows, total] = await usersRepository.list(q);

@@ -54,10 +54,17 @@ export const jarsBehindQuerySchema = periodBase
     factor: factorSchema,
     level: z.string().min(1, 'name the level').max(120),
     only: z.enum(['all', 'settled', 'contaminated', 'incubating']).default('all'),
+    /** A second factor and level, for a cell of a cross-table or a grain of a week. */
+    factor2: factorSchema.optional(),
+    level2: z.string().min(1, 'name the level').max(120).optional(),
     page: z.coerce.number().int().min(1).max(1_000_000).default(1),
     pageSize: z.coerce.number().int().min(1).max(200).default(50),
   })
-  .refine((q) => inOrder(q), orderIssue);
+  .refine((q) => inOrder(q), orderIssue)
+  .refine((q) => (q.factor2 === undefined) === (q.level2 === undefined), {
+    path: ['level2'],
+    message: 'give both factor2 and level2, or neither',
+  });
 export type JarsBehindQuery = z.infer<typeof jarsBehindQuerySchema>;
 
 export type Interval = [number, number];
@@ -283,11 +290,15 @@ export interface JarBehind {
   incubating: boolean;
   contaminant: string | null;
   foundOn: string | null;
+  /** The jar's first incident that counts, for a link. */
+  incidentId: number | null;
 }
 
 export interface JarsBehindDto {
   factor: Factor;
   level: string;
+  factor2: Factor | null;
+  level2: string | null;
   items: JarBehind[];
   total: number;
   page: number;

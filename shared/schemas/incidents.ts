@@ -119,6 +119,8 @@ export const incidentListQuerySchema = pageQuerySchema
     sessionId: idSchema.optional(),
     operator: z.string().trim().min(1).max(120).optional(),
     jar: z.string().trim().min(1).max(40).optional(),
+    /** One box for a picker: an incident number with or without #, a jar label, an operator or a contaminant. */
+    q: z.string().trim().min(1).max(80).optional(),
     ...dateRangeShape,
     voided: boolQuery.optional(),
   })
@@ -127,18 +129,29 @@ export type IncidentListQuery = z.infer<typeof incidentListQuerySchema>;
 export type IncidentFilters = Omit<IncidentListQuery, 'page' | 'pageSize' | 'sort'>;
 export const incidentSortFields = ['foundAt', 'id', 'contaminant', 'status', 'verdict', 'severity', 'stage'] as const;
 
+export const ownerEmailSchema = z.email({ error: 'must be an e-mail address' }).max(254);
 const ownerShape = {
   ownerId: idSchema.optional(),
   ownerName: z.string().trim().min(1, 'enter the owner').max(120).optional(),
 };
+/** A staff owner without an account may be mailed at an address of their own; a user is mailed at theirs. */
+const emailOnlyWithName: [
+  (v: { ownerId?: number; ownerEmail?: string | null }) => boolean,
+  { path: string[]; message: string },
+] = [
+  (v) => !(v.ownerId !== undefined && v.ownerEmail),
+  { path: ['ownerEmail'], message: 'a user is mailed at their account’s address: leave this empty' },
+];
 export const createActionSchema = z
   .object({
     what: z.string().trim().min(3, 'say what will be done').max(2000),
     ...ownerShape,
+    ownerEmail: ownerEmailSchema.optional(),
     dueOn: localDateSchema,
     factor: factorSchema.optional(),
     level: z.string().trim().min(1).max(120).optional(),
   })
+  .refine(...emailOnlyWithName)
   .refine((v) => v.ownerId !== undefined || v.ownerName !== undefined, {
     path: ['ownerName'],
     message: 'name an owner',
@@ -153,6 +166,7 @@ export const updateActionSchema = z
   .object({
     what: z.string().trim().min(3, 'say what will be done').max(2000),
     ...ownerShape,
+    ownerEmail: ownerEmailSchema.nullable(),
     dueOn: localDateSchema,
     doneOn: localDateSchema.nullable(),
     verification: z.string().trim().min(3, 'say how the fix was verified').max(2000).nullable(),
@@ -164,7 +178,8 @@ export const updateActionSchema = z
   .refine((v) => Object.entries(v).some(([k, x]) => k !== 'reason' && x !== undefined), {
     path: ['doneOn'],
     message: 'change at least one field',
-  });
+  })
+  .refine(...emailOnlyWithName);
 export type UpdateActionInput = z.infer<typeof updateActionSchema>;
 
 export const correctiveActionSchema = z.object({
@@ -173,6 +188,7 @@ export const correctiveActionSchema = z.object({
   what: z.string(),
   ownerId: z.number().int().nullable(),
   ownerName: z.string(),
+  ownerEmail: z.string().nullable(),
   dueOn: z.string(),
   doneOn: z.string().nullable(),
   verification: z.string().nullable(),

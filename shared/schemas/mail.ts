@@ -2,7 +2,14 @@ import { z } from 'zod';
 import type { Role } from '../enums';
 import { pageQuerySchema } from './common';
 
-export const mailKinds = ['new-incident', 'cluster-alert', 'retraining', 'weekly-digest'] as const;
+export const mailKinds = [
+  'new-incident',
+  'cluster-alert',
+  'retraining',
+  'weekly-digest',
+  'action-assigned',
+  'action-overdue',
+] as const;
 export const mailKindSchema = z.enum(mailKinds);
 export type MailKind = (typeof mailKinds)[number];
 
@@ -11,6 +18,8 @@ export const mailKindLabels: Record<MailKind, string> = {
   'cluster-alert': 'Several incidents share a cook run, culture or session',
   retraining: 'You are asked to retrain on a procedure',
   'weekly-digest': 'Monday digest with the weekly contamination table',
+  'action-assigned': 'A corrective action is given to you',
+  'action-overdue': 'A corrective action you own is overdue (one reminder)',
 };
 
 /** Who is sent each kind; a person can still turn a kind off for themselves. */
@@ -19,6 +28,8 @@ export const mailAudience: Record<MailKind, readonly Role[] | 'addressee'> = {
   'cluster-alert': ['supervisor', 'trainer'],
   retraining: 'addressee',
   'weekly-digest': ['supervisor', 'trainer', 'admin'],
+  'action-assigned': 'addressee',
+  'action-overdue': 'addressee',
 };
 
 export const mailPreferencesSchema = z.object({
@@ -26,6 +37,8 @@ export const mailPreferencesSchema = z.object({
   'cluster-alert': z.boolean(),
   retraining: z.boolean(),
   'weekly-digest': z.boolean(),
+  'action-assigned': z.boolean(),
+  'action-overdue': z.boolean(),
 });
 export type MailPreferencesDto = z.infer<typeof mailPreferencesSchema>;
 

@@ -36,7 +36,8 @@ export const updateLabSettingsSchema = labSettingsSchema
   .refine((v) => Object.keys(v).length > 0, 'change at least one setting');
 export type UpdateLabSettingsInput = z.infer<typeof updateLabSettingsSchema>;
 
-export type LabSettingsDto = z.infer<typeof labSettingsSchema> & { updatedAt: string };
+/** timeZone is the lab's IANA zone (LAB_TIME_ZONE), read-only here: dates and "today" follow it. */
+export type LabSettingsDto = z.infer<typeof labSettingsSchema> & { updatedAt: string; timeZone: string };
 
 /** Bucket labels from the edges: 60, 90 → `<60`, `60-89`, `90+`. */
 export function cookBucketLabels(edges: readonly number[]): string[] {

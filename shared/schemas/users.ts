@@ -44,3 +44,7 @@ export const userListQuerySchema = pageQuerySchema.extend({
   q: z.string().trim().max(64).optional(),
 });
 export type UserListQuery = z.infer<typeof userListQuerySchema>;
+
+/** A person of the lab as other screens name them (an action's owner, say): no address, no login. */
+export const personSchema = z.object({ id: z.number().int(), displayName: z.string(), role: roleSchema });
+export type PersonDto = z.infer<typeof personSchema>;

@@ -119,6 +119,15 @@ export function createAppRouter(queryClient: QueryClient) {
                   ],
                 },
                 {
+                  element: <RoleGate roles={access.actions} />,
+                  children: [
+                    {
+                      path: paths.actions.pattern,
+                      lazy: () => import('./routes/actions').then((m) => ({ Component: m.ActionsRoute })),
+                    },
+                  ],
+                },
+                {
                   element: <RoleGate roles={access.flagJar} />,
                   children: [
                     {

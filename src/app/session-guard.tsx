@@ -9,7 +9,9 @@ import { paths } from '../config/paths';
 import { authQueries } from '../features/auth/api/auth-queries';
 import { useCurrentUser, useMe } from '../features/auth/api/use-me';
 import { signOutKey, useSignOut } from '../features/auth/api/use-sign-out';
+import { settingsQueries } from '../features/settings/api/settings-queries';
 import { errorMessage, isApiError } from '../lib/api-client';
+import { setLabTimeZone } from '../lib/format';
 
 const returnPath = (url: URL) => `${url.pathname}${url.search}`;
 
@@ -18,6 +20,8 @@ export const sessionLoader =
   async ({ request }: LoaderFunctionArgs) => {
     const me = await queryClient.ensureQueryData(authQueries.me());
     if (!me) throw redirect(paths.signIn.to(returnPath(new URL(request.url))));
+    // Greeting, "today" and every date on screen follow the lab's clock.
+    setLabTimeZone((await queryClient.ensureQueryData(settingsQueries.detail())).timeZone);
     return null;
   };
 

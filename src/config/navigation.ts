@@ -115,6 +115,14 @@ export const navigation: NavItem[] = [
     barFor: ['supervisor', 'trainer'],
   },
   {
+    id: 'actions',
+    label: 'Actions',
+    to: paths.actions.to(),
+    roles: access.actions,
+    icon: 'check',
+    description: 'Every corrective action: who owns it, when it is due, and how it was verified.',
+  },
+  {
     id: 'history-import',
     label: 'History import',
     to: paths.historyImport.to(),

@@ -36,6 +36,7 @@ export const paths = {
   grain: { pattern: '/grain', to: (query?: Query) => withQuery('/grain', query) },
   incidents: { pattern: '/incidents', to: (query?: Query) => withQuery('/incidents', query) },
   incident: { pattern: '/incidents/:id', to: (id: number) => `/incidents/${id}` },
+  actions: { pattern: '/actions', to: (query?: Query) => withQuery('/actions', query) },
   flagJar: { pattern: '/incidents/new', to: (jar?: string) => withQuery('/incidents/new', { jar }) },
   /** The jar's public page, as printed in its QR code (DESIGN.md §5). */
   jarPage: { pattern: '/j/:label', to: (label: string) => `/j/${encodeURIComponent(label)}` },

@@ -33,6 +33,7 @@ export const access = {
   sessions: allRoles,
   grain: allRoles,
   incidents: allRoles,
+  actions: allRoles,
   flagJar: ['technician', 'supervisor'],
   procedures: allRoles,
   training: ['supervisor', 'trainer', 'admin'],

@@ -26,7 +26,7 @@ async function sterileTechnique(page: Page): Promise<ProcedureRow> {
 const stepTexts = (page: Page) => page.locator('[data-testid^="step-"] > p.font-semibold').allInnerTexts();
 
 describe('procedures in the browser', () => {
-  it('trainer links an incident to a step and sees the step’s count go up', async () => {
+  it('trainer finds an incident by typing #<n>, links it to a step, sees it listed and unlinks it', async () => {
     const { page, context } = await newPage(browser());
     await signIn(page, 'trainer');
     await page.getByRole('navigation', { name: 'Main' }).first().waitFor();
@@ -42,10 +42,18 @@ describe('procedures in the browser', () => {
     const before = Number(await count.innerText());
 
     await step.getByRole('button', { name: 'Link an incident to step 6' }).click();
-    await page.getByLabel('Incident number').fill(String(incidentId));
+    await page.getByLabel('Find an incident').fill(`#${incidentId}`);
+    await page.getByRole('radio', { name: new RegExp(`^#${incidentId} `) }).check();
     await page.getByLabel('Suspected lapse').fill('Needle touched the port before it had cooled.');
     await page.getByRole('button', { name: 'Link incident' }).click();
     await expect.poll(async () => Number(await count.innerText()), { timeout: 10_000 }).toBe(before + 1);
+    const linked = step.getByRole('list', { name: 'Linked incidents' });
+    await linked.getByRole('link', { name: `Incident #${incidentId}` }).waitFor();
+
+    await linked.getByRole('button', { name: `Unlink #${incidentId}` }).click();
+    await page.getByRole('button', { name: 'Unlink', exact: true }).click();
+    await expect.poll(async () => Number(await count.innerText()), { timeout: 10_000 }).toBe(before);
+    expect(await step.getByRole('link', { name: `Incident #${incidentId}` }).count()).toBe(0);
     await context.close();
   });
 

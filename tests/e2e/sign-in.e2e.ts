@@ -12,6 +12,7 @@ const everyone = [
   'Sessions',
   'Jars',
   'Incidents',
+  'Actions',
   'Procedures',
   'Account',
 ];

@@ -416,4 +416,25 @@ describe('GET /api/analysis/before-after', () => {
     expect(page2.items).toHaveLength(6);
     expect((await reader.agent.get('/api/analysis/jars?factor=cookRun')).body.error.issues[0].path).toBe('level');
   });
+
+  it('links each contaminated jar to its incident, and narrows by a second factor', async () => {
+    const base = '/api/analysis/jars?factor=cookRun&level=PX-BA-RUN&from=2025-06-16&to=2025-06-25';
+    const [incidentId] = await dataSource.query<{ id: number }[]>(
+      "SELECT ij.incidentId AS id FROM incident_jars ij JOIN jars j ON j.id = ij.jarId WHERE j.label = 'PX-BA-A-0'",
+    );
+    const all = (await reader.agent.get(`${base}&pageSize=200`)).body as JarsBehindDto;
+    const first = all.items.find((j) => j.label === 'PX-BA-A-0')!;
+    expect(first.incidentId).toBe(Number(incidentId!.id));
+    // Jars 60 and 61 carry only a voided incident: nothing to link.
+    expect(all.items.find((j) => j.label === 'PX-BA-A-60')!.incidentId).toBeNull();
+    // From June 1st the run holds the 80 jars of 2025-W24 too; 2025-06-18 lies in 2025-W25 (ISO 8601).
+    const wide = '/api/analysis/jars?factor=cookRun&level=PX-BA-RUN&from=2025-06-01&to=2025-06-25';
+    expect(((await reader.agent.get(wide)).body as JarsBehindDto).total).toBe(155);
+    const week = (await reader.agent.get(`${wide}&factor2=week&level2=2025-W25&pageSize=200`)).body as JarsBehindDto;
+    expect(week).toMatchObject({ factor2: 'week', level2: '2025-W25', total: 70 });
+    expect(week.items.every((j) => j.label.startsWith('PX-BA-A'))).toBe(true);
+    const half = await reader.agent.get(`${base}&factor2=week`);
+    expect(half.status).toBe(400);
+    expect(half.body.error.issues[0].path).toBe('level2');
+  });
 });

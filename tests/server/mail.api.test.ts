@@ -41,6 +41,8 @@ describe('/api/mail/preferences', () => {
       'cluster-alert': true,
       retraining: true,
       'weekly-digest': true,
+      'action-assigned': true,
+      'action-overdue': true,
     });
     const res = await optOut(tech, { 'weekly-digest': false });
     expect(res.body['weekly-digest']).toBe(false);

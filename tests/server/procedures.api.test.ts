@@ -219,6 +219,9 @@ describe('procedures: incident–step links and step statistics', () => {
     expect((await stepsOf(trainer, proc.currentVersionId))[1]!.incidentsLinked).toBe(1);
     const list = await trainer.agent.get(`/api/incidents/${incident.id}/step-links`).expect(200);
     expect(list.body.items).toHaveLength(1);
+    const ofStep = await trainer.agent.get(`/api/procedure-steps/${flame!.id}/links`).expect(200);
+    expect(ofStep.body.items.map((l: { incidentId: number }) => l.incidentId)).toEqual([incident.id]);
+    expect((await trainer.agent.get('/api/procedure-steps/999999/links')).status).toBe(404);
 
     expect(
       (await trainer.agent.delete(`/api/step-links/${res.body.id}`).set('X-CSRF-Token', trainer.token())).status,
@@ -230,6 +233,21 @@ describe('procedures: incident–step links and step statistics', () => {
       action: 'unlink-step',
     });
     expect(unlink).not.toBeNull();
+  });
+
+  it('finds incidents for the picker by number with or without #, jar label, operator or contaminant', async () => {
+    const trainer = await signedIn(app, 'trainer');
+    const jars = await makeJars(1, { inoculatedOn: '2024-03-04' });
+    const incident = await makeIncident(jars, { foundOn: '2024-03-10', contaminant: 'neurospora' });
+    const ids = async (q: string) =>
+      (await trainer.agent.get('/api/incidents').query({ q, pageSize: 200 }).expect(200)).body.items.map(
+        (i: { id: number }) => i.id,
+      );
+    expect(await ids(`#${incident.id}`)).toEqual([incident.id]);
+    expect(await ids(String(incident.id))).toContain(incident.id);
+    expect(await ids(jars[0]!.label)).toEqual([incident.id]);
+    expect(await ids('Neurosp')).toContain(incident.id);
+    expect(await ids('#999999')).toEqual([]);
   });
 
   it('answers 400 naming note and stepId for a bad link body', async () => {

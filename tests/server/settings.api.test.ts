@@ -3,6 +3,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import type { RatesDto } from '../../shared/schemas/analysis';
 import type { LabSettingsDto } from '../../shared/schemas/settings';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
+import { config } from '../../server/core/config';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
@@ -46,6 +47,8 @@ describe('/api/settings', () => {
     const res = await client.agent.get('/api/settings');
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject(defaults);
+    // The lab's clock for greetings, "today" and dates on screen: read-only, from LAB_TIME_ZONE.
+    expect(res.body.timeZone).toBe(config().LAB_TIME_ZONE);
   });
 
   it.each(['technician', 'supervisor', 'trainer'] as const)('answers 403 to a %s changing them', async (role) => {

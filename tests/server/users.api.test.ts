@@ -107,3 +107,14 @@ describe('/api/users', () => {
     expect(res.body.error.issues[0].path).toBe('active');
   });
 });
+
+describe('GET /api/users/people', () => {
+  it('gives any signed-in person the names and roles of active users, without addresses', async () => {
+    const tech = await signedIn(app, 'technician');
+    const res = await tech.agent.get('/api/users/people');
+    expect(res.status).toBe(200);
+    const me = (res.body as { id: number; displayName: string; role: string }[]).find((p) => p.id === tech.user.id);
+    expect(me).toEqual({ id: tech.user.id, displayName: 'Test technician', role: 'technician' });
+    expect(JSON.stringify(res.body)).not.toContain('@');
+  });
+});

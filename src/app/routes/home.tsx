@@ -6,6 +6,7 @@ import { prioritisedFor } from '../../config/navigation';
 import { roleLabels, roleSummaries } from '../../config/roles';
 import { useCurrentUser } from '../../features/auth/api/use-me';
 import { WeeklyScreen } from '../../features/analysis/components/weekly-screen';
+import { SupervisorQueue } from '../../features/queue/components/supervisor-queue';
 import { formatLongDate, greeting, isoWeek } from '../../lib/format';
 
 export function HomeRoute() {
@@ -28,6 +29,8 @@ export function HomeRoute() {
           <p className="text-muted">{roleSummaries[me.role]}</p>
         </div>
       </section>
+
+      {me.role === 'supervisor' && <SupervisorQueue />}
 
       {me.role === 'supervisor' && (
         <div className="mb-10">

@@ -94,10 +94,22 @@ export const analysisQueries = {
       queryFn: ({ signal }) => get<LethalityDto>('lethality', { ...p }, signal),
       placeholderData: keepPreviousData,
     }),
-  jars: (factor: Factor, level: string, only: JarsOnly, p: Period, page: number) =>
+  jars: (
+    factor: Factor,
+    level: string,
+    only: JarsOnly,
+    p: Period,
+    page: number,
+    and?: { factor: Factor; level: string },
+  ) =>
     queryOptions({
-      queryKey: [...analysisQueries.all, 'jars', factor, level, only, p, page] as const,
-      queryFn: ({ signal }) => get<JarsBehindDto>('jars', { factor, level, only, ...p, page, pageSize: 100 }, signal),
+      queryKey: [...analysisQueries.all, 'jars', factor, level, only, p, page, and ?? null] as const,
+      queryFn: ({ signal }) =>
+        get<JarsBehindDto>(
+          'jars',
+          { factor, level, only, ...p, page, pageSize: 100, factor2: and?.factor, level2: and?.level },
+          signal,
+        ),
       placeholderData: keepPreviousData,
     }),
 };

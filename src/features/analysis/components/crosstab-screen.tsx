@@ -4,6 +4,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { Select } from '../../../components/ui/select';
 import { patchParams } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
+import { JarsLink } from './jars-link';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
 import { factorLabels, factorOptions, interval, percent } from './labels';
 
@@ -90,7 +91,16 @@ export function CrosstabScreen() {
                         >
                           <span className="font-semibold">{percent(cell.rate)}</span>
                           <span className="block text-sm">
-                            {cell.contaminated}/{cell.jars}
+                            <JarsLink
+                              factor={rows}
+                              level={r}
+                              factor2={cols}
+                              level2={c}
+                              period={period}
+                              label={`Jars of ${r} and ${c}`}
+                            >
+                              {cell.contaminated}/{cell.jars}
+                            </JarsLink>
                             {cell.incubating > 0 && ` · ${cell.incubating} incubating`}
                           </span>
                         </td>

@@ -23,18 +23,21 @@ export function JarsBehindScreen() {
   const period = readPeriod(params);
   const factor = readFactor(params, 'factor', 'grain');
   const level = params.get('level') ?? '';
+  const level2 = params.get('level2') ?? '';
+  const and =
+    params.get('factor2') && level2 ? { factor: readFactor(params, 'factor2', 'grain'), level: level2 } : undefined;
   const onlyParam = params.get('only');
   const only: JarsOnly =
     onlyParam === 'contaminated' || onlyParam === 'incubating' || onlyParam === 'settled' ? onlyParam : 'all';
   const page = Math.max(1, Number(params.get('page')) || 1);
-  const jars = useQuery({ ...analysisQueries.jars(factor, level, only, period, page), enabled: level !== '' });
+  const jars = useQuery({ ...analysisQueries.jars(factor, level, only, period, page, and), enabled: level !== '' });
   const data = jars.data;
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
 
   return (
     <>
       <PageHeader
-        title={`${onlyLabels[only]}: ${factorLabels[factor]} ${level}`}
+        title={`${onlyLabels[only]}: ${factorLabels[factor]} ${level}${and ? `, ${factorLabels[and.factor]} ${and.level}` : ''}`}
         description={`Inoculated ${period.from ?? 'from the start'} to ${period.to ?? 'today'}.`}
       />
       <AnalysisTabs />
@@ -77,6 +80,9 @@ export function JarsBehindScreen() {
                   <th scope="col" className={th}>
                     Found
                   </th>
+                  <th scope="col" className={th}>
+                    Incident
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -101,6 +107,15 @@ export function JarsBehindScreen() {
                       {j.contaminant ? (contaminantNames[j.contaminant as Contaminant] ?? j.contaminant) : '—'}
                     </td>
                     <td className={td}>{j.foundOn ?? '—'}</td>
+                    <td className={td}>
+                      {j.incidentId === null ? (
+                        '—'
+                      ) : (
+                        <Link to={paths.incident.to(j.incidentId)} className="font-semibold text-accent underline">
+                          #{j.incidentId}
+                        </Link>
+                      )}
+                    </td>
                   </tr>
                 ))}
               </tbody>

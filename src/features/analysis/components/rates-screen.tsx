@@ -6,6 +6,7 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { Select } from '../../../components/ui/select';
 import { patchParams } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
+import { JarsLink } from './jars-link';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
 import { factorLabels, factorOptions, interval, percent } from './labels';
 
@@ -98,8 +99,22 @@ export function RatesScreen() {
                     <th scope="row" className={`${td} font-semibold`}>
                       {r.level}
                     </th>
-                    <td className={`${td} ${num}`}>{r.jars}</td>
-                    <td className={`${td} ${num}`}>{r.contaminated}</td>
+                    <td className={`${td} ${num}`}>
+                      <JarsLink factor={by} level={r.level} period={period} label={`${r.jars} jars of ${r.level}`}>
+                        {r.jars}
+                      </JarsLink>
+                    </td>
+                    <td className={`${td} ${num}`}>
+                      <JarsLink
+                        factor={by}
+                        level={r.level}
+                        only="contaminated"
+                        period={period}
+                        label={`${r.contaminated} contaminated jars of ${r.level}`}
+                      >
+                        {r.contaminated}
+                      </JarsLink>
+                    </td>
                     <td className={`${td} ${num}`}>{r.incubating}</td>
                     <td className={`${td} ${num} font-semibold`}>{percent(r.rate)}</td>
                     <td className={`${td} ${num}`}>{interval(r.ci95)}</td>

@@ -51,7 +51,7 @@ function WeekDot({ cx, cy, payload }: DotProps) {
 }
 
 /** The p-chart: weekly rate against 3-sigma limits for each week's own number of jars (Montgomery, ch. 7). */
-export function WeeklyChart({ data }: { data: WeeklyDto }) {
+export function WeeklyChart({ data, onWeek }: { data: WeeklyDto; onWeek?: (week: string) => void }) {
   return (
     <figure className="mb-8 rounded-lg border-2 border-line bg-surface-raised p-4">
       <figcaption className="mb-2 font-semibold">
@@ -60,7 +60,14 @@ export function WeeklyChart({ data }: { data: WeeklyDto }) {
       </figcaption>
       <div className="h-72 w-full">
         <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={data.weeks} margin={{ top: 8, right: 16, bottom: 8, left: 8 }}>
+          <ComposedChart
+            data={data.weeks}
+            margin={{ top: 8, right: 16, bottom: 8, left: 8 }}
+            className={onWeek ? 'cursor-pointer' : undefined}
+            onClick={(state) => {
+              if (onWeek && state?.activeLabel !== undefined) onWeek(String(state.activeLabel));
+            }}
+          >
             <CartesianGrid stroke="#d3dad6" strokeDasharray="3 3" />
             <XAxis dataKey="week" tick={{ fontSize: 12 }} />
             <YAxis tickFormatter={(v: number) => percent(v)} width={64} tick={{ fontSize: 12 }} />
@@ -105,8 +112,9 @@ export function WeeklyChart({ data }: { data: WeeklyDto }) {
         </ResponsiveContainer>
       </div>
       <p className="mt-2 text-sm text-muted">
-        Red dots: weeks outside their limits. Red dotted line: the rate the lab accepts. Hollow dots: provisional weeks
-        that still hold incubating jars; they are left out of p̄ and never flagged.
+        Red dots: weeks outside their limits. Red dotted line: the rate the lab accepts. Click a week to open its jars
+        (the table’s numbers do the same from the keyboard). Hollow dots: provisional weeks that still hold incubating
+        jars; they are left out of p̄ and never flagged.
       </p>
     </figure>
   );

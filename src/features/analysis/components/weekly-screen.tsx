@@ -1,22 +1,26 @@
 import { useQuery } from '@tanstack/react-query';
-import { Link, useSearchParams } from 'react-router';
+import { Link, useNavigate, useSearchParams } from 'react-router';
 import { Badge } from '../../../components/ui/badge';
 import { PageHeader } from '../../../components/ui/page-header';
 import { paths } from '../../../config/paths';
 import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, nowrap, num, td, th } from './analysis-frame';
 import { percent } from './labels';
+import { JarsLink, jarsBehindPath } from './jars-link';
 import { WeeklyChart } from './weekly-chart';
 import './weekly-print.css';
 
 /** The supervisor's home: the last twelve ISO weeks, overall and per grain, with the p-chart. */
 export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
   const [params] = useSearchParams();
+  const navigate = useNavigate();
   const period = compact ? { from: undefined, to: undefined } : readPeriod(params);
   const weekly = useQuery(analysisQueries.weekly(period));
   const data = weekly.data;
   const grains = [...new Set(data?.weeks.flatMap((w) => w.grains.map((g) => g.grain)) ?? [])].sort();
   const flagged = data?.weeks.filter((w) => w.outOfControl) ?? [];
+  // The period the table shows, so a drill-down counts the same jars.
+  const shown = { from: data?.from, to: data?.to };
   const aboveTarget = data?.weeks.filter((w) => w.aboveTarget) ?? [];
   // The settled weeks with the highest rates, so the worst ones lead even when none crosses its limit.
   const worst = [...(data?.weeks.filter((w) => !w.provisional && w.contaminated > 0) ?? [])]
@@ -88,7 +92,12 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                 {worst.map((w) => `${w.week} (${percent(w.rate)}, ${w.contaminated} of ${w.jars})`).join(' · ')}
               </p>
             )}
-            {!compact && <WeeklyChart data={data} />}
+            {!compact && (
+              <WeeklyChart
+                data={data}
+                onWeek={(week) => void navigate(jarsBehindPath({ factor: 'week', level: week, period: shown }))}
+              />
+            )}
             <Table caption="Contamination per ISO week">
               <thead>
                 <tr>
@@ -130,8 +139,22 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                     <th scope="row" className={`${td} ${nowrap} font-semibold`}>
                       {w.week}
                     </th>
-                    <td className={`${td} ${num}`}>{w.jars}</td>
-                    <td className={`${td} ${num}`}>{w.contaminated}</td>
+                    <td className={`${td} ${num}`}>
+                      <JarsLink factor="week" level={w.week} period={shown} label={`${w.jars} jars of ${w.week}`}>
+                        {w.jars}
+                      </JarsLink>
+                    </td>
+                    <td className={`${td} ${num}`}>
+                      <JarsLink
+                        factor="week"
+                        level={w.week}
+                        only="contaminated"
+                        period={shown}
+                        label={`${w.contaminated} contaminated jars of ${w.week}`}
+                      >
+                        {w.contaminated}
+                      </JarsLink>
+                    </td>
                     <td className={`${td} ${num}`}>{w.incubating}</td>
                     <td className={`${td} ${num} font-semibold`}>{percent(w.rate)}</td>
                     <td className={`${td} ${num} ${nowrap} text-muted`}>
@@ -156,7 +179,16 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                         <td key={g} className={`${td} ${num}`}>
                           {cell ? (
                             <>
-                              {percent(cell.rate)}{' '}
+                              <JarsLink
+                                factor="week"
+                                level={w.week}
+                                factor2="grain"
+                                level2={g}
+                                period={shown}
+                                label={`${g} jars of ${w.week}`}
+                              >
+                                {percent(cell.rate)}
+                              </JarsLink>{' '}
                               <span className="text-sm text-muted">
                                 ({cell.contaminated}/{cell.jars})
                               </span>

@@ -2,7 +2,9 @@ import { useState, type ReactNode } from 'react';
 import { factorNames } from '../../../../shared/enums';
 import { createActionSchema, updateActionSchema, type CorrectiveActionDto } from '../../../../shared/schemas/incidents';
 import { Badge } from '../../../components/ui/badge';
+import type { PersonDto } from '../../../../shared/schemas/users';
 import { Button } from '../../../components/ui/button';
+import { Select } from '../../../components/ui/select';
 import { applyServerErrors, Form } from '../../../components/ui/form';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
@@ -46,10 +48,19 @@ function CompleteForm({ action, onDone }: { action: CorrectiveActionDto; onDone:
   );
 }
 
-function AddActionForm({ incidentId }: { incidentId: number }) {
+const blankToUndefined = (v: string) => v.trim() || undefined;
+const STAFF = 'staff';
+
+function AddActionForm({ incidentId, people }: { incidentId: number; people: PersonDto[] }) {
   const create = useCreateAction(incidentId);
   const toast = useToast();
   const [formKey, setFormKey] = useState(0);
+  const [ownerChoice, setOwnerChoice] = useState('');
+  const ownerOptions = [
+    { value: '', label: 'Choose the owner' },
+    ...people.map((p) => ({ value: String(p.id), label: p.displayName })),
+    { value: STAFF, label: 'Someone without an account…' },
+  ];
   return (
     <Form
       key={formKey}
@@ -58,23 +69,51 @@ function AddActionForm({ incidentId }: { incidentId: number }) {
       onSubmit={(values, { setError }) =>
         create.mutateAsync(values).then(
           () => {
-            toast.success('Corrective action added.');
+            toast.success('Corrective action added; the owner is told by e-mail where an address is known.');
             setFormKey((k) => k + 1);
+            setOwnerChoice('');
           },
-          (error: unknown) => applyServerErrors(error, setError, ['what', 'ownerName', 'dueOn']),
+          (error: unknown) => applyServerErrors(error, setError, ['what', 'ownerName', 'ownerEmail', 'dueOn']),
         )
       }
     >
-      {({ register, formState: { errors, isSubmitting } }) => (
+      {({ register, setValue, formState: { errors, isSubmitting } }) => (
         <>
           <NotesField label="What will be done" error={errors.what?.message} {...register('what')} />
           <div className="grid gap-3 sm:grid-cols-2">
-            <TextInput
+            <Select
               label="Owner"
-              error={errors.ownerName?.message}
-              {...register('ownerName', { setValueAs: (v: string) => v.trim() || undefined })}
+              options={ownerOptions}
+              value={ownerChoice}
+              error={errors.ownerName?.message ?? errors.ownerId?.message}
+              onChange={(e) => {
+                const v = e.target.value;
+                setOwnerChoice(v);
+                setValue('ownerId', v && v !== STAFF ? Number(v) : undefined);
+                if (v !== STAFF) {
+                  setValue('ownerName', undefined);
+                  setValue('ownerEmail', undefined);
+                }
+              }}
             />
             <TextInput label="Due on" type="date" error={errors.dueOn?.message} {...register('dueOn')} />
+            {ownerChoice === STAFF && (
+              <>
+                <TextInput
+                  label="Owner’s name"
+                  error={errors.ownerName?.message}
+                  {...register('ownerName', { setValueAs: blankToUndefined })}
+                />
+                <TextInput
+                  label="Owner’s e-mail"
+                  optional
+                  type="email"
+                  hint="Without one, nobody is told."
+                  error={errors.ownerEmail?.message}
+                  {...register('ownerEmail', { setValueAs: blankToUndefined })}
+                />
+              </>
+            )}
           </div>
           <div>
             <Button type="submit" variant="secondary" icon="plus" pending={isSubmitting}>
@@ -92,12 +131,14 @@ export function ActionsPanel({
   actions,
   canManage,
   extra,
+  people,
 }: {
   incidentId: number;
   actions: CorrectiveActionDto[];
   canManage: boolean;
   /** What other features show on each action (the before/after verdict), composed by the route. */
   extra?: ((action: CorrectiveActionDto) => ReactNode) | undefined;
+  people: PersonDto[];
 }) {
   const [completing, setCompleting] = useState<number | null>(null);
   return (
@@ -105,7 +146,7 @@ export function ActionsPanel({
       {actions.length === 0 && <p className="text-muted">No corrective actions yet.</p>}
       <ul className="flex flex-col gap-3">
         {actions.map((a) => (
-          <li key={a.id} className="rounded-md border border-line p-3 print:break-inside-avoid">
+          <li key={a.id} id={`action-${a.id}`} className="rounded-md border border-line p-3 print:break-inside-avoid">
             <p className="font-medium">{a.what}</p>
             <p className="text-sm text-muted">
               {a.ownerName} · due {formatDate(a.dueOn)}
@@ -128,7 +169,7 @@ export function ActionsPanel({
           </li>
         ))}
       </ul>
-      {canManage && <AddActionForm incidentId={incidentId} />}
+      {canManage && <AddActionForm incidentId={incidentId} people={people} />}
     </div>
   );
 }

@@ -12,6 +12,7 @@ import { FullPageSpinner } from '../../../components/ui/spinner';
 import { paths } from '../../../config/paths';
 import { incidentsQueries } from '../api/incidents-queries';
 import { causeLabels, severityLabels, stageLabels } from '../labels';
+import type { PersonDto } from '../../../../shared/schemas/users';
 import { ActionsPanel } from './actions-panel';
 import { AddPhotos } from './add-photos';
 import { EditIncidentDialog } from './edit-incident-dialog';
@@ -48,10 +49,13 @@ export function IncidentDetail({
   id,
   me,
   actionExtra,
+  people = [],
 }: {
   id: number;
   me: { id: number; role: Role };
   actionExtra?: (action: CorrectiveActionDto) => ReactNode;
+  /** Who may own a corrective action. */
+  people?: PersonDto[];
 }) {
   const detail = useQuery(incidentsQueries.detail(id));
   const [voiding, setVoiding] = useState(false);
@@ -151,6 +155,7 @@ export function IncidentDetail({
               actions={i.actions}
               canManage={supervisor && !i.voided}
               extra={actionExtra}
+              people={people}
             />
           </Section>
         </div>

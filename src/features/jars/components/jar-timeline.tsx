@@ -1,4 +1,6 @@
 import type { TimelineEntryDto } from '../../../../shared/schemas/jars';
+import { Link } from 'react-router';
+import { paths } from '../../../config/paths';
 import { cx } from '../../../lib/cx';
 import { formatDate } from '../../../lib/format';
 
@@ -29,7 +31,15 @@ export function JarTimeline({ entries }: { entries: TimelineEntryDto[] }) {
           <p className="text-sm text-muted">
             <time dateTime={e.at}>{when(e.at)}</time>
           </p>
-          <p className={cx('font-medium', e.kind === 'incident' && 'text-danger')}>{e.title}</p>
+          <p className={cx('font-medium', e.kind === 'incident' && 'text-danger')}>
+            {e.kind === 'incident' && e.ref !== null ? (
+              <Link to={paths.incident.to(e.ref)} className="underline">
+                {e.title} (#{e.ref})
+              </Link>
+            ) : (
+              e.title
+            )}
+          </p>
           {e.detail && <p className="text-muted">{e.detail}</p>}
         </li>
       ))}

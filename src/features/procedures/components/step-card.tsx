@@ -3,6 +3,7 @@ import type { ProcedureStepDto } from '../../../../shared/schemas/procedures';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { proceduresQueries } from '../api/procedures-queries';
+import { StepLinksList } from './step-links-list';
 
 const pct = (rate: number | null) => (rate === null ? '–' : `${(rate * 100).toFixed(1)} %`);
 
@@ -47,6 +48,7 @@ export function StepCard({ step, canLink, onLink }: { step: ProcedureStepDto; ca
           </>
         )}
       </dl>
+      <StepLinksList stepId={step.id} canLink={canLink} />
       {canLink && (
         <Button variant="secondary" className="mt-3" onClick={onLink}>
           Link an incident to step {step.position}

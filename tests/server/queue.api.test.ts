@@ -1,0 +1,84 @@
+import supertest from 'supertest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { QueueDto } from '../../shared/schemas/queue';
+import { localDate } from '../../server/core/local-time';
+import { dataSource } from '../../server/db/data-source';
+import { ClusterAlert } from '../../server/mail/cluster-alert.entity';
+import { createTestApp } from '../setup/test-app';
+import { sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { makeCookRun, makeIncident, makeJars } from '../setup/lab-rows';
+
+const app = createTestApp();
+const daysFrom = (days: number) => localDate(new Date(Date.now() + days * 86_400_000));
+
+let sup: Client;
+beforeAll(async () => {
+  sup = await signedIn(app, 'supervisor');
+});
+
+const queue = async () => (await sup.agent.get('/api/queue').expect(200)).body as QueueDto;
+
+describe('GET /api/queue', () => {
+  it('answers 401 without a session and 403 to other roles', async () => {
+    expect((await supertest(app).get('/api/queue')).status).toBe(401);
+    for (const role of ['technician', 'trainer', 'admin'] as const) {
+      expect((await (await signedIn(app, role)).agent.get('/api/queue')).status).toBe(403);
+    }
+  });
+
+  it('lists open incidents oldest first and overdue actions, each with what its link needs', async () => {
+    const jars = await makeJars(2, { inoculatedOn: daysFrom(-12) });
+    const older = await makeIncident([jars[0]!], { foundOn: daysFrom(-400) });
+    const newer = await makeIncident([jars[1]!], { foundOn: daysFrom(-1) });
+    const what = uniqueName('Replace the lid filters');
+    const action = await sendAs(sup, 'post', `/api/incidents/${newer.id}/actions`, {
+      what,
+      ownerName: 'Someone',
+      dueOn: daysFrom(-2),
+    }).expect(201);
+    const q = await queue();
+    const ids = q.incidentsToReview.items.map((i) => i.id);
+    expect(ids[0]).toBe(older.id);
+    expect(q.incidentsToReview.total).toBeGreaterThanOrEqual(2);
+    expect(q.actionsOverdue.items.find((a) => a.id === action.body.id)).toMatchObject({
+      incidentId: newer.id,
+      what,
+    });
+  });
+
+  it('lists recent cook runs below their target', async () => {
+    const run = await makeCookRun(45);
+    await dataSource.query("UPDATE cook_runs SET container = '1 L jar', cookedOn = ? WHERE id = ?", [
+      daysFrom(-3),
+      run.id,
+    ]);
+    const q = await queue();
+    expect(q.runsBelowTarget.items.find((r) => r.id === run.id)).toMatchObject({
+      minutesAtPressure: 45,
+      minimumMinutes: 90,
+      judgedBy: 'minutes',
+    });
+  });
+
+  it('keeps a cluster alert in the queue until a supervisor marks it looked at', async () => {
+    const alert = await dataSource.manager.save(
+      dataSource.manager.create(ClusterAlert, {
+        dimension: 'cookRun',
+        levelId: 1,
+        levelCode: uniqueName('CR'),
+        firstFoundOn: daysFrom(-3),
+        lastFoundOn: daysFrom(-1),
+        incidentCount: 3,
+        triggeredByIncidentId: 1,
+      }),
+    );
+    expect((await queue()).clusterAlerts.items.map((a) => a.id)).toContain(alert.id);
+    const tech = await signedIn(app, 'technician');
+    expect((await sendAs(tech, 'post', `/api/queue/cluster-alerts/${alert.id}/seen`)).status).toBe(403);
+    expect((await sendAs(sup, 'post', '/api/queue/cluster-alerts/999999/seen')).status).toBe(404);
+    await sendAs(sup, 'post', `/api/queue/cluster-alerts/${alert.id}/seen`).expect(204);
+    expect((await queue()).clusterAlerts.items.map((a) => a.id)).not.toContain(alert.id);
+    const row = await dataSource.manager.findOneByOrFail(ClusterAlert, { id: alert.id });
+    expect(row.seenByName).toBe('Test supervisor');
+  });
+});
