@@ -25,7 +25,7 @@ describe('in-app scanner', () => {
     // Chromium reads the fake camera file when the camera first opens, so it is written before.
     writeQrVideo(video, story.pageUrl);
 
-    await page.getByRole('link', { name: 'Scan a jar label' }).click();
+    await page.getByRole('link', { name: 'Scan a QR code' }).click();
     await page.getByRole('heading', { name: 'Scan a jar' }).waitFor();
     await page.waitForURL(new RegExp(`/j/${jar.label}$`));
     await page.getByRole('heading', { name: jar.label }).waitFor();

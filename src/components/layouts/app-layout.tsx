@@ -66,7 +66,7 @@ export function AppLayout({ user, onSignOut, signingOut, children }: AppLayoutPr
               <span className="block font-semibold">{user.displayName}</span>
               <span className="text-sm text-muted">{roleLabels[user.role]}</span>
             </p>
-            <Link to={paths.scan.to()} className={buttonClasses('secondary')} aria-label="Scan a jar label">
+            <Link to={paths.scan.to()} className={buttonClasses('secondary')} aria-label="Scan a QR code">
               <Icon name="scan" size={22} />
               <span className="sr-only sm:not-sr-only">Scan</span>
             </Link>
