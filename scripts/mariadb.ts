@@ -24,6 +24,8 @@ export interface MariaDbHandle {
   socket: string;
   rootQuery(sql: string): Promise<void>;
   stop(): Promise<void>;
+  /** SIGKILL, as a crash or an OOM killer would: no clean shutdown. */
+  kill(): Promise<void>;
 }
 
 const isRoot = process.getuid?.() === 0;
@@ -139,6 +141,11 @@ export async function startMariaDb(opts: MariaDbOptions): Promise<MariaDbHandle>
     port: opts.port,
     socket,
     rootQuery,
+    async kill() {
+      if (child.exitCode !== null) return;
+      child.kill('SIGKILL');
+      await exited;
+    },
     async stop() {
       if (child.exitCode !== null) return;
       child.kill('SIGTERM');

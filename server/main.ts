@@ -82,7 +82,11 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
 const isEntryPoint = process.argv[1]?.endsWith('server/main.ts');
 if (isEntryPoint) {
   installProcessGuards();
-  const running = await startServer();
+  // With the guards installed a failed start would otherwise leave a process that serves nothing.
+  const running = await startServer().catch((err: unknown) => {
+    logger.fatal({ err }, 'Asepta could not start');
+    process.exit(1);
+  });
   const stop = () => void running.close().then(() => process.exit(0));
   process.once('SIGINT', stop);
   process.once('SIGTERM', stop);
