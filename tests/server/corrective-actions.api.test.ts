@@ -1,5 +1,5 @@
 import supertest from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ActionListItemDto } from '../../shared/schemas/corrective-actions';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
@@ -10,6 +10,11 @@ import { makeIncident, makeJars } from '../setup/lab-rows';
 import { mailsTo, readMailSink } from '../setup/mail-sink';
 
 const app = createTestApp();
+// Every active supervisor is mailed on each new incident: the people made here leave when the file ends,
+// so later files in this worker's database do not mail them too.
+afterAll(() =>
+  dataSource.query("UPDATE users SET active = 0 WHERE email LIKE '%@example.invalid' AND displayName LIKE 'Test %'"),
+);
 const today = localDate(new Date());
 const daysFrom = (days: number) => localDate(new Date(Date.now() + days * 86_400_000));
 

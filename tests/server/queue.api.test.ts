@@ -1,5 +1,5 @@
 import supertest from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { QueueDto } from '../../shared/schemas/queue';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
@@ -9,6 +9,11 @@ import { sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 import { makeCookRun, makeIncident, makeJars } from '../setup/lab-rows';
 
 const app = createTestApp();
+// Every active supervisor is mailed on each new incident: the people made here leave when the file ends,
+// so later files in this worker's database do not mail them too.
+afterAll(() =>
+  dataSource.query("UPDATE users SET active = 0 WHERE email LIKE '%@example.invalid' AND displayName LIKE 'Test %'"),
+);
 const daysFrom = (days: number) => localDate(new Date(Date.now() + days * 86_400_000));
 
 let sup: Client;
@@ -27,6 +32,8 @@ describe('GET /api/queue', () => {
   });
 
   it('lists open incidents oldest first and overdue actions, each with what its link needs', async () => {
+    // Other files in this worker's database leave open incidents behind; only this test's two should wait.
+    await dataSource.query("UPDATE incidents SET status = 'closed' WHERE status <> 'closed'");
     const jars = await makeJars(2, { inoculatedOn: daysFrom(-12) });
     const older = await makeIncident([jars[0]!], { foundOn: daysFrom(-400) });
     const newer = await makeIncident([jars[1]!], { foundOn: daysFrom(-1) });
@@ -61,13 +68,15 @@ describe('GET /api/queue', () => {
   });
 
   it('keeps a cluster alert in the queue until a supervisor marks it looked at', async () => {
+    // A run of its own and long-past dates, so no other file's incidents extend this alert.
+    const run = await makeCookRun();
     const alert = await dataSource.manager.save(
       dataSource.manager.create(ClusterAlert, {
         dimension: 'cookRun',
-        levelId: 1,
-        levelCode: uniqueName('CR'),
-        firstFoundOn: daysFrom(-3),
-        lastFoundOn: daysFrom(-1),
+        levelId: run.id,
+        levelCode: run.code,
+        firstFoundOn: '2001-01-01',
+        lastFoundOn: '2001-01-03',
         incidentCount: 3,
         triggeredByIncidentId: 1,
       }),
