@@ -47,10 +47,21 @@ describe('closing the loop', () => {
     await call(page, 'post', '/api/corrective-actions/reminders');
     expect(mailsTo(email).filter((m) => m.subject.startsWith('Overdue'))).toHaveLength(1);
 
+    // Oldest first: other browser tests may have left older open incidents ahead of the new one, so
+    // the queue's own answer says which incident its first link must open, and its total counts ours.
+    const queue = await call<{ incidentsToReview: { items: { id: number }[]; total: number } }>(
+      page,
+      'get',
+      '/api/queue',
+    );
+    const shown = queue.incidentsToReview.items.map((i) => i.id);
+    const target = shown.includes(incident.id) ? incident.id : shown[0]!;
+    const all = await call<{ total: number }>(page, 'get', '/api/incidents?status=open&voided=false&pageSize=1');
+    expect(queue.incidentsToReview.total).toBeGreaterThanOrEqual(all.total);
     await page.reload();
     const review = page.getByRole('region', { name: /Incidents to review/ });
-    await review.getByRole('link', { name: new RegExp(`^#${incident.id} `) }).click();
-    await page.getByRole('heading', { name: `Incident ${incident.id}` }).waitFor();
+    await review.getByRole('link', { name: new RegExp(`^#${target} `) }).click();
+    await page.getByRole('heading', { name: `Incident ${target}` }).waitFor();
     await page.goBack();
     const overdue = page.getByRole('region', { name: 'Corrective actions overdue' });
     await overdue.getByRole('link', { name: what }).click();
