@@ -1,5 +1,6 @@
 import express, { Router, type RequestHandler } from 'express';
 import multer from 'multer';
+import { receiveUpload } from '../core/uploads';
 import {
   cookRunListQuerySchema,
   createCookRunSchema,
@@ -34,12 +35,15 @@ import { parseReadingsCsv } from './readings-csv';
 
 export const cookRunsRouter = Router();
 const maxLogBytes = 5 * 1024 * 1024;
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxLogBytes, files: 1 } });
+const upload = receiveUpload(
+  multer({ storage: multer.memoryStorage(), limits: { fileSize: maxLogBytes, files: 1 } }).single('file'),
+  'file',
+);
 const csvBody = express.text({ type: ['text/csv', 'text/plain', 'application/csv'], limit: maxLogBytes });
 
 /** A log arrives either as the raw body (text/csv) or as the multipart field `file`. */
 const readLog: RequestHandler = (req, res, next) => {
-  if (req.is('multipart/form-data')) return upload.single('file')(req, res, next);
+  if (req.is('multipart/form-data')) return upload(req, res, next);
   return csvBody(req, res, next);
 };
 

@@ -1,9 +1,9 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import multer from 'multer';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { photoField, photoMaxBytes, photoMaxFiles } from '../../shared/schemas/photos';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
-import { AppError } from '../core/errors';
+import { receiveUpload } from '../core/uploads';
 import { validate } from '../core/validate';
 import { idempotentHandler } from '../idempotency/idempotent-route';
 import { getPhoto, openPhoto, uploadPhotos } from './photos.service';
@@ -21,18 +21,7 @@ const limitMessages: Partial<Record<multer.ErrorCode, [number, string]>> = {
   LIMIT_UNEXPECTED_FILE: [400, `send photos in the multipart field "${photoField}", at most ${photoMaxFiles}`],
 };
 
-/** Multer's own messages ("File too large") do not say which field or what the limit is. */
-const receivePhotos: RequestHandler = (req, res, next) => {
-  upload(req, res, (err: unknown) => {
-    if (err instanceof multer.MulterError) {
-      const [status, message] = limitMessages[err.code] ?? [400, err.message];
-      return next(
-        new AppError(status, 'upload-rejected', `${photoField}: ${message}`, [{ path: photoField, message }]),
-      );
-    }
-    next(err);
-  });
-};
+const receivePhotos = receiveUpload(upload, photoField, limitMessages);
 
 const writers = requireRole('technician', 'supervisor', 'admin');
 

@@ -137,3 +137,40 @@ describe('dates and times', () => {
     ]);
   });
 });
+
+describe('multipart bodies that cannot be read', () => {
+  const bodies = [
+    ['no boundary', 'multipart/form-data', 'whatever'],
+    ['a cut-off part', 'multipart/form-data; boundary=x', '--x\r\nContent-Disposition: form-data; name="f"'],
+  ] as const;
+  const uploads = [
+    ['/api/photos', 'photos'],
+    ['/api/imports/history', 'file'],
+  ] as const;
+
+  for (const [what, type, body] of bodies) {
+    it.each(uploads)(`%s answers 400 naming %s for ${what}`, async (url, field) => {
+      const res = await admin.agent.post(url).set('X-CSRF-Token', admin.token()).set('Content-Type', type).send(body);
+      expect(res.status).toBe(400);
+      expect(res.body.error).toMatchObject({ code: 'malformed-upload', issues: [{ path: field }] });
+    });
+  }
+
+  it('a cook run log answers 400 naming file for a body with no boundary', async () => {
+    const run = (
+      await sendAs(supervisor, 'post', '/api/cook-runs', {
+        code: uniqueName('CR'),
+        cookedOn: '2026-03-02',
+        minutesAtPressure: 90,
+        container: '1 L jar',
+      })
+    ).body as { id: number };
+    const res = await supervisor.agent
+      .post(`/api/cook-runs/${run.id}/readings`)
+      .set('X-CSRF-Token', supervisor.token())
+      .set('Content-Type', 'multipart/form-data')
+      .send('whatever');
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'malformed-upload', issues: [{ path: 'file' }] });
+  });
+});
