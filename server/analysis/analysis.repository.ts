@@ -4,7 +4,7 @@ import type { LogPlacement } from '../../shared/stats/cook-verdict';
 import { dataSource } from '../db/data-source';
 import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql, liveIncidentSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
-import { dateText } from './dates';
+import { dateText } from '../core/calendar';
 import { groupedJars, periodWhere, summedSql, type Frame, type Period, type SqlQuery } from './grouped-jars';
 import { cultureKey, keyOf, placedJarsCte, roomKey, transfersKey, transfersLevelSql } from './lineage-and-place';
 

@@ -19,7 +19,7 @@ import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
 import { analysisRepository, type CountRow, type Period } from './analysis.repository';
 import { buildCauses, byStanding } from './causes';
-import { addDays, isoWeekMonday } from './dates';
+import { addDays, mondayOf } from '../core/calendar';
 
 export { compareRates } from './comparison';
 export { frameFor, tally } from './frame';
@@ -118,7 +118,7 @@ export async function causes(
 
 /** Default period: the last twelve ISO weeks, the current one included. */
 export function defaultWeeklyPeriod(today = todayLocal()): { from: string; to: string } {
-  return { from: addDays(isoWeekMonday(today), -7 * (WEEKLY_DEFAULT_WEEKS - 1)), to: today };
+  return { from: addDays(mondayOf(today), -7 * (WEEKLY_DEFAULT_WEEKS - 1)), to: today };
 }
 
 /** Exported for the mail digest: the same table the supervisor's home shows. */

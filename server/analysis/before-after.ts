@@ -11,7 +11,7 @@ import { todayLocal } from '../core/local-time';
 import { analysisRepository, type ActionRow, type CountRow } from './analysis.repository';
 import { frameFor, tally } from './frame';
 import { compareRates } from './comparison';
-import { addDays, daysBetween } from './dates';
+import { addDays, daysBetween } from '../core/calendar';
 
 /** A comparison shorter than a week says little; longer than a quarter mixes in other changes. */
 export const BEFORE_AFTER_MIN_DAYS = 7;

@@ -3,7 +3,7 @@ import { wilsonInterval } from '../../shared/stats/wilson';
 import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
 import type { CountRow, Frame, Period } from './analysis.repository';
-import { addDays } from './dates';
+import { addDays } from '../core/calendar';
 
 export async function frameFor(p: Period, today = todayLocal()): Promise<Frame> {
   const s = await getLabSettings();

@@ -1,5 +1,5 @@
 import type { ActionFilters, ActionListQuery } from '../../shared/schemas/corrective-actions';
-import { addDays } from '../analysis/dates';
+import { addDays } from '../core/calendar';
 import { pageSorted, whereContains, type SortSpec } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { CorrectiveAction } from './corrective-action.entity';

@@ -6,6 +6,7 @@ import { Jar } from '../jars/jar.entity';
 import { Photo } from '../photos/photo.entity';
 import { IncidentJar } from './incident-jar.entity';
 import { IncidentPhoto } from './incident-photo.entity';
+import { dateText } from '../core/calendar';
 
 interface JarRow {
   id: number;
@@ -110,8 +111,7 @@ export const incidentDetailRepository = {
         label: r.label,
         status: r.status,
         grain: r.grain,
-        inoculatedOn:
-          r.inoculatedOn instanceof Date ? r.inoculatedOn.toISOString().slice(0, 10) : String(r.inoculatedOn),
+        inoculatedOn: dateText(r.inoculatedOn) ?? '',
         room: r.room,
         shelf: r.shelf,
         cookRun: r.cookRunId !== null ? { id: Number(r.cookRunId), code: r.cookRunCode ?? '' } : null,

@@ -1,12 +1,10 @@
 import type { JarStatus } from '../../shared/enums';
 import type { JarEventDto, JarRowDto } from '../../shared/schemas/jars';
 import type { JarEvent } from './jar-event.entity';
+import { dateText } from '../core/calendar';
 
 /** mysql2 hands DATE columns back as Date at UTC midnight (the DataSource runs in 'Z'). */
-export function dateOnly(value: Date | string): string {
-  if (value instanceof Date) return value.toISOString().slice(0, 10);
-  return String(value).slice(0, 10);
-}
+export const dateOnly = (value: Date | string): string => dateText(value) ?? String(value);
 export const dateOrNull = (value: Date | string | null | undefined): string | null =>
   value === null || value === undefined ? null : dateOnly(value);
 export const isoOrNull = (value: Date | string | null | undefined): string | null =>

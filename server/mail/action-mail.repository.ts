@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../db/data-source';
+import { dateText } from '../core/calendar';
 
 export interface ActionMailRow {
   id: number;
@@ -12,7 +13,7 @@ export interface ActionMailRow {
 }
 
 type Raw = Record<string, unknown>;
-const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
+const day = (v: unknown) => dateText(v) ?? '';
 const toRow = (r: Raw): ActionMailRow => ({
   id: Number(r.id),
   incidentId: Number(r.incidentId),

@@ -5,7 +5,7 @@ import { config } from '../core/config';
 import { dataSource } from '../db/data-source';
 import { getLabSettings } from '../settings/settings.service';
 import { digestRepository } from './digest.repository';
-import { addDays, isoWeekOf, labClock, mondayOf, weeksEndingAt } from './iso-week';
+import { addDays, isoWeekOf, labClock, mondayOf, weeksEndingAt } from '../core/calendar';
 import { mailRepository } from './mail.repository';
 import { weeklyDigestMail, type DigestFacts, type DigestWeek } from './mail-templates';
 import { deliver } from './mailer';

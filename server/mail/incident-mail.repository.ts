@@ -9,6 +9,7 @@ import { Jar } from '../jars/jar.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
 import { ClusterAlert, type ClusterDimension } from './cluster-alert.entity';
 import { liveIncidentSql } from '../incidents/live-incidents';
+import { dateText } from '../core/calendar';
 
 export interface IncidentJarRow {
   label: string;
@@ -85,7 +86,7 @@ export const incidentMailRepository = {
       .getRawMany<{ id: string | number; foundOn: string | Date; contaminant: Contaminant; jars: string | number }>();
     return rows.map((r) => ({
       id: Number(r.id),
-      foundOn: typeof r.foundOn === 'string' ? r.foundOn.slice(0, 10) : r.foundOn.toISOString().slice(0, 10),
+      foundOn: dateText(r.foundOn) ?? '',
       contaminant: r.contaminant,
       jars: Number(r.jars),
     }));

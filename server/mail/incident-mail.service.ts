@@ -4,7 +4,7 @@ import { logger } from '../core/logger';
 import { getLabSettings } from '../settings/settings.service';
 import { ClusterAlert, clusterDimensions, type ClusterDimension } from './cluster-alert.entity';
 import { incidentMailRepository, type IncidentJarRow } from './incident-mail.repository';
-import { addDays } from './iso-week';
+import { addDays } from '../core/calendar';
 import { mailRepository } from './mail.repository';
 import { clusterAlertMail, newIncidentMail } from './mail-templates';
 import { deliver, type DeliveryResult } from './mailer';

@@ -5,14 +5,11 @@ import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
 import { proceduresRepository } from './procedures.repository';
 import { stepStatsRepository, type GroupCounts } from './step-stats.repository';
+import { addDays } from '../core/calendar';
 
 const group = (g: GroupCounts): StepGroupDto => ({ ...g, rate: g.jars > 0 ? g.contaminated / g.jars : null });
 
-function daysBefore(date: string, days: number): string {
-  const d = new Date(`${date}T00:00:00Z`);
-  d.setUTCDate(d.getUTCDate() - days);
-  return d.toISOString().slice(0, 10);
-}
+const daysBefore = (date: string, days: number) => addDays(date, -days);
 
 /**
  * Contamination of jars from sessions where the step was ticked vs not ticked, with Fisher's exact

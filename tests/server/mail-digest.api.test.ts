@@ -3,7 +3,7 @@ import { dataSource } from '../../server/db/data-source';
 import { DigestRun } from '../../server/mail/digest-run.entity';
 import { startDigestScheduler } from '../../server/mail/digest-scheduler';
 import { buildDigestFacts, isDigestTime, sendWeeklyDigest } from '../../server/mail/digest.service';
-import { isoWeekOf, labClock, weeksEndingAt } from '../../server/mail/iso-week';
+import { isoWeekOf, labClock, weeksEndingAt } from '../../server/core/calendar';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { makeIncident, makeJars } from '../setup/lab-rows';
