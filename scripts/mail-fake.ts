@@ -3,7 +3,36 @@ import { mkdirSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
+import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+
+/** What a reader of the sink needs of a message, parsed once by mailparser when it arrives. */
+export interface SinkMail {
+  file: string;
+  to: string[];
+  from: string;
+  subject: string;
+  kind: string | undefined;
+  text: string;
+  html: string;
+}
+
+const addresses = (to: AddressObject | AddressObject[] | undefined) =>
+  (Array.isArray(to) ? to : to ? [to] : []).flatMap((a) => a.value.map((v) => (v.address ?? '').toLowerCase()));
+
+async function summarise(raw: Buffer, file: string): Promise<SinkMail> {
+  const m = await simpleParser(raw);
+  const kind = m.headers.get('x-asepta-kind');
+  return {
+    file,
+    to: addresses(m.to),
+    from: m.from?.text ?? '',
+    subject: m.subject ?? '',
+    kind: typeof kind === 'string' ? kind : undefined,
+    text: (m.text ?? '').replace(/\r\n/g, '\n').replace(/\n$/, ''),
+    html: typeof m.html === 'string' ? m.html : '',
+  };
+}
 
 export interface MailFake {
   port: number;
@@ -12,8 +41,8 @@ export interface MailFake {
 }
 
 /**
- * A local SMTP server that accepts every message and saves it as <timestamp>-<id>.eml in sinkDir,
- * so development and tests can read what the app sent. Loopback only; no TLS and no AUTH, because
+ * A local SMTP server that accepts every message and saves it as <timestamp>-<id>.eml in sinkDir, with
+ * <timestamp>-<id>.json beside it (its parsed summary), so development and tests can read what the app sent. Loopback only; no TLS and no AUTH, because
  * the package's built-in certificate has expired and nothing here needs either.
  */
 export async function startMailFake(options: { port: number; sinkDir: string; host?: string }): Promise<MailFake> {
@@ -29,12 +58,16 @@ export async function startMailFake(options: { port: number; sinkDir: string; ho
       stream.on('data', (c: Buffer) => chunks.push(c));
       stream.on('error', callback);
       stream.on('end', () => {
-        const file = path.join(sinkDir, `${Date.now()}-${randomBytes(6).toString('hex')}.eml`);
-        // The client hears 250 only once the file is on disk, so a test can read it right after sending.
-        writeFile(file, Buffer.concat(chunks)).then(
-          () => callback(),
-          (err: Error) => callback(err),
-        );
+        const name = `${Date.now()}-${randomBytes(6).toString('hex')}`;
+        const raw = Buffer.concat(chunks);
+        // The client hears 250 only once both files are on disk, so a test can read them right after sending.
+        writeFile(path.join(sinkDir, `${name}.eml`), raw)
+          .then(() => summarise(raw, `${name}.eml`))
+          .then((mail) => writeFile(path.join(sinkDir, `${name}.json`), JSON.stringify(mail)))
+          .then(
+            () => callback(),
+            (err: Error) => callback(err),
+          );
       });
     },
   });
