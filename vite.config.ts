@@ -57,7 +57,26 @@ export default defineConfig({
     proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/j': `http://127.0.0.1:${apiPort}` },
   },
   // The manifest tells the server which chunks a jar page needs, so it can preload them with the page.
-  build: { outDir: 'dist', sourcemap: true, manifest: true },
+  build: {
+    outDir: 'dist',
+    sourcemap: true,
+    manifest: true,
+    rolldownOptions: {
+      output: {
+        // On a weak signal each extra file waits for a free connection (six per host), so what the entry
+        // needs is one file, and what the jar page (a QR code's address) adds is one more.
+        codeSplitting: {
+          groups: [
+            { name: 'app', tags: ['$initial'] },
+            {
+              name: 'jar-page',
+              test: /[\\/]src[\\/](app[\\/]routes[\\/]jar\.tsx|features[\\/]jars[\\/]components[\\/](jar-page|jar-status-badge|jar-timeline|no-such-jar|jar-event-actions)\.tsx?|components[\\/]ui[\\/](field|text-input)\.tsx)$/,
+            },
+          ],
+        },
+      },
+    },
+  },
   test: {
     projects: [
       {
