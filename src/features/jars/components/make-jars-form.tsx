@@ -1,4 +1,4 @@
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link } from 'react-router';
 import {
@@ -19,7 +19,7 @@ import { paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/api-client';
 import { jarsQueries } from '../api/jars-queries';
 import { useCreateJarBatch } from '../api/use-create-jar-batch';
-import { cultureOptions, cultureWarning } from '../culture-choice';
+import { InoculumFields } from './inoculum-fields';
 
 const fields = [
   'sessionId',
@@ -84,8 +84,6 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
   const options = useQuery(jarsQueries.options());
   const create = useCreateJarBatch();
   const toast = useToast();
-  const queryClient = useQueryClient();
-  const [fromJar, setFromJar] = useState(false);
   const [result, setResult] = useState<{ data: JarBatchResultDto; sessionId: number } | null>(null);
   const flame = cautions.find((c) => c.id === 'flame');
 
@@ -135,9 +133,11 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
           }
         }}
       >
-        {({ register, setValue, setError, clearErrors, watch, formState: { errors } }) => {
-          const chosen = watch('cultureId');
-          const warning = cultureWarning(o.cultures.find((c) => c.id === Number(chosen)));
+        {(methods) => {
+          const {
+            register,
+            formState: { errors },
+          } = methods;
           return (
             <>
               <div className="grid gap-4 sm:grid-cols-2">
@@ -199,79 +199,7 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
                   {...register('inoculatedAt', { setValueAs: instantOfLocal })}
                 />
               </div>
-              <fieldset className="space-y-3">
-                <legend className="font-medium">Inoculated from</legend>
-                <div className="flex gap-3">
-                  <Button
-                    variant={fromJar ? 'secondary' : 'primary'}
-                    aria-pressed={!fromJar}
-                    onClick={() => {
-                      setFromJar(false);
-                      setValue('parentJarId', undefined);
-                    }}
-                  >
-                    A culture
-                  </Button>
-                  <Button
-                    variant={fromJar ? 'primary' : 'secondary'}
-                    aria-pressed={fromJar}
-                    onClick={() => {
-                      setFromJar(true);
-                      setValue('cultureId', undefined);
-                    }}
-                  >
-                    A parent jar
-                  </Button>
-                </div>
-                {fromJar ? (
-                  <>
-                    <input type="hidden" {...register('parentJarId', { setValueAs: idOrUndefined })} />
-                    <TextInput
-                      label="Parent jar label"
-                      autoComplete="off"
-                      error={errors.parentJarId?.message}
-                      onBlur={async (e) => {
-                        const label = e.target.value.trim();
-                        if (!label) return setValue('parentJarId', undefined);
-                        try {
-                          const story = await queryClient.fetchQuery(jarsQueries.byLabel(label));
-                          setValue('parentJarId', story.jar.id);
-                          clearErrors('parentJarId');
-                        } catch (error) {
-                          setValue('parentJarId', undefined);
-                          setError('parentJarId', { type: 'server', message: errorMessage(error) });
-                        }
-                      }}
-                    />
-                  </>
-                ) : (
-                  <Select
-                    label="Culture"
-                    options={pick(cultureOptions(o.cultures), 'Choose a culture')}
-                    hint={
-                      warning ? (
-                        <span role="status" className="font-medium text-warn">
-                          <span aria-hidden="true">⚠ </span>
-                          {warning}
-                        </span>
-                      ) : (
-                        'Retired cultures are not offered.'
-                      )
-                    }
-                    error={errors.cultureId?.message}
-                    {...register('cultureId', { setValueAs: idOrUndefined })}
-                  />
-                )}
-                <TextInput
-                  label="Inoculum per jar (ml)"
-                  type="number"
-                  inputMode="decimal"
-                  step="0.1"
-                  optional
-                  error={errors.inoculumMl?.message}
-                  {...register('inoculumMl', { setValueAs: blankToUndefined })}
-                />
-              </fieldset>
+              <InoculumFields methods={methods} cultures={o.cultures} />
               <div className="grid gap-4 sm:grid-cols-2">
                 <TextInput
                   label="Incubation room"
