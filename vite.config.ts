@@ -1,5 +1,6 @@
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { compression } from 'vite-plugin-compression2';
 import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
@@ -9,6 +10,8 @@ export default defineConfig({
   plugins: [
     react(),
     tailwindcss(),
+    // Compressed once at build, so a busy server never spends a weak connection's time gzipping on the fly.
+    compression({ algorithms: ['gzip', 'brotliCompress'], include: /\.(js|css|html|svg|wasm|webmanifest)$/ }),
     VitePWA({
       injectRegister: null,
       registerType: 'autoUpdate',
