@@ -1,5 +1,6 @@
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { compression } from 'vite-plugin-compression2';
 import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
@@ -9,6 +10,8 @@ export default defineConfig({
   plugins: [
     react(),
     tailwindcss(),
+    // Compressed once at build, so a busy server never spends a weak connection's time gzipping on the fly.
+    compression({ algorithms: ['gzip', 'brotliCompress'], include: /\.(js|css|html|svg|wasm|webmanifest)$/ }),
     VitePWA({
       injectRegister: null,
       registerType: 'autoUpdate',
@@ -57,7 +60,26 @@ export default defineConfig({
     proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/j': `http://127.0.0.1:${apiPort}` },
   },
   // The manifest tells the server which chunks a jar page needs, so it can preload them with the page.
-  build: { outDir: 'dist', sourcemap: true, manifest: true },
+  build: {
+    outDir: 'dist',
+    sourcemap: true,
+    manifest: true,
+    rolldownOptions: {
+      output: {
+        // On a weak signal each extra file waits for a free connection (six per host), so what the entry
+        // needs is one file, and what the jar page (a QR code's address) adds is one more.
+        codeSplitting: {
+          groups: [
+            { name: 'app', tags: ['$initial'] },
+            {
+              name: 'jar-page',
+              test: /[\\/]src[\\/](app[\\/]routes[\\/]jar\.tsx|features[\\/]jars[\\/]components[\\/](jar-page|jar-status-badge|jar-timeline|no-such-jar|jar-event-actions)\.tsx?|components[\\/]ui[\\/](field|text-input)\.tsx)$/,
+            },
+          ],
+        },
+      },
+    },
+  },
   test: {
     projects: [
       {

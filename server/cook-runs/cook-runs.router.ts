@@ -28,6 +28,7 @@ import {
   listCookRuns,
   removeCookRunReadings,
   replaceCookRunReadings,
+  suggestCookRunCode,
   updateCookRun,
 } from './cook-runs.service';
 import { cookRunCsv } from './cook-runs.mapper';
@@ -51,6 +52,9 @@ const shownIssues = 50;
 
 cookRunsRouter.get('/', ...listRoute(cookRunListQuerySchema, listCookRuns));
 cookRunsRouter.get('/export.csv', ...csvExportRoute(cookRunListQuerySchema, { rows: exportCookRuns, ...cookRunCsv }));
+cookRunsRouter.get('/next-code', requireWriter, async (_req, res) => {
+  res.json({ code: await suggestCookRunCode() });
+});
 cookRunsRouter.get('/:id', ...detailRoute(getCookRun));
 cookRunsRouter.post('/', ...createRoute(createCookRunSchema, createCookRun));
 cookRunsRouter.patch('/:id', ...writeRoute(updateCookRunSchema, updateCookRun));

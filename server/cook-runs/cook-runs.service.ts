@@ -11,6 +11,7 @@ import type {
 import type { CookRule, LogPlacement } from '../../shared/stats/cook-verdict';
 import { f0FromLog, lethalRate, type TemperatureSample } from '../../shared/stats/lethality';
 import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
+import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { localDate } from '../core/local-time';
 import { pageResult } from '../core/paging';
@@ -48,6 +49,11 @@ export async function getCookRun(id: number): Promise<CookRunDetailDto> {
   const [t, readingsCount] = await Promise.all([target(), cookRunsRepository.readingsCount(id)]);
   return { ...toCookRunDto(run, t), readingsCount };
 }
+
+/** A lab with no cook runs yet starts here; after that the lab's own latest code sets the pattern. */
+export const firstCookRunCode = 'CR-0001';
+
+export const suggestCookRunCode = () => suggestCode(CookRun, firstCookRunCode);
 
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
   const clash = await cookRunsRepository.findByCode(code, m);

@@ -1,5 +1,6 @@
 import path from 'node:path';
-import express, { type Express } from 'express';
+import type { Express } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import { jarPageHtml } from './page-preloads';
 
 const year = 365 * 24 * 60 * 60;
@@ -10,15 +11,25 @@ const year = 365 * 24 * 60 * 60;
  * so a new version reaches phones at once.
  */
 export function serveClient(app: Express, staticDir: string): void {
+  // The build writes .br and .gz beside each text file; the best one the browser accepts goes out as is.
   app.use(
-    express.static(staticDir, {
+    expressStaticGzip(staticDir, {
       index: false,
-      setHeaders(res, file) {
-        const rel = path.relative(staticDir, file).split(path.sep).join('/');
-        if (rel.startsWith('assets/')) res.setHeader('Cache-Control', `public, max-age=${year}, immutable`);
-        else if (rel === 'sw.js' || rel.endsWith('.webmanifest') || rel.endsWith('.html'))
-          res.setHeader('Cache-Control', 'no-cache');
-        else res.setHeader('Cache-Control', 'public, max-age=86400');
+      enableBrotli: true,
+      orderPreference: ['br', 'gzip'],
+      serveStatic: {
+        index: false,
+        setHeaders(res, file) {
+          const rel = path
+            .relative(staticDir, file)
+            .split(path.sep)
+            .join('/')
+            .replace(/\.(br|gz)$/, '');
+          if (rel.startsWith('assets/')) res.setHeader('Cache-Control', `public, max-age=${year}, immutable`);
+          else if (rel === 'sw.js' || rel.endsWith('.webmanifest') || rel.endsWith('.html'))
+            res.setHeader('Cache-Control', 'no-cache');
+          else res.setHeader('Cache-Control', 'public, max-age=86400');
+        },
       },
     }),
   );

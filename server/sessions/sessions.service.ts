@@ -8,6 +8,7 @@ import type {
   UpdateSessionInput,
 } from '../../shared/schemas/sessions';
 import { patchWithAudit, recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
@@ -46,6 +47,11 @@ export async function getSession(id: number): Promise<SessionDetailDto> {
     checklist: toChecklist(steps, checks),
   };
 }
+
+/** A lab with no sessions yet starts here; after that the lab's own latest code sets the pattern. */
+export const firstSessionCode = 'IS-0001';
+
+export const suggestSessionCode = () => suggestCode(InoculationSession, firstSessionCode);
 
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
   const clash = await sessionsRepository.findByCode(code, m);

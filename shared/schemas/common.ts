@@ -78,6 +78,10 @@ export interface Page<T> {
   pageSize: number;
 }
 
+/** A register's next code, counted on from the lab's own latest one; the form may change it. */
+export const suggestedCodeSchema = z.object({ code: z.string() });
+export type SuggestedCodeDto = z.infer<typeof suggestedCodeSchema>;
+
 export const fieldIssueSchema = z.object({ path: z.string(), message: z.string() });
 export type FieldIssue = z.infer<typeof fieldIssueSchema>;
 

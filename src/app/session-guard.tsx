@@ -18,10 +18,13 @@ const returnPath = (url: URL) => `${url.pathname}${url.search}`;
 export const sessionLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
+    // Both at once: on a weak signal one more round trip is more than half a second.
+    const settings = queryClient.ensureQueryData(settingsQueries.detail());
+    settings.catch(() => undefined); // Signed out, it fails; the sign-in redirect below says why.
     const me = await queryClient.ensureQueryData(authQueries.me());
     if (!me) throw redirect(paths.signIn.to(returnPath(new URL(request.url))));
     // Greeting, "today" and every date on screen follow the lab's clock.
-    setLabTimeZone((await queryClient.ensureQueryData(settingsQueries.detail())).timeZone);
+    setLabTimeZone((await settings).timeZone);
     return null;
   };
 

@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query';
-import { pageOf } from '../../../../shared/schemas/common';
+import { pageOf, suggestedCodeSchema } from '../../../../shared/schemas/common';
 import {
   cookRunDetailSchema,
   cookRunFiltersSchema,
@@ -45,6 +45,13 @@ export const cookRunsQueries = {
     queryOptions({
       queryKey: [...cookRunsQueries.details(), id] as const,
       queryFn: ({ signal }) => api.get(`/cook-runs/${id}`, { signal, schema: cookRunDetailSchema }),
+    }),
+  /** Fetched fresh each time a create form opens: another bench may have just taken a code. */
+  nextCode: () =>
+    queryOptions({
+      queryKey: [...cookRunsQueries.all, 'next-code'] as const,
+      queryFn: ({ signal }) => api.get('/cook-runs/next-code', { signal, schema: suggestedCodeSchema }),
+      staleTime: 0,
     }),
   readings: (id: number) =>
     queryOptions({

@@ -1,3 +1,4 @@
+import { useQuery } from '@tanstack/react-query';
 import { useId } from 'react';
 import { useNavigate } from 'react-router';
 import { createCookRunSchema, defaultGaugeKPa, type CreateCookRunInput } from '../../../../shared/schemas/cook-runs';
@@ -5,9 +6,11 @@ import { kPaToPsi } from '../../../../shared/stats/steam';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { OperatorChoice } from '../../../components/ui/operator-choice';
 import { controlClasses, Field } from '../../../components/ui/field';
+import { SuggestedCodeInput } from '../../../components/ui/suggested-code-input';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
+import { cookRunsQueries } from '../api/cook-runs-queries';
 import { useCreateCookRun } from '../api/use-create-cook-run';
 import { PressureCaution } from './pressure-caution';
 
@@ -41,6 +44,7 @@ interface Props {
 export function CreateCookRunDialog({ open, onClose, me }: Props) {
   const listId = useId();
   const createRun = useCreateCookRun();
+  const nextCode = useQuery({ ...cookRunsQueries.nextCode(), enabled: open });
   const toast = useToast();
   const navigate = useNavigate();
   const defaults: CreateCookRunInput = {
@@ -73,13 +77,19 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
         void navigate(paths.cookRun.to(run.id));
       }}
     >
-      {({ register, watch, setValue, formState: { errors } }) => {
+      {({ register, watch, setValue, formState: { errors, dirtyFields } }) => {
         const gauge = watch('gaugeKPa');
         const byUser = watch('operatorId') === me.id;
         return (
           <>
             <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
+              <SuggestedCodeInput
+                suggestion={nextCode.data?.code}
+                edited={Boolean(dirtyFields.code)}
+                onSuggestion={(code) => setValue('code', code)}
+                error={errors.code?.message}
+                {...register('code')}
+              />
               <TextInput
                 label="Vessel"
                 optional

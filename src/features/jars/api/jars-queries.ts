@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { z } from 'zod';
-import { jarStatusSchema, type JarStatus } from '../../../../shared/enums';
+import { cultureStateSchema, jarStatusSchema, type JarStatus } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
 import {
   jarLabelSchema,
@@ -57,7 +57,9 @@ const optionSchemas = {
   grains: z.array(z.object({ id: z.number(), name: z.string(), active: z.boolean() })),
   prepBatches: pageOf(z.object({ id: z.number(), code: z.string(), grain: z.string(), preparedOn: z.string() })),
   cookRuns: pageOf(z.object({ id: z.number(), code: z.string(), cookedOn: z.string().nullable() })),
-  cultures: pageOf(z.object({ id: z.number(), code: z.string(), state: z.string() })),
+  cultures: pageOf(
+    z.object({ id: z.number(), code: z.string(), species: z.string().nullable(), state: cultureStateSchema }),
+  ),
 };
 
 export const jarsQueries = {
@@ -98,7 +100,10 @@ export const jarsQueries = {
       queryKey: [...jarsQueries.all, 'form-options'] as const,
       queryFn: async ({ signal }) => {
         const many = { pageSize: 200 };
-        const [sessions, grains, prepBatches, cookRuns, cultures] = await Promise.all([
+        // Retired cultures are never offered, so only the other two states are fetched.
+        const cultures = (state: 'released' | 'quarantined') =>
+          api.get('/cultures', { query: { ...many, sort: 'code', state }, signal, schema: optionSchemas.cultures });
+        const [sessions, grains, prepBatches, cookRuns, released, quarantined] = await Promise.all([
           api.get('/sessions', { query: { ...many, sort: '-heldOn' }, signal, schema: optionSchemas.sessions }),
           api.get('/grains', { signal, schema: optionSchemas.grains }),
           api.get('/prep-batches', {
@@ -107,14 +112,15 @@ export const jarsQueries = {
             schema: optionSchemas.prepBatches,
           }),
           api.get('/cook-runs', { query: { ...many, sort: '-cookedOn' }, signal, schema: optionSchemas.cookRuns }),
-          api.get('/cultures', { query: { ...many, sort: 'code' }, signal, schema: optionSchemas.cultures }),
+          cultures('released'),
+          cultures('quarantined'),
         ]);
         return {
           sessions: sessions.items,
           grains,
           prepBatches: prepBatches.items,
           cookRuns: cookRuns.items,
-          cultures: cultures.items,
+          cultures: [...released.items, ...quarantined.items],
         };
       },
       staleTime: 60_000,

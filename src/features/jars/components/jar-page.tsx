@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import { Link } from 'react-router';
 import type { Role } from '../../../../shared/enums';
 import {
@@ -16,10 +16,14 @@ import { errorMessage, isApiError } from '../../../lib/api-client';
 import { cx } from '../../../lib/cx';
 import { formatDate } from '../../../lib/format';
 import { jarsQueries } from '../api/jars-queries';
-import { eventActions, JarEventDialog } from './jar-event-dialog';
+import { eventActions } from './jar-event-actions';
 import { JarStatusBadge } from './jar-status-badge';
 import { JarTimeline } from './jar-timeline';
 import { NoSuchJar } from './no-such-jar';
+
+// The form's code stays off the jar page's first load on a weak signal; it is fetched once the page shows.
+const loadDialog = () => import('./jar-event-dialog');
+const JarEventDialog = lazy(() => loadDialog().then((m) => ({ default: m.JarEventDialog })));
 
 interface Props {
   label: string;
@@ -94,6 +98,10 @@ function Facts({ story }: { story: JarStoryDto }) {
 /** The page a jar's QR code opens: phone first, actions within a thumb's reach. */
 export function JarPage({ label, role, canWrite, canFlag }: Props) {
   const story = useQuery(jarsQueries.byLabel(label));
+  const shown = story.isSuccess;
+  useEffect(() => {
+    if (shown && canWrite) void loadDialog();
+  }, [shown, canWrite]);
   const [action, setAction] = useState<JarEventInputType | null>(null);
   if (story.isPending) return <FullPageSpinner />;
   if (isApiError(story.error, 404)) return <NoSuchJar label={label} />;
@@ -153,7 +161,11 @@ export function JarPage({ label, role, canWrite, canFlag }: Props) {
         <JarTimeline entries={story.data.timeline} />
       </section>
 
-      <JarEventDialog jar={jar} type={action} onClose={() => setAction(null)} />
+      {action && (
+        <Suspense fallback={null}>
+          <JarEventDialog jar={jar} type={action} onClose={() => setAction(null)} />
+        </Suspense>
+      )}
     </div>
   );
 }

@@ -6,35 +6,40 @@ import { JarStatusBadge } from './jar-status-badge';
 
 const column = createColumnHelper<JarRowDto>();
 
-export const jarColumns = [
-  column.accessor('label', {
+const columns = {
+  label: column.accessor('label', {
     header: 'Label',
     enableSorting: true,
     cell: ({ getValue }) => <CodeLink to={paths.jarPage.to(getValue())}>{getValue()}</CodeLink>,
   }),
-  column.accessor('status', {
+  status: column.accessor('status', {
     header: 'Status',
     enableSorting: true,
     cell: ({ getValue }) => <JarStatusBadge status={getValue()} />,
   }),
-  column.accessor('grain', { header: 'Grain', enableSorting: true }),
-  column.accessor('inoculatedOn', {
+  grain: column.accessor('grain', { header: 'Grain', enableSorting: true }),
+  inoculatedOn: column.accessor('inoculatedOn', {
     header: 'Inoculated',
     enableSorting: true,
     cell: ({ getValue }) => <DateCell value={getValue()} />,
   }),
-  column.display({
+  inoculum: column.display({
     id: 'inoculum',
     header: 'Inoculum',
     cell: ({ row: { original: j } }) => dash(j.cultureCode ?? (j.parentJarLabel ? `jar ${j.parentJarLabel}` : null)),
   }),
-  column.accessor('sessionCode', { header: 'Session', cell: ({ getValue }) => dash(getValue()) }),
-  column.accessor('cookRunCode', { header: 'Cook run', cell: ({ getValue }) => dash(getValue()) }),
-  column.accessor('room', {
+  session: column.accessor('sessionCode', { header: 'Session', cell: ({ getValue }) => dash(getValue()) }),
+  cookRun: column.accessor('cookRunCode', { header: 'Cook run', cell: ({ getValue }) => dash(getValue()) }),
+  room: column.accessor('room', {
     header: 'Room / shelf',
     enableSorting: true,
     meta: { label: 'Room / shelf' },
     cell: ({ row: { original: j } }) =>
       j.room ? `${j.room} / ${j.shelf ?? '—'}${j.shelfPosition ? ` #${j.shelfPosition}` : ''}` : '—',
   }),
-];
+};
+
+export const jarColumns = Object.values(columns);
+
+/** A session's own jars: the session column would say the same thing on every row. */
+export const sessionJarColumns = [columns.label, columns.grain, columns.status, columns.inoculatedOn, columns.room];

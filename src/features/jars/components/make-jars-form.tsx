@@ -1,4 +1,4 @@
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link } from 'react-router';
 import {
@@ -19,6 +19,7 @@ import { paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/api-client';
 import { jarsQueries } from '../api/jars-queries';
 import { useCreateJarBatch } from '../api/use-create-jar-batch';
+import { InoculumFields } from './inoculum-fields';
 
 const fields = [
   'sessionId',
@@ -68,7 +69,7 @@ function Result({ result, sessionId, onAgain }: { result: JarBatchResultDto; ses
         >
           Print their labels
         </Link>
-        <Link to={paths.jars.to({ sessionId })} className={buttonClasses('secondary')}>
+        <Link to={paths.session.to(sessionId)} className={buttonClasses('secondary')}>
           See the session’s jars
         </Link>
         <Button variant="ghost" onClick={onAgain}>
@@ -83,8 +84,6 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
   const options = useQuery(jarsQueries.options());
   const create = useCreateJarBatch();
   const toast = useToast();
-  const queryClient = useQueryClient();
-  const [fromJar, setFromJar] = useState(false);
   const [result, setResult] = useState<{ data: JarBatchResultDto; sessionId: number } | null>(null);
   const flame = cautions.find((c) => c.id === 'flame');
 
@@ -134,155 +133,93 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
           }
         }}
       >
-        {({ register, setValue, setError, clearErrors, formState: { errors } }) => (
-          <>
-            <div className="grid gap-4 sm:grid-cols-2">
-              <Select
-                label="Session"
-                options={pick(
-                  o.sessions.map((s) => ({ id: s.id, label: `${s.code} · ${s.heldOn}` })),
-                  'Choose a session',
-                )}
-                error={errors.sessionId?.message}
-                {...register('sessionId', { setValueAs: idOrUndefined })}
-              />
-              <TextInput
-                label="Number of jars"
-                type="number"
-                inputMode="numeric"
-                min={1}
-                max={200}
-                error={errors.count?.message}
-                {...register('count', { setValueAs: idOrUndefined })}
-              />
-              <Select
-                label="Prep batch"
-                optional
-                hint="The grain comes from the batch when one is chosen."
-                options={pick(
-                  o.prepBatches.map((b) => ({ id: b.id, label: `${b.code} · ${b.grain} · ${b.preparedOn}` })),
-                  'No batch recorded',
-                )}
-                error={errors.prepBatchId?.message}
-                {...register('prepBatchId', { setValueAs: idOrUndefined })}
-              />
-              <Select
-                label="Grain"
-                optional
-                options={pick(
-                  o.grains.filter((g) => g.active).map((g) => ({ id: g.id, label: g.name })),
-                  'From the prep batch',
-                )}
-                error={errors.grainId?.message}
-                {...register('grainId', { setValueAs: idOrUndefined })}
-              />
-              <Select
-                label="Cook run"
-                optional
-                options={pick(
-                  o.cookRuns.map((c) => ({ id: c.id, label: `${c.code}${c.cookedOn ? ` · ${c.cookedOn}` : ''}` })),
-                  'No cook run recorded',
-                )}
-                error={errors.cookRunId?.message}
-                {...register('cookRunId', { setValueAs: idOrUndefined })}
-              />
-              <TextInput
-                label="Inoculated at"
-                type="datetime-local"
-                error={errors.inoculatedAt?.message}
-                // Not in defaultValues: react-hook-form reads it from the input through setValueAs.
-                defaultValue={nowLocal()}
-                {...register('inoculatedAt', { setValueAs: instantOfLocal })}
-              />
-            </div>
-            <fieldset className="space-y-3">
-              <legend className="font-medium">Inoculated from</legend>
-              <div className="flex gap-3">
-                <Button
-                  variant={fromJar ? 'secondary' : 'primary'}
-                  aria-pressed={!fromJar}
-                  onClick={() => {
-                    setFromJar(false);
-                    setValue('parentJarId', undefined);
-                  }}
-                >
-                  A culture
-                </Button>
-                <Button
-                  variant={fromJar ? 'primary' : 'secondary'}
-                  aria-pressed={fromJar}
-                  onClick={() => {
-                    setFromJar(true);
-                    setValue('cultureId', undefined);
-                  }}
-                >
-                  A parent jar
-                </Button>
-              </div>
-              {fromJar ? (
-                <>
-                  <input type="hidden" {...register('parentJarId', { setValueAs: idOrUndefined })} />
-                  <TextInput
-                    label="Parent jar label"
-                    autoComplete="off"
-                    error={errors.parentJarId?.message}
-                    onBlur={async (e) => {
-                      const label = e.target.value.trim();
-                      if (!label) return setValue('parentJarId', undefined);
-                      try {
-                        const story = await queryClient.fetchQuery(jarsQueries.byLabel(label));
-                        setValue('parentJarId', story.jar.id);
-                        clearErrors('parentJarId');
-                      } catch (error) {
-                        setValue('parentJarId', undefined);
-                        setError('parentJarId', { type: 'server', message: errorMessage(error) });
-                      }
-                    }}
-                  />
-                </>
-              ) : (
+        {(methods) => {
+          const {
+            register,
+            formState: { errors },
+          } = methods;
+          return (
+            <>
+              <div className="grid gap-4 sm:grid-cols-2">
                 <Select
-                  label="Culture"
+                  label="Session"
                   options={pick(
-                    o.cultures.map((c) => ({
-                      id: c.id,
-                      label: `${c.code}${c.state === 'released' ? '' : ` (${c.state})`}`,
-                    })),
-                    'Choose a culture',
+                    o.sessions.map((s) => ({ id: s.id, label: `${s.code} · ${s.heldOn}` })),
+                    'Choose a session',
                   )}
-                  error={errors.cultureId?.message}
-                  {...register('cultureId', { setValueAs: idOrUndefined })}
+                  error={errors.sessionId?.message}
+                  {...register('sessionId', { setValueAs: idOrUndefined })}
                 />
-              )}
-              <TextInput
-                label="Inoculum per jar (ml)"
-                type="number"
-                inputMode="decimal"
-                step="0.1"
-                optional
-                error={errors.inoculumMl?.message}
-                {...register('inoculumMl', { setValueAs: blankToUndefined })}
-              />
-            </fieldset>
-            <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput
-                label="Incubation room"
-                optional
-                error={errors.room?.message}
-                {...register('room', { setValueAs: blankToUndefined })}
-              />
-              <TextInput
-                label="Shelf"
-                optional
-                error={errors.shelf?.message}
-                {...register('shelf', { setValueAs: blankToUndefined })}
-              />
-            </div>
-            <Button type="submit" pending={create.isPending} className="min-h-14 text-lg sm:self-start">
-              Make jars
-            </Button>
-          </>
-        )}
+                <TextInput
+                  label="Number of jars"
+                  type="number"
+                  inputMode="numeric"
+                  min={1}
+                  max={200}
+                  error={errors.count?.message}
+                  {...register('count', { setValueAs: idOrUndefined })}
+                />
+                <Select
+                  label="Prep batch"
+                  optional
+                  hint="The grain comes from the batch when one is chosen."
+                  options={pick(
+                    o.prepBatches.map((b) => ({ id: b.id, label: `${b.code} · ${b.grain} · ${b.preparedOn}` })),
+                    'No batch recorded',
+                  )}
+                  error={errors.prepBatchId?.message}
+                  {...register('prepBatchId', { setValueAs: idOrUndefined })}
+                />
+                <Select
+                  label="Grain"
+                  optional
+                  options={pick(
+                    o.grains.filter((g) => g.active).map((g) => ({ id: g.id, label: g.name })),
+                    'From the prep batch',
+                  )}
+                  error={errors.grainId?.message}
+                  {...register('grainId', { setValueAs: idOrUndefined })}
+                />
+                <Select
+                  label="Cook run"
+                  optional
+                  options={pick(
+                    o.cookRuns.map((c) => ({ id: c.id, label: `${c.code}${c.cookedOn ? ` · ${c.cookedOn}` : ''}` })),
+                    'No cook run recorded',
+                  )}
+                  error={errors.cookRunId?.message}
+                  {...register('cookRunId', { setValueAs: idOrUndefined })}
+                />
+                <TextInput
+                  label="Inoculated at"
+                  type="datetime-local"
+                  error={errors.inoculatedAt?.message}
+                  // Not in defaultValues: react-hook-form reads it from the input through setValueAs.
+                  defaultValue={nowLocal()}
+                  {...register('inoculatedAt', { setValueAs: instantOfLocal })}
+                />
+              </div>
+              <InoculumFields methods={methods} cultures={o.cultures} />
+              <div className="grid gap-4 sm:grid-cols-2">
+                <TextInput
+                  label="Incubation room"
+                  optional
+                  error={errors.room?.message}
+                  {...register('room', { setValueAs: blankToUndefined })}
+                />
+                <TextInput
+                  label="Shelf"
+                  optional
+                  error={errors.shelf?.message}
+                  {...register('shelf', { setValueAs: blankToUndefined })}
+                />
+              </div>
+              <Button type="submit" pending={create.isPending} className="min-h-14 text-lg sm:self-start">
+                Make jars
+              </Button>
+            </>
+          );
+        }}
       </Form>
     </>
   );

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { workspaceSchema, type Workspace } from '../../../../shared/enums';
-import { pageOf } from '../../../../shared/schemas/common';
+import { pageOf, suggestedCodeSchema } from '../../../../shared/schemas/common';
 import { procedureSchema, procedureVersionSchema } from '../../../../shared/schemas/procedures';
 import {
   sessionDetailSchema,
@@ -47,6 +47,13 @@ export const sessionsQueries = {
     queryOptions({
       queryKey: [...sessionsQueries.details(), id] as const,
       queryFn: ({ signal }) => api.get(`/sessions/${id}`, { signal, schema: sessionDetailSchema }),
+    }),
+  /** Fetched fresh each time the create form opens: another bench may have just taken a code. */
+  nextCode: () =>
+    queryOptions({
+      queryKey: [...sessionsQueries.all, 'next-code'] as const,
+      queryFn: ({ signal }) => api.get('/sessions/next-code', { signal, schema: suggestedCodeSchema }),
+      staleTime: 0,
     }),
   /** The procedures a session can follow, for the create form; kept under this feature's key. */
   procedureOptions: () =>

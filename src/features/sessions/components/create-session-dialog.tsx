@@ -9,6 +9,7 @@ import { OperatorChoice } from '../../../components/ui/operator-choice';
 import { controlClasses, Field } from '../../../components/ui/field';
 import type { FormMethods } from '../../../components/ui/form';
 import { Select } from '../../../components/ui/select';
+import { SuggestedCodeInput } from '../../../components/ui/suggested-code-input';
 import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
@@ -72,6 +73,7 @@ interface Props {
 
 export function CreateSessionDialog({ open, onClose, me }: Props) {
   const createSession = useCreateSession();
+  const nextCode = useQuery({ ...sessionsQueries.nextCode(), enabled: open });
   const procedures = useQuery({ ...sessionsQueries.procedureOptions(), enabled: open });
   const toast = useToast();
   const navigate = useNavigate();
@@ -115,14 +117,20 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
           register,
           watch,
           setValue,
-          formState: { errors },
+          formState: { errors, dirtyFields },
         } = methods;
         const byUser = watch('operatorId') === me.id;
         const versionId = watch('procedureVersionId');
         return (
           <>
             <div className="grid gap-4 sm:grid-cols-2">
-              <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
+              <SuggestedCodeInput
+                suggestion={nextCode.data?.code}
+                edited={Boolean(dirtyFields.code)}
+                onSuggestion={(code) => setValue('code', code)}
+                error={errors.code?.message}
+                {...register('code')}
+              />
               <TextInput label="Date" type="date" error={errors.heldOn?.message} {...register('heldOn')} />
               <TextInput
                 label="Start time"

@@ -1,4 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
 import { workspaceLabels } from '../../../../shared/schemas/sessions';
 import { Fact, Facts } from '../../../components/ui/facts';
 import { LoadFailed } from '../../../components/ui/load-failed';
@@ -11,7 +12,14 @@ import { sessionsQueries } from '../api/sessions-queries';
 import { FlameCaution } from './flame-caution';
 import { SessionChecklist } from './session-checklist';
 
-export function SessionDetail({ id, canWrite }: { id: number; canWrite: boolean }) {
+interface Props {
+  id: number;
+  canWrite: boolean;
+  /** The session's jars, which another feature lists. */
+  jars?: ReactNode;
+}
+
+export function SessionDetail({ id, canWrite, jars }: Props) {
   const detail = useQuery(sessionsQueries.detail(id));
   if (detail.isPending) return <FullPageSpinner label="Loading session" />;
   if (detail.error) {
@@ -45,6 +53,7 @@ export function SessionDetail({ id, canWrite }: { id: number; canWrite: boolean 
             {/* Keyed on the saved state so the boxes reset to what the server holds after a save. */}
             <SessionChecklist key={JSON.stringify(s.checklist)} session={s} canWrite={canWrite} />
           </section>
+          {jars}
         </div>
         <aside>
           <FlameCaution />
