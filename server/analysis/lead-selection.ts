@@ -1,4 +1,4 @@
-import { adjustedRatio, adjustedRisk, countByStrata, sameJars, type Cells, type LevelRef } from './lead-strata';
+import { countByStrata, sameJars, adjustedRisk, type Cells, type LevelRef } from './lead-strata';
 
 export const MAX_LEADS = 5;
 export const ALPHA = 0.05;
@@ -29,10 +29,8 @@ export function selectLeads(cells: Cells, candidates: Candidate[]): LevelRef[] {
     const bar = ALPHA / open.length;
     let best: { c: Candidate; p: number; rr: number } | null = null;
     for (const c of open) {
-      // The ratio first: the test is worked out only for a ratio above 1.
-      if (!(adjustedRatio(counts, c, keepAll) > 1)) continue;
       const mh = adjustedRisk(counts, c, keepAll);
-      if (!(mh.pValue < bar)) continue;
+      if (!(mh.rr > 1) || !(mh.pValue < bar)) continue;
       const better =
         !best ||
         mh.pValue < best.p ||

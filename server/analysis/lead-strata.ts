@@ -1,9 +1,4 @@
-import {
-  mantelHaenszelArrays,
-  mantelHaenszelRatio,
-  type MantelHaenszel,
-  type StrataArrays,
-} from '../../shared/stats/mantel-haenszel';
+import { mantelHaenszelArrays, type MantelHaenszel, type StrataArrays } from '../../shared/stats/mantel-haenszel';
 import { CONFOUNDED_SHARE, F, type FactorLevels } from './cause-levels';
 
 /** Leads are at most five (DESIGN.md §4.3), so strata at most 2^5. */
@@ -57,19 +52,10 @@ export function countByStrata(cells: Cells, leads: LevelRef[]): StrataCounts {
       if (id < 0) continue;
       out.levelJars[fi]![id * S + s]! += n;
       out.levelContaminated[fi]![id * S + s]! += x;
+      out.totalJars[fi]![s]! += n;
+      out.totalContaminated[fi]![s]! += x;
     }
   }
-  // A factor's total per stratum is the sum of its levels' (whole numbers: exact in any order).
-  levels.forEach((l, fi) => {
-    const lj = out.levelJars[fi]!;
-    const lc = out.levelContaminated[fi]!;
-    const tj = out.totalJars[fi]!;
-    const tc = out.totalContaminated[fi]!;
-    for (let i = 0; i < l.names.length * S; i++) {
-      tj[i % S]! += lj[i]!;
-      tc[i % S]! += lc[i]!;
-    }
-  });
   return out;
 }
 
@@ -106,11 +92,6 @@ export function strataOf(c: StrataCounts, level: LevelRef, keep: number): Strata
   }
   scratch.count = c.strata;
   return scratch;
-}
-
-/** The adjusted relative risk alone, for a first look that needs no test (nothing allocated). */
-export function adjustedRatio(c: StrataCounts, level: LevelRef, keep: number): number {
-  return mantelHaenszelRatio(strataOf(c, level, keep));
 }
 
 export function adjustedRisk(c: StrataCounts, level: LevelRef, keep: number): MantelHaenszel {

@@ -51,18 +51,6 @@ function pooledSums(s: StrataArrays, shift: number) {
   return { r, q, v };
 }
 
-/** The pooled sums, with 0.5 added to every contributing stratum's cells when either sum is zero. */
-function correctedSums(s: StrataArrays) {
-  const sums = pooledSums(s, 0);
-  return sums.r === 0 || sums.q === 0 ? pooledSums(s, 0.5) : sums;
-}
-
-/** The pooled risk ratio of mantelHaenszelArrays alone (NaN when no stratum has jars on both sides). */
-export function mantelHaenszelRatio(s: StrataArrays): number {
-  const { r, q } = correctedSums(s);
-  return r / q;
-}
-
 /**
  * Pooled risk ratio and interval, and the Cochran–Mantel–Haenszel test with the continuity correction
  * applied as R's mantelhaen.test applies it (only when |Σa − ΣE(a)| ≥ 0.5), on the counts as they are.
@@ -85,7 +73,8 @@ export function mantelHaenszelArrays(s: StrataArrays, { correct = true } = {}): 
     if (N > 1) variance += (n1 * n0 * m1 * (N - m1)) / (N * N * (N - 1));
   }
   if (contributing === 0) return { rr: NaN, ci95: [NaN, NaN], chiSquare: NaN, pValue: NaN, contributing };
-  const { r, q, v } = correctedSums(s);
+  let { r, q, v } = pooledSums(s, 0);
+  if (r === 0 || q === 0) ({ r, q, v } = pooledSums(s, 0.5));
   const rr = r / q;
   const se = Math.sqrt(v / (r * q));
   // Every stratum all contaminated or all clean: nothing varies, nothing to reject.
