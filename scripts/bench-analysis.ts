@@ -155,7 +155,8 @@ async function main() {
     DB_USER: dbUser.user,
     DB_PASSWORD: dbUser.password,
     PASSWORD_HASH_ROUNDS: '4',
-    LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'silent',
+    // Errors only: a failed request's cause reaches the output beside the table.
+    LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'error',
     SESSION_SECRET: 'bench-session-secret-0123456789',
   });
   // Imported after the environment is set: config() reads it once.
