@@ -6,7 +6,7 @@
 import 'reflect-metadata';
 import { mkdtempSync, rmSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
-import { tmpdir } from 'node:os';
+import os, { tmpdir } from 'node:os';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
 import { freePort } from './free-port';
@@ -14,7 +14,7 @@ import { startMariaDb } from './mariadb';
 
 const JARS = Number(process.env.BENCH_JARS ?? 200_000);
 const INCIDENTS = Number(process.env.BENCH_INCIDENTS ?? 8_000);
-const RUNS = Number(process.env.BENCH_RUNS ?? 15);
+const RUNS = Number(process.env.BENCH_RUNS ?? 20);
 const JARS_PER_SESSION = 40;
 const JARS_PER_COOK_RUN = 60;
 const JARS_PER_PREP_BATCH = 300;
@@ -30,6 +30,13 @@ const median = (xs: number[]) => {
   const m = Math.floor(s.length / 2);
   return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
 };
+/** Nearest-rank percentile. */
+const percentile = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.ceil((p / 100) * xs.length) - 1]!;
+const loadAverage = () =>
+  os
+    .loadavg()
+    .map((l) => l.toFixed(2))
+    .join(', ');
 
 /** 0 … 10^6 − 1 from six cross-joined digit sets: no recursion limit, one statement per table. */
 const numbers = (limit: number) => `
@@ -148,7 +155,8 @@ async function main() {
     DB_USER: dbUser.user,
     DB_PASSWORD: dbUser.password,
     PASSWORD_HASH_ROUNDS: '4',
-    LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'silent',
+    // Errors only: a failed request's cause reaches the output beside the table.
+    LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'error',
     SESSION_SECRET: 'bench-session-secret-0123456789',
   });
   // Imported after the environment is set: config() reads it once.
@@ -216,6 +224,7 @@ async function main() {
     ];
 
     const rows: string[][] = [];
+    const loadBefore = loadAverage();
     for (const c of cases) {
       let size = 0;
       const route: number[] = [];
@@ -232,15 +241,25 @@ async function main() {
         }
       }
       const [m, s] = [median(route), median(bare)];
-      rows.push([c.name, m.toFixed(1), s.toFixed(1), (m / s).toFixed(2), `${(size / 1024).toFixed(0)} KiB`]);
+      rows.push([
+        c.name,
+        m.toFixed(1),
+        percentile(route, 95).toFixed(1),
+        s.toFixed(1),
+        (m / s).toFixed(2),
+        `${(size / 1024).toFixed(0)} KiB`,
+      ]);
     }
-    const header = ['endpoint', 'route median ms', 'bare SQL median ms', 'ratio', 'answer size'];
+    const header = ['endpoint', 'route median ms', 'route p95 ms', 'bare SQL median ms', 'ratio', 'answer size'];
     const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
     const line = (cells: string[]) =>
       cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ');
     log('');
     log(
       `${RUNS} runs each (after 2 warm-up runs); targets: rates and crosstab < 250 ms, causes < 1000 ms, ratio < 1.5, a causes page < 200 kB`,
+    );
+    log(
+      `jars: ${JARS}; load average (1, 5, 15 min) before: ${loadBefore}; after: ${loadAverage()}; cores: ${os.cpus().length}`,
     );
     log(line(header));
     log(widths.map((w) => '-'.repeat(w)).join('  '));

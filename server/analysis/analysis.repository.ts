@@ -64,6 +64,10 @@ export function crosstabQuery(rows: Factor, cols: Factor, f: Frame): SqlQuery {
   };
 }
 
+/** IDX_jars_analysis's columns in its order: the causes keys are these or functions of them. */
+const ANALYSIS_INDEX_COLUMNS =
+  'j.inoculatedOn, j.grainId, j.cookRunId, j.sessionId, j.cultureId, j.prepBatchId, j.room';
+
 /**
  * The causes query: jars grouped by the combination of every factor's key, so each row is a level
  * combination, never a jar. Names are joined after grouping, on the far smaller set of combinations.
@@ -81,22 +85,24 @@ export function combinationsQuery(f: Frame): SqlQuery {
       transfersKey,
     ],
     f,
-    true,
+    { withDetections: true, jarGroupBy: ANALYSIS_INDEX_COLUMNS },
   );
+  // Summed per combination first, then named: the joins run once per combination, not once per part.
   return {
     sql: `${inner.cte} SELECT g.name AS grain, cr.code AS cookRun, ${cookBucketSql(f.edges, 'cr.minutesAtPressure')} AS cookMinutes,
         s.code AS session, NULLIF(COALESCE(s.operatorName, ou.displayName), '') AS operator, c.code AS culture,
-        ${isoWeekFromYearWeek('k.k7')} AS week, ${transfersLevelSql('k.k8')} AS transfers, pb.code AS prepBatch,
-        s.workspace AS workspace, NULLIF(k.k6, '') AS room,
-        ${summedSql}, GROUP_CONCAT(k.detections) AS detections
-      FROM (${inner.sql}) k
-      JOIN grains g ON g.id = k.k1
-      LEFT JOIN cook_runs cr ON cr.id = k.k2
-      LEFT JOIN inoculation_sessions s ON s.id = k.k3
+        ${isoWeekFromYearWeek('t.k7')} AS week, ${transfersLevelSql('t.k8')} AS transfers, pb.code AS prepBatch,
+        s.workspace AS workspace, NULLIF(t.k6, '') AS room,
+        t.jars, t.contaminated, t.incubating, t.settled, t.detections
+      FROM (SELECT k.k1, k.k2, k.k3, k.k4, k.k5, k.k6, k.k7, k.k8, ${summedSql}, GROUP_CONCAT(k.detections) AS detections
+        FROM (${inner.sql}) k
+        GROUP BY k.k1, k.k2, k.k3, k.k4, k.k5, k.k6, k.k7, k.k8 HAVING SUM(k.jars) > 0) t
+      JOIN grains g ON g.id = t.k1
+      LEFT JOIN cook_runs cr ON cr.id = t.k2
+      LEFT JOIN inoculation_sessions s ON s.id = t.k3
       LEFT JOIN users ou ON ou.id = s.operatorId
-      LEFT JOIN cultures c ON c.id = k.k4
-      LEFT JOIN prep_batches pb ON pb.id = k.k5
-      GROUP BY k.k1, k.k2, k.k3, k.k4, k.k5, k.k6, k.k7, k.k8 HAVING SUM(k.jars) > 0`,
+      LEFT JOIN cultures c ON c.id = t.k4
+      LEFT JOIN prep_batches pb ON pb.id = t.k5`,
     params: inner.params,
   };
 }

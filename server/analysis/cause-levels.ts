@@ -99,31 +99,35 @@ export function indexLevels(combos: CombinationRow[]): { levels: FactorLevels[];
 }
 
 /**
- * For each level of factor a, the level of each other factor holding ≥ 90 % of its settled jars. Such a level
- * holds most of them, so a weighted majority vote over the level's combinations names the one candidate
- * per factor, and a second pass counts its jars; candidates come out in factor order. Factors whose
- * largest level is smaller than 90 % of the level are skipped.
+ * Answers, level by level and only when asked, which level of each other factor holds ≥ 90 % of the
+ * level's settled jars. Such a level holds most of them, so a weighted majority vote over the level's
+ * combinations names the one candidate per factor, and a second pass counts its jars; candidates come
+ * out in factor order. Factors whose largest level is smaller than 90 % of the level are skipped. Only
+ * the rows about to be sent ask, so a page costs a few levels' combinations, not every level's.
  */
-export function confounded(
+export function confoundedLevels(
   comboJars: Float64Array,
   levels: FactorLevels[],
   levelIdx: Int32Array,
-  a: number,
-): FactorLevel[][] {
-  const la = levels[a]!;
-  const out: FactorLevel[][] = la.names.map(() => []);
+): (a: number, ia: number) => FactorLevel[] {
   // A factor with one level holds every jar of everything: it says nothing, so it is never named.
   const largest = levels.map((l) => (l.names.length < 2 ? -1 : l.jars.reduce((m, j) => Math.max(m, j), 0)));
   const candidate = new Int32Array(F);
   const weight = new Float64Array(F);
   const eligible = new Int32Array(F);
-  for (let ia = 0; ia < la.names.length; ia++) {
+  const cache = levels.map((l) => new Array<FactorLevel[] | undefined>(l.names.length));
+  return (a, ia) => {
+    const known = cache[a]![ia];
+    if (known) return known;
+    const la = levels[a]!;
+    const out: FactorLevel[] = [];
+    cache[a]![ia] = out;
     const from = la.start[ia]!;
     const to = la.start[ia + 1]!;
     const need = CONFOUNDED_SHARE * la.jars[ia]!;
     let e = 0;
     for (let b = 0; b < F; b++) if (b !== a && largest[b]! >= need) eligible[e++] = b;
-    if (e === 0) continue;
+    if (e === 0) return out;
     candidate.fill(-1);
     weight.fill(0);
     for (let m = from; m < to; m++) {
@@ -152,10 +156,10 @@ export function confounded(
     for (let k = 0; k < e; k++) {
       const b = eligible[k]!;
       if (candidate[b]! >= 0 && weight[b]! >= need)
-        out[ia]!.push({ factor: factors[b]!, level: levels[b]!.names[candidate[b]!]! });
+        out.push({ factor: factors[b]!, level: levels[b]!.names[candidate[b]!]! });
     }
-  }
-  return out;
+    return out;
+  };
 }
 
 /** Contaminants and the median days to detection over one level's contaminated jars. */

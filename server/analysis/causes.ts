@@ -4,7 +4,7 @@ import { bhAdjust } from '../../shared/stats/benjamini-hochberg';
 import { fisherExactTwoSided } from '../../shared/stats/fisher';
 import { relativeRisk, type RelativeRisk } from '../../shared/stats/relative-risk';
 import type { CombinationRow } from './analysis.repository';
-import { confounded, detectionsOf, indexLevels, readAllDetections } from './cause-levels';
+import { confoundedLevels, detectionsOf, indexLevels, readAllDetections } from './cause-levels';
 import { hintFor } from './hints';
 import { selectLeads, type Candidate } from './lead-selection';
 import { adjustedRisk, countByStrata, sameJars, type Cells, type LevelRef } from './lead-strata';
@@ -73,7 +73,9 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
   };
   const rows: CauseRow[] = [];
   const refs: LevelRef[] = [];
-  const confoundedBy = levels.map((_, fi) => confounded(cells.settled, levels, levelIdx, fi));
+  const confoundedOf = confoundedLevels(cells.settled, levels, levelIdx);
+  // Row number of each tested level, −1 for a level too small to test.
+  const rowOf = levels.map((l) => new Int32Array(l.names.length).fill(-1));
   levels.forEach((l, fi) => {
     const factor = factors[fi]!;
     let universeJars = 0;
@@ -113,7 +115,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
         rr95: test.rr.ci95,
         pValue: test.pValue,
         qValue: 1,
-        confoundedWith: confoundedBy[fi]![i]!,
+        confoundedWith: [],
         standing: 'not-elevated',
         sameJarsAs: [],
         adjusted: null,
@@ -122,6 +124,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
         contaminants: {},
         medianDaysToDetection: null,
       });
+      rowOf[fi]![i] = refs.length;
       refs.push({ fi, id: i });
     }
   });
@@ -135,6 +138,17 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
   const named = (l: LevelRef): FactorLevel => ({ factor: factors[l.fi]!, level: levels[l.fi]!.names[l.id]! });
   const counts = countByStrata(cells, leads);
   const all = counts.strata - 1;
+  const leadNames = leads.map(named);
+  // Rows adjusted for the same leads share one list of them.
+  const givenByKeep = new Map<number, FactorLevel[]>();
+  const givenFor = (keep: number) => {
+    let given = givenByKeep.get(keep);
+    if (!given) {
+      given = leadNames.filter((_, k) => keep & (1 << k));
+      givenByKeep.set(keep, given);
+    }
+    return given;
+  };
   const leadRows: CauseRow[] = [];
   rows.forEach((row, i) => {
     const ref = refs[i]!;
@@ -144,21 +158,32 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
     leads.forEach((lead, k) => {
       if (leadIndex < 0 && sameJars(counts, cells, ref, lead, k)) {
         keep &= ~(1 << k);
-        row.sameJarsAs.push(named(lead));
+        row.sameJarsAs.push(leadNames[k]!);
       }
     });
-    row.adjusted = adjustedFigures(counts, ref, keep, leads.map(named));
+    row.adjusted = adjustedFigures(counts, ref, keep, givenFor);
     row.standing = standingOf(row, leadIndex >= 0);
     if (leadIndex >= 0) leadRows[leadIndex] = row;
   });
+  const idByName: (Map<string, number> | undefined)[] = [];
+  const isTested = (l: FactorLevel) => {
+    const fi = factorOrder[l.factor];
+    const ids = (idByName[fi] ??= new Map(levels[fi]!.names.map((n, i) => [n, i])));
+    const id = ids.get(l.level) ?? -1;
+    return id >= 0 && rowOf[fi]![id]! >= 0 ? { fi, id } : null;
+  };
   const describe = (shown: CauseRow[]) => {
     for (const r of shown) {
       const ref = refOf.get(r)!;
       const d = detectionsOf(levels[ref.fi]!, ref.id, det, buffer);
       r.contaminants = d.contaminants;
       r.medianDaysToDetection = d.medianDays;
+      r.confoundedWith = confoundedOf(ref.fi, ref.id);
     }
-    addHints(rows, shown);
+    addHints(shown, (l) => {
+      const ref = isTested(l);
+      return ref ? confoundedOf(ref.fi, ref.id) : [];
+    });
   };
   return {
     describe,
@@ -177,13 +202,13 @@ function adjustedFigures(
   counts: ReturnType<typeof countByStrata>,
   ref: LevelRef,
   keep: number,
-  leadNames: FactorLevel[],
+  givenFor: (keep: number) => FactorLevel[],
 ): AdjustedRisk | null {
   if (keep === 0) return null;
   const mh = adjustedRisk(counts, ref, keep);
   if (mh.contributing === 0) return null;
   return {
-    given: leadNames.filter((_, k) => keep & (1 << k)),
+    given: givenFor(keep),
     relativeRisk: mh.rr,
     rr95: mh.ci95,
     pValue: mh.pValue,
@@ -192,16 +217,13 @@ function adjustedFigures(
 
 /**
  * Only a level that fares worse gets a trade hint; it says the data cannot tell levels apart only for
- * levels that hold each other's jars both ways (each in the other's confoundedWith).
+ * levels that hold each other's jars both ways (each in the other's confoundedWith, both tested rows).
  */
-function addHints(rows: CauseRow[], shown: CauseRow[]) {
-  const key = (f: FactorLevel) => `${f.factor}\u0000${f.level}`;
-  const byKey = new Map<string, CauseRow>();
-  for (const r of rows) if (r.confoundedWith.length > 0) byKey.set(key(r), r);
+function addHints(shown: CauseRow[], confoundedWithOf: (l: FactorLevel) => FactorLevel[]) {
   for (const r of shown) {
     if (!faresWorse(r)) continue;
-    const mutual = r.confoundedWith.filter(
-      (c) => byKey.get(key(c))?.confoundedWith.some((x) => x.factor === r.factor && x.level === r.level) ?? false,
+    const mutual = r.confoundedWith.filter((c) =>
+      confoundedWithOf(c).some((x) => x.factor === r.factor && x.level === r.level),
     );
     const hint = hintFor(
       r.factor,

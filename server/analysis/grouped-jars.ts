@@ -44,8 +44,16 @@ export function periodWhere(p: Period, extra: string[] = []): { where: string; p
  * into their corrected ones (only when a key needs it), and the few contaminated jars, grouped on their
  * corrected keys at once. The caller sums the parts per level: incubating = young − contaminated young,
  * settled = jars − incubating. `detections` lists days:contaminant of contaminated jars.
+ *
+ * `jarGroupBy` replaces the grouping of the every-jar part: columns in the analysis index's own order
+ * let MariaDB group while it reads the index, with no temporary table, when the keys are (functions
+ * of) exactly those columns; the outer query then adds up the finer groups.
  */
-export function groupedJars(keys: JarKey[], f: Frame, withDetections = false): GroupedQuery {
+export function groupedJars(
+  keys: JarKey[],
+  f: Frame,
+  { withDetections = false, jarGroupBy }: { withDetections?: boolean; jarGroupBy?: string } = {},
+): GroupedQuery {
   const { where, params } = periodWhere(f);
   const placed = keys.some((k) => k.placed);
   const select = (expr: (k: JarKey) => string) => keys.map((k, i) => `${expr(k)} AS k${i + 1}`).join(', ');
@@ -58,7 +66,7 @@ export function groupedJars(keys: JarKey[], f: Frame, withDetections = false): G
   const parts = [
     `SELECT ${select((k) => k.raw)}, COUNT(*) AS jars, 0 AS contaminated, ${young} AS young,
         0 AS contaminatedYoung, NULL AS detections
-      FROM jars j FORCE INDEX (IDX_jars_analysis) ${where} GROUP BY ${groupList}`,
+      FROM jars j FORCE INDEX (IDX_jars_analysis) ${where} GROUP BY ${jarGroupBy ?? groupList}`,
   ];
   const partParams: unknown[] = [...bound];
   if (placed) {
