@@ -25,19 +25,22 @@ const periodCount = (from: string, to: string, c: CountRow): PeriodCount => ({ f
  * no later than today − observation window. By default each period is as long as that allows (7 to 90
  * days); until the after-period has settled the answer says how many days remain and compares nothing.
  */
-async function compareAction(action: ActionRow, days?: number): Promise<BeforeAfterDto> {
+async function compareAction(action: ActionRow, days?: number, doneOn?: string): Promise<BeforeAfterDto> {
   if (!action.factor || !action.level) {
     throw unprocessable('This corrective action names no factor level to compare.', [
       { path: 'actionId', message: 'the action has no factor and level' },
     ]);
   }
-  if (!action.doneOn) {
+  const pivot = doneOn ?? action.doneOn;
+  if (!pivot) {
     throw unprocessable('This corrective action is not done yet, so there is no after-period.', [
       { path: 'actionId', message: 'the action has no done date' },
     ]);
   }
   const today = todayLocal();
-  const pivot = action.doneOn;
+  if (pivot > today) {
+    throw unprocessable('doneOn: cannot be in the future.', [{ path: 'doneOn', message: 'cannot be in the future' }]);
+  }
   const base = await frameFor({}, today);
   const settledUntil = base.windowStart;
   const span =
@@ -68,7 +71,7 @@ async function compareAction(action: ActionRow, days?: number): Promise<BeforeAf
 export async function beforeAfter(q: BeforeAfterQuery): Promise<BeforeAfterDto> {
   const action = await analysisRepository.action(q.actionId);
   if (!action) throw notFound('Corrective action');
-  return compareAction(action, q.days);
+  return compareAction(action, q.days, q.doneOn);
 }
 
 /** The supervisor's list: every corrective action, newest done first, each with its before/after verdict. */

@@ -39,6 +39,8 @@ export const beforeAfterQuerySchema = z.object({
   actionId: idSchema,
   /** Length of each period; by default the days elapsed since the action, at most 90. */
   days: z.coerce.number().int().min(1).max(365).optional(),
+  /** A preview while closing an open action: the periods as if it were done on this day. */
+  doneOn: localDateSchema.optional(),
   format: formatSchema,
 });
 export type BeforeAfterQuery = z.infer<typeof beforeAfterQuerySchema>;

@@ -356,6 +356,29 @@ describe('GET /api/analysis/before-after', () => {
     expect(bad.body.error.issues[0].path).toBe('actionId');
   });
 
+  it('previews an open action as if done on the day being entered, so closing it shows its before/after', async () => {
+    const incidentId = await insertIncident([], pivot);
+    const res = await dataSource.query<{ insertId: number }>(
+      `INSERT INTO corrective_actions (incidentId, what, ownerName, dueOn, factor, level) VALUES (?, 'Longer cook', 'Test owner', ?, 'cookRun', 'PX-BA-RUN')`,
+      [incidentId, pivot],
+    );
+    const openId = Number(res.insertId);
+    const open = await reader.agent.get(`/api/analysis/before-after?actionId=${openId}`);
+    expect(open.status).toBe(422);
+    // The same Newcombe method-10 example as above: 56/70 − 48/80, 95 % 0.0524 to 0.3339.
+    const preview = await reader.agent.get(`/api/analysis/before-after?actionId=${openId}&days=10&doneOn=${pivot}`);
+    expect(preview.status).toBe(200);
+    const body = preview.body as BeforeAfterDto;
+    expect(body).toMatchObject({ pivot, settled: true, before: { jars: 80, contaminated: 48 }, after: { jars: 70 } });
+    expect(body.ci95[0]).toBeCloseTo(0.0524, 4);
+    const future = await reader.agent.get(`/api/analysis/before-after?actionId=${openId}&doneOn=2999-01-01`);
+    expect(future.status).toBe(422);
+    expect(future.body.error.issues[0].path).toBe('doneOn');
+    const bad = await reader.agent.get(`/api/analysis/before-after?actionId=${openId}&doneOn=15.06.2025`);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.issues[0].path).toBe('doneOn');
+  });
+
   it('waits for the after-period to settle: recent jars count for nothing yet, and the days remaining are given', async () => {
     const today = localDate(new Date());
     const doneOn = addDays(today, -10);

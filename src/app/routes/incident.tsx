@@ -19,6 +19,13 @@ export function IncidentRoute() {
         me={me}
         people={people.data}
         actionExtra={(a) => a.factor && <ActionVerdict actionId={a.id} />}
+        actionClosing={(a, doneOn) =>
+          a.factor ? (
+            <ActionVerdict actionId={a.id} doneOn={doneOn} />
+          ) : (
+            <p className="text-sm text-muted">This action names no factor level, so there is no before and after.</p>
+          )
+        }
       />
     </>
   );

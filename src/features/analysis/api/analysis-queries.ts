@@ -76,10 +76,11 @@ export const analysisQueries = {
       queryFn: ({ signal }) => get<ActionVerdictsDto>('actions', { page, pageSize }, signal),
       placeholderData: keepPreviousData,
     }),
-  beforeAfter: (actionId: number) =>
+  /** `doneOn` previews an open action as if done that day (while it is being closed). */
+  beforeAfter: (actionId: number, doneOn?: string) =>
     queryOptions({
-      queryKey: [...analysisQueries.all, 'before-after', actionId] as const,
-      queryFn: ({ signal }) => get<BeforeAfterDto>('before-after', { actionId }, signal),
+      queryKey: [...analysisQueries.all, 'before-after', actionId, doneOn ?? null] as const,
+      queryFn: ({ signal }) => get<BeforeAfterDto>('before-after', { actionId, doneOn }, signal),
       retry: false,
     }),
   colonisation: (p: Period) =>

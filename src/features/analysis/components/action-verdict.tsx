@@ -1,6 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import type { BeforeAfterDto } from '../../../../shared/schemas/analysis';
+import { factorNames } from '../../../../shared/enums';
 import { ApiError } from '../../../lib/api-client';
+import { formatDate } from '../../../lib/format';
 import { analysisQueries } from '../api/analysis-queries';
 import { percent } from './labels';
 
@@ -35,9 +37,19 @@ export function BeforeAfterFigures({ d }: { d: BeforeAfterDto }) {
   );
 }
 
-/** The before/after verdict of one corrective action, shown where the action is recorded. */
-export function ActionVerdict({ actionId }: { actionId: number }) {
-  const q = useQuery(analysisQueries.beforeAfter(actionId));
+/**
+ * The before/after verdict of one corrective action, shown where the action is recorded; with `doneOn`,
+ * a preview while it is being closed, as if done that day.
+ */
+export function ActionVerdict({ actionId, doneOn }: { actionId: number; doneOn?: string }) {
+  const preview = doneOn !== undefined;
+  const q = useQuery({
+    ...analysisQueries.beforeAfter(actionId, doneOn),
+    enabled: !preview || /^\d{4}-\d{2}-\d{2}$/.test(doneOn),
+  });
+  if (preview && !/^\d{4}-\d{2}-\d{2}$/.test(doneOn)) {
+    return <p className="text-sm text-muted">Give the day it was done to see before and after.</p>;
+  }
   if (q.isPending) return <p className="mt-2 text-sm text-muted">Working out before and after…</p>;
   if (q.error) {
     const why =
@@ -47,8 +59,11 @@ export function ActionVerdict({ actionId }: { actionId: number }) {
     return <p className="mt-2 text-sm text-muted">{why}</p>;
   }
   return (
-    <div className="mt-2 rounded bg-surface-sunken p-2">
-      <p className="text-sm font-semibold">Before and after</p>
+    <div className="mt-2 rounded bg-surface-sunken p-2" aria-live="polite">
+      <p className="text-sm font-semibold">
+        Before and after{preview ? ` if done on ${formatDate(doneOn)}` : ''}: {factorNames[q.data.factor]}{' '}
+        {q.data.level}
+      </p>
       <BeforeAfterFigures d={q.data} />
     </div>
   );

@@ -143,8 +143,11 @@ export function Table({ caption, children, className, tableClassName }: TablePro
     <div
       role="region"
       aria-label={caption}
-
-      className={cx('overflow-x-auto rounded-lg border-2 border-line bg-surface-raised', className)}
+      // A region that scrolls must take focus, so a keyboard can scroll it (WCAG 2.1.1).
+      // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex
+      tabIndex={0}
+      // relative: screen-reader-only text in cells is absolutely placed and must not widen the page.
+      className={cx('relative overflow-x-auto rounded-lg border-2 border-line bg-surface-raised', className)}
     >
       <table className={cx('w-full border-collapse text-left', tableClassName)}>
         <caption className="sr-only">{caption}</caption>

@@ -21,10 +21,11 @@ export function JarsLink({ children, label, ...target }: JarsTarget & { children
   return (
     <Link
       to={jarsBehindPath(target)}
-      aria-label={label}
       className="text-inherit underline decoration-dotted underline-offset-2 hover:decoration-solid"
     >
       {children}
+      {/* Spoken after the visible number, so voice control finds the link by what is on screen. */}
+      {label && <span className="sr-only"> ({label})</span>}
     </Link>
   );
 }

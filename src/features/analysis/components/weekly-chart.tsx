@@ -22,28 +22,16 @@ function WeekDot({ cx, cy, payload }: DotProps) {
   if (cx === undefined || cy === undefined || !payload) return null;
   if (payload.outOfControl) {
     return (
-      <circle
-        cx={cx}
-        cy={cy}
-        r={7}
-        fill="#a4261c"
-        stroke="#841c14"
-        strokeWidth={2}
-        aria-label={`${payload.week} out of control`}
-      />
+      <circle cx={cx} cy={cy} r={7} fill="#a4261c" stroke="#841c14" strokeWidth={2}>
+        <title>{`${payload.week} out of control`}</title>
+      </circle>
     );
   }
   if (payload.belowLcl) {
     return (
-      <circle
-        cx={cx}
-        cy={cy}
-        r={6}
-        fill="#1d6b3a"
-        stroke="#ffffff"
-        strokeWidth={2}
-        aria-label={`${payload.week} below the lower limit`}
-      />
+      <circle cx={cx} cy={cy} r={6} fill="#1d6b3a" stroke="#ffffff" strokeWidth={2}>
+        <title>{`${payload.week} below the lower limit`}</title>
+      </circle>
     );
   }
   if (payload.provisional) return <circle cx={cx} cy={cy} r={5} fill="#ffffff" stroke="#13627a" strokeWidth={2} />;

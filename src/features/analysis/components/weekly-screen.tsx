@@ -10,6 +10,10 @@ import { JarsLink, jarsBehindPath } from './jars-link';
 import { WeeklyChart } from './weekly-chart';
 import './weekly-print.css';
 
+// Tighter cells than the other analysis tables: a week row with every grain must fit a 1366 px screen.
+const thw = th.replace('px-3', 'px-1.5');
+const tdw = td.replace('px-3', 'px-1.5');
+
 /** The supervisor's home: the last twelve ISO weeks, overall and per grain, with the p-chart. */
 export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
   const [params] = useSearchParams();
@@ -101,29 +105,29 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
             <Table caption="Contamination per ISO week">
               <thead>
                 <tr>
-                  <th scope="col" className={th}>
+                  <th scope="col" className={thw}>
                     Week
                   </th>
-                  <th scope="col" className={`${th} ${num}`}>
+                  <th scope="col" className={`${thw} ${num}`}>
                     Jars
                   </th>
-                  <th scope="col" className={`${th} ${num}`}>
+                  <th scope="col" className={`${thw} ${num}`}>
                     Contaminated
                   </th>
-                  <th scope="col" className={`${th} ${num}`}>
+                  <th scope="col" className={`${thw} ${num}`}>
                     Incubating
                   </th>
-                  <th scope="col" className={`${th} ${num}`}>
+                  <th scope="col" className={`${thw} ${num}`}>
                     Rate
                   </th>
-                  <th scope="col" className={`${th} ${num}`}>
+                  <th scope="col" className={`${thw} ${num}`}>
                     Limits
                   </th>
-                  <th scope="col" className={th}>
+                  <th scope="col" className={thw}>
                     Status
                   </th>
                   {grains.map((g) => (
-                    <th key={g} scope="col" className={`${th} ${num}`}>
+                    <th key={g} scope="col" className={`${thw} ${num}`}>
                       {g}
                     </th>
                   ))}
@@ -136,15 +140,15 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                     data-testid={`week-${w.week}`}
                     className={w.outOfControl ? 'bg-danger-soft' : undefined}
                   >
-                    <th scope="row" className={`${td} ${nowrap} font-semibold`}>
+                    <th scope="row" className={`${tdw} ${nowrap} font-semibold`}>
                       {w.week}
                     </th>
-                    <td className={`${td} ${num}`}>
+                    <td className={`${tdw} ${num}`}>
                       <JarsLink factor="week" level={w.week} period={shown} label={`${w.jars} jars of ${w.week}`}>
                         {w.jars}
                       </JarsLink>
                     </td>
-                    <td className={`${td} ${num}`}>
+                    <td className={`${tdw} ${num}`}>
                       <JarsLink
                         factor="week"
                         level={w.week}
@@ -155,28 +159,34 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                         {w.contaminated}
                       </JarsLink>
                     </td>
-                    <td className={`${td} ${num}`}>{w.incubating}</td>
-                    <td className={`${td} ${num} font-semibold`}>{percent(w.rate)}</td>
-                    <td className={`${td} ${num} ${nowrap} text-muted`}>
-                      {percent(w.lcl)} – {percent(w.ucl)}
+                    <td className={`${tdw} ${num}`}>{w.incubating}</td>
+                    <td className={`${tdw} ${num} font-semibold`}>{percent(w.rate)}</td>
+                    <td className={`${tdw} ${num} text-muted`}>
+                      {/* Two lines when the row is tight: lower – / upper. */}
+                      <span className={nowrap}>{percent(w.lcl)} –</span>{' '}
+                      <span className={nowrap}>{percent(w.ucl)}</span>
                     </td>
-                    <td className={td}>
-                      {w.outOfControl ? (
-                        <Badge tone="danger">Out of control</Badge>
-                      ) : w.belowLcl ? (
-                        <Badge tone="ok">Below the lower limit: a good week</Badge>
-                      ) : w.provisional ? (
-                        <Badge tone="warn">Provisional</Badge>
-                      ) : (
-                        // Green would read as "fine": a week above the lab's target is not.
-                        <Badge tone={w.aboveTarget ? 'neutral' : 'ok'}>In control</Badge>
-                      )}{' '}
-                      {w.aboveTarget && <Badge tone="danger">Above target</Badge>}
+                    <td className={tdw}>
+                      <div className="flex flex-wrap gap-1">
+                        {w.outOfControl ? (
+                          <Badge tone="danger">Out of control</Badge>
+                        ) : w.belowLcl ? (
+                          <Badge tone="ok" className="whitespace-normal">
+                            Below the lower limit: a good week
+                          </Badge>
+                        ) : w.provisional ? (
+                          <Badge tone="warn">Provisional</Badge>
+                        ) : (
+                          // Green would read as "fine": a week above the lab's target is not.
+                          <Badge tone={w.aboveTarget ? 'neutral' : 'ok'}>In control</Badge>
+                        )}
+                        {w.aboveTarget && <Badge tone="danger">Above target</Badge>}
+                      </div>
                     </td>
                     {grains.map((g) => {
                       const cell = w.grains.find((x) => x.grain === g);
                       return (
-                        <td key={g} className={`${td} ${num}`}>
+                        <td key={g} className={`${tdw} ${num}`}>
                           {cell ? (
                             <>
                               <JarsLink
@@ -189,7 +199,7 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                               >
                                 {percent(cell.rate)}
                               </JarsLink>{' '}
-                              <span className="text-sm text-muted">
+                              <span className="block text-sm text-muted">
                                 ({cell.contaminated}/{cell.jars})
                               </span>
                             </>

@@ -93,7 +93,16 @@ export function HistoryColumns() {
       </div>
       <p className="mt-3 text-sm text-muted">Contaminants: {contaminantList}.</p>
       <p className="mt-3 text-sm font-medium">Two example lines</p>
-      <pre className="mt-1 overflow-x-auto rounded-md bg-surface-sunken p-3 text-sm">{sample}</pre>
+      {/* A scrolling sample must take focus so a keyboard can scroll it. */}
+      <pre
+        // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex
+        tabIndex={0}
+        role="region"
+        aria-label="Sample file"
+        className="mt-1 overflow-x-auto rounded-md bg-surface-sunken p-3 text-sm"
+      >
+        {sample}
+      </pre>
     </section>
   );
 }

@@ -12,7 +12,18 @@ import { formatDate, todayIso } from '../../../lib/format';
 import { useCreateAction, useUpdateAction } from '../api/use-incident-mutations';
 import { NotesField } from './notes-field';
 
-function CompleteForm({ action, onDone }: { action: CorrectiveActionDto; onDone: () => void }) {
+/** What other features show while an action is being closed (its before/after as if done that day). */
+export type ClosingExtra = (action: CorrectiveActionDto, doneOn: string) => ReactNode;
+
+function CompleteForm({
+  action,
+  onDone,
+  closing,
+}: {
+  action: CorrectiveActionDto;
+  onDone: () => void;
+  closing?: ClosingExtra | undefined;
+}) {
   const update = useUpdateAction();
   return (
     <Form
@@ -25,9 +36,10 @@ function CompleteForm({ action, onDone }: { action: CorrectiveActionDto; onDone:
           .then(onDone, (error: unknown) => applyServerErrors(error, setError, ['doneOn', 'verification']))
       }
     >
-      {({ register, formState: { errors, isSubmitting } }) => (
+      {({ register, watch, formState: { errors, isSubmitting } }) => (
         <>
           <TextInput label="Done on" type="date" error={errors.doneOn?.message} {...register('doneOn')} />
+          {closing?.(action, watch('doneOn') ?? '')}
           <NotesField
             label="How was the fix verified?"
             hint="For example: gauge checked against a reference; next three runs clean."
@@ -131,6 +143,7 @@ export function ActionsPanel({
   actions,
   canManage,
   extra,
+  closing,
   people,
 }: {
   incidentId: number;
@@ -138,6 +151,7 @@ export function ActionsPanel({
   canManage: boolean;
   /** What other features show on each action (the before/after verdict), composed by the route. */
   extra?: ((action: CorrectiveActionDto) => ReactNode) | undefined;
+  closing?: ClosingExtra | undefined;
   people: PersonDto[];
 }) {
   const [completing, setCompleting] = useState<number | null>(null);
@@ -164,7 +178,7 @@ export function ActionsPanel({
                 Mark done…
               </Button>
             )}
-            {completing === a.id && <CompleteForm action={a} onDone={() => setCompleting(null)} />}
+            {completing === a.id && <CompleteForm action={a} onDone={() => setCompleting(null)} closing={closing} />}
             {a.doneOn && extra?.(a)}
           </li>
         ))}

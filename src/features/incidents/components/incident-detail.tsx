@@ -13,7 +13,7 @@ import { paths } from '../../../config/paths';
 import { incidentsQueries } from '../api/incidents-queries';
 import { causeLabels, severityLabels, stageLabels } from '../labels';
 import type { PersonDto } from '../../../../shared/schemas/users';
-import { ActionsPanel } from './actions-panel';
+import { ActionsPanel, type ClosingExtra } from './actions-panel';
 import { AddPhotos } from './add-photos';
 import { EditIncidentDialog } from './edit-incident-dialog';
 import { HistoryList } from './history-list';
@@ -49,11 +49,14 @@ export function IncidentDetail({
   id,
   me,
   actionExtra,
+  actionClosing,
   people = [],
 }: {
   id: number;
   me: { id: number; role: Role };
   actionExtra?: (action: CorrectiveActionDto) => ReactNode;
+  /** Shown in the form that closes an action, for the day being entered. */
+  actionClosing?: ClosingExtra;
   /** Who may own a corrective action. */
   people?: PersonDto[];
 }) {
@@ -155,6 +158,7 @@ export function IncidentDetail({
               actions={i.actions}
               canManage={supervisor && !i.voided}
               extra={actionExtra}
+              closing={actionClosing}
               people={people}
             />
           </Section>
@@ -167,7 +171,7 @@ export function IncidentDetail({
           )}
           <SporeCautions />
           <Section title="History">
-            <HistoryList entries={i.history} />
+            <HistoryList entries={i.history} context={{ photoIds: i.photos.map((p) => p.id), actions: i.actions }} />
           </Section>
         </div>
       </div>

@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import type { IncidentJarDto } from '../../../../shared/schemas/incidents';
 import { paths } from '../../../config/paths';
 
-const linkClass = 'text-accent underline-offset-2 hover:underline';
+const linkClass = 'text-accent underline underline-offset-2 hover:decoration-2';
 
 /** Each jar with where it came from; the codes open the register filtered to that level. */
 export function IncidentJars({ jars }: { jars: IncidentJarDto[] }) {

@@ -2,10 +2,10 @@ import type { TimelineEntryDto } from '../../../../shared/schemas/jars';
 import { Link } from 'react-router';
 import { paths } from '../../../config/paths';
 import { cx } from '../../../lib/cx';
-import { formatDate } from '../../../lib/format';
+import { formatDate, formatDateTime } from '../../../lib/format';
 
-const timeFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-const when = (at: string) => (at.length === 10 ? formatDate(at) : timeFormat.format(new Date(at)));
+// On the lab's clock, like every other time on screen.
+const when = (at: string) => (at.length === 10 ? formatDate(at) : formatDateTime(at));
 
 const dots: Record<TimelineEntryDto['kind'], string> = {
   'grain-prep': 'bg-warn',
