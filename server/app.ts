@@ -8,6 +8,7 @@ import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.router';
 import { csrfProtection } from './auth/csrf';
 import { passport } from './auth/passport';
+import { passwordGate } from './auth/password-gate';
 import { sessionMiddleware, type SessionStore } from './auth/session';
 import { config } from './core/config';
 import { AppError } from './core/errors';
@@ -70,6 +71,7 @@ export function createApp({ sessionStore }: AppDeps): Express {
   api.use(csrfProtection);
   api.use(passport.initialize());
   api.use(passport.session());
+  api.use(passwordGate);
   api.use('/auth', authRouter);
   api.use('/users', usersRouter);
   api.use('/grains', grainsRouter);
