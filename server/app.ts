@@ -33,6 +33,7 @@ import { queueRouter } from './queue/queue.router';
 import { photosRouter } from './photos/photos.router';
 import { analysisRouter } from './analysis/analysis.router';
 import { settingsRouter } from './settings/settings.router';
+import { staffRouter } from './staff/staff.router';
 
 export interface AppDeps {
   sessionStore: SessionStore;
@@ -74,6 +75,7 @@ export function createApp({ sessionStore }: AppDeps): Express {
   api.use(passwordGate);
   api.use('/auth', authRouter);
   api.use('/users', usersRouter);
+  api.use('/staff', staffRouter);
   api.use('/grains', grainsRouter);
   api.use('/grain-lots', grainLotsRouter);
   api.use('/prep-batches', prepBatchesRouter);

@@ -1,5 +1,25 @@
 import { MigrationInterface, QueryRunner } from "typeorm";
 
+/**
+ * Operators and owners kept only as names become staff people; the names stay on their records.
+ * The table's collation is case-insensitive, so "ana" and "Ana" land on one person. Safe to run again.
+ */
+export async function moveNamesToStaff(q: QueryRunner): Promise<void> {
+    await q.query(`INSERT IGNORE INTO \`staff_members\` (\`name\`, \`email\`)
+        SELECT TRIM(n.name), MAX(n.email) FROM (
+        SELECT operatorName AS name, NULL AS email FROM inoculation_sessions WHERE operatorId IS NULL
+        UNION ALL SELECT ownerName, ownerEmail FROM corrective_actions WHERE ownerId IS NULL
+        UNION ALL SELECT personName, NULL FROM training_records WHERE userId IS NULL
+        ) n WHERE TRIM(COALESCE(n.name, '')) <> '' GROUP BY TRIM(n.name) ORDER BY MIN(TRIM(n.name))`);
+    await q.query(`UPDATE inoculation_sessions s JOIN staff_members m ON m.name = TRIM(s.operatorName)
+        SET s.staffId = m.id WHERE s.operatorId IS NULL`);
+    await q.query(`UPDATE corrective_actions a JOIN staff_members m ON m.name = TRIM(a.ownerName)
+        SET a.ownerStaffId = m.id WHERE a.ownerId IS NULL`);
+    await q.query(`UPDATE training_records t JOIN staff_members m ON m.name = TRIM(t.personName)
+        SET t.staffId = m.id WHERE t.userId IS NULL`);
+}
+
+
 export class StaffAndPasswordReset1796229059780 implements MigrationInterface {
     name = 'StaffAndPasswordReset1796229059780'
 
@@ -13,20 +33,7 @@ export class StaffAndPasswordReset1796229059780 implements MigrationInterface {
         await queryRunner.query(`ALTER TABLE \`retraining_requests\` CHANGE \`userId\` \`userId\` int UNSIGNED NULL`);
         await queryRunner.query(`CREATE INDEX \`IDX_647249367a102c5f7544d7f780\` ON \`inoculation_sessions\` (\`staffId\`)`);
         await queryRunner.query(`CREATE INDEX \`IDX_010a4149fe86f8fe9d6cb76a19\` ON \`training_records\` (\`staffId\`, \`procedureVersionId\`)`);
-        // Operators and owners kept only as names become staff people; the names stay on their records.
-        // The table's collation is case-insensitive, so "ana" and "Ana" land on one person.
-        await queryRunner.query(`INSERT IGNORE INTO \`staff_members\` (\`name\`, \`email\`)
-            SELECT TRIM(n.name), MAX(n.email) FROM (
-                SELECT operatorName AS name, NULL AS email FROM inoculation_sessions WHERE operatorId IS NULL
-                UNION ALL SELECT ownerName, ownerEmail FROM corrective_actions WHERE ownerId IS NULL
-                UNION ALL SELECT personName, NULL FROM training_records WHERE userId IS NULL
-            ) n WHERE TRIM(COALESCE(n.name, '')) <> '' GROUP BY TRIM(n.name) ORDER BY MIN(TRIM(n.name))`);
-        await queryRunner.query(`UPDATE inoculation_sessions s JOIN staff_members m ON m.name = TRIM(s.operatorName)
-            SET s.staffId = m.id WHERE s.operatorId IS NULL`);
-        await queryRunner.query(`UPDATE corrective_actions a JOIN staff_members m ON m.name = TRIM(a.ownerName)
-            SET a.ownerStaffId = m.id WHERE a.ownerId IS NULL`);
-        await queryRunner.query(`UPDATE training_records t JOIN staff_members m ON m.name = TRIM(t.personName)
-            SET t.staffId = m.id WHERE t.userId IS NULL`);
+        await moveNamesToStaff(queryRunner);
     }
 
     public async down(queryRunner: QueryRunner): Promise<void> {
