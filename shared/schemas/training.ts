@@ -8,20 +8,20 @@ const onePerson: [(v: { userId?: number; staffId?: number }) => boolean, { path:
   { path: ['userId'], message: 'give either userId or staffId' },
 ];
 
-export const createTrainingRecordSchema = z
-  .object({
-    userId: idSchema.optional(),
-    staffId: idSchema.optional(),
-    procedureVersionId: idSchema,
-    trainedOn: recordedDateSchema,
-    notes: z
-      .string()
-      .trim()
-      .max(2000, 'use at most 2000 characters')
-      .nullish()
-      .transform((v) => (v ? v : null)),
-  })
-  .refine(...onePerson);
+/** The fields of a training record; the form picks from this, as a refined schema cannot be picked. */
+export const trainingRecordFieldsSchema = z.object({
+  userId: idSchema.optional(),
+  staffId: idSchema.optional(),
+  procedureVersionId: idSchema,
+  trainedOn: recordedDateSchema,
+  notes: z
+    .string()
+    .trim()
+    .max(2000, 'use at most 2000 characters')
+    .nullish()
+    .transform((v) => (v ? v : null)),
+});
+export const createTrainingRecordSchema = trainingRecordFieldsSchema.refine(...onePerson);
 export type CreateTrainingRecordInput = z.infer<typeof createTrainingRecordSchema>;
 
 export const trainingRecordListQuerySchema = pageQuerySchema.extend({

@@ -61,4 +61,31 @@ describe('people of the lab', () => {
     await page.getByRole('heading', { name: /Oriel Fenwright/ }).waitFor();
     await context.close();
   });
+
+  it('trains a staff member without an account and lists the training', async () => {
+    const { context, page } = await newPage(browser(), desktop);
+    await signIn(page, 'trainer');
+    await page.getByRole('navigation', { name: 'Main' }).first().waitFor();
+    const name = `Wendel Ashgrove ${randomBytes(2).toString('hex')}`;
+    await call(page, 'post', '/api/staff', { name });
+    await page.goto('/training');
+    const row = page.getByRole('row', { name: new RegExp(name) });
+    await row.getByText('Staff, no account').waitFor();
+    await row.getByRole('button', { name: `Record training for ${name}` }).click();
+    const dialog = page.getByRole('dialog', { name: `Record training: ${name}` });
+    await dialog.getByRole('button', { name: 'Record training' }).click();
+    await page
+      .getByRole('listitem')
+      .filter({ hasText: `${name} on version` })
+      .waitFor();
+    await row.getByText('current version').waitFor();
+    expect(
+      await page
+        .getByRole('listitem')
+        .filter({ hasText: `${name} on version` })
+        .count(),
+    ).toBe(1);
+    await page.screenshot({ path: `${shotsDir}/training-staff.png`, fullPage: true });
+    await context.close();
+  });
 });

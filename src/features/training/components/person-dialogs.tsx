@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import {
   createRetrainRequestSchema,
-  createTrainingRecordSchema,
+  trainingRecordFieldsSchema,
   type OperatorRowDto,
 } from '../../../../shared/schemas/training';
 import { FormDialog } from '../../../components/ui/form-dialog';
@@ -18,7 +18,7 @@ interface PersonDialogProps {
   onClose: () => void;
 }
 
-const trainingForm = createTrainingRecordSchema.pick({ trainedOn: true, notes: true });
+const trainingForm = trainingRecordFieldsSchema.pick({ trainedOn: true, notes: true });
 const retrainForm = z.object({ reason: createRetrainRequestSchema.shape.reason });
 
 export function RecordTrainingDialog({ person, versionId, version, onClose }: PersonDialogProps) {

@@ -77,12 +77,12 @@ export function TrainingScreen({ role, procedureId }: { role: Role; procedureId:
                   <td className="flex flex-wrap gap-2 px-3 py-2">
                     {versionId !== null && recorders.includes(role) && (
                       <Button variant="secondary" onClick={() => setTraining(o)}>
-                        Record training
+                        Record training<span className="sr-only"> for {o.displayName}</span>
                       </Button>
                     )}
                     {versionId !== null && requesters.includes(role) && (
                       <Button variant="ghost" onClick={() => setRetrain(o)}>
-                        Ask to retrain
+                        Ask to retrain<span className="sr-only"> {o.displayName}</span>
                       </Button>
                     )}
                   </td>
