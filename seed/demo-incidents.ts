@@ -51,7 +51,14 @@ export async function loadOpenIncidents(plan: DemoPlan, today: string, timeZone:
     const f = findings[i]!;
     const foundOn = [addDays(jar.session.heldOn, f.days), addDays(today, -1)].sort()[0]!;
     await createIncident(
-      { id: tech.id, username: tech.username, displayName: tech.displayName, email: tech.email, role: tech.role },
+      {
+        id: tech.id,
+        username: tech.username,
+        displayName: tech.displayName,
+        email: tech.email,
+        role: tech.role,
+        mustChangePassword: false,
+      },
       {
         jarLabels: [jar.label],
         contaminant: f.contaminant,

@@ -8,6 +8,7 @@ import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.router';
 import { csrfProtection } from './auth/csrf';
 import { passport } from './auth/passport';
+import { passwordGate } from './auth/password-gate';
 import { sessionMiddleware, type SessionStore } from './auth/session';
 import { config } from './core/config';
 import { AppError } from './core/errors';
@@ -32,6 +33,7 @@ import { queueRouter } from './queue/queue.router';
 import { photosRouter } from './photos/photos.router';
 import { analysisRouter } from './analysis/analysis.router';
 import { settingsRouter } from './settings/settings.router';
+import { staffRouter } from './staff/staff.router';
 
 export interface AppDeps {
   sessionStore: SessionStore;
@@ -70,8 +72,10 @@ export function createApp({ sessionStore }: AppDeps): Express {
   api.use(csrfProtection);
   api.use(passport.initialize());
   api.use(passport.session());
+  api.use(passwordGate);
   api.use('/auth', authRouter);
   api.use('/users', usersRouter);
+  api.use('/staff', staffRouter);
   api.use('/grains', grainsRouter);
   api.use('/grain-lots', grainLotsRouter);
   api.use('/prep-batches', prepBatchesRouter);

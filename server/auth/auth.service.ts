@@ -51,9 +51,14 @@ export async function changePassword(
     throw badRequest('The current password is wrong.', [{ path: 'currentPassword', message: 'is wrong' }]);
   }
   await forgiveAttempt(attempt);
+  if (input.newPassword === input.currentPassword) {
+    throw badRequest('Choose a password different from the current one.', [
+      { path: 'newPassword', message: 'must differ from the current password' },
+    ]);
+  }
   const passwordHash = await hashPassword(input.newPassword);
   await dataSource.transaction(async (m) => {
-    await m.update(User, { id: user.id }, { passwordHash });
+    await m.update(User, { id: user.id }, { passwordHash, mustChangePassword: false });
     const ended = await endOtherSessions(m, user.id, from.sessionId);
     await recordAudit(m, actor, [
       {

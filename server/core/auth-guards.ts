@@ -8,6 +8,7 @@ export interface SessionUser {
   displayName: string;
   email: string | null;
   role: Role;
+  mustChangePassword: boolean;
 }
 
 declare global {

@@ -24,6 +24,7 @@ import { IncidentStepLink } from '../procedures/incident-step-link.entity';
 import { ProcedureStep } from '../procedures/procedure-step.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { Procedure } from '../procedures/procedure.entity';
+import { StaffMember } from '../staff/staff-member.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
 import { SessionStepCheck } from '../sessions/session-step-check.entity';
 import { LabSettings } from '../settings/lab-settings.entity';
@@ -34,6 +35,7 @@ import { User } from '../users/user.entity';
 /** Listed as classes, not globs: Vitest and tsx both load them the same way. */
 export const entities = [
   User,
+  StaffMember,
   SessionRecord,
   LoginFailure,
   AuditEvent,

@@ -111,7 +111,7 @@ export const importsRepository = {
   },
   async insertSessions(
     m: EntityManager,
-    rows: { code: string; heldOn: string; operatorId: number | null; operatorName: string }[],
+    rows: { code: string; heldOn: string; operatorId: number | null; staffId: number | null; operatorName: string }[],
   ) {
     for (const chunk of chunks(rows, insertChunk)) await insertPlain(m, InoculationSession, chunk);
   },

@@ -6,6 +6,7 @@ import { config } from '../core/config';
 import { localDate } from '../core/local-time';
 import { dataSource } from '../db/data-source';
 import { getLabSettings } from '../settings/settings.service';
+import { staffForNames } from '../staff/staff.service';
 import { checkRows, loadCodes, loadContext, resolveOperator, sortErrors, type HistoryContext } from './history-checks';
 import { parseHistoryCsv } from './history-csv';
 import { isBlankRecord, mapHeader, matchKey, readRow, type HistoryRow } from './history-rows';
@@ -98,6 +99,22 @@ function firstOf<T>(
   return [...out.values()];
 }
 
+/** Operators without an account join the staff list (matched without regard to case) and are linked to it. */
+async function withStaff(
+  m: EntityManager,
+  sessions: { code: string; heldOn: string; operatorId: number | null; operatorName: string }[],
+) {
+  const staff = await staffForNames(
+    m,
+    sessions.filter((s) => s.operatorId === null).map((s) => s.operatorName),
+  );
+  const byKey = new Map(staff.map((p) => [matchKey(p.name), p]));
+  return sessions.map((s) => {
+    const person = s.operatorId === null ? byKey.get(matchKey(s.operatorName)) : undefined;
+    return { ...s, staffId: person?.id ?? null, operatorName: person?.name ?? s.operatorName };
+  });
+}
+
 async function writeRows(
   m: EntityManager,
   actor: Actor,
@@ -127,7 +144,7 @@ async function writeRows(
     (r) => ({ code: r.culture }),
   );
   await importsRepository.insertCookRuns(m, newCookRuns);
-  await importsRepository.insertSessions(m, newSessions);
+  await importsRepository.insertSessions(m, await withStaff(m, newSessions));
   await importsRepository.insertCultures(m, newCultures);
 
   const ids = await loadCodes(m, rows);

@@ -17,6 +17,10 @@ export class CorrectiveAction {
   @Column({ type: 'int', unsigned: true, nullable: true })
   ownerId: number | null;
 
+  /** An owner without an account, from the lab's staff list. */
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  ownerStaffId: number | null;
+
   @Column({ type: 'varchar', length: 120 })
   ownerName: string;
 

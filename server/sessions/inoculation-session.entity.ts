@@ -21,7 +21,12 @@ export class InoculationSession {
   @Column({ type: 'int', unsigned: true, nullable: true })
   operatorId: number | null;
 
-  /** The user's name, or a staff name kept from imported history. */
+  /** An operator without an account, from the lab's staff list. */
+  @Index()
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  staffId: number | null;
+
+  /** The user's or staff person's name as it was when the session was recorded. */
   @Column({ type: 'varchar', length: 120, nullable: true })
   operatorName: string | null;
 

@@ -17,34 +17,52 @@ export interface OperatorTraining {
 type Raw = Record<string, unknown>;
 const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
 
+const personKey = (a: string) =>
+  `CASE WHEN ${a}.userId IS NOT NULL THEN CONCAT('u', ${a}.userId) ELSE CONCAT('s', ${a}.staffId) END`;
+
 const liveIncidentJars = `(${liveIncidentJarPairsSql})`;
 
 export const operatorsRepository = {
-  /** Active technicians and supervisors, and anyone else who has run a session. */
-  async people(): Promise<{ userId: number; displayName: string; role: string }[]> {
+  /**
+   * Active technicians and supervisors, active staff people, and anyone else who has run a session.
+   * `key` is `u<id>` for a user and `s<id>` for a staff person, so both kinds share one map.
+   */
+  async people(): Promise<
+    { key: string; userId: number | null; staffId: number | null; displayName: string; role: string | null }[]
+  > {
     const rows = await dataSource.query<Raw[]>(
-      `SELECT u.id AS userId, u.displayName AS displayName, u.role AS role FROM users u
+      `SELECT u.id AS userId, NULL AS staffId, u.displayName AS displayName, u.role AS role FROM users u
        WHERE (u.active = 1 AND u.role IN ('technician', 'supervisor'))
           OR EXISTS (SELECT 1 FROM inoculation_sessions s WHERE s.operatorId = u.id)
-       ORDER BY u.displayName, u.id`,
+       UNION ALL
+       SELECT NULL, m.id, m.name, NULL FROM staff_members m
+       WHERE m.active = 1 OR EXISTS (SELECT 1 FROM inoculation_sessions s WHERE s.staffId = m.id)
+       ORDER BY displayName, userId, staffId`,
     );
-    return rows.map((r) => ({ userId: Number(r.userId), displayName: String(r.displayName), role: String(r.role) }));
+    return rows.map((r) => ({
+      key: r.userId === null ? `s${Number(r.staffId)}` : `u${Number(r.userId)}`,
+      userId: r.userId === null ? null : Number(r.userId),
+      staffId: r.staffId === null ? null : Number(r.staffId),
+      displayName: String(r.displayName),
+      role: typeof r.role === 'string' ? r.role : null,
+    }));
   },
 
   /** Sessions, jars and live incidents per operator, grouped in the database. */
-  async counts(): Promise<Map<number, OperatorCounts>> {
+  async counts(): Promise<Map<string, OperatorCounts>> {
     const rows = await dataSource.query<Raw[]>(
-      `SELECT s.operatorId AS userId, COUNT(DISTINCT s.id) AS sessions, COUNT(DISTINCT j.id) AS jars,
+      `SELECT CASE WHEN s.operatorId IS NOT NULL THEN CONCAT('u', s.operatorId) ELSE CONCAT('s', s.staffId) END AS k,
+              COUNT(DISTINCT s.id) AS sessions, COUNT(DISTINCT j.id) AS jars,
               COUNT(DISTINCT lij.jarId) AS contaminatedJars, COUNT(DISTINCT lij.incidentId) AS incidents
        FROM inoculation_sessions s
        LEFT JOIN jars j ON j.sessionId = s.id
        LEFT JOIN ${liveIncidentJars} lij ON lij.jarId = j.id
-       WHERE s.operatorId IS NOT NULL
-       GROUP BY s.operatorId`,
+       WHERE s.operatorId IS NOT NULL OR s.staffId IS NOT NULL
+       GROUP BY k`,
     );
     return new Map(
       rows.map((r) => [
-        Number(r.userId),
+        String(r.k),
         {
           sessions: Number(r.sessions),
           jars: Number(r.jars),
@@ -55,18 +73,18 @@ export const operatorsRepository = {
     );
   },
 
-  async training(procedureId: number, currentVersionId: number | null): Promise<Map<number, OperatorTraining>> {
+  async training(procedureId: number, currentVersionId: number | null): Promise<Map<string, OperatorTraining>> {
     const rows = await dataSource.query<Raw[]>(
-      `SELECT t.userId AS userId, MAX(v.version) AS trainedVersion, MAX(t.trainedOn) AS lastTrainedOn,
+      `SELECT ${personKey('t')} AS k, MAX(v.version) AS trainedVersion, MAX(t.trainedOn) AS lastTrainedOn,
               MAX(CASE WHEN t.procedureVersionId = ? THEN 1 ELSE 0 END) AS onCurrent
        FROM training_records t JOIN procedure_versions v ON v.id = t.procedureVersionId
-       WHERE v.procedureId = ? AND t.userId IS NOT NULL
-       GROUP BY t.userId`,
+       WHERE v.procedureId = ? AND (t.userId IS NOT NULL OR t.staffId IS NOT NULL)
+       GROUP BY k`,
       [currentVersionId ?? 0, procedureId],
     );
     return new Map(
       rows.map((r) => [
-        Number(r.userId),
+        String(r.k),
         {
           trainedVersion: Number(r.trainedVersion),
           lastTrainedOn: day(r.lastTrainedOn),
@@ -76,14 +94,14 @@ export const operatorsRepository = {
     );
   },
 
-  async openRequests(procedureId: number): Promise<Map<number, number>> {
+  async openRequests(procedureId: number): Promise<Map<string, number>> {
     const rows = await dataSource.query<Raw[]>(
-      `SELECT r.userId AS userId, COUNT(*) AS n FROM retraining_requests r
+      `SELECT ${personKey('r')} AS k, COUNT(*) AS n FROM retraining_requests r
        JOIN procedure_versions v ON v.id = r.procedureVersionId
-       WHERE v.procedureId = ? AND r.doneAt IS NULL GROUP BY r.userId`,
+       WHERE v.procedureId = ? AND r.doneAt IS NULL GROUP BY k`,
       [procedureId],
     );
-    return new Map(rows.map((r) => [Number(r.userId), Number(r.n)]));
+    return new Map(rows.map((r) => [String(r.k), Number(r.n)]));
   },
 
   firstProcedureId: async (): Promise<number | undefined> => {

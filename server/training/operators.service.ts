@@ -25,17 +25,18 @@ export async function listOperators(q: OperatorsQuery): Promise<OperatorsDto> {
     operatorsRepository.people(),
     operatorsRepository.counts(),
     procedure ? operatorsRepository.training(procedure.id, procedure.currentVersionId) : new Map(),
-    procedure ? operatorsRepository.openRequests(procedure.id) : new Map<number, number>(),
+    procedure ? operatorsRepository.openRequests(procedure.id) : new Map<string, number>(),
   ]);
   return {
     procedure,
     operators: people.map((p) => {
-      const c = counts.get(p.userId);
-      const t = training.get(p.userId);
+      const c = counts.get(p.key);
+      const t = training.get(p.key);
       return {
         userId: p.userId,
+        staffId: p.staffId,
         displayName: p.displayName,
-        role: p.role as Role,
+        role: p.role as Role | null,
         sessions: c?.sessions ?? 0,
         jars: c?.jars ?? 0,
         contaminatedJars: c?.contaminatedJars ?? 0,
@@ -43,7 +44,7 @@ export async function listOperators(q: OperatorsQuery): Promise<OperatorsDto> {
         trainedVersion: t?.trainedVersion ?? null,
         lastTrainedOn: t?.lastTrainedOn ?? null,
         trainedOnCurrent: t?.trainedOnCurrent ?? false,
-        openRetrainRequests: requests.get(p.userId) ?? 0,
+        openRetrainRequests: requests.get(p.key) ?? 0,
       };
     }),
   };

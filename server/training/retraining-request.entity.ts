@@ -5,8 +5,12 @@ export class RetrainingRequest {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
-  @Column({ type: 'int', unsigned: true })
-  userId: number;
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  userId: number | null;
+
+  /** A staff person without an account; set instead of the user id. */
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  staffId: number | null;
 
   @Column({ type: 'int', unsigned: true })
   procedureVersionId: number;

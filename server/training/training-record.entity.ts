@@ -2,12 +2,17 @@ import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 
 
 @Entity({ name: 'training_records' })
 @Index(['userId', 'procedureVersionId'])
+@Index(['staffId', 'procedureVersionId'])
 export class TrainingRecord {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   userId: number | null;
+
+  /** A staff person without an account; set instead of the user id. */
+  @Column({ type: 'int', unsigned: true, nullable: true })
+  staffId: number | null;
 
   @Column({ type: 'varchar', length: 120 })
   personName: string;

@@ -9,10 +9,16 @@ import { applySortAndPage } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { User } from '../users/user.entity';
+import { StaffMember } from '../staff/staff-member.entity';
 import { RetrainingRequest } from './retraining-request.entity';
 import { TrainingRecord } from './training-record.entity';
 
 type Raw = Record<string, unknown>;
+/** A user or a staff person: exactly one id is set. */
+export interface PersonKey {
+  userId: number | null;
+  staffId: number | null;
+}
 const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 const iso = (v: unknown) => (v === null || v === undefined ? null : new Date(v as string | Date).toISOString());
 const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
@@ -27,6 +33,7 @@ function recordQuery(m: EntityManager): SelectQueryBuilder<TrainingRecord> {
     .select([
       't.id AS id',
       't.userId AS userId',
+      't.staffId AS staffId',
       't.personName AS personName',
       'v.procedureId AS procedureId',
       'v.title AS procedureTitle',
@@ -43,6 +50,7 @@ function recordQuery(m: EntityManager): SelectQueryBuilder<TrainingRecord> {
 const toRecordDto = (r: Raw): TrainingRecordDto => ({
   id: Number(r.id),
   userId: n(r.userId),
+  staffId: n(r.staffId),
   personName: String(r.personName),
   procedureId: Number(r.procedureId),
   procedureTitle: String(r.procedureTitle),
@@ -59,12 +67,14 @@ function requestQuery(m: EntityManager): SelectQueryBuilder<RetrainingRequest> {
   return m
     .createQueryBuilder(RetrainingRequest, 'r')
     .innerJoin(ProcedureVersion, 'v', 'v.id = r.procedureVersionId')
-    .innerJoin(User, 'u', 'u.id = r.userId')
+    .leftJoin(User, 'u', 'u.id = r.userId')
+    .leftJoin(StaffMember, 'sm', 'sm.id = r.staffId')
     .leftJoin(User, 'rb', 'rb.id = r.requestedById')
     .select([
       'r.id AS id',
       'r.userId AS userId',
-      'u.displayName AS userName',
+      'r.staffId AS staffId',
+      'COALESCE(u.displayName, sm.name) AS userName',
       'v.procedureId AS procedureId',
       'v.title AS procedureTitle',
       'r.procedureVersionId AS procedureVersionId',
@@ -79,7 +89,8 @@ function requestQuery(m: EntityManager): SelectQueryBuilder<RetrainingRequest> {
 
 const toRequestDto = (r: Raw): RetrainRequestDto => ({
   id: Number(r.id),
-  userId: Number(r.userId),
+  userId: n(r.userId),
+  staffId: n(r.staffId),
   userName: String(r.userName),
   procedureId: Number(r.procedureId),
   procedureTitle: String(r.procedureTitle),
@@ -96,6 +107,7 @@ export const trainingRepository = {
   async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], number]> {
     const qb = recordQuery(dataSource.manager);
     if (q.userId) qb.andWhere('t.userId = :userId', { userId: q.userId });
+    if (q.staffId) qb.andWhere('t.staffId = :staffId', { staffId: q.staffId });
     if (q.procedureId) qb.andWhere('v.procedureId = :procedureId', { procedureId: q.procedureId });
     if (q.procedureVersionId) qb.andWhere('t.procedureVersionId = :pv', { pv: q.procedureVersionId });
     const total = await qb.clone().getCount();
@@ -109,17 +121,19 @@ export const trainingRepository = {
   },
 
   /** Open requests this training answers: the same procedure, at this version or an older one. */
-  openRequestsAnswered: (m: EntityManager, userId: number, procedureId: number, version: number) =>
+  openRequestsAnswered: (m: EntityManager, person: PersonKey, procedureId: number, version: number) =>
     m
       .createQueryBuilder(RetrainingRequest, 'r')
       .innerJoin(ProcedureVersion, 'v', 'v.id = r.procedureVersionId')
-      .where('r.userId = :userId AND r.doneAt IS NULL', { userId })
+      .where(person.userId ? 'r.userId = :id' : 'r.staffId = :id', { id: person.userId ?? person.staffId })
+      .andWhere('r.doneAt IS NULL')
       .andWhere('v.procedureId = :procedureId AND v.version <= :version', { procedureId, version })
       .getMany(),
 
   async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], number]> {
     const qb = requestQuery(dataSource.manager);
     if (q.userId) qb.andWhere('r.userId = :userId', { userId: q.userId });
+    if (q.staffId) qb.andWhere('r.staffId = :staffId', { staffId: q.staffId });
     if (q.open) qb.andWhere(q.open === 'true' ? 'r.doneAt IS NULL' : 'r.doneAt IS NOT NULL');
     const total = await qb.clone().getCount();
     applySortAndPage(qb, q, requestSortable, '-createdAt', 'r.id');

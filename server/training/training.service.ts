@@ -13,17 +13,23 @@ import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { notifyRetrainRequested } from '../mail/retraining-mail.service';
 import { findVersion, getProcedureVersion } from '../procedures/procedures.service';
+import { requireActiveStaff } from '../staff/staff.service';
 import { User } from '../users/user.entity';
 import { RetrainingRequest } from './retraining-request.entity';
 import { TrainingRecord } from './training-record.entity';
 import { trainingRepository } from './training.repository';
 
-async function requirePerson(userId: number) {
-  const user = await dataSource.manager.findOneBy(User, { id: userId });
+/** The person trained or asked to retrain: an active user or an active staff person. */
+async function requirePerson(input: { userId?: number; staffId?: number }) {
+  if (input.staffId !== undefined) {
+    const member = await requireActiveStaff(input.staffId);
+    return { userId: null, staffId: member.id, name: member.name };
+  }
+  const user = await dataSource.manager.findOneBy(User, { id: input.userId });
   if (!user) throw notFound('User');
   if (!user.active)
     throw unprocessable('That account is deactivated.', [{ path: 'userId', message: 'is a deactivated account' }]);
-  return user;
+  return { userId: user.id, staffId: null, name: user.displayName };
 }
 
 async function requireVersion(id: number) {
@@ -39,13 +45,14 @@ export async function listTrainingRecords(q: TrainingRecordListQuery): Promise<P
 
 /** Records the training and closes the person's open retraining requests that it answers. */
 export async function createTrainingRecord(actor: Actor, input: CreateTrainingRecordInput): Promise<TrainingRecordDto> {
-  const person = await requirePerson(input.userId);
+  const person = await requirePerson(input);
   const version = await requireVersion(input.procedureVersionId);
   const id = await dataSource.transaction(async (m) => {
     const record = await m.save(
       m.create(TrainingRecord, {
-        userId: person.id,
-        personName: person.displayName,
+        userId: person.userId,
+        staffId: person.staffId,
+        personName: person.name,
         procedureVersionId: version.id,
         trainerId: actor.id,
         trainerName: actor.displayName,
@@ -53,7 +60,7 @@ export async function createTrainingRecord(actor: Actor, input: CreateTrainingRe
         notes: input.notes,
       }),
     );
-    const answered = await trainingRepository.openRequestsAnswered(m, person.id, version.procedureId, version.version);
+    const answered = await trainingRepository.openRequestsAnswered(m, person, version.procedureId, version.version);
     const now = new Date();
     for (const r of answered) await m.update(RetrainingRequest, { id: r.id }, { doneAt: now });
     const entries: AuditEntry[] = [
@@ -62,7 +69,8 @@ export async function createTrainingRecord(actor: Actor, input: CreateTrainingRe
         recordType: 'training-record',
         recordId: record.id,
         newValue: {
-          userId: person.id,
+          userId: person.userId,
+          staffId: person.staffId,
           procedureVersionId: version.id,
           version: version.version,
           trainedOn: input.trainedOn,
@@ -92,12 +100,13 @@ export async function listRetrainRequests(q: RetrainRequestListQuery): Promise<P
 }
 
 export async function createRetrainRequest(actor: Actor, input: CreateRetrainRequestInput): Promise<RetrainRequestDto> {
-  const person = await requirePerson(input.userId);
+  const person = await requirePerson(input);
   const version = await requireVersion(input.procedureVersionId);
   const id = await dataSource.transaction(async (m) => {
     const request = await m.save(
       m.create(RetrainingRequest, {
-        userId: person.id,
+        userId: person.userId,
+        staffId: person.staffId,
         procedureVersionId: version.id,
         requestedById: actor.id,
         reason: input.reason,
@@ -108,21 +117,30 @@ export async function createRetrainRequest(actor: Actor, input: CreateRetrainReq
         action: 'create',
         recordType: 'retraining-request',
         recordId: request.id,
-        newValue: { userId: person.id, procedureVersionId: version.id, version: version.version },
+        newValue: {
+          userId: person.userId,
+          staffId: person.staffId,
+          procedureVersionId: version.id,
+          version: version.version,
+        },
         reason: input.reason,
       },
     ]);
     return request.id;
   });
   const detail = await getProcedureVersion(version.id);
-  const mailed = await notifyRetrainRequested(person.id, {
-    requestedByName: actor.displayName,
-    reason: input.reason,
-    procedureTitle: detail.title,
-    version: detail.version,
-    procedureVersionId: detail.id,
-    steps: detail.steps,
-  });
+  // A staff person has no account to read the request in; they are told by the trainer.
+  const mailed =
+    person.userId === null
+      ? false
+      : await notifyRetrainRequested(person.userId, {
+          requestedByName: actor.displayName,
+          reason: input.reason,
+          procedureTitle: detail.title,
+          version: detail.version,
+          procedureVersionId: detail.id,
+          steps: detail.steps,
+        });
   const dto = await trainingRepository.findRequest(id);
   if (!dto) throw notFound('Retraining request');
   return { ...dto, mailed };

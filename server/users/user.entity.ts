@@ -24,6 +24,10 @@ export class User {
   @Column({ type: 'boolean', default: true })
   active: boolean;
 
+  /** Set by an admin's reset: every route but changing the password answers 403 until it is changed. */
+  @Column({ type: 'boolean', default: false })
+  mustChangePassword: boolean;
+
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 

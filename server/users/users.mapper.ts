@@ -9,13 +9,17 @@ export const toUserDto = (u: User): UserDto => ({
   email: u.email,
   role: u.role,
   active: u.active,
+  mustChangePassword: u.mustChangePassword,
   createdAt: u.createdAt.toISOString(),
 });
 
-export const toMeDto = (u: Pick<User, 'id' | 'username' | 'displayName' | 'email' | 'role'>): MeDto => ({
+export const toMeDto = (
+  u: Pick<User, 'id' | 'username' | 'displayName' | 'email' | 'role' | 'mustChangePassword'>,
+): MeDto => ({
   id: u.id,
   username: u.username,
   displayName: u.displayName,
   email: u.email,
   role: u.role,
+  mustChangePassword: u.mustChangePassword,
 });

@@ -2,12 +2,14 @@ import { Router } from 'express';
 import { idParamsSchema } from '../../shared/schemas/common';
 import {
   createUserSchema,
+  resetPasswordSchema,
   updateUserSchema,
   userListQuerySchema,
   type UserListQuery,
 } from '../../shared/schemas/users';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { validate } from '../core/validate';
+import { resetPassword } from './password-reset.service';
 import { createUser, listPeople, listUsers, updateUser } from './users.service';
 
 export const usersRouter = Router();
@@ -29,3 +31,12 @@ usersRouter.post('/', admin, validate({ body: createUserSchema }), async (req, r
 usersRouter.patch('/:id', admin, validate({ params: idParamsSchema, body: updateUserSchema }), async (req, res) => {
   res.json(await updateUser(currentUser(req), Number(req.params.id), req.body));
 });
+
+usersRouter.post(
+  '/:id/password-reset',
+  admin,
+  validate({ params: idParamsSchema, body: resetPasswordSchema }),
+  async (req, res) => {
+    res.json(await resetPassword(currentUser(req), Number(req.params.id), req.body));
+  },
+);

@@ -21,6 +21,8 @@ export const meSchema = z.object({
   displayName: z.string(),
   email: z.string().nullable(),
   role: roleSchema,
+  /** After an admin's reset: the person must set a new password before anything else. */
+  mustChangePassword: z.boolean(),
 });
 export type MeDto = z.infer<typeof meSchema>;
 

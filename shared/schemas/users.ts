@@ -10,6 +10,7 @@ export const userSchema = z.object({
   email: z.string().nullable(),
   role: roleSchema,
   active: z.boolean(),
+  mustChangePassword: z.boolean(),
   createdAt: z.string(),
 });
 export type UserDto = z.infer<typeof userSchema>;
@@ -48,3 +49,13 @@ export type UserListQuery = z.infer<typeof userListQuerySchema>;
 /** A person of the lab as other screens name them (an action's owner, say): no address, no login. */
 export const personSchema = z.object({ id: z.number().int(), displayName: z.string(), role: roleSchema });
 export type PersonDto = z.infer<typeof personSchema>;
+
+/** An admin's reset: a temporary password they chose, or none for the server to make one. */
+export const resetPasswordSchema = z.object({
+  temporaryPassword: z.union([passwordRule, z.literal('')]).optional(),
+});
+export type ResetPasswordInput = z.infer<typeof resetPasswordSchema>;
+
+/** `generatedPassword` is shown once and never stored in clear; null when the admin chose it. */
+export const passwordResetSchema = z.object({ user: userSchema, generatedPassword: z.string().nullable() });
+export type PasswordResetDto = z.infer<typeof passwordResetSchema>;

@@ -18,6 +18,14 @@ const signInLoader =
     return null;
   };
 
+/** Only a person whose password was reset stays here; anyone else goes home or signs in. */
+const setPasswordLoader = (queryClient: QueryClient) => async () => {
+  const me = await queryClient.ensureQueryData(authQueries.me()).catch(() => null);
+  if (!me) throw redirect(paths.signIn.to());
+  if (!me.mustChangePassword) throw redirect(paths.home.to());
+  return null;
+};
+
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     {
@@ -28,6 +36,11 @@ export function createAppRouter(queryClient: QueryClient) {
           path: paths.signIn.pattern,
           loader: signInLoader(queryClient),
           lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInRoute })),
+        },
+        {
+          path: paths.setPassword.pattern,
+          loader: setPasswordLoader(queryClient),
+          lazy: () => import('./routes/set-password').then((m) => ({ Component: m.SetPasswordRoute })),
         },
         {
           loader: sessionLoader(queryClient),

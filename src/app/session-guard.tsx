@@ -23,6 +23,8 @@ export const sessionLoader =
     settings.catch(() => undefined); // Signed out, it fails; the sign-in redirect below says why.
     const me = await queryClient.ensureQueryData(authQueries.me());
     if (!me) throw redirect(paths.signIn.to(returnPath(new URL(request.url))));
+    // Every other route answers 403 until a reset password is replaced.
+    if (me.mustChangePassword) throw redirect(paths.setPassword.to());
     // Greeting, "today" and every date on screen follow the lab's clock.
     setLabTimeZone((await settings).timeZone);
     return null;
@@ -41,6 +43,7 @@ export function SessionLayout() {
     const next = signingOut ? undefined : `${location.pathname}${location.search}`;
     return <Navigate to={paths.signIn.to(next)} replace />;
   }
+  if (me.mustChangePassword) return <Navigate to={paths.setPassword.to()} replace />;
 
   return (
     <AppLayout

@@ -22,6 +22,8 @@ export const paths = {
     to: (next?: string) => withQuery('/sign-in', { next: next && next !== '/' ? next : undefined }),
   },
   account: { pattern: '/account', to: () => '/account' },
+  /** Where a person whose password an admin reset must set their own before anything else. */
+  setPassword: { pattern: '/set-password', to: () => '/set-password' },
   /** What this phone still holds for the server: flags, photos and shelf marks. */
   outbox: { pattern: '/outbox', to: () => '/outbox' },
   scan: { pattern: '/scan', to: () => '/scan' },

@@ -19,7 +19,13 @@ const formSchema = changePasswordSchema
 
 const empty = { currentPassword: '', newPassword: '', confirmPassword: '' };
 
-export function ChangePasswordForm() {
+interface Props {
+  /** Label of the current password: after an admin's reset it is the temporary one. */
+  currentLabel?: string;
+  onChanged?: () => void;
+}
+
+export function ChangePasswordForm({ currentLabel = 'Current password', onChanged }: Props) {
   const changePassword = useChangePassword();
   const toast = useToast();
 
@@ -33,6 +39,7 @@ export function ChangePasswordForm() {
           await changePassword.mutateAsync({ currentPassword, newPassword });
           reset(empty);
           toast.success('Your password is changed. Use the new one next time you sign in.');
+          onChanged?.();
         } catch (error) {
           applyServerErrors(error, setError, ['currentPassword', 'newPassword']);
         }
@@ -41,7 +48,7 @@ export function ChangePasswordForm() {
       {({ register, formState: { errors } }) => (
         <>
           <TextInput
-            label="Current password"
+            label={currentLabel}
             type="password"
             autoComplete="current-password"
             error={errors.currentPassword?.message}

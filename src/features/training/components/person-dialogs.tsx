@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import {
   createRetrainRequestSchema,
-  createTrainingRecordSchema,
+  trainingRecordFieldsSchema,
   type OperatorRowDto,
 } from '../../../../shared/schemas/training';
 import { FormDialog } from '../../../components/ui/form-dialog';
@@ -18,7 +18,7 @@ interface PersonDialogProps {
   onClose: () => void;
 }
 
-const trainingForm = createTrainingRecordSchema.pick({ trainedOn: true, notes: true });
+const trainingForm = trainingRecordFieldsSchema.pick({ trainedOn: true, notes: true });
 const retrainForm = z.object({ reason: createRetrainRequestSchema.shape.reason });
 
 export function RecordTrainingDialog({ person, versionId, version, onClose }: PersonDialogProps) {
@@ -37,7 +37,7 @@ export function RecordTrainingDialog({ person, versionId, version, onClose }: Pe
       serverFields={['trainedOn', 'notes']}
       onSubmit={async (values) => {
         if (!person) return;
-        await record.mutateAsync({ ...values, userId: person.userId, procedureVersionId: versionId });
+        await record.mutateAsync({ ...values, ...personIds(person), procedureVersionId: versionId });
         toast.success(`${person.displayName} is recorded as trained on version ${version}.`);
         onClose();
       }}
@@ -52,6 +52,10 @@ export function RecordTrainingDialog({ person, versionId, version, onClose }: Pe
   );
 }
 
+/** A user or a staff person without an account: the server takes exactly one of the two ids. */
+const personIds = (p: { userId: number | null; staffId: number | null }) =>
+  p.userId !== null ? { userId: p.userId } : { staffId: p.staffId ?? undefined };
+
 export function RetrainDialog({ person, versionId, version, onClose }: PersonDialogProps) {
   const request = useRequestRetraining();
   const toast = useToast();
@@ -61,7 +65,11 @@ export function RetrainDialog({ person, versionId, version, onClose }: PersonDia
       onClose={onClose}
       pending={request.isPending}
       title={person ? `Ask ${person.displayName} to retrain` : 'Ask to retrain'}
-      description={`On version ${version}. They get an e-mail with your reason and the steps, unless they turned that mail off.`}
+      description={
+        person?.staffId !== null && person?.staffId !== undefined
+          ? `On version ${version}. ${person.displayName} has no account: tell them yourself; the request stays on record until they are trained.`
+          : `On version ${version}. They get an e-mail with your reason and the steps, unless they turned that mail off.`
+      }
       submitLabel="Send request"
       schema={retrainForm}
       options={{ defaultValues: { reason: '' } }}
@@ -70,7 +78,7 @@ export function RetrainDialog({ person, versionId, version, onClose }: PersonDia
         if (!person) return;
         const made = await request.mutateAsync({
           reason: values.reason,
-          userId: person.userId,
+          ...personIds(person),
           procedureVersionId: versionId,
         });
         toast.success(

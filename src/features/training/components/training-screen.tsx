@@ -51,9 +51,12 @@ export function TrainingScreen({ role, procedureId }: { role: Role; procedureId:
             </thead>
             <tbody>
               {operators.data.operators.map((o) => (
-                <tr key={o.userId} className="border-b border-line last:border-0">
+                <tr key={o.userId ?? `s${o.staffId}`} className="border-b border-line last:border-0">
                   <th scope="row" className="px-3 py-2 font-medium">
                     {o.displayName}
+                    {o.staffId !== null && (
+                      <span className="block text-sm font-normal text-muted">Staff, no account</span>
+                    )}
                   </th>
                   <td className="px-3 py-2">{o.sessions}</td>
                   <td className="px-3 py-2">{o.jars}</td>
@@ -74,12 +77,12 @@ export function TrainingScreen({ role, procedureId }: { role: Role; procedureId:
                   <td className="flex flex-wrap gap-2 px-3 py-2">
                     {versionId !== null && recorders.includes(role) && (
                       <Button variant="secondary" onClick={() => setTraining(o)}>
-                        Record training
+                        Record training<span className="sr-only"> for {o.displayName}</span>
                       </Button>
                     )}
                     {versionId !== null && requesters.includes(role) && (
                       <Button variant="ghost" onClick={() => setRetrain(o)}>
-                        Ask to retrain
+                        Ask to retrain<span className="sr-only"> {o.displayName}</span>
                       </Button>
                     )}
                   </td>

@@ -7,7 +7,8 @@ import { DateCell } from '../../../components/ui/table/cells';
 import { roleLabels } from '../../../config/roles';
 
 export interface UserActions {
-  onChangeRole: (user: UserDto) => void;
+  onEdit: (user: UserDto) => void;
+  onResetPassword: (user: UserDto) => void;
   onToggleActive: (user: UserDto) => void;
 }
 
@@ -15,7 +16,8 @@ const column = createColumnHelper<UserDto>();
 
 export function useUserColumns({
   currentUserId,
-  onChangeRole,
+  onEdit,
+  onResetPassword,
   onToggleActive,
 }: UserActions & { currentUserId: number }) {
   return useMemo(
@@ -46,8 +48,12 @@ export function useUserColumns({
       }),
       column.accessor('active', {
         header: 'Status',
-        cell: ({ getValue }) =>
-          getValue() ? <Badge tone="ok">Active</Badge> : <Badge tone="neutral">Deactivated</Badge>,
+        cell: ({ row: { original: user }, getValue }) => (
+          <>
+            {getValue() ? <Badge tone="ok">Active</Badge> : <Badge tone="neutral">Deactivated</Badge>}
+            {user.mustChangePassword && <span className="block text-sm text-muted">Must set a new password</span>}
+          </>
+        ),
       }),
       column.accessor('createdAt', {
         header: 'Created',
@@ -63,8 +69,11 @@ export function useUserColumns({
             <span className="text-sm text-muted">Your own account</span>
           ) : (
             <span className="no-print flex justify-end gap-2 whitespace-nowrap">
-              <Button variant="secondary" onClick={() => onChangeRole(user)}>
-                Change role<span className="sr-only"> of {user.displayName}</span>
+              <Button variant="secondary" onClick={() => onEdit(user)}>
+                Edit<span className="sr-only"> {user.displayName}</span>
+              </Button>
+              <Button variant="secondary" onClick={() => onResetPassword(user)}>
+                Reset password<span className="sr-only"> of {user.displayName}</span>
               </Button>
               <Button
                 variant={user.active ? 'ghost' : 'secondary'}
@@ -78,6 +87,6 @@ export function useUserColumns({
           ),
       }),
     ],
-    [currentUserId, onChangeRole, onToggleActive],
+    [currentUserId, onEdit, onResetPassword, onToggleActive],
   );
 }

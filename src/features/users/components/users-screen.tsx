@@ -6,13 +6,14 @@ import { Button } from '../../../components/ui/button';
 import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { useListParams } from '../../../lib/use-list-params';
 import { readUserFilters, usersQueries } from '../api/users-queries';
-import { ChangeRoleDialog } from './change-role-dialog';
 import { CreateUserDialog } from './create-user-dialog';
+import { EditUserDialog } from './edit-user-dialog';
+import { ResetPasswordDialog } from './reset-password-dialog';
 import { SetActiveDialog } from './set-active-dialog';
 import { useUserColumns } from './users-columns';
 import { isUserFiltered, UsersFilters, usersCleared } from './users-filters';
 
-type OpenDialog = { kind: 'create' } | { kind: 'role' | 'active'; userId: number } | null;
+type OpenDialog = { kind: 'create' } | { kind: 'edit' | 'reset' | 'active'; userId: number } | null;
 
 export function UsersScreen({ currentUserId }: { currentUserId: number }) {
   const { filters, update } = useListParams(readUserFilters);
@@ -22,9 +23,10 @@ export function UsersScreen({ currentUserId }: { currentUserId: number }) {
   const selected =
     dialog && dialog.kind !== 'create' ? list.data?.items.find((u) => u.id === dialog.userId) : undefined;
   const close = useCallback(() => setDialog(null), []);
-  const onChangeRole = useCallback((user: UserDto) => setDialog({ kind: 'role', userId: user.id }), []);
+  const onEdit = useCallback((user: UserDto) => setDialog({ kind: 'edit', userId: user.id }), []);
+  const onResetPassword = useCallback((user: UserDto) => setDialog({ kind: 'reset', userId: user.id }), []);
   const onToggleActive = useCallback((user: UserDto) => setDialog({ kind: 'active', userId: user.id }), []);
-  const columns = useUserColumns({ currentUserId, onChangeRole, onToggleActive });
+  const columns = useUserColumns({ currentUserId, onEdit, onResetPassword, onToggleActive });
 
   return (
     <RegisterScreen
@@ -50,7 +52,8 @@ export function UsersScreen({ currentUserId }: { currentUserId: number }) {
       }
     >
       <CreateUserDialog open={dialog?.kind === 'create'} onClose={close} />
-      <ChangeRoleDialog user={dialog?.kind === 'role' ? selected : undefined} onClose={close} />
+      <EditUserDialog user={dialog?.kind === 'edit' ? selected : undefined} onClose={close} />
+      <ResetPasswordDialog user={dialog?.kind === 'reset' ? selected : undefined} onClose={close} />
       <SetActiveDialog user={dialog?.kind === 'active' ? selected : undefined} onClose={close} />
     </RegisterScreen>
   );
