@@ -39,17 +39,18 @@ describe('sort names inherited from Object.prototype', () => {
   });
 });
 
-describe('temperature log numbers out of physical range', () => {
-  const newRun = async () =>
-    (
-      await sendAs(supervisor, 'post', '/api/cook-runs', {
-        code: uniqueName('CR'),
-        cookedOn: '2026-03-02',
-        minutesAtPressure: 90,
-        container: '1 L jar',
-      })
-    ).body as { id: number };
+/** A cook run of its own for a test that sends it a temperature log. */
+const newRun = async () =>
+  (
+    await sendAs(supervisor, 'post', '/api/cook-runs', {
+      code: uniqueName('CR'),
+      cookedOn: '2026-03-02',
+      minutesAtPressure: 90,
+      container: '1 L jar',
+    })
+  ).body as { id: number };
 
+describe('temperature log numbers out of physical range', () => {
   it('answers 422 naming the line for a 400-digit minute', async () => {
     const run = await newRun();
     const csv = `minute,celsius\n0,100\n${'9'.repeat(400)},121\n`;
@@ -157,14 +158,7 @@ describe('multipart bodies that cannot be read', () => {
   }
 
   it('a cook run log answers 400 naming file for a body with no boundary', async () => {
-    const run = (
-      await sendAs(supervisor, 'post', '/api/cook-runs', {
-        code: uniqueName('CR'),
-        cookedOn: '2026-03-02',
-        minutesAtPressure: 90,
-        container: '1 L jar',
-      })
-    ).body as { id: number };
+    const run = await newRun();
     const res = await supervisor.agent
       .post(`/api/cook-runs/${run.id}/readings`)
       .set('X-CSRF-Token', supervisor.token())
