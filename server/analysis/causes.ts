@@ -7,7 +7,7 @@ import type { CombinationRow } from './analysis.repository';
 import { confoundedLevels, detectionsOf, indexLevels, readAllDetections } from './cause-levels';
 import { hintFor } from './hints';
 import { selectLeads, type Candidate } from './lead-selection';
-import { adjustedRisk, countByStrata, sameJars, type Cells, type LevelRef } from './lead-strata';
+import { adjustedRisk, sameJars, type Cells, type LevelRef, type StrataCounts } from './lead-strata';
 
 export { CONFOUNDED_SHARE } from './cause-levels';
 
@@ -128,15 +128,15 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
       refs.push({ fi, id: i });
     }
   });
-  const refOf = new Map(rows.map((r, i) => [r, refs[i]!]));
+  // Rows are sorted below; this copy keeps each row's place beside its ref for the few rows described.
+  const created = rows.slice();
   const q = bhAdjust(rows.map((r) => r.pValue));
   rows.forEach((r, i) => (r.qValue = q[i] ?? 1));
 
   const candidates: Candidate[] = [];
-  rows.forEach((r, i) => faresWorse(r) && candidates.push({ ...refs[i]!, name: r.level }));
-  const leads = selectLeads(cells, candidates);
+  rows.forEach((r, i) => faresWorse(r) && candidates.push({ fi: refs[i]!.fi, id: refs[i]!.id, name: r.level }));
+  const { leads, counts } = selectLeads(cells, candidates);
   const named = (l: LevelRef): FactorLevel => ({ factor: factors[l.fi]!, level: levels[l.fi]!.names[l.id]! });
-  const counts = countByStrata(cells, leads);
   const all = counts.strata - 1;
   const leadNames = leads.map(named);
   // Rows adjusted for the same leads share one list of them.
@@ -150,6 +150,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
     return given;
   };
   const leadRows: CauseRow[] = [];
+  const sameJarsOfLead: FactorLevel[][] = leads.map(() => []);
   rows.forEach((row, i) => {
     const ref = refs[i]!;
     const leadIndex = leads.findIndex((l) => l.fi === ref.fi && l.id === ref.id);
@@ -159,6 +160,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
       if (leadIndex < 0 && sameJars(counts, cells, ref, lead, k)) {
         keep &= ~(1 << k);
         row.sameJarsAs.push(leadNames[k]!);
+        sameJarsOfLead[k]!.push({ factor: row.factor, level: row.level });
       }
     });
     row.adjusted = adjustedFigures(counts, ref, keep, givenFor);
@@ -174,7 +176,7 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
   };
   const describe = (shown: CauseRow[]) => {
     for (const r of shown) {
-      const ref = refOf.get(r)!;
+      const ref = refs[created.indexOf(r)]!;
       const d = detectionsOf(levels[ref.fi]!, ref.id, det, buffer);
       r.contaminants = d.contaminants;
       r.medianDaysToDetection = d.medianDays;
@@ -190,16 +192,14 @@ export function buildCauses(combos: CombinationRow[], minJars: number): Causes {
     leads: leads.map((l, k) => ({
       ...named(l),
       row: leadRows[k]!,
-      sameJars: rows
-        .filter((r) => r.sameJarsAs.some((s) => s.factor === factors[l.fi] && s.level === levels[l.fi]!.names[l.id]))
-        .map((r) => ({ factor: r.factor, level: r.level })),
+      sameJars: sameJarsOfLead[k]!,
     })),
     rows: rows.sort(compareCauses),
   };
 }
 
 function adjustedFigures(
-  counts: ReturnType<typeof countByStrata>,
+  counts: StrataCounts,
   ref: LevelRef,
   keep: number,
   givenFor: (keep: number) => FactorLevel[],

@@ -1,4 +1,4 @@
-import { countByStrata, sameJars, adjustedRisk, type Cells, type LevelRef } from './lead-strata';
+import { countByStrata, sameJars, adjustedRisk, type Cells, type LevelRef, type StrataCounts } from './lead-strata';
 
 export const MAX_LEADS = 5;
 export const ALPHA = 0.05;
@@ -17,10 +17,10 @@ const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
  * that round). The eligible one with the smallest p is chosen (ties: larger adjusted relative risk,
  * then factor order, then level). One pass over the cells per round.
  */
-export function selectLeads(cells: Cells, candidates: Candidate[]): LevelRef[] {
+export function selectLeads(cells: Cells, candidates: Candidate[]): { leads: LevelRef[]; counts: StrataCounts } {
   const chosen: Candidate[] = [];
+  let counts = countByStrata(cells, chosen);
   while (chosen.length < MAX_LEADS) {
-    const counts = countByStrata(cells, chosen);
     const keepAll = counts.strata - 1;
     const open = candidates.filter(
       (c) => !chosen.includes(c) && !chosen.some((lead, k) => sameJars(counts, cells, c, lead, k)),
@@ -41,6 +41,8 @@ export function selectLeads(cells: Cells, candidates: Candidate[]): LevelRef[] {
     }
     if (!best) break;
     chosen.push(best.c);
+    // Counted here for the next round, or for the caller's figures once no round follows.
+    counts = countByStrata(cells, chosen);
   }
-  return chosen;
+  return { leads: chosen, counts };
 }

@@ -19,14 +19,15 @@ export interface Cells {
 }
 
 /**
- * Settled and contaminated jars per level per stratum, and per factor per stratum (over the jars that
- * record the factor, the level's rest included). A jar's stratum is its membership pattern in the
- * leads: bit k set when it belongs to lead k. One pass over the cells.
+ * Each combination's stratum, its membership pattern in the leads (bit k set when it belongs to lead k),
+ * and per factor the settled and contaminated jars of each stratum over the combinations that record the
+ * factor. A level's own strata are summed from its combinations only when asked (strataOf), so a round
+ * costs one pass over the cells plus the levels it tests, not every level of every factor.
  */
 export interface StrataCounts {
   strata: number;
-  levelJars: Float64Array[];
-  levelContaminated: Float64Array[];
+  cells: Cells;
+  stratumOf: Int32Array;
   totalJars: Float64Array[];
   totalContaminated: Float64Array[];
 }
@@ -34,29 +35,37 @@ export interface StrataCounts {
 export function countByStrata(cells: Cells, leads: LevelRef[]): StrataCounts {
   const S = 1 << leads.length;
   const { levels, levelIdx, settled, contaminated } = cells;
-  const out: StrataCounts = {
-    strata: S,
-    levelJars: levels.map((l) => new Float64Array(l.names.length * S)),
-    levelContaminated: levels.map((l) => new Float64Array(l.names.length * S)),
-    totalJars: levels.map(() => new Float64Array(S)),
-    totalContaminated: levels.map(() => new Float64Array(S)),
-  };
+  const stratumOf = new Int32Array(settled.length);
+  for (let k = 0; k < leads.length; k++) {
+    const lead = levels[leads[k]!.fi]!;
+    const id = leads[k]!.id;
+    for (let m = lead.start[id]!; m < lead.start[id + 1]!; m++) stratumOf[lead.members[m]!]! |= 1 << k;
+  }
+  // Every combination per stratum, less, factor by factor, the few that do not record the factor.
+  const allJars = new Float64Array(S);
+  const allContaminated = new Float64Array(S);
+  const totalJars = levels.map(() => new Float64Array(S));
+  const totalContaminated = levels.map(() => new Float64Array(S));
   for (let ci = 0; ci < settled.length; ci++) {
     const n = settled[ci]!;
     if (n === 0) continue;
     const x = contaminated[ci]!;
-    let s = 0;
-    for (let k = 0; k < leads.length; k++) if (levelIdx[ci * F + leads[k]!.fi] === leads[k]!.id) s |= 1 << k;
+    const s = stratumOf[ci]!;
+    allJars[s]! += n;
+    allContaminated[s]! += x;
     for (let fi = 0; fi < F; fi++) {
-      const id = levelIdx[ci * F + fi]!;
-      if (id < 0) continue;
-      out.levelJars[fi]![id * S + s]! += n;
-      out.levelContaminated[fi]![id * S + s]! += x;
-      out.totalJars[fi]![s]! += n;
-      out.totalContaminated[fi]![s]! += x;
+      if (levelIdx[ci * F + fi]! >= 0) continue;
+      totalJars[fi]![s]! -= n;
+      totalContaminated[fi]![s]! -= x;
     }
   }
-  return out;
+  for (let fi = 0; fi < F; fi++) {
+    for (let s = 0; s < S; s++) {
+      totalJars[fi]![s]! += allJars[s]!;
+      totalContaminated[fi]![s]! += allContaminated[s]!;
+    }
+  }
+  return { strata: S, cells, stratumOf, totalJars, totalContaminated };
 }
 
 // Scratch strata for one level at a time: at most 2^5 strata, reused so the passes allocate nothing.
@@ -76,19 +85,25 @@ export function strataOf(c: StrataCounts, level: LevelRef, keep: number): Strata
   const { a, n1, c: rest, n0 } = scratch;
   a.fill(0, 0, c.strata);
   n1.fill(0, 0, c.strata);
-  rest.fill(0, 0, c.strata);
-  n0.fill(0, 0, c.strata);
-  const base = level.id * c.strata;
-  const lj = c.levelJars[level.fi]!;
-  const lc = c.levelContaminated[level.fi]!;
+  const { settled, contaminated, levels } = c.cells;
+  const l = levels[level.fi]!;
+  for (let m = l.start[level.id]!; m < l.start[level.id + 1]!; m++) {
+    const ci = l.members[m]!;
+    const t = c.stratumOf[ci]! & keep;
+    a[t]! += contaminated[ci]!;
+    n1[t]! += settled[ci]!;
+  }
   const tj = c.totalJars[level.fi]!;
   const tc = c.totalContaminated[level.fi]!;
+  rest.fill(0, 0, c.strata);
+  n0.fill(0, 0, c.strata);
   for (let s = 0; s < c.strata; s++) {
-    const t = s & keep;
-    a[t]! += lc[base + s]!;
-    n1[t]! += lj[base + s]!;
-    rest[t]! += tc[s]! - lc[base + s]!;
-    n0[t]! += tj[s]! - lj[base + s]!;
+    rest[s & keep]! += tc[s]!;
+    n0[s & keep]! += tj[s]!;
+  }
+  for (let s = 0; s < c.strata; s++) {
+    rest[s]! -= a[s]!;
+    n0[s]! -= n1[s]!;
   }
   scratch.count = c.strata;
   return scratch;
@@ -101,8 +116,11 @@ export function adjustedRisk(c: StrataCounts, level: LevelRef, keep: number): Ma
 /** Settled jars of the level that also belong to lead k (bit k of the strata). */
 export function overlap(c: StrataCounts, level: LevelRef, k: number): number {
   let n = 0;
-  const base = level.id * c.strata;
-  for (let s = 0; s < c.strata; s++) if (s & (1 << k)) n += c.levelJars[level.fi]![base + s]!;
+  const l = c.cells.levels[level.fi]!;
+  for (let m = l.start[level.id]!; m < l.start[level.id + 1]!; m++) {
+    const ci = l.members[m]!;
+    if (c.stratumOf[ci]! & (1 << k)) n += c.cells.settled[ci]!;
+  }
   return n;
 }
 
