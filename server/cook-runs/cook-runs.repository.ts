@@ -1,9 +1,10 @@
-import type { EntityManager, SelectQueryBuilder } from 'typeorm';
+import type { EntityManager, QueryDeepPartialEntity, SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { CookRunFilters, CookRunListQuery } from '../../shared/schemas/cook-runs';
 import type { CookRule } from '../../shared/stats/cook-verdict';
 import type { TemperatureSample } from '../../shared/stats/lethality';
 import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
+import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { CookRunReading } from './cook-run-reading.entity';
 import { CookRun } from './cook-run.entity';
@@ -55,6 +56,9 @@ function filtered(f: CookRunFilters, rule: CookRule): SelectQueryBuilder<CookRun
 export const cookRunsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { id }),
   findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { code }),
+  findByCodes: (m: EntityManager, codes: string[]) =>
+    findByValues(m, CookRun, 'code', codes, { id: true, code: true, minutesAtPressure: true }),
+  insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<CookRun>[]) => insertMany(m, CookRun, rows),
 
   list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], number]> => pageSorted(filtered(q, rule), q, sort),
   all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, rule: CookRule) =>

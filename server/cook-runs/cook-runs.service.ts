@@ -15,9 +15,10 @@ import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { localDate } from '../core/local-time';
 import { pageResult } from '../core/paging';
+import { assertNewCodes } from '../core/new-codes';
 import { dataSource } from '../db/data-source';
 import { getLabSettings } from '../settings/settings.service';
-import { noOperator, resolveOperator } from '../users/users.service';
+import { noOperator, resolveOperator, type OperatorFields } from '../users/users.service';
 import { estimatedF0 } from './cook-run-lethality';
 import { CookRun } from './cook-run.entity';
 import { cookRunsRepository } from './cook-runs.repository';
@@ -55,54 +56,74 @@ export const firstCookRunCode = 'CR-0001';
 
 export const suggestCookRunCode = () => suggestCode(CookRun, firstCookRunCode);
 
+const codeTaken = (code: string) =>
+  conflict(`Cook run ${code} already exists.`, [{ path: 'code', message: 'is already used by another cook run' }]);
+
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
   const clash = await cookRunsRepository.findByCode(code, m);
-  if (clash && clash.id !== exceptId) {
-    throw conflict(`Cook run ${code} already exists.`, [
-      { path: 'code', message: 'is already used by another cook run' },
-    ]);
-  }
+  if (clash && clash.id !== exceptId) throw codeTaken(code);
 }
 
-/** Inside the caller's transaction, so other modules (the history import) create runs the same way. */
-export async function insertCookRun(m: EntityManager, actor: Actor, input: CreateCookRunValues): Promise<CookRun> {
-  await assertCodeFree(m, input.code);
+/** A run as the register takes it, typed on the screen or read from a history file (code and minutes only). */
+export type NewCookRun = Pick<CreateCookRunValues, 'code' | 'minutesAtPressure'> &
+  Partial<Omit<CreateCookRunValues, 'code' | 'minutesAtPressure'>>;
+
+function cookRunRow(input: NewCookRun, operator: OperatorFields | null): Partial<CookRun> {
   const startedAt = input.startedAt ? new Date(input.startedAt) : null;
   const cycle = {
     minutesAtPressure: input.minutesAtPressure,
     gaugeKPa: input.gaugeKPa ?? null,
-    altitudeM: input.altitudeM,
+    altitudeM: input.altitudeM ?? 0,
   };
-  const run = await m.save(
-    m.create(CookRun, {
-      code: input.code,
-      vessel: input.vessel || null,
-      startedAt,
-      cookedOn: input.cookedOn ?? (startedAt ? localDate(startedAt) : null),
-      ...cycle,
-      ventingMinutes: input.ventingMinutes ?? null,
-      container: input.container,
-      loadCount: input.loadCount ?? null,
-      ...((await resolveOperator(m, input)) ?? noOperator),
-      f0: estimatedF0(cycle),
-      f0Source: 'estimate',
-      notes: input.notes || null,
-    }),
-  );
-  await recordAudit(m, actor, [
-    {
-      action: 'create',
-      recordType: 'cook-run',
-      recordId: run.id,
-      newValue: { code: run.code, minutesAtPressure: run.minutesAtPressure },
-    },
-  ]);
-  return run;
+  return {
+    code: input.code,
+    vessel: input.vessel || null,
+    startedAt,
+    cookedOn: input.cookedOn ?? (startedAt ? localDate(startedAt) : null),
+    ...cycle,
+    ventingMinutes: input.ventingMinutes ?? null,
+    container: input.container ?? null,
+    loadCount: input.loadCount ?? null,
+    ...(operator ?? noOperator),
+    f0: estimatedF0(cycle),
+    f0Source: 'estimate',
+    notes: input.notes || null,
+  };
 }
 
+/**
+ * Inside the caller's transaction. The screen makes one run and the history import many, by the same
+ * rules: codes not yet used, the F0 estimate from the cycle, an audit row for each run.
+ */
+export async function insertCookRuns(m: EntityManager, actor: Actor, inputs: NewCookRun[]): Promise<number[]> {
+  if (inputs.length === 0) return [];
+  await assertNewCodes(
+    inputs.map((i) => i.code),
+    (codes) => cookRunsRepository.findByCodes(m, codes),
+    codeTaken,
+  );
+  const rows: Partial<CookRun>[] = [];
+  for (const input of inputs) rows.push(cookRunRow(input, await resolveOperator(m, input)));
+  const ids = await cookRunsRepository.insertMany(m, rows);
+  await recordAudit(
+    m,
+    actor,
+    rows.map((r, i) => ({
+      action: 'create',
+      recordType: 'cook-run',
+      recordId: ids[i]!,
+      newValue: { code: r.code, minutesAtPressure: r.minutesAtPressure },
+    })),
+  );
+  return ids;
+}
+
+/** The cook runs already recorded under any of the codes (compared as the column's collation does). */
+export const cookRunsByCodes = (m: EntityManager, codes: string[]) => cookRunsRepository.findByCodes(m, codes);
+
 export async function createCookRun(actor: Actor, input: CreateCookRunValues): Promise<CookRunDetailDto> {
-  const run = await dataSource.transaction((m) => insertCookRun(m, actor, input));
-  return getCookRun(run.id);
+  const [id] = await dataSource.transaction((m) => insertCookRuns(m, actor, [input]));
+  return getCookRun(id!);
 }
 
 export async function updateCookRun(actor: Actor, id: number, input: UpdateCookRunInput): Promise<CookRunDetailDto> {

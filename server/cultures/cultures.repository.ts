@@ -1,7 +1,8 @@
-import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { In, type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { CultureFilters, CultureListQuery } from '../../shared/schemas/cultures';
 import { allSorted, pageSorted, whereContains, type SortSpec } from '../core/paging';
+import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { Photo } from '../photos/photo.entity';
 import { AgarTest } from './agar-test.entity';
@@ -22,6 +23,9 @@ function filtered(f: CultureFilters): SelectQueryBuilder<Culture> {
 export const culturesRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Culture, { id }),
   findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(Culture, { code }),
+  findByCodes: (m: EntityManager, codes: string[]) =>
+    findByValues(m, Culture, 'code', codes, { id: true, code: true, state: true }),
+  insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Culture>[]) => insertMany(m, Culture, rows),
   byIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(Culture, { id: In(ids) }) : []),
   children: (id: number) =>
     dataSource.manager.find(Culture, { where: { parentCultureId: id }, order: { code: 'ASC' } }),

@@ -14,6 +14,7 @@ import {
 import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
+import { assertNewCodes } from '../core/new-codes';
 import { dataSource } from '../db/data-source';
 import { AgarTest } from './agar-test.entity';
 import { Culture } from './culture.entity';
@@ -65,13 +66,12 @@ export async function cultureUseWarning(
   return culture.state === 'released' ? null : `Culture ${culture.code} is ${culture.state}, not released.`;
 }
 
+const codeTaken = (code: string) =>
+  conflict(`Culture ${code} already exists.`, [{ path: 'code', message: 'is already used by another culture' }]);
+
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
   const clash = await culturesRepository.findByCode(code, m);
-  if (clash && clash.id !== exceptId) {
-    throw conflict(`Culture ${code} already exists.`, [
-      { path: 'code', message: 'is already used by another culture' },
-    ]);
-  }
+  if (clash && clash.id !== exceptId) throw codeTaken(code);
 }
 
 async function findParent(m: EntityManager, parentId: number): Promise<Culture> {
@@ -83,38 +83,62 @@ async function findParent(m: EntityManager, parentId: number): Promise<Culture> 
   return parent;
 }
 
-/** Inside the caller's transaction, so the history import creates cultures the same way. */
-export async function insertCulture(m: EntityManager, actor: Actor, input: CreateCultureInput): Promise<Culture> {
-  await assertCodeFree(m, input.code);
-  const parent = input.parentCultureId ? await findParent(m, input.parentCultureId) : null;
-  const generation = input.generation ?? (parent && parent.generation !== null ? parent.generation + 1 : null);
-  const culture = await m.save(
-    m.create(Culture, {
+/** A culture as the register takes it, typed on the screen or named in a history file (code only). */
+export type NewCulture = Pick<CreateCultureInput, 'code'> & Partial<Omit<CreateCultureInput, 'code'>>;
+
+/**
+ * Inside the caller's transaction. The screen makes one culture and the history import many, by the
+ * same rules: codes not yet used, a recorded parent and the generation after it, an audit row each.
+ * A new culture waits in quarantine until tested; one named in a history file had already been used to
+ * inoculate jars, so the import records it as released.
+ */
+export async function insertCultures(
+  m: EntityManager,
+  actor: Actor,
+  inputs: NewCulture[],
+  state: 'quarantined' | 'released' = 'quarantined',
+): Promise<number[]> {
+  if (inputs.length === 0) return [];
+  await assertNewCodes(
+    inputs.map((i) => i.code),
+    (codes) => culturesRepository.findByCodes(m, codes),
+    codeTaken,
+  );
+  const rows: Partial<Culture>[] = [];
+  for (const input of inputs) {
+    const parent = input.parentCultureId ? await findParent(m, input.parentCultureId) : null;
+    rows.push({
       code: input.code,
       species: input.species || null,
       strain: input.strain || null,
       preparedOn: input.preparedOn ?? null,
-      generation,
+      generation: input.generation ?? (parent && parent.generation !== null ? parent.generation + 1 : null),
       volumeMl: input.volumeMl ?? null,
       parentCultureId: parent?.id ?? null,
-      state: 'quarantined',
+      state,
       notes: input.notes || null,
-    }),
-  );
-  await recordAudit(m, actor, [
-    {
+    });
+  }
+  const ids = await culturesRepository.insertMany(m, rows);
+  await recordAudit(
+    m,
+    actor,
+    rows.map((r, i) => ({
       action: 'create',
       recordType: 'culture',
-      recordId: culture.id,
-      newValue: { code: culture.code, state: culture.state },
-    },
-  ]);
-  return culture;
+      recordId: ids[i]!,
+      newValue: { code: r.code, state: r.state },
+    })),
+  );
+  return ids;
 }
 
+/** The cultures already recorded under any of the codes (compared as the column's collation does). */
+export const culturesByCodes = (m: EntityManager, codes: string[]) => culturesRepository.findByCodes(m, codes);
+
 export async function createCulture(actor: Actor, input: CreateCultureInput): Promise<CultureDetailDto> {
-  const culture = await dataSource.transaction((m) => insertCulture(m, actor, input));
-  return getCulture(culture.id);
+  const [id] = await dataSource.transaction((m) => insertCultures(m, actor, [input]));
+  return getCulture(id!);
 }
 
 export async function updateCulture(actor: Actor, id: number, input: UpdateCultureInput): Promise<CultureDetailDto> {

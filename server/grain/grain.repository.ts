@@ -23,7 +23,7 @@ const batchSortable: Record<(typeof prepBatchSortFields)[number], string> = {
 };
 
 export const grainRepository = {
-  listGrains: () => dataSource.manager.find(Grain, { order: { name: 'ASC' } }),
+  listGrains: (m: EntityManager = dataSource.manager) => m.find(Grain, { order: { name: 'ASC' } }),
   findGrainById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { id }),
   findGrainByName: (name: string, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { name }),
   grainsByIds: async (ids: number[], m: EntityManager = dataSource.manager) =>

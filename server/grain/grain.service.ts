@@ -23,8 +23,8 @@ import { PrepBatch } from './prep-batch.entity';
 
 const byId = <T extends { id: number }>(rows: T[]) => new Map(rows.map((r) => [r.id, r]));
 
-export async function listGrains(): Promise<GrainDto[]> {
-  return (await grainRepository.listGrains()).map(toGrainDto);
+export async function listGrains(m?: EntityManager): Promise<GrainDto[]> {
+  return (await grainRepository.listGrains(m)).map(toGrainDto);
 }
 
 export async function createGrain(actor: Actor, input: CreateGrainInput): Promise<GrainDto> {

@@ -1,7 +1,12 @@
 import type { EntityManager } from 'typeorm';
 import { historyColumns, type ImportError } from '../../shared/schemas/imports';
 import { matchKey, type HistoryRow } from './history-rows';
-import { importsRepository } from './imports.repository';
+import { cookRunsByCodes } from '../cook-runs/cook-runs.service';
+import { culturesByCodes } from '../cultures/cultures.service';
+import { listGrains } from '../grain/grain.service';
+import { storedJarLabels } from '../jars/history-jars';
+import { sessionsByCodes } from '../sessions/sessions.service';
+import { accountNames } from '../users/users.service';
 
 export interface Operator {
   userId: number | null;
@@ -26,8 +31,8 @@ export interface HistoryContext {
 const distinct = (values: string[]) => [...new Map(values.filter(Boolean).map((v) => [matchKey(v), v])).values()];
 
 export async function loadContext(m: EntityManager, rows: HistoryRow[]): Promise<HistoryContext> {
-  const grains = await importsRepository.grains(m);
-  const users = await importsRepository.users(m);
+  const grains = await listGrains(m);
+  const users = await accountNames(m);
   const usersByKey = new Map<string, { id: number; displayName: string }>();
   // A username wins over someone else's display name that happens to read the same.
   for (const u of users) usersByKey.set(matchKey(u.displayName), u);
@@ -36,9 +41,7 @@ export async function loadContext(m: EntityManager, rows: HistoryRow[]): Promise
     grainIds: new Map(grains.map((g) => [matchKey(g.name), g.id])),
     grainList: grains.map((g) => g.name).join(', '),
     usersByKey,
-    storedLabels: new Set(
-      (await importsRepository.storedLabels(m, distinct(rows.map((r) => r.label)))).map((j) => matchKey(j.label)),
-    ),
+    storedLabels: new Set((await storedJarLabels(m, distinct(rows.map((r) => r.label)))).map(matchKey)),
     ...(await loadCodes(m, rows)),
   };
 }
@@ -48,9 +51,9 @@ const byKey = <T extends { code: string }>(items: T[]) => new Map(items.map((i) 
 /** The stored cook runs, sessions and cultures the file names, keyed like the collation compares. */
 export async function loadCodes(m: EntityManager, rows: HistoryRow[]) {
   return {
-    cookRuns: byKey(await importsRepository.cookRuns(m, distinct(rows.map((r) => r.cookRun)))),
-    sessions: byKey(await importsRepository.sessions(m, distinct(rows.map((r) => r.session)))),
-    cultures: byKey(await importsRepository.cultures(m, distinct(rows.map((r) => r.culture)))),
+    cookRuns: byKey(await cookRunsByCodes(m, distinct(rows.map((r) => r.cookRun)))),
+    sessions: byKey(await sessionsByCodes(m, distinct(rows.map((r) => r.session)))),
+    cultures: byKey(await culturesByCodes(m, distinct(rows.map((r) => r.culture)))),
   };
 }
 

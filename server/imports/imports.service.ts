@@ -5,12 +5,16 @@ import { recordAudit, type Actor } from '../audit/audit.service';
 import { config } from '../core/config';
 import { localDate } from '../core/local-time';
 import { dataSource } from '../db/data-source';
+import { insertCookRuns } from '../cook-runs/cook-runs.service';
+import { insertCultures } from '../cultures/cultures.service';
+import { insertHistoryIncidents, type HistoryIncident } from '../incidents/history-incidents';
+import { insertHistoryJars, type HistoryJar } from '../jars/history-jars';
+import { insertSessions } from '../sessions/sessions.service';
 import { getLabSettings } from '../settings/settings.service';
 import { staffForNames } from '../staff/staff.service';
 import { checkRows, loadCodes, loadContext, resolveOperator, sortErrors, type HistoryContext } from './history-checks';
 import { parseHistoryCsv } from './history-csv';
 import { isBlankRecord, mapHeader, matchKey, readRow, type HistoryRow } from './history-rows';
-import { importsRepository, type IncidentInsert, type JarInsert } from './imports.repository';
 import { daysBetween, labNoon, sqlDateTime } from './lab-noon';
 
 export type HistoryImportOutcome = { ok: true; result: ImportResult } | { ok: false; errors: ImportError[] };
@@ -143,9 +147,11 @@ async function writeRows(
     ctx.cultures,
     (r) => ({ code: r.culture }),
   );
-  await importsRepository.insertCookRuns(m, newCookRuns);
-  await importsRepository.insertSessions(m, await withStaff(m, newSessions));
-  await importsRepository.insertCultures(m, newCultures);
+  // Through the modules that own these records, so their rules (free codes, the F0 estimate, an audit
+  // row per record) hold for imported rows as for rows made on a screen.
+  await insertCookRuns(m, actor, newCookRuns);
+  await insertSessions(m, actor, await withStaff(m, newSessions), { history: true });
+  await insertCultures(m, actor, newCultures, 'released');
 
   const ids = await loadCodes(m, rows);
   const idOf = (map: Map<string, { id: number }>, code: string) => {
@@ -164,7 +170,7 @@ async function writeRows(
     return at;
   };
 
-  const jars: JarInsert[] = rows.map((r) => ({
+  const jars: HistoryJar[] = rows.map((r) => ({
     label: r.label,
     grainId: ctx.grainIds.get(matchKey(r.grain)) ?? 0,
     cookRunId: idOf(ids.cookRuns, r.cookRun),
@@ -180,13 +186,16 @@ async function writeRows(
     inoculatedOn: r.inoculatedOn,
     endedOn: r.outcome === 'contaminated' ? r.foundOn : null,
   }));
-  const jarIds = await importsRepository.insertJars(m, jars);
+  const jarIds = await insertHistoryJars(m, jars);
 
   const contaminated = rows.filter((r) => r.outcome === 'contaminated');
-  const incidents: IncidentInsert[] = contaminated.map((r) => {
+  const incidents: HistoryIncident[] = contaminated.map((r) => {
     const op = resolveOperator(ctx, r.operator);
     const foundOn = r.foundOn ?? r.inoculatedOn;
+    const jarId = jarIds.get(r.label);
+    if (jarId === undefined) throw new Error(`jar ${r.label} was not found after insert`);
     return {
+      jarId,
       foundAt: noonOf(foundOn),
       foundOn,
       foundById: op.userId,
@@ -195,16 +204,7 @@ async function writeRows(
       createdById: actor.id,
     };
   });
-  const incidentIds = await importsRepository.insertIncidents(m, incidents);
-  await importsRepository.linkIncidentJars(
-    m,
-    contaminated.map((r, i) => {
-      const jarId = jarIds.get(r.label);
-      const incidentId = incidentIds[i];
-      if (jarId === undefined || incidentId === undefined) throw new Error(`jar ${r.label} was not found after insert`);
-      return { incidentId, jarId };
-    }),
-  );
+  await insertHistoryIncidents(m, incidents);
   return {
     jars: jars.length,
     incidents: incidents.length,

@@ -1,7 +1,8 @@
-import { type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { SessionFilters, SessionListQuery } from '../../shared/schemas/sessions';
 import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
+import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { ProcedureStep } from '../procedures/procedure-step.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
@@ -25,6 +26,16 @@ function filtered(f: SessionFilters): SelectQueryBuilder<InoculationSession> {
 export const sessionsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(InoculationSession, { id }),
   findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(InoculationSession, { code }),
+  findByCodes: (m: EntityManager, codes: string[]) =>
+    findByValues(m, InoculationSession, 'code', codes, {
+      id: true,
+      code: true,
+      heldOn: true,
+      operatorId: true,
+      operatorName: true,
+    }),
+  insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<InoculationSession>[]) =>
+    insertMany(m, InoculationSession, rows),
   findVersion: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(ProcedureVersion, { id }),
   steps: (versionId: number, m: EntityManager = dataSource.manager) =>
     m.find(ProcedureStep, { where: { versionId }, order: { position: 'ASC' } }),

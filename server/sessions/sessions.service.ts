@@ -11,8 +11,9 @@ import { patchWithAudit, recordAudit, type Actor, type AuditEntry } from '../aud
 import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
+import { assertNewCodes } from '../core/new-codes';
 import { dataSource } from '../db/data-source';
-import { noOperator, resolveOperator } from '../users/users.service';
+import { noOperator, resolveOperator, type OperatorFields } from '../users/users.service';
 import { InoculationSession } from './inoculation-session.entity';
 import { sessionsRepository } from './sessions.repository';
 import { toChecklist, toSessionDto } from './sessions.mapper';
@@ -53,13 +54,12 @@ export const firstSessionCode = 'IS-0001';
 
 export const suggestSessionCode = () => suggestCode(InoculationSession, firstSessionCode);
 
+const codeTaken = (code: string) =>
+  conflict(`Session ${code} already exists.`, [{ path: 'code', message: 'is already used by another session' }]);
+
 async function assertCodeFree(m: EntityManager, code: string, exceptId?: number) {
   const clash = await sessionsRepository.findByCode(code, m);
-  if (clash && clash.id !== exceptId) {
-    throw conflict(`Session ${code} already exists.`, [
-      { path: 'code', message: 'is already used by another session' },
-    ]);
-  }
+  if (clash && clash.id !== exceptId) throw codeTaken(code);
 }
 
 /** Step ids of the version, after checking that it exists. */
@@ -84,41 +84,77 @@ function assertStepsBelong(checklist: Check[], stepIds: Set<number>) {
 const sortedChecks = (checks: Check[]) =>
   [...checks].sort((a, b) => a.stepId - b.stepId).map((c) => ({ stepId: c.stepId, done: c.done }));
 
-/** Inside the caller's transaction, so the history import creates sessions the same way. */
-export async function insertSession(
+/**
+ * A session as the register takes it, typed on the screen or read from a history file; a history file's
+ * operator without an account comes linked to the lab's staff list (staffId).
+ */
+export type NewSession = Pick<CreateSessionInput, 'code' | 'heldOn'> &
+  Partial<Omit<CreateSessionInput, 'code' | 'heldOn'>> & { staffId?: number | null };
+
+/**
+ * Inside the caller's transaction. The screen makes one session and the history import many, by the
+ * same rules: codes not yet used, an active account or a typed name for the operator, checklist steps
+ * of the chosen procedure version, an audit row each. `history`: the rows come from a history file.
+ */
+export async function insertSessions(
   m: EntityManager,
   actor: Actor,
-  input: CreateSessionInput,
-): Promise<InoculationSession> {
-  await assertCodeFree(m, input.code);
-  const checklist = input.checklist ?? [];
-  if (input.procedureVersionId) assertStepsBelong(checklist, await versionStepIds(m, input.procedureVersionId));
-  const session = await m.save(
-    m.create(InoculationSession, {
+  inputs: NewSession[],
+  { history = false } = {},
+): Promise<number[]> {
+  if (inputs.length === 0) return [];
+  // A history file may name an operator whose account has since been closed; a new session may not.
+  const operators = new Map<number, OperatorFields | null>();
+  const operatorOf = async (input: NewSession) => {
+    if (!input.operatorId) return resolveOperator(m, input);
+    if (!operators.has(input.operatorId)) {
+      operators.set(input.operatorId, await resolveOperator(m, input, { closedAccounts: history }));
+    }
+    return operators.get(input.operatorId)!;
+  };
+  await assertNewCodes(
+    inputs.map((i) => i.code),
+    (codes) => sessionsRepository.findByCodes(m, codes),
+    codeTaken,
+  );
+  const rows: Partial<InoculationSession>[] = [];
+  for (const input of inputs) {
+    const checklist = input.checklist ?? [];
+    if (input.procedureVersionId) assertStepsBelong(checklist, await versionStepIds(m, input.procedureVersionId));
+    rows.push({
       code: input.code,
       heldOn: input.heldOn,
       startedAt: input.startedAt ? new Date(input.startedAt) : null,
-      ...((await resolveOperator(m, input)) ?? noOperator),
-      workspace: input.workspace,
+      ...((await operatorOf(input)) ?? noOperator),
+      staffId: input.staffId ?? null,
+      workspace: input.workspace ?? null,
       procedureVersionId: input.procedureVersionId ?? null,
       notes: input.notes || null,
-    }),
-  );
-  await sessionsRepository.replaceChecks(m, session.id, checklist);
-  await recordAudit(m, actor, [
-    {
+    });
+  }
+  const ids = await sessionsRepository.insertMany(m, rows);
+  for (const [i, input] of inputs.entries()) {
+    if (input.checklist?.length) await sessionsRepository.replaceChecks(m, ids[i]!, input.checklist);
+  }
+  await recordAudit(
+    m,
+    actor,
+    rows.map((r, i) => ({
       action: 'create',
       recordType: 'session',
-      recordId: session.id,
-      newValue: { code: session.code, heldOn: session.heldOn, operator: session.operatorName },
-    },
-  ]);
-  return session;
+      recordId: ids[i]!,
+      newValue: { code: r.code, heldOn: r.heldOn, operator: r.operatorName },
+    })),
+  );
+  return ids;
 }
 
+/** The sessions already recorded under any of the codes (compared as the column's collation does). */
+export const sessionsByCodes = (m: EntityManager, codes: string[]) => sessionsRepository.findByCodes(m, codes);
+
 export async function createSession(actor: Actor, input: CreateSessionInput): Promise<SessionDetailDto> {
-  const session = await dataSource.transaction((m) => insertSession(m, actor, input));
-  return getSession(session.id);
+  const [id] = await dataSource.transaction((m) => insertSessions(m, actor, [input]));
+  return getSession(id!);
 }
 
 export async function updateSession(actor: Actor, id: number, input: UpdateSessionInput): Promise<SessionDetailDto> {

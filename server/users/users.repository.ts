@@ -16,6 +16,7 @@ export const usersRepository = {
   findActive: (id: number, manager: EntityManager = dataSource.manager) =>
     manager.findOneBy(User, { id, active: true }),
   findByUsername: (username: string) => dataSource.manager.findOneBy(User, { username }),
+  accountNames: (m: EntityManager) => m.find(User, { select: { id: true, username: true, displayName: true } }),
   activePeople: () =>
     dataSource.manager.find(User, {
       select: { id: true, displayName: true, role: true },

@@ -25,9 +25,12 @@ export interface OperatorFields {
 export async function resolveOperator(
   m: EntityManager,
   input: { operatorId?: number | null; operatorName?: string | null },
+  { closedAccounts = false } = {},
 ): Promise<OperatorFields | null> {
   if (input.operatorId) {
-    const user = await usersRepository.findActive(input.operatorId, m);
+    const user = closedAccounts
+      ? await usersRepository.findById(input.operatorId, m)
+      : await usersRepository.findActive(input.operatorId, m);
     if (!user)
       throw badRequest('operatorId: no such active user', [{ path: 'operatorId', message: 'is not an active user' }]);
     return { operatorId: user.id, operatorName: user.displayName };
@@ -38,6 +41,9 @@ export async function resolveOperator(
 }
 
 export const noOperator: OperatorFields = { operatorId: null, operatorName: null };
+
+/** Every account's id, username and display name, for matching the names a history file gives. */
+export const accountNames = (m: EntityManager) => usersRepository.accountNames(m);
 
 export async function listPeople(): Promise<PersonDto[]> {
   return (await usersRepository.activePeople()).map((u) => ({ id: u.id, displayName: u.displayName, role: u.role }));
