@@ -109,7 +109,7 @@ async function pageMarks(page: Page) {
       window.jarHeadingAt,
     ].map((t) => (t === undefined ? NaN : Math.round(t))),
   );
-  return { html, script, paint, heading };
+  return { html: html ?? NaN, script: script ?? NaN, paint: paint ?? NaN, heading: heading ?? NaN };
 }
 
 /** A cold load in a fresh context (empty cache, no service worker), with its request timeline. */
