@@ -1,13 +1,34 @@
+import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { compression } from 'vite-plugin-compression2';
 import { VitePWA } from 'vite-plugin-pwa';
-import { defineConfig } from 'vitest/config';
+import { defineConfig, type Plugin } from 'vitest/config';
+
+/**
+ * React Router 7's package exports name only its development build, for every condition (upstream issue
+ * remix-run/react-router#12532); the built app takes its production build, which leaves out the dev warnings.
+ */
+const reactRouterProduction: Plugin = {
+  name: 'react-router-production',
+  apply: 'build',
+  config: () => ({
+    resolve: {
+      alias: [
+        {
+          find: /^react-router$/,
+          replacement: fileURLToPath(new URL('node_modules/react-router/dist/production/index.mjs', import.meta.url)),
+        },
+      ],
+    },
+  }),
+};
 
 const apiPort = process.env.PORT ?? '5180';
 
 export default defineConfig({
   plugins: [
+    reactRouterProduction,
     react(),
     tailwindcss(),
     // Compressed once at build, so a busy server never spends a weak connection's time gzipping on the fly.

@@ -21,6 +21,7 @@ import { grainLotsRouter, grainsRouter, prepBatchesRouter } from './grain/grain.
 import { sessionsRouter } from './sessions/sessions.router';
 import { healthRouter } from './health/health.router';
 import { importsRouter } from './imports/imports.router';
+import { jarPageReads } from './jars/jar-page-reads';
 import { jarsRouter } from './jars/jars.router';
 import { lineageRouter } from './lineage/lineage.router';
 import { mailRouter } from './mail/mail.router';
@@ -37,10 +38,12 @@ import { staffRouter } from './staff/staff.router';
 
 export interface AppDeps {
   sessionStore: SessionStore;
+  /** The built client; config's STATIC_DIR unless given. */
+  staticDir?: string;
 }
 
 /** Builds the app without listening: tests drive it with supertest, main.ts serves it. */
-export function createApp({ sessionStore }: AppDeps): Express {
+export function createApp({ sessionStore, staticDir = config().STATIC_DIR }: AppDeps): Express {
   const c = config();
   const app = express();
   app.disable('x-powered-by');
@@ -67,7 +70,8 @@ export function createApp({ sessionStore }: AppDeps): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
-  api.use(sessionMiddleware(sessionStore));
+  const session = sessionMiddleware(sessionStore);
+  api.use(session);
   // CSRF before authentication: a forged request is refused before anyone's session is looked at.
   api.use(csrfProtection);
   api.use(passport.initialize());
@@ -97,8 +101,9 @@ export function createApp({ sessionStore }: AppDeps): Express {
   api.use((req, _res, next) => next(new AppError(404, 'not-found', `No API route ${req.method} ${req.path}.`)));
   app.use('/api', api);
 
-  const staticDir = path.resolve(c.STATIC_DIR);
-  if (existsSync(path.join(staticDir, 'index.html'))) serveClient(app, staticDir);
+  const clientDir = path.resolve(staticDir);
+  if (existsSync(path.join(clientDir, 'index.html')))
+    serveClient(app, clientDir, { session: [session, passport.initialize(), passport.session()], jar: jarPageReads });
   app.use(errorHandler);
   return app;
 }

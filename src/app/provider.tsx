@@ -5,6 +5,7 @@ import { ErrorFallback } from '../components/errors/error-fallback';
 import { ToastProvider } from '../components/ui/toast';
 import { authQueries } from '../features/auth/api/auth-queries';
 import { createQueryClient } from '../lib/query-client';
+import { seedPageReads } from './page-reads';
 
 export function AppProvider({ children }: { children: ReactNode }) {
   const [queryClient] = useState(() => {
@@ -12,6 +13,7 @@ export function AppProvider({ children }: { children: ReactNode }) {
       // A 401 on any list means the session ended; re-asking "who am I" lets the guard send the user to sign in.
       onUnauthenticated: () => void client.invalidateQueries({ queryKey: authQueries.me().queryKey }),
     });
+    seedPageReads(client);
     return client;
   });
 

@@ -7,12 +7,21 @@ export function setLabTimeZone(timeZone: string | undefined) {
   labTimeZone = timeZone;
 }
 
-const inZone = (options: Intl.DateTimeFormatOptions) =>
-  new Intl.DateTimeFormat(undefined, { ...options, timeZone: labTimeZone });
+// Making a formatter costs far more than using one (a jar's timeline dates dozens of events on a phone's
+// first render), so each locale, zone and option set is made once.
+const formatters = new Map<string, Intl.DateTimeFormat>();
+function formatter(locale: string | undefined, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = JSON.stringify([locale, options]);
+  let made = formatters.get(key);
+  if (!made) formatters.set(key, (made = new Intl.DateTimeFormat(locale, options)));
+  return made;
+}
+
+const inZone = (options: Intl.DateTimeFormatOptions) => formatter(undefined, { ...options, timeZone: labTimeZone });
 
 /** Calendar parts of an instant on the lab's clock. */
 function labParts(date: Date): { year: number; month: number; day: number; hour: number } {
-  const parts = new Intl.DateTimeFormat('en-CA', {
+  const parts = formatter('en-CA', {
     timeZone: labTimeZone,
     year: 'numeric',
     month: '2-digit',
@@ -30,9 +39,7 @@ export function formatDate(value: string | Date): string {
   // A local date (YYYY-MM-DD) is already the lab's calendar day: show it as written, not shifted by a zone.
   if (typeof value === 'string' && dateOnly.test(value)) {
     const d = new Date(`${value}T00:00:00Z`);
-    return Number.isNaN(d.getTime())
-      ? '—'
-      : new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeZone: 'UTC' }).format(d);
+    return Number.isNaN(d.getTime()) ? '—' : formatter(undefined, { dateStyle: 'medium', timeZone: 'UTC' }).format(d);
   }
   const date = typeof value === 'string' ? new Date(value) : value;
   return Number.isNaN(date.getTime()) ? '—' : inZone({ dateStyle: 'medium' }).format(date);

@@ -1,14 +1,14 @@
 import type { Express } from 'express';
 import supertest from 'supertest';
 import { afterAll } from 'vitest';
-import { createApp } from '../../server/app';
+import { createApp, type AppDeps } from '../../server/app';
 import { createSessionStore } from '../../server/auth/session';
 
 /** The real app over the worker's MariaDB; the session store is closed when the file ends. */
-export function createTestApp(): Express {
+export function createTestApp(deps: Omit<AppDeps, 'sessionStore'> = {}): Express {
   const store = createSessionStore();
   afterAll(() => store.close());
-  return createApp({ sessionStore: store });
+  return createApp({ sessionStore: store, ...deps });
 }
 
 export type Agent = ReturnType<typeof supertest.agent>;
