@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 import { logPlacements, type LogPlacement } from '../../shared/stats/cook-verdict';
 
 @Entity({ name: 'cook_runs' })
@@ -41,6 +52,10 @@ export class CookRun {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   operatorId: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'operatorId' })
+  operator?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120, nullable: true })
   operatorName: string | null;

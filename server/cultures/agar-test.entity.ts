@@ -1,4 +1,17 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Culture } from './culture.entity';
+import { Photo } from '../photos/photo.entity';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 @Entity({ name: 'agar_tests' })
 export class AgarTest {
@@ -9,6 +22,10 @@ export class AgarTest {
   @Column({ type: 'int', unsigned: true })
   cultureId: number;
 
+  @ManyToOne(() => Culture, restrict)
+  @JoinColumn({ name: 'cultureId' })
+  culture?: Relation<Culture>;
+
   @Column({ type: 'date' })
   testedOn: string;
 
@@ -18,11 +35,19 @@ export class AgarTest {
   @Column({ type: 'int', unsigned: true, nullable: true })
   photoId: number | null;
 
+  @ManyToOne(() => Photo, restrict)
+  @JoinColumn({ name: 'photoId' })
+  photo?: Relation<Photo>;
+
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   recordedById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'recordedById' })
+  recordedBy?: Relation<User>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;

@@ -3,10 +3,15 @@ import {
   CreateDateColumn,
   Entity,
   Index,
+  JoinColumn,
+  ManyToOne,
   PrimaryGeneratedColumn,
   UpdateDateColumn,
   VersionColumn,
+  type Relation,
 } from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 import {
   causeCategories,
   contaminants,
@@ -39,6 +44,10 @@ export class Incident {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   foundById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'foundById' })
+  foundBy?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120 })
   foundByName: string;
@@ -94,6 +103,10 @@ export class Incident {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   createdById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'createdById' })
+  createdBy?: Relation<User>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;

@@ -1,4 +1,17 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Jar } from './jar.entity';
+import { Photo } from '../photos/photo.entity';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 export const jarEventTypes = ['check', 'shaken', 'moved', 'released', 'hold', 'discarded', 'status'] as const;
 export type JarEventType = (typeof jarEventTypes)[number];
@@ -15,6 +28,10 @@ export class JarEvent {
   @Column({ type: 'int', unsigned: true })
   jarId: number;
 
+  @ManyToOne(() => Jar, restrict)
+  @JoinColumn({ name: 'jarId' })
+  jar?: Relation<Jar>;
+
   @Column({ type: 'enum', enum: jarEventTypes })
   type: JarEventType;
 
@@ -26,6 +43,10 @@ export class JarEvent {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   byUserId: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'byUserId' })
+  byUser?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120 })
   byName: string;
@@ -54,6 +75,10 @@ export class JarEvent {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   photoId: number | null;
+
+  @ManyToOne(() => Photo, restrict)
+  @JoinColumn({ name: 'photoId' })
+  photo?: Relation<Photo>;
 
   @Column({ type: 'text', nullable: true })
   note: string | null;

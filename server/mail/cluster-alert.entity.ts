@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Incident } from '../incidents/incident.entity';
+import { restrict } from '../db/relations';
 
 export const clusterDimensions = ['cookRun', 'culture', 'session'] as const;
 export type ClusterDimension = (typeof clusterDimensions)[number];
@@ -30,6 +41,10 @@ export class ClusterAlert {
 
   @Column({ type: 'int', unsigned: true })
   triggeredByIncidentId: number;
+
+  @ManyToOne(() => Incident, restrict)
+  @JoinColumn({ name: 'triggeredByIncidentId' })
+  triggeredByIncident?: Relation<Incident>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   alertedAt: Date;

@@ -1,4 +1,6 @@
-import { Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { Column, Entity, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn, type Relation } from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 import { mailKinds, type MailKind } from '../../shared/schemas/mail';
 
 /** Absent row = the kind is on: everyone gets every mail meant for their role until they opt out. */
@@ -6,6 +8,10 @@ import { mailKinds, type MailKind } from '../../shared/schemas/mail';
 export class MailPreference {
   @PrimaryColumn({ type: 'int', unsigned: true })
   userId: number;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'userId' })
+  user?: Relation<User>;
 
   @PrimaryColumn({ type: 'enum', enum: mailKinds })
   kind: MailKind;
