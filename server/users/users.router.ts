@@ -5,10 +5,9 @@ import {
   resetPasswordSchema,
   updateUserSchema,
   userListQuerySchema,
-  type UserListQuery,
 } from '../../shared/schemas/users';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { resetPassword } from './password-reset.service';
 import { createUser, listPeople, listUsers, updateUser } from './users.service';
 
@@ -16,7 +15,7 @@ export const usersRouter = Router();
 const admin = requireRole('admin');
 
 usersRouter.get('/', admin, validate({ query: userListQuerySchema }), async (req, res) => {
-  res.json(await listUsers(req.query as unknown as UserListQuery));
+  res.json(await listUsers(validated(req, userListQuerySchema)));
 });
 
 // Every signed-in person may name a colleague (an action's owner); only names and roles are shown.
