@@ -12,6 +12,7 @@ import { Culture } from './culture.entity';
 import { Photo } from '../photos/photo.entity';
 import { User } from '../users/user.entity';
 import { restrict } from '../db/relations';
+import { agarResults, type AgarResult } from '../../shared/enums';
 
 @Entity({ name: 'agar_tests' })
 export class AgarTest {
@@ -29,8 +30,8 @@ export class AgarTest {
   @Column({ type: 'date' })
   testedOn: string;
 
-  @Column({ type: 'enum', enum: ['clean', 'contaminated', 'inconclusive'] })
-  result: 'clean' | 'contaminated' | 'inconclusive';
+  @Column({ type: 'enum', enum: agarResults })
+  result: AgarResult;
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   photoId: number | null;

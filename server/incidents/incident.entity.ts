@@ -15,18 +15,17 @@ import { restrict } from '../db/relations';
 import {
   causeCategories,
   contaminants,
+  incidentSeverities,
   incidentStatuses,
   stagesFound,
   verdicts,
   type CauseCategory,
   type Contaminant,
+  type IncidentSeverity,
   type IncidentStatus,
   type StageFound,
   type Verdict,
 } from '../../shared/enums';
-
-export const severities = ['low', 'medium', 'high'] as const;
-export type Severity = (typeof severities)[number];
 
 /** Never deleted: a mistaken incident is voided with a reason and keeps its history. */
 @Entity({ name: 'incidents' })
@@ -68,8 +67,8 @@ export class Incident {
   @Column({ type: 'varchar', length: 120, nullable: true })
   signTexture: string | null;
 
-  @Column({ type: 'enum', enum: severities, default: 'medium' })
-  severity: Severity;
+  @Column({ type: 'enum', enum: incidentSeverities, default: 'medium' })
+  severity: IncidentSeverity;
 
   @Column({ type: 'boolean', default: false })
   sealed: boolean;

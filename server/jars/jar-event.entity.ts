@@ -12,9 +12,7 @@ import { Jar } from './jar.entity';
 import { Photo } from '../photos/photo.entity';
 import { User } from '../users/user.entity';
 import { restrict } from '../db/relations';
-
-export const jarEventTypes = ['check', 'shaken', 'moved', 'released', 'hold', 'discarded', 'status'] as const;
-export type JarEventType = (typeof jarEventTypes)[number];
+import { jarEventTypes, releasedTargets, type JarEventType, type ReleasedTo } from '../../shared/enums';
 
 /** A jar's life after inoculation; a 'check' carries the colonisation percent. */
 @Entity({ name: 'jar_events' })
@@ -64,8 +62,8 @@ export class JarEvent {
   @Column({ type: 'varchar', length: 40, nullable: true })
   shelf: string | null;
 
-  @Column({ type: 'enum', enum: ['grow-room', 'customer'], nullable: true })
-  releasedTo: 'grow-room' | 'customer' | null;
+  @Column({ type: 'enum', enum: releasedTargets, nullable: true })
+  releasedTo: ReleasedTo | null;
 
   @Column({ type: 'varchar', length: 120, nullable: true })
   releasedToWho: string | null;

@@ -10,9 +10,7 @@ import {
 } from 'typeorm';
 import { Incident } from '../incidents/incident.entity';
 import { restrict } from '../db/relations';
-
-export const clusterDimensions = ['cookRun', 'culture', 'session'] as const;
-export type ClusterDimension = (typeof clusterDimensions)[number];
+import { clusterDimensions, type ClusterDimension } from '../../shared/enums';
 
 /** A cluster that was alerted; later incidents that extend it update the row instead of mailing again. */
 @Entity({ name: 'cluster_alerts' })

@@ -1,7 +1,7 @@
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { User } from '../users/user.entity';
 import { restrict } from '../db/relations';
-import { mailKinds, type MailKind } from '../../shared/schemas/mail';
+import { mailKinds, type MailKind } from '../../shared/enums';
 
 /** Absent row = the kind is on: everyone gets every mail meant for their role until they opt out. */
 @Entity({ name: 'mail_preferences' })

@@ -1,8 +1,8 @@
-import type { MailKind } from '../../shared/schemas/mail';
 import { config } from '../core/config';
 import { logger } from '../core/logger';
 import { mailRepository, type Recipient } from './mail.repository';
 import { mailTransport } from './mail-transport';
+import type { MailKind } from '../../shared/enums';
 
 export interface MailContent {
   subject: string;

@@ -10,7 +10,7 @@ import {
 } from 'typeorm';
 import { User } from '../users/user.entity';
 import { restrict } from '../db/relations';
-import { mailKinds, mailStatuses, type MailKind, type MailStatus } from '../../shared/schemas/mail';
+import { mailKinds, mailStatuses, type MailKind, type MailStatus } from '../../shared/enums';
 
 /** One row per message handed to SMTP, whether it went or not: the admin's list of what was sent. */
 @Entity({ name: 'sent_mails' })
