@@ -1,7 +1,7 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import { changePasswordSchema, loginSchema } from '../../shared/schemas/auth';
 import { currentUser, requireUser, type SessionUser } from '../core/auth-guards';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { changePassword } from './auth.service';
 import { generateToken } from './csrf';
 import { passport } from './passport';
@@ -33,6 +33,9 @@ authRouter.get('/me', requireUser, (req, res) => {
 });
 
 authRouter.post('/password', requireUser, validate({ body: changePasswordSchema }), async (req, res) => {
-  await changePassword(currentUser(req), req.body, { address: req.ip ?? 'unknown', sessionId: req.sessionID });
+  await changePassword(currentUser(req), validated(req, changePasswordSchema), {
+    address: req.ip ?? 'unknown',
+    sessionId: req.sessionID,
+  });
   res.status(204).end();
 });

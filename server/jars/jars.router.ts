@@ -58,19 +58,21 @@ jarsRouter.post(
   '/shelf-walk',
   requireWriter,
   validate({ body: shelfWalkSchema }),
-  idempotentHandler('shelf-mark', 200, (req, claim) => recordShelfWalk(currentUser(req), req.body, claim)),
+  idempotentHandler('shelf-mark', 200, (req, claim) =>
+    recordShelfWalk(currentUser(req), validated(req, shelfWalkSchema), claim),
+  ),
 );
 
 jarsRouter.post('/shelf-walk/undo', requireWriter, validate({ body: undoShelfMarkSchema }), async (req, res) => {
-  res.json(await undoShelfMark(currentUser(req), req.body));
+  res.json(await undoShelfMark(currentUser(req), validated(req, undoShelfMarkSchema)));
 });
 
 jarsRouter.get('/labels', requireUser, validate({ query: labelSheetQuerySchema }), async (req, res) => {
-  res.json({ items: await labelSheet(req.query) });
+  res.json({ items: await labelSheet(validated(req, labelSheetQuerySchema)) });
 });
 
 jarsRouter.get('/by-label/:label', requireUser, validate({ params: labelParamsSchema }), async (req, res) => {
-  res.json(await jarStory({ label: String(req.params.label) }));
+  res.json(await jarStory(validated(req, labelParamsSchema)));
 });
 
 jarsRouter.get('/:id', ...detailRoute((id) => jarStory({ id })));

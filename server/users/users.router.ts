@@ -7,6 +7,7 @@ import {
   userListQuerySchema,
 } from '../../shared/schemas/users';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
+import { idParam } from '../core/record-routes';
 import { validate, validated } from '../core/validate';
 import { resetPassword } from './password-reset.service';
 import { createUser, listPeople, listUsers, updateUser } from './users.service';
@@ -24,11 +25,11 @@ usersRouter.get('/people', requireUser, async (_req, res) => {
 });
 
 usersRouter.post('/', admin, validate({ body: createUserSchema }), async (req, res) => {
-  res.status(201).json(await createUser(currentUser(req), req.body));
+  res.status(201).json(await createUser(currentUser(req), validated(req, createUserSchema)));
 });
 
 usersRouter.patch('/:id', admin, validate({ params: idParamsSchema, body: updateUserSchema }), async (req, res) => {
-  res.json(await updateUser(currentUser(req), Number(req.params.id), req.body));
+  res.json(await updateUser(currentUser(req), idParam(req), validated(req, updateUserSchema)));
 });
 
 usersRouter.post(
@@ -36,6 +37,6 @@ usersRouter.post(
   admin,
   validate({ params: idParamsSchema, body: resetPasswordSchema }),
   async (req, res) => {
-    res.json(await resetPassword(currentUser(req), Number(req.params.id), req.body));
+    res.json(await resetPassword(currentUser(req), idParam(req), validated(req, resetPasswordSchema)));
   },
 );
