@@ -67,7 +67,7 @@ async function seed(tag: string): Promise<string[]> {
     await conn.query('INSERT INTO jars (label, grainId, inoculatedAt, inoculatedOn) VALUES ?', [
       labels.map((l) => [
         l,
-        grains[0]!.id,
+        Number(grains[0]!.id),
         new Date(Date.now() - 3 * 86_400_000),
         new Date().toISOString().slice(0, 10),
       ]),

@@ -3,7 +3,7 @@ import { config } from '../server/core/config';
 import { installProcessGuards } from '../server/core/process-guards';
 import { dataSource } from '../server/db/data-source';
 import { startServer } from '../server/main';
-import { loadDemoLab } from '../seed/demo-lab';
+import { loadDemoLab } from '../server/demo-lab/demo-lab';
 import { startLocalDb } from './local-db';
 import { startLocalMailFake } from './local-mail';
 

@@ -96,3 +96,52 @@ export const factorNames: Record<Factor, string> = {
 
 /** The same name at the start of a label or heading ("Minutes at pressure"). */
 export const factorLabel = (f: Factor) => factorNames[f].charAt(0).toUpperCase() + factorNames[f].slice(1);
+
+export const incidentSeverities = ['low', 'medium', 'high'] as const;
+export const incidentSeveritySchema = z.enum(incidentSeverities);
+export type IncidentSeverity = (typeof incidentSeverities)[number];
+
+export const agarResults = ['clean', 'contaminated', 'inconclusive'] as const;
+export const agarResultSchema = z.enum(agarResults);
+export type AgarResult = (typeof agarResults)[number];
+
+export const jarEventTypes = ['check', 'shaken', 'moved', 'released', 'hold', 'discarded', 'status'] as const;
+export type JarEventType = (typeof jarEventTypes)[number];
+
+export const releasedTargets = ['grow-room', 'customer'] as const;
+export const releasedToSchema = z.enum(releasedTargets);
+export type ReleasedTo = (typeof releasedTargets)[number];
+
+/**
+ * Where a cook run's logged probe sat. Only a probe at the jar centre measures the F0 the grain got; a
+ * chamber log overstates it (see shared/stats/cook-verdict.ts).
+ */
+export const logPlacements = ['chamber', 'centre'] as const;
+export type LogPlacement = (typeof logPlacements)[number];
+
+/** Where a cook run's F0 came from: its temperature log, or the upper-bound estimate from minutes at pressure. */
+export const f0Sources = ['log', 'estimate'] as const;
+export type F0Source = (typeof f0Sources)[number];
+
+export const mailKinds = [
+  'new-incident',
+  'cluster-alert',
+  'retraining',
+  'weekly-digest',
+  'action-assigned',
+  'action-overdue',
+] as const;
+export const mailKindSchema = z.enum(mailKinds);
+export type MailKind = (typeof mailKinds)[number];
+
+export const mailStatuses = ['sent', 'failed'] as const;
+export const mailStatusSchema = z.enum(mailStatuses);
+export type MailStatus = (typeof mailStatuses)[number];
+
+/** The production records a cluster of incidents can share, for the cluster alert. */
+export const clusterDimensions = ['cookRun', 'culture', 'session'] as const;
+export type ClusterDimension = (typeof clusterDimensions)[number];
+
+/** What started a weekly digest: the schedule or an admin's request. */
+export const digestTriggers = ['schedule', 'manual'] as const;
+export type DigestTrigger = (typeof digestTriggers)[number];

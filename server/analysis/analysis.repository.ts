@@ -1,6 +1,5 @@
-import type { Factor } from '../../shared/enums';
+import type { Factor, LogPlacement } from '../../shared/enums';
 import type { ActionSummary } from '../../shared/schemas/analysis';
-import type { LogPlacement } from '../../shared/stats/cook-verdict';
 import { dataSource } from '../db/data-source';
 import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql, liveIncidentSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';

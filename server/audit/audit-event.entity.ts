@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 /** Append-only: nothing updates or deletes these rows (21 CFR 11.10(e); EU GMP Annex 11 §9). */
 @Entity({ name: 'audit_events' })
@@ -9,6 +20,10 @@ export class AuditEvent {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   userId: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'userId' })
+  user?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120 })
   userName: string;

@@ -1,4 +1,6 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { CookRun } from './cook-run.entity';
+import { restrict } from '../db/relations';
 
 /** One sample of a cook run's temperature log. */
 @Entity({ name: 'cook_run_readings' })
@@ -9,6 +11,10 @@ export class CookRunReading {
 
   @Column({ type: 'int', unsigned: true })
   cookRunId: number;
+
+  @ManyToOne(() => CookRun, restrict)
+  @JoinColumn({ name: 'cookRunId' })
+  cookRun?: Relation<CookRun>;
 
   @Column({ type: 'double' })
   minute: number;

@@ -1,5 +1,16 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-import { logPlacements, type LogPlacement } from '../../shared/stats/cook-verdict';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
+import { f0Sources, logPlacements, type F0Source, type LogPlacement } from '../../shared/enums';
 
 @Entity({ name: 'cook_runs' })
 export class CookRun {
@@ -42,6 +53,10 @@ export class CookRun {
   @Column({ type: 'int', unsigned: true, nullable: true })
   operatorId: number | null;
 
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'operatorId' })
+  operator?: Relation<User>;
+
   @Column({ type: 'varchar', length: 120, nullable: true })
   operatorName: string | null;
 
@@ -49,8 +64,8 @@ export class CookRun {
   @Column({ type: 'double', nullable: true })
   f0: number | null;
 
-  @Column({ type: 'enum', enum: ['log', 'estimate'], nullable: true })
-  f0Source: 'log' | 'estimate' | null;
+  @Column({ type: 'enum', enum: f0Sources, nullable: true })
+  f0Source: F0Source | null;
 
   /** Where the logged probe sat: only a jar-centre log is held to the F0 target (DESIGN §4.6). */
   @Column({ type: 'enum', enum: logPlacements, nullable: true })

@@ -8,7 +8,7 @@ import type {
   CreateCookRunValues,
   UpdateCookRunInput,
 } from '../../shared/schemas/cook-runs';
-import type { CookRule, LogPlacement } from '../../shared/stats/cook-verdict';
+import type { CookRule } from '../../shared/stats/cook-verdict';
 import { f0FromLog, lethalRate, type TemperatureSample } from '../../shared/stats/lethality';
 import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
 import { suggestCode } from '../core/code-suggestion';
@@ -23,6 +23,7 @@ import { estimatedF0 } from './cook-run-lethality';
 import { CookRun } from './cook-run.entity';
 import { cookRunsRepository } from './cook-runs.repository';
 import { toCookRunDto } from './cook-runs.mapper';
+import type { LogPlacement } from '../../shared/enums';
 
 const target = async (): Promise<CookRule> => {
   const s = await getLabSettings();

@@ -12,9 +12,9 @@ export interface SessionUser {
 }
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
+  // eslint-disable-next-line @typescript-eslint/no-namespace -- Express declares its User type in this global namespace
   namespace Express {
-    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type -- declaration merging needs an interface, not a type alias
     interface User extends SessionUser {}
   }
 }

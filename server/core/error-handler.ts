@@ -7,8 +7,13 @@ import type { ErrorBody } from '../../shared/schemas/common';
 import { AppError } from './errors';
 import { logger } from './logger';
 
-function send(res: Parameters<ErrorRequestHandler>[2], status: number, error: ErrorBody['error']) {
-  res.status(status).json({ error } satisfies ErrorBody);
+function send(
+  res: Parameters<ErrorRequestHandler>[2],
+  status: number,
+  error: ErrorBody['error'],
+  details?: Record<string, unknown>,
+) {
+  res.status(status).json({ ...details, error } satisfies ErrorBody);
 }
 
 function isDuplicateKey(
@@ -37,7 +42,7 @@ function isDatabaseUnavailable(err: unknown): boolean {
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   if (res.headersSent) return;
   if (err instanceof AppError)
-    return send(res, err.status, { code: err.code, message: err.message, issues: err.issues });
+    return send(res, err.status, { code: err.code, message: err.message, issues: err.issues }, err.details);
   if (err instanceof ZodError) {
     const issues = err.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
     const first = issues[0];

@@ -7,6 +7,8 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly issues?: FieldIssue[],
+    /** Sent beside the error body, for a refusal that carries more (a rejected file's errors by line). */
+    readonly details?: Record<string, unknown>,
   ) {
     super(message);
     this.name = 'AppError';

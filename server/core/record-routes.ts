@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { currentUser, requireRole, requireUser, type SessionUser } from './auth-guards';
 import { sendCsv } from './csv';
-import { validate } from './validate';
+import { validate, validated } from './validate';
 
 /** Who may write to the production record; a trainer only reads it. */
 export const requireWriter = requireRole('technician', 'supervisor', 'admin');
@@ -23,7 +23,7 @@ export function listRoute<Q>(
     guard,
     validate({ query: schema }),
     async (req, res) => {
-      res.json(await list(req.query as Q));
+      res.json(await list(validated(req, schema)));
     },
   ];
 }
@@ -41,7 +41,7 @@ export function csvExportRoute<Q, R>(schema: z.ZodType<Q>, csv: CsvExport<Q, R>)
     requireUser,
     validate({ query: schema }),
     async (req, res) => {
-      const rows = await csv.rows(req.query as Q);
+      const rows = await csv.rows(validated(req, schema));
       const filename = typeof csv.filename === 'string' ? csv.filename : csv.filename();
       sendCsv(res, filename, csv.header, rows.map(csv.row));
     },
@@ -72,7 +72,7 @@ export function createRoute<B>(
     guard,
     validate({ body: schema }),
     async (req, res) => {
-      res.status(201).json(await create(currentUser(req), req.body as B));
+      res.status(201).json(await create(currentUser(req), validated(req, schema)));
     },
   ];
 }
@@ -87,7 +87,7 @@ export function writeRoute<B>(
     options.guard ?? requireWriter,
     validate({ params: idParamsSchema, body: schema }),
     async (req, res) => {
-      res.status(options.status ?? 200).json(await write(currentUser(req), idParam(req), req.body as B));
+      res.status(options.status ?? 200).json(await write(currentUser(req), idParam(req), validated(req, schema)));
     },
   ];
 }

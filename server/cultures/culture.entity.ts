@@ -1,4 +1,14 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { restrict } from '../db/relations';
 import { cultureStates, type CultureState } from '../../shared/enums';
 
 /** A syringe or liquid-culture lot that jars are inoculated from. */
@@ -28,6 +38,10 @@ export class Culture {
   @Index()
   @Column({ type: 'int', unsigned: true, nullable: true })
   parentCultureId: number | null;
+
+  @ManyToOne(() => Culture, restrict)
+  @JoinColumn({ name: 'parentCultureId' })
+  parentCulture?: Relation<Culture>;
 
   @Column({ type: 'enum', enum: cultureStates, default: 'quarantined' })
   state: CultureState;

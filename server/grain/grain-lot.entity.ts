@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Grain } from './grain.entity';
+import { restrict } from '../db/relations';
 
 @Entity({ name: 'grain_lots' })
 @Index(['grainId', 'supplierLotCode'], { unique: true })
@@ -8,6 +19,10 @@ export class GrainLot {
 
   @Column({ type: 'int', unsigned: true })
   grainId: number;
+
+  @ManyToOne(() => Grain, restrict)
+  @JoinColumn({ name: 'grainId' })
+  grain?: Relation<Grain>;
 
   @Column({ type: 'varchar', length: 80 })
   supplierLotCode: string;

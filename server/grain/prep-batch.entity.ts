@@ -1,4 +1,14 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { GrainLot } from './grain-lot.entity';
+import { restrict } from '../db/relations';
 
 /** Wetness varies batch to batch, which is why jars point at their prep batch. */
 @Entity({ name: 'prep_batches' })
@@ -11,6 +21,10 @@ export class PrepBatch {
 
   @Column({ type: 'int', unsigned: true })
   grainLotId: number;
+
+  @ManyToOne(() => GrainLot, restrict)
+  @JoinColumn({ name: 'grainLotId' })
+  grainLot?: Relation<GrainLot>;
 
   @Column({ type: 'date' })
   preparedOn: string;

@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 /**
  * One write from the shelf under a client-made Idempotency-Key. The row is inserted inside the
@@ -12,6 +23,10 @@ export class IdempotentRequest {
 
   @Column({ type: 'int', unsigned: true })
   userId: number;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'userId' })
+  user?: Relation<User>;
 
   @Column({ type: 'varchar', length: 100 })
   key: string;

@@ -1,8 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import { QueryFailedError, type EntityManager } from 'typeorm';
-import type { ImportError, ImportResult } from '../../shared/schemas/imports';
+import type { ImportError, ImportRejection, ImportResult } from '../../shared/schemas/imports';
 import { recordAudit, type Actor } from '../audit/audit.service';
 import { config } from '../core/config';
+import { AppError, badRequest } from '../core/errors';
 import { localDate } from '../core/local-time';
 import { dataSource } from '../db/data-source';
 import { insertCookRuns } from '../cook-runs/cook-runs.service';
@@ -30,6 +31,22 @@ type InTransaction = <T>(work: (m: EntityManager) => Promise<T>) => Promise<T>;
  * A caller that holds a transaction (the demo loader) passes its manager and owns the commit, and may
  * pass the local date its own plan was made for, so jar statuses cannot straddle a midnight.
  */
+/** An uploaded history file, imported whole or refused with every error by line (422) and nothing written. */
+export async function importHistoryUpload(actor: Actor, file: Buffer | undefined): Promise<ImportResult> {
+  if (!file) {
+    throw badRequest('file: send the history as a text/csv body or as the multipart field "file"', [
+      { path: 'file', message: 'is required: a CSV file (text/csv body or multipart field "file")' },
+    ]);
+  }
+  const outcome = await importHistory(actor, file);
+  if (outcome.ok) return outcome.result;
+  const n = outcome.errors.length;
+  const message = `The file has ${n} problem${n === 1 ? '' : 's'}; nothing was imported.`;
+  throw new AppError(422, 'import-rejected', message, undefined, {
+    errors: outcome.errors,
+  } satisfies ImportRejection);
+}
+
 export async function importHistory(
   actor: Actor,
   file: Buffer,

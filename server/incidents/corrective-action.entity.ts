@@ -1,4 +1,17 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Incident } from './incident.entity';
+import { StaffMember } from '../staff/staff-member.entity';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 import { factors, type Factor } from '../../shared/enums';
 
 @Entity({ name: 'corrective_actions' })
@@ -11,15 +24,27 @@ export class CorrectiveAction {
   @Column({ type: 'int', unsigned: true })
   incidentId: number;
 
+  @ManyToOne(() => Incident, restrict)
+  @JoinColumn({ name: 'incidentId' })
+  incident?: Relation<Incident>;
+
   @Column({ type: 'text' })
   what: string;
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   ownerId: number | null;
 
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'ownerId' })
+  owner?: Relation<User>;
+
   /** An owner without an account, from the lab's staff list. */
   @Column({ type: 'int', unsigned: true, nullable: true })
   ownerStaffId: number | null;
+
+  @ManyToOne(() => StaffMember, restrict)
+  @JoinColumn({ name: 'ownerStaffId' })
+  ownerStaff?: Relation<StaffMember>;
 
   @Column({ type: 'varchar', length: 120 })
   ownerName: string;

@@ -1,9 +1,9 @@
 import { Router } from 'express';
-import { actionListQuerySchema, type ActionListQuery } from '../../shared/schemas/corrective-actions';
+import { actionListQuerySchema } from '../../shared/schemas/corrective-actions';
 import { updateActionSchema } from '../../shared/schemas/incidents';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { writeRoute } from '../core/record-routes';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { sendOverdueReminders } from '../mail/action-mail.service';
 import { listActions } from './corrective-actions-list.service';
 import { updateAction } from './corrective-actions.service';
@@ -11,7 +11,7 @@ import { updateAction } from './corrective-actions.service';
 export const correctiveActionsRouter = Router();
 
 correctiveActionsRouter.get('/', requireUser, validate({ query: actionListQuerySchema }), async (req, res) => {
-  res.json(await listActions(currentUser(req), req.query as unknown as ActionListQuery));
+  res.json(await listActions(currentUser(req), validated(req, actionListQuerySchema)));
 });
 
 // The scheduler sends these by itself; a supervisor or admin may send the due ones now.

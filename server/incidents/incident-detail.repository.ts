@@ -7,6 +7,7 @@ import { Photo } from '../photos/photo.entity';
 import { IncidentJar } from './incident-jar.entity';
 import { IncidentPhoto } from './incident-photo.entity';
 import { dateText } from '../core/calendar';
+import { numberOrNull } from '../core/raw-values';
 
 interface JarRow {
   id: number;
@@ -159,14 +160,13 @@ export const incidentDetailRepository = {
       .where('l.incidentId = :incidentId', { incidentId })
       .orderBy('l.createdAt', 'ASC')
       .getRawMany();
-    const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
     return rows.map((r) => ({
       id: Number(r.id),
       stepId: Number(r.stepId),
-      position: num(r.position),
+      position: numberOrNull(r.position),
       stepText: (r.stepText as string | null) ?? null,
       procedureTitle: (r.procedureTitle as string | null) ?? null,
-      procedureVersion: num(r.procedureVersion),
+      procedureVersion: numberOrNull(r.procedureVersion),
       linkedByName: String(r.linkedByName),
       note: (r.note as string | null) ?? null,
       createdAt: new Date(r.createdAt as string | Date).toISOString(),

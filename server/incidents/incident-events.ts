@@ -1,5 +1,4 @@
-import type { Contaminant, IncidentStatus, StageFound, Verdict } from '../../shared/enums';
-import type { IncidentSeverity } from '../../shared/schemas/incidents';
+import type { Contaminant, IncidentSeverity, StageFound } from '../../shared/enums';
 import { logger } from '../core/logger';
 
 export interface IncidentCreatedEvent {
@@ -10,15 +9,6 @@ export interface IncidentCreatedEvent {
   foundAt: string;
   foundByName: string;
   jarLabels: string[];
-}
-
-export interface IncidentReviewedEvent {
-  id: number;
-  by: string;
-  status: IncidentStatus;
-  verdict: Verdict;
-  voided: boolean;
-  changedFields: string[];
 }
 
 type Listener<E> = (event: E) => void | Promise<void>;
@@ -45,9 +35,6 @@ function hookList<E>() {
 }
 
 const created = hookList<IncidentCreatedEvent>();
-const reviewed = hookList<IncidentReviewedEvent>();
 
 export const onIncidentCreated = created.on;
-export const onIncidentReviewed = reviewed.on;
 export const emitIncidentCreated = created.emit;
-export const emitIncidentReviewed = reviewed.emit;

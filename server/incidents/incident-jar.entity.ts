@@ -1,4 +1,7 @@
-import { Entity, Index, PrimaryColumn } from 'typeorm';
+import { Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, type Relation } from 'typeorm';
+import { Incident } from './incident.entity';
+import { Jar } from '../jars/jar.entity';
+import { restrict } from '../db/relations';
 
 @Entity({ name: 'incident_jars' })
 @Index(['jarId'])
@@ -6,6 +9,14 @@ export class IncidentJar {
   @PrimaryColumn({ type: 'int', unsigned: true })
   incidentId: number;
 
+  @ManyToOne(() => Incident, restrict)
+  @JoinColumn({ name: 'incidentId' })
+  incident?: Relation<Incident>;
+
   @PrimaryColumn({ type: 'int', unsigned: true })
   jarId: number;
+
+  @ManyToOne(() => Jar, restrict)
+  @JoinColumn({ name: 'jarId' })
+  jar?: Relation<Jar>;
 }

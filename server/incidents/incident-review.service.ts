@@ -4,7 +4,6 @@ import type { SessionUser } from '../core/auth-guards';
 import { unprocessable } from '../core/errors';
 import { dataSource } from '../db/data-source';
 import type { Incident } from './incident.entity';
-import { emitIncidentReviewed, type IncidentReviewedEvent } from './incident-events';
 import { checkTransition, loadForChange } from './incident-rules';
 import { incidentsRepository } from './incidents.repository';
 import { getIncident } from './incidents.service';
@@ -31,7 +30,6 @@ export async function reviewIncident(
   id: number,
   input: ReviewIncidentInput,
 ): Promise<IncidentDetailDto> {
-  let event: IncidentReviewedEvent | undefined;
   await dataSource.transaction(async (m) => {
     const incident = await loadForChange(m, id, input.version);
     checkClosed(incident, input);
@@ -64,16 +62,7 @@ export async function reviewIncident(
         `incident ${id} verdict ${incident.verdict}`,
       );
     }
-    event = {
-      id,
-      by: user.displayName,
-      status: incident.status,
-      verdict: incident.verdict,
-      voided: false,
-      changedFields: entries.map((e) => e.field ?? ''),
-    };
   });
-  if (event) emitIncidentReviewed(event);
   return getIncident(id);
 }
 
@@ -83,7 +72,6 @@ export async function voidIncident(
   id: number,
   input: VoidIncidentInput,
 ): Promise<IncidentDetailDto> {
-  let event: IncidentReviewedEvent | undefined;
   await dataSource.transaction(async (m) => {
     const incident = await loadForChange(m, id, input.version);
     incident.voided = true;
@@ -101,15 +89,6 @@ export async function voidIncident(
       },
     ]);
     await syncJarStatuses(m, user, await incidentsRepository.jarIdsOf(m, id), `incident ${id} voided`);
-    event = {
-      id,
-      by: user.displayName,
-      status: incident.status,
-      verdict: incident.verdict,
-      voided: true,
-      changedFields: ['voided'],
-    };
   });
-  if (event) emitIncidentReviewed(event);
   return getIncident(id);
 }

@@ -3,25 +3,29 @@ import {
   CreateDateColumn,
   Entity,
   Index,
+  JoinColumn,
+  ManyToOne,
   PrimaryGeneratedColumn,
   UpdateDateColumn,
   VersionColumn,
+  type Relation,
 } from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 import {
   causeCategories,
   contaminants,
+  incidentSeverities,
   incidentStatuses,
   stagesFound,
   verdicts,
   type CauseCategory,
   type Contaminant,
+  type IncidentSeverity,
   type IncidentStatus,
   type StageFound,
   type Verdict,
 } from '../../shared/enums';
-
-export const severities = ['low', 'medium', 'high'] as const;
-export type Severity = (typeof severities)[number];
 
 /** Never deleted: a mistaken incident is voided with a reason and keeps its history. */
 @Entity({ name: 'incidents' })
@@ -39,6 +43,10 @@ export class Incident {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   foundById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'foundById' })
+  foundBy?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120 })
   foundByName: string;
@@ -59,8 +67,8 @@ export class Incident {
   @Column({ type: 'varchar', length: 120, nullable: true })
   signTexture: string | null;
 
-  @Column({ type: 'enum', enum: severities, default: 'medium' })
-  severity: Severity;
+  @Column({ type: 'enum', enum: incidentSeverities, default: 'medium' })
+  severity: IncidentSeverity;
 
   @Column({ type: 'boolean', default: false })
   sealed: boolean;
@@ -94,6 +102,10 @@ export class Incident {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   createdById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'createdById' })
+  createdBy?: Relation<User>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;

@@ -10,7 +10,7 @@ import {
 } from '../../shared/schemas/incidents';
 import { currentUser, requireRole } from '../core/auth-guards';
 import { csvExportRoute, detailRoute, idParam, listRoute, requireWriter, writeRoute } from '../core/record-routes';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { idempotentHandler } from '../idempotency/idempotent-route';
 import { idParamsSchema } from '../../shared/schemas/common';
 import { createAction } from './corrective-actions.service';
@@ -29,7 +29,9 @@ incidentsRouter.post(
   '/',
   requireWriter,
   validate({ body: createIncidentSchema }),
-  idempotentHandler('incident', 201, (req, claim) => createIncident(currentUser(req), req.body, claim)),
+  idempotentHandler('incident', 201, (req, claim) =>
+    createIncident(currentUser(req), validated(req, createIncidentSchema), claim),
+  ),
 );
 incidentsRouter.patch('/:id', ...writeRoute(updateIncidentSchema, updateIncident));
 incidentsRouter.post('/:id/review', ...writeRoute(reviewIncidentSchema, reviewIncident, supervisor));
@@ -39,7 +41,7 @@ incidentsRouter.post(
   requireWriter,
   validate({ params: idParamsSchema, body: addIncidentPhotosSchema }),
   idempotentHandler('incident-photos', 200, (req, claim) =>
-    addIncidentPhotos(currentUser(req), idParam(req), req.body, claim),
+    addIncidentPhotos(currentUser(req), idParam(req), validated(req, addIncidentPhotosSchema), claim),
   ),
 );
 incidentsRouter.post('/:id/actions', ...writeRoute(createActionSchema, createAction, { ...supervisor, status: 201 }));

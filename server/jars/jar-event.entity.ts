@@ -1,7 +1,18 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-
-export const jarEventTypes = ['check', 'shaken', 'moved', 'released', 'hold', 'discarded', 'status'] as const;
-export type JarEventType = (typeof jarEventTypes)[number];
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Jar } from './jar.entity';
+import { Photo } from '../photos/photo.entity';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
+import { jarEventTypes, releasedTargets, type JarEventType, type ReleasedTo } from '../../shared/enums';
 
 /** A jar's life after inoculation; a 'check' carries the colonisation percent. */
 @Entity({ name: 'jar_events' })
@@ -15,6 +26,10 @@ export class JarEvent {
   @Column({ type: 'int', unsigned: true })
   jarId: number;
 
+  @ManyToOne(() => Jar, restrict)
+  @JoinColumn({ name: 'jarId' })
+  jar?: Relation<Jar>;
+
   @Column({ type: 'enum', enum: jarEventTypes })
   type: JarEventType;
 
@@ -26,6 +41,10 @@ export class JarEvent {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   byUserId: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'byUserId' })
+  byUser?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120 })
   byName: string;
@@ -43,8 +62,8 @@ export class JarEvent {
   @Column({ type: 'varchar', length: 40, nullable: true })
   shelf: string | null;
 
-  @Column({ type: 'enum', enum: ['grow-room', 'customer'], nullable: true })
-  releasedTo: 'grow-room' | 'customer' | null;
+  @Column({ type: 'enum', enum: releasedTargets, nullable: true })
+  releasedTo: ReleasedTo | null;
 
   @Column({ type: 'varchar', length: 120, nullable: true })
   releasedToWho: string | null;
@@ -54,6 +73,10 @@ export class JarEvent {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   photoId: number | null;
+
+  @ManyToOne(() => Photo, restrict)
+  @JoinColumn({ name: 'photoId' })
+  photo?: Relation<Photo>;
 
   @Column({ type: 'text', nullable: true })
   note: string | null;

@@ -6,7 +6,8 @@ import type { Jar } from './jar.entity';
 import { jarStoryRepository } from './jar-story.repository';
 import { buildTimeline } from './jar-timeline';
 import { jarsRepository } from './jars.repository';
-import { dateOnly, dateOrNull, isoOrNull, toJarEventDto, toJarRow } from './jars.mapper';
+import { dateOnly, dateOrNull } from '../core/raw-values';
+import { isoOrNull, toJarEventDto, toJarRow } from './jars.mapper';
 
 export const jarPageUrl = (label: string) => `${config().publicUrl}/j/${encodeURIComponent(label)}`;
 

@@ -1,4 +1,19 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { CookRun } from '../cook-runs/cook-run.entity';
+import { Culture } from '../cultures/culture.entity';
+import { Grain } from '../grain/grain.entity';
+import { InoculationSession } from '../sessions/inoculation-session.entity';
+import { PrepBatch } from '../grain/prep-batch.entity';
+import { restrict } from '../db/relations';
 import { jarStatuses, type JarStatus } from '../../shared/enums';
 
 @Entity({ name: 'jars' })
@@ -17,26 +32,50 @@ export class Jar {
   @Column({ type: 'int', unsigned: true })
   grainId: number;
 
+  @ManyToOne(() => Grain, restrict)
+  @JoinColumn({ name: 'grainId' })
+  grain?: Relation<Grain>;
+
   @Index()
   @Column({ type: 'int', unsigned: true, nullable: true })
   prepBatchId: number | null;
+
+  @ManyToOne(() => PrepBatch, restrict)
+  @JoinColumn({ name: 'prepBatchId' })
+  prepBatch?: Relation<PrepBatch>;
 
   @Index()
   @Column({ type: 'int', unsigned: true, nullable: true })
   cookRunId: number | null;
 
+  @ManyToOne(() => CookRun, restrict)
+  @JoinColumn({ name: 'cookRunId' })
+  cookRun?: Relation<CookRun>;
+
   @Index()
   @Column({ type: 'int', unsigned: true, nullable: true })
   sessionId: number | null;
+
+  @ManyToOne(() => InoculationSession, restrict)
+  @JoinColumn({ name: 'sessionId' })
+  session?: Relation<InoculationSession>;
 
   /** Inoculum: a culture or a parent jar (grain-to-grain), never both. */
   @Index()
   @Column({ type: 'int', unsigned: true, nullable: true })
   cultureId: number | null;
 
+  @ManyToOne(() => Culture, restrict)
+  @JoinColumn({ name: 'cultureId' })
+  culture?: Relation<Culture>;
+
   @Index()
   @Column({ type: 'int', unsigned: true, nullable: true })
   parentJarId: number | null;
+
+  @ManyToOne(() => Jar, restrict)
+  @JoinColumn({ name: 'parentJarId' })
+  parentJar?: Relation<Jar>;
 
   @Column({ type: 'double', nullable: true })
   inoculumMl: number | null;

@@ -1,20 +1,14 @@
 import type { JarStatus } from '../../shared/enums';
 import type { JarEventDto, JarRowDto } from '../../shared/schemas/jars';
 import type { JarEvent } from './jar-event.entity';
-import { dateText } from '../core/calendar';
+import { dateOnly, dateOrNull, numberOrNull } from '../core/raw-values';
 
-/** mysql2 hands DATE columns back as Date at UTC midnight (the DataSource runs in 'Z'). */
-export const dateOnly = (value: Date | string): string => dateText(value) ?? String(value);
-export const dateOrNull = (value: Date | string | null | undefined): string | null =>
-  value === null || value === undefined ? null : dateOnly(value);
 export const isoOrNull = (value: Date | string | null | undefined): string | null =>
   value === null || value === undefined
     ? null
     : value instanceof Date
       ? value.toISOString()
       : new Date(value).toISOString();
-const numOrNull = (value: number | string | null | undefined): number | null =>
-  value === null || value === undefined ? null : Number(value);
 const strOrNull = (value: string | null | undefined): string | null => value ?? null;
 
 /** The aliased columns of jarsRepository's row query. */
@@ -51,20 +45,20 @@ export const toJarRow = (r: JarRawRow): JarRowDto => ({
   status: r.status,
   grainId: Number(r.grainId),
   grain: r.grain,
-  prepBatchId: numOrNull(r.prepBatchId),
+  prepBatchId: numberOrNull(r.prepBatchId),
   prepBatchCode: strOrNull(r.prepBatchCode),
-  cookRunId: numOrNull(r.cookRunId),
+  cookRunId: numberOrNull(r.cookRunId),
   cookRunCode: strOrNull(r.cookRunCode),
-  sessionId: numOrNull(r.sessionId),
+  sessionId: numberOrNull(r.sessionId),
   sessionCode: strOrNull(r.sessionCode),
-  cultureId: numOrNull(r.cultureId),
+  cultureId: numberOrNull(r.cultureId),
   cultureCode: strOrNull(r.cultureCode),
-  parentJarId: numOrNull(r.parentJarId),
+  parentJarId: numberOrNull(r.parentJarId),
   parentJarLabel: strOrNull(r.parentJarLabel),
-  inoculumMl: numOrNull(r.inoculumMl),
+  inoculumMl: numberOrNull(r.inoculumMl),
   room: strOrNull(r.room),
   shelf: strOrNull(r.shelf),
-  shelfPosition: numOrNull(r.shelfPosition),
+  shelfPosition: numberOrNull(r.shelfPosition),
   inoculatedAt: isoOrNull(r.inoculatedAt) ?? '',
   inoculatedOn: dateOnly(r.inoculatedOn),
   colonisedOn: dateOrNull(r.colonisedOn),

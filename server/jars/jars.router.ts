@@ -9,7 +9,6 @@ import {
   shelfQuerySchema,
   shelfWalkSchema,
   undoShelfMarkSchema,
-  type ShelfQuery,
 } from '../../shared/schemas/jars';
 import { currentUser, requireUser } from '../core/auth-guards';
 import { todayLocal } from '../core/local-time';
@@ -23,7 +22,7 @@ import {
   validId,
   writeRoute,
 } from '../core/record-routes';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { recordJarEvent } from './jar-events.service';
 import { idempotentHandler } from '../idempotency/idempotent-route';
 import { recordShelfWalk } from './shelf-walk.service';
@@ -48,7 +47,7 @@ jarsRouter.get(
 jarsRouter.post('/batch', ...createRoute(createJarBatchSchema, createJarBatch));
 
 jarsRouter.get('/shelf', requireUser, validate({ query: shelfQuerySchema }), async (req, res) => {
-  res.json({ items: await shelfJars(req.query as unknown as ShelfQuery) });
+  res.json({ items: await shelfJars(validated(req, shelfQuerySchema)) });
 });
 
 jarsRouter.get('/shelves', requireUser, async (_req, res) => {
@@ -59,19 +58,21 @@ jarsRouter.post(
   '/shelf-walk',
   requireWriter,
   validate({ body: shelfWalkSchema }),
-  idempotentHandler('shelf-mark', 200, (req, claim) => recordShelfWalk(currentUser(req), req.body, claim)),
+  idempotentHandler('shelf-mark', 200, (req, claim) =>
+    recordShelfWalk(currentUser(req), validated(req, shelfWalkSchema), claim),
+  ),
 );
 
 jarsRouter.post('/shelf-walk/undo', requireWriter, validate({ body: undoShelfMarkSchema }), async (req, res) => {
-  res.json(await undoShelfMark(currentUser(req), req.body));
+  res.json(await undoShelfMark(currentUser(req), validated(req, undoShelfMarkSchema)));
 });
 
 jarsRouter.get('/labels', requireUser, validate({ query: labelSheetQuerySchema }), async (req, res) => {
-  res.json({ items: await labelSheet(req.query) });
+  res.json({ items: await labelSheet(validated(req, labelSheetQuerySchema)) });
 });
 
 jarsRouter.get('/by-label/:label', requireUser, validate({ params: labelParamsSchema }), async (req, res) => {
-  res.json(await jarStory({ label: String(req.params.label) }));
+  res.json(await jarStory(validated(req, labelParamsSchema)));
 });
 
 jarsRouter.get('/:id', ...detailRoute((id) => jarStory({ id })));

@@ -17,7 +17,8 @@ import { dataSource } from '../db/data-source';
 import type { Jar } from './jar.entity';
 import { nextJarLabels } from './jar-labels.service';
 import { jarsRepository } from './jars.repository';
-import { dateOnly, toJarRow } from './jars.mapper';
+import { dateOnly } from '../core/raw-values';
+import { toJarRow } from './jars.mapper';
 
 const missing = (path: string, what: string) =>
   unprocessable(`${path}: no such ${what}`, [{ path, message: `no such ${what}` }]);

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
-import type { JarStatus } from '../../shared/enums';
-import type { ReleasedTo } from '../../shared/schemas/jars';
+import type { JarStatus, ReleasedTo } from '../../shared/enums';
+import { numberOrNull } from '../core/raw-values';
 import { dataSource } from '../db/data-source';
 
 export interface LineageCultureRaw {
@@ -48,10 +48,13 @@ const jarColumns = `SELECT j.id, j.label, j.status, j.inoculatedOn, j.cultureId,
     )
    ORDER BY j.label`;
 
-const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
-
 function normaliseJars(rows: LineageJarRaw[]): LineageJarRaw[] {
-  return rows.map((r) => ({ ...r, id: Number(r.id), cultureId: num(r.cultureId), parentJarId: num(r.parentJarId) }));
+  return rows.map((r) => ({
+    ...r,
+    id: Number(r.id),
+    cultureId: numberOrNull(r.cultureId),
+    parentJarId: numberOrNull(r.parentJarId),
+  }));
 }
 
 export const lineageRepository = {
@@ -61,7 +64,7 @@ export const lineageRepository = {
        SELECT c.id, c.code, c.state, c.parentCultureId FROM cs JOIN cultures c ON c.id = cs.id ORDER BY c.code`,
       [cultureId],
     );
-    return rows.map((r) => ({ ...r, id: Number(r.id), parentCultureId: num(r.parentCultureId) }));
+    return rows.map((r) => ({ ...r, id: Number(r.id), parentCultureId: numberOrNull(r.parentCultureId) }));
   },
 
   async jarsBelowCulture(cultureId: number, m: EntityManager = dataSource.manager): Promise<LineageJarRaw[]> {

@@ -4,7 +4,7 @@ import { notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
 import { holdLockedJars } from '../jars/jar-events.service';
 import { holdable } from '../jars/jar-life';
-import { dateOnly, dateOrNull } from '../jars/jars.mapper';
+import { dateOnly, dateOrNull } from '../core/raw-values';
 import { lineageRepository, type LineageCultureRaw, type LineageJarRaw } from './lineage.repository';
 
 const jarNode = (j: LineageJarRaw): LineageNodeDto => ({

@@ -1,4 +1,3 @@
-import type { MailKind } from '../../shared/schemas/mail';
 import { config } from '../core/config';
 import { todayLocal } from '../core/local-time';
 import { logger } from '../core/logger';
@@ -7,6 +6,7 @@ import { actionAssignedMail, actionOverdueMail } from './action-mail-templates';
 import { mailRepository, type Recipient } from './mail.repository';
 import { deliver, type DeliveryResult } from './mailer';
 import { withNamedLock } from './named-lock';
+import type { MailKind } from '../../shared/enums';
 
 const REMINDER_LOCK = 'asepta-action-reminders';
 

@@ -1,7 +1,16 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-
-export const clusterDimensions = ['cookRun', 'culture', 'session'] as const;
-export type ClusterDimension = (typeof clusterDimensions)[number];
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Incident } from '../incidents/incident.entity';
+import { restrict } from '../db/relations';
+import { clusterDimensions, type ClusterDimension } from '../../shared/enums';
 
 /** A cluster that was alerted; later incidents that extend it update the row instead of mailing again. */
 @Entity({ name: 'cluster_alerts' })
@@ -30,6 +39,10 @@ export class ClusterAlert {
 
   @Column({ type: 'int', unsigned: true })
   triggeredByIncidentId: number;
+
+  @ManyToOne(() => Incident, restrict)
+  @JoinColumn({ name: 'triggeredByIncidentId' })
+  triggeredByIncident?: Relation<Incident>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   alertedAt: Date;

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { digestTriggers, type DigestTrigger } from '../../shared/enums';
 
 /** The unique week is the second guard, after GET_LOCK, against two app instances sending one digest twice. */
 @Entity({ name: 'digest_runs' })
@@ -10,8 +11,8 @@ export class DigestRun {
   @Column({ type: 'varchar', length: 8, unique: true })
   isoWeek: string;
 
-  @Column({ type: 'enum', enum: ['schedule', 'manual'] })
-  trigger: 'schedule' | 'manual';
+  @Column({ type: 'enum', enum: digestTriggers })
+  trigger: DigestTrigger;
 
   @Column({ type: 'int', default: 0 })
   sent: number;

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { Contaminant } from '../../shared/enums';
+import type { Contaminant, ClusterDimension } from '../../shared/enums';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
 import { dataSource } from '../db/data-source';
@@ -7,9 +7,10 @@ import { IncidentJar } from '../incidents/incident-jar.entity';
 import { Incident } from '../incidents/incident.entity';
 import { Jar } from '../jars/jar.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
-import { ClusterAlert, type ClusterDimension } from './cluster-alert.entity';
+import { ClusterAlert } from './cluster-alert.entity';
 import { liveIncidentSql } from '../incidents/live-incidents';
 import { dateText } from '../core/calendar';
+import { numberOrNull } from '../core/raw-values';
 
 export interface IncidentJarRow {
   label: string;
@@ -27,8 +28,6 @@ export const dimensionColumn: Record<ClusterDimension, string> = {
   culture: 'j.cultureId',
   session: 'j.sessionId',
 };
-
-const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 
 export const incidentMailRepository = {
   findIncident: (id: number) => dataSource.manager.findOneBy(Incident, { id }),
@@ -54,11 +53,11 @@ export const incidentMailRepository = {
       .getRawMany<Record<string, unknown>>();
     return rows.map((r) => ({
       label: String(r.label),
-      cookRunId: num(r.cookRunId),
+      cookRunId: numberOrNull(r.cookRunId),
       cookRun: (r.cookRun as string | null) ?? null,
-      sessionId: num(r.sessionId),
+      sessionId: numberOrNull(r.sessionId),
       session: (r.session as string | null) ?? null,
-      cultureId: num(r.cultureId),
+      cultureId: numberOrNull(r.cultureId),
       culture: (r.culture as string | null) ?? null,
     }));
   },

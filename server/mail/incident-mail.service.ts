@@ -2,7 +2,7 @@ import { mailAudience } from '../../shared/schemas/mail';
 import { config } from '../core/config';
 import { logger } from '../core/logger';
 import { getLabSettings } from '../settings/settings.service';
-import { ClusterAlert, clusterDimensions, type ClusterDimension } from './cluster-alert.entity';
+import { ClusterAlert } from './cluster-alert.entity';
 import { incidentMailRepository, type IncidentJarRow } from './incident-mail.repository';
 import { addDays } from '../core/calendar';
 import { mailRepository } from './mail.repository';
@@ -10,6 +10,7 @@ import { clusterAlertMail, newIncidentMail } from './mail-templates';
 import { deliver, type DeliveryResult } from './mailer';
 import { withNamedLock } from './named-lock';
 import { isLiveIncident } from '../incidents/live-incidents';
+import { clusterDimensions, type ClusterDimension } from '../../shared/enums';
 
 const audienceRoles = (kind: 'new-incident' | 'cluster-alert') => {
   const a = mailAudience[kind];

@@ -1,8 +1,7 @@
-import { contaminantNames, type Contaminant } from '../../shared/enums';
+import { contaminantNames, type Contaminant, type ClusterDimension } from '../../shared/enums';
 import { mailCautions } from './mail-cautions';
 import { percent, renderMail, type MailBlock } from './mail-layout';
 import type { MailContent } from './mailer';
-import type { ClusterDimension } from './cluster-alert.entity';
 
 export interface IncidentJarFacts {
   label: string;

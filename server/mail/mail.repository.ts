@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
-import type { Role } from '../../shared/enums';
-import type { MailKind, SentMailListQuery } from '../../shared/schemas/mail';
+import type { Role, MailKind } from '../../shared/enums';
+import type { SentMailListQuery } from '../../shared/schemas/mail';
 import { applySortAndPage } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { User } from '../users/user.entity';

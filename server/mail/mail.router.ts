@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { sentMailListQuerySchema, updateMailPreferencesSchema } from '../../shared/schemas/mail';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { detailRoute, listRoute } from '../core/record-routes';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { sendWeeklyDigest } from './digest.service';
 import { getMailPreferences, getSentMail, listSentMail, updateMailPreferences } from './mail.service';
 
@@ -14,7 +14,7 @@ mailRouter.get('/preferences', requireUser, async (req, res) => {
 });
 
 mailRouter.put('/preferences', requireUser, validate({ body: updateMailPreferencesSchema }), async (req, res) => {
-  res.json(await updateMailPreferences(currentUser(req), req.body));
+  res.json(await updateMailPreferences(currentUser(req), validated(req, updateMailPreferencesSchema)));
 });
 
 mailRouter.get('/sent', ...listRoute(sentMailListQuerySchema, listSentMail, admin));

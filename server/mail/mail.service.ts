@@ -1,6 +1,5 @@
 import type { Page } from '../../shared/schemas/common';
 import {
-  mailKinds,
   type MailPreferencesDto,
   type SentMailDetailDto,
   type SentMailDto,
@@ -13,6 +12,7 @@ import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { mailRepository } from './mail.repository';
 import type { SentMail } from './sent-mail.entity';
+import { mailKinds } from '../../shared/enums';
 
 export async function getMailPreferences(userId: number): Promise<MailPreferencesDto> {
   const rows = await mailRepository.preferences(userId);

@@ -1,8 +1,8 @@
-import type { MailKind } from '../../shared/schemas/mail';
 import { config } from '../core/config';
 import { logger } from '../core/logger';
 import { mailRepository, type Recipient } from './mail.repository';
 import { mailTransport } from './mail-transport';
+import type { MailKind } from '../../shared/enums';
 
 export interface MailContent {
   subject: string;
@@ -41,14 +41,15 @@ export async function deliver(kind: MailKind, recipients: Recipient[], content: 
     let messageId: string | null = null;
     let error: string | null = null;
     try {
-      const info = await mailTransport().sendMail({
+      // nodemailer types the answer as any; SMTP transports give the message id.
+      const info = (await mailTransport().sendMail({
         from: config().SMTP_FROM,
         to: { name: r.displayName, address: r.email },
         subject: content.subject,
         text: content.text,
         html: content.html,
         headers: { 'X-Asepta-Kind': kind },
-      });
+      })) as { messageId: string };
       messageId = info.messageId;
     } catch (err) {
       error = err instanceof Error ? err.message : String(err);

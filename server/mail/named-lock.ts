@@ -14,10 +14,9 @@ export async function withNamedLock<T>(
   const runner = dataSource.createQueryRunner();
   await runner.connect();
   try {
-    const rows: { got: number | string | null }[] = await runner.query('SELECT GET_LOCK(?, ?) AS got', [
-      name,
-      waitSeconds,
-    ]);
+    const rows = (await runner.query('SELECT GET_LOCK(?, ?) AS got', [name, waitSeconds])) as {
+      got: number | string | null;
+    }[];
     if (Number(rows[0]?.got) !== 1) return undefined;
     try {
       return await work(runner.manager);

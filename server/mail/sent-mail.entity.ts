@@ -1,5 +1,16 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-import { mailKinds, mailStatuses, type MailKind, type MailStatus } from '../../shared/schemas/mail';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
+import { mailKinds, mailStatuses, type MailKind, type MailStatus } from '../../shared/enums';
 
 /** One row per message handed to SMTP, whether it went or not: the admin's list of what was sent. */
 @Entity({ name: 'sent_mails' })
@@ -14,6 +25,10 @@ export class SentMail {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   toUserId: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'toUserId' })
+  toUser?: Relation<User>;
 
   @Column({ type: 'varchar', length: 254 })
   toAddress: string;

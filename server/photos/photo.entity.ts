@@ -1,4 +1,14 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 /** Stored once by content hash; the keys point into the photo storage (local disk or object storage). */
 @Entity({ name: 'photos' })
@@ -29,6 +39,10 @@ export class Photo {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   uploadedById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'uploadedById' })
+  uploadedBy?: Relation<User>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;

@@ -1,4 +1,6 @@
-import { Column, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { ProcedureVersion } from './procedure-version.entity';
+import { restrict } from '../db/relations';
 
 @Entity({ name: 'procedure_steps' })
 @Index(['versionId', 'position'], { unique: true })
@@ -8,6 +10,10 @@ export class ProcedureStep {
 
   @Column({ type: 'int', unsigned: true })
   versionId: number;
+
+  @ManyToOne(() => ProcedureVersion, restrict)
+  @JoinColumn({ name: 'versionId' })
+  version?: Relation<ProcedureVersion>;
 
   @Column({ type: 'int' })
   position: number;

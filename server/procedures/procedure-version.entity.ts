@@ -1,4 +1,16 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { Procedure } from './procedure.entity';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 /** Publishing copies the steps into a new version; an old version is never rewritten. */
 @Entity({ name: 'procedure_versions' })
@@ -9,6 +21,10 @@ export class ProcedureVersion {
 
   @Column({ type: 'int', unsigned: true })
   procedureId: number;
+
+  @ManyToOne(() => Procedure, restrict)
+  @JoinColumn({ name: 'procedureId' })
+  procedure?: Relation<Procedure>;
 
   @Column({ type: 'int' })
   version: number;
@@ -21,6 +37,10 @@ export class ProcedureVersion {
 
   @Column({ type: 'int', unsigned: true, nullable: true })
   publishedById: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'publishedById' })
+  publishedBy?: Relation<User>;
 
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   publishedAt: Date;

@@ -8,7 +8,7 @@ import {
 } from '../../shared/schemas/procedures';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { createRoute, detailRoute, idParam, listRoute, validId, writeRoute } from '../core/record-routes';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import {
   createProcedure,
   getProcedure,
@@ -37,7 +37,7 @@ proceduresRouter.get(
   requireUser,
   validate({ params: idParamsSchema, query: stepStatsQuerySchema }),
   async (req, res) => {
-    res.json(await stepStats(idParam(req), req.query));
+    res.json(await stepStats(idParam(req), validated(req, stepStatsQuerySchema)));
   },
 );
 

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { updateLabSettingsSchema } from '../../shared/schemas/settings';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { readLabSettings, updateLabSettings } from './settings.service';
 
 export const settingsRouter = Router();
@@ -12,5 +12,5 @@ settingsRouter.get('/', requireUser, async (_req, res) => {
 });
 
 settingsRouter.patch('/', requireRole('admin'), validate({ body: updateLabSettingsSchema }), async (req, res) => {
-  res.json(await updateLabSettings(currentUser(req), req.body));
+  res.json(await updateLabSettings(currentUser(req), validated(req, updateLabSettingsSchema)));
 });

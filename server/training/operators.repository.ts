@@ -1,3 +1,4 @@
+import { dateOnly } from '../core/raw-values';
 import { dataSource } from '../db/data-source';
 import { liveIncidentJarPairsSql } from '../incidents/live-incidents';
 
@@ -15,7 +16,6 @@ export interface OperatorTraining {
 }
 
 type Raw = Record<string, unknown>;
-const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
 
 const personKey = (a: string) =>
   `CASE WHEN ${a}.userId IS NOT NULL THEN CONCAT('u', ${a}.userId) ELSE CONCAT('s', ${a}.staffId) END`;
@@ -87,7 +87,7 @@ export const operatorsRepository = {
         String(r.k),
         {
           trainedVersion: Number(r.trainedVersion),
-          lastTrainedOn: day(r.lastTrainedOn),
+          lastTrainedOn: dateOnly(r.lastTrainedOn as Date | string),
           trainedOnCurrent: Number(r.onCurrent) === 1,
         },
       ]),

@@ -2,7 +2,7 @@ import type { Role } from '../../shared/enums';
 import type { OperatorsDto, OperatorsQuery } from '../../shared/schemas/training';
 import { notFound } from '../core/errors';
 import { currentVersionOf, getProcedure } from '../procedures/procedures.service';
-import { operatorsRepository } from './operators.repository';
+import { operatorsRepository, type OperatorTraining } from './operators.repository';
 
 /** Each operator with their sessions, jars and incidents, and whether they hold the current version. */
 export async function listOperators(q: OperatorsQuery): Promise<OperatorsDto> {
@@ -24,7 +24,9 @@ export async function listOperators(q: OperatorsQuery): Promise<OperatorsDto> {
   const [people, counts, training, requests] = await Promise.all([
     operatorsRepository.people(),
     operatorsRepository.counts(),
-    procedure ? operatorsRepository.training(procedure.id, procedure.currentVersionId) : new Map(),
+    procedure
+      ? operatorsRepository.training(procedure.id, procedure.currentVersionId)
+      : new Map<string, OperatorTraining>(),
     procedure ? operatorsRepository.openRequests(procedure.id) : new Map<string, number>(),
   ]);
   return {

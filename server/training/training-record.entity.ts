@@ -1,4 +1,17 @@
-import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  type Relation,
+} from 'typeorm';
+import { ProcedureVersion } from '../procedures/procedure-version.entity';
+import { StaffMember } from '../staff/staff-member.entity';
+import { User } from '../users/user.entity';
+import { restrict } from '../db/relations';
 
 @Entity({ name: 'training_records' })
 @Index(['userId', 'procedureVersionId'])
@@ -10,9 +23,17 @@ export class TrainingRecord {
   @Column({ type: 'int', unsigned: true, nullable: true })
   userId: number | null;
 
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'userId' })
+  user?: Relation<User>;
+
   /** A staff person without an account; set instead of the user id. */
   @Column({ type: 'int', unsigned: true, nullable: true })
   staffId: number | null;
+
+  @ManyToOne(() => StaffMember, restrict)
+  @JoinColumn({ name: 'staffId' })
+  staff?: Relation<StaffMember>;
 
   @Column({ type: 'varchar', length: 120 })
   personName: string;
@@ -20,8 +41,16 @@ export class TrainingRecord {
   @Column({ type: 'int', unsigned: true })
   procedureVersionId: number;
 
+  @ManyToOne(() => ProcedureVersion, restrict)
+  @JoinColumn({ name: 'procedureVersionId' })
+  procedureVersion?: Relation<ProcedureVersion>;
+
   @Column({ type: 'int', unsigned: true, nullable: true })
   trainerId: number | null;
+
+  @ManyToOne(() => User, restrict)
+  @JoinColumn({ name: 'trainerId' })
+  trainer?: Relation<User>;
 
   @Column({ type: 'varchar', length: 120 })
   trainerName: string;

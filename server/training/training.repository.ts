@@ -6,6 +6,7 @@ import type {
   TrainingRecordListQuery,
 } from '../../shared/schemas/training';
 import { applySortAndPage } from '../core/paging';
+import { dateOnly, numberOrNull } from '../core/raw-values';
 import { dataSource } from '../db/data-source';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { User } from '../users/user.entity';
@@ -19,9 +20,7 @@ export interface PersonKey {
   userId: number | null;
   staffId: number | null;
 }
-const n = (v: unknown) => (v === null || v === undefined ? null : Number(v));
 const iso = (v: unknown) => (v === null || v === undefined ? null : new Date(v as string | Date).toISOString());
-const day = (v: unknown) => (v instanceof Date ? v.toISOString().slice(0, 10) : String(v).slice(0, 10));
 
 const recordSortable = { trainedOn: 't.trainedOn', personName: 't.personName', createdAt: 't.createdAt' };
 const requestSortable = { createdAt: 'r.createdAt', doneAt: 'r.doneAt' };
@@ -49,16 +48,16 @@ function recordQuery(m: EntityManager): SelectQueryBuilder<TrainingRecord> {
 
 const toRecordDto = (r: Raw): TrainingRecordDto => ({
   id: Number(r.id),
-  userId: n(r.userId),
-  staffId: n(r.staffId),
+  userId: numberOrNull(r.userId),
+  staffId: numberOrNull(r.staffId),
   personName: String(r.personName),
   procedureId: Number(r.procedureId),
   procedureTitle: String(r.procedureTitle),
   procedureVersionId: Number(r.procedureVersionId),
   version: Number(r.version),
-  trainerId: n(r.trainerId),
+  trainerId: numberOrNull(r.trainerId),
   trainerName: String(r.trainerName),
-  trainedOn: day(r.trainedOn),
+  trainedOn: dateOnly(r.trainedOn as Date | string),
   notes: (r.notes as string | null) ?? null,
   createdAt: iso(r.createdAt) ?? '',
 });
@@ -89,14 +88,14 @@ function requestQuery(m: EntityManager): SelectQueryBuilder<RetrainingRequest> {
 
 const toRequestDto = (r: Raw): RetrainRequestDto => ({
   id: Number(r.id),
-  userId: n(r.userId),
-  staffId: n(r.staffId),
+  userId: numberOrNull(r.userId),
+  staffId: numberOrNull(r.staffId),
   userName: String(r.userName),
   procedureId: Number(r.procedureId),
   procedureTitle: String(r.procedureTitle),
   procedureVersionId: Number(r.procedureVersionId),
   version: Number(r.version),
-  requestedById: n(r.requestedById),
+  requestedById: numberOrNull(r.requestedById),
   requestedByName: (r.requestedByName as string | null) ?? null,
   reason: (r.reason as string | null) ?? null,
   doneAt: iso(r.doneAt),

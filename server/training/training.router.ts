@@ -5,12 +5,10 @@ import {
   operatorsQuerySchema,
   retrainRequestListQuerySchema,
   trainingRecordListQuerySchema,
-  type RetrainRequestListQuery,
-  type TrainingRecordListQuery,
 } from '../../shared/schemas/training';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { createRoute, listRoute } from '../core/record-routes';
-import { validate } from '../core/validate';
+import { validate, validated } from '../core/validate';
 import { listOperators } from './operators.service';
 import {
   createRetrainRequest,
@@ -22,17 +20,12 @@ import {
 /** Mounted at /api: training records, the operators view and retraining requests. */
 export const trainingRouter = Router();
 
-// A technician sees only their own records and requests; the other roles see everyone's.
-const ownUnlessStaff = (req: Express.Request, userId: number | undefined) =>
-  currentUser(req).role === 'technician' ? currentUser(req).id : userId;
-
 trainingRouter.get(
   '/training-records',
   requireUser,
   validate({ query: trainingRecordListQuerySchema }),
   async (req, res) => {
-    const q = req.query as unknown as TrainingRecordListQuery;
-    res.json(await listTrainingRecords({ ...q, userId: ownUnlessStaff(req, q.userId) }));
+    res.json(await listTrainingRecords(currentUser(req), validated(req, trainingRecordListQuerySchema)));
   },
 );
 
@@ -51,8 +44,7 @@ trainingRouter.get(
   requireUser,
   validate({ query: retrainRequestListQuerySchema }),
   async (req, res) => {
-    const q = req.query as unknown as RetrainRequestListQuery;
-    res.json(await listRetrainRequests({ ...q, userId: ownUnlessStaff(req, q.userId) }));
+    res.json(await listRetrainRequests(currentUser(req), validated(req, retrainRequestListQuerySchema)));
   },
 );
 

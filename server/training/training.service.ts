@@ -8,6 +8,7 @@ import type {
   TrainingRecordListQuery,
 } from '../../shared/schemas/training';
 import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import type { SessionUser } from '../core/auth-guards';
 import { notFound, unprocessable } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
@@ -38,8 +39,15 @@ async function requireVersion(id: number) {
   return version;
 }
 
-export async function listTrainingRecords(q: TrainingRecordListQuery): Promise<Page<TrainingRecordDto>> {
-  const [items, total] = await trainingRepository.listRecords(q);
+/** A technician sees only their own records and requests; the other roles see everyone's. */
+const ownUnlessStaff = (viewer: SessionUser, userId: number | undefined) =>
+  viewer.role === 'technician' ? viewer.id : userId;
+
+export async function listTrainingRecords(
+  viewer: SessionUser,
+  q: TrainingRecordListQuery,
+): Promise<Page<TrainingRecordDto>> {
+  const [items, total] = await trainingRepository.listRecords({ ...q, userId: ownUnlessStaff(viewer, q.userId) });
   return pageResult(items, total, q);
 }
 
@@ -94,8 +102,11 @@ export async function createTrainingRecord(actor: Actor, input: CreateTrainingRe
   return dto;
 }
 
-export async function listRetrainRequests(q: RetrainRequestListQuery): Promise<Page<RetrainRequestDto>> {
-  const [items, total] = await trainingRepository.listRequests(q);
+export async function listRetrainRequests(
+  viewer: SessionUser,
+  q: RetrainRequestListQuery,
+): Promise<Page<RetrainRequestDto>> {
+  const [items, total] = await trainingRepository.listRequests({ ...q, userId: ownUnlessStaff(viewer, q.userId) });
   return pageResult(items, total, q);
 }
 

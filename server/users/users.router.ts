@@ -5,10 +5,10 @@ import {
   resetPasswordSchema,
   updateUserSchema,
   userListQuerySchema,
-  type UserListQuery,
 } from '../../shared/schemas/users';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
-import { validate } from '../core/validate';
+import { idParam } from '../core/record-routes';
+import { validate, validated } from '../core/validate';
 import { resetPassword } from './password-reset.service';
 import { createUser, listPeople, listUsers, updateUser } from './users.service';
 
@@ -16,7 +16,7 @@ export const usersRouter = Router();
 const admin = requireRole('admin');
 
 usersRouter.get('/', admin, validate({ query: userListQuerySchema }), async (req, res) => {
-  res.json(await listUsers(req.query as unknown as UserListQuery));
+  res.json(await listUsers(validated(req, userListQuerySchema)));
 });
 
 // Every signed-in person may name a colleague (an action's owner); only names and roles are shown.
@@ -25,11 +25,11 @@ usersRouter.get('/people', requireUser, async (_req, res) => {
 });
 
 usersRouter.post('/', admin, validate({ body: createUserSchema }), async (req, res) => {
-  res.status(201).json(await createUser(currentUser(req), req.body));
+  res.status(201).json(await createUser(currentUser(req), validated(req, createUserSchema)));
 });
 
 usersRouter.patch('/:id', admin, validate({ params: idParamsSchema, body: updateUserSchema }), async (req, res) => {
-  res.json(await updateUser(currentUser(req), Number(req.params.id), req.body));
+  res.json(await updateUser(currentUser(req), idParam(req), validated(req, updateUserSchema)));
 });
 
 usersRouter.post(
@@ -37,6 +37,6 @@ usersRouter.post(
   admin,
   validate({ params: idParamsSchema, body: resetPasswordSchema }),
   async (req, res) => {
-    res.json(await resetPassword(currentUser(req), Number(req.params.id), req.body));
+    res.json(await resetPassword(currentUser(req), idParam(req), validated(req, resetPasswordSchema)));
   },
 );

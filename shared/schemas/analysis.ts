@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { factorSchema, type Factor } from '../enums';
-import type { CookJudgedBy, LogPlacement } from '../stats/cook-verdict';
+import { factorSchema, type Factor, type LogPlacement } from '../enums';
+import type { CookJudgedBy } from '../stats/cook-verdict';
 import { idSchema, localDateSchema } from './common';
 
 const formatSchema = z.enum(['json', 'csv']).default('json');

@@ -8,14 +8,11 @@ import {
   recordedInstantSchema,
 } from './common';
 import { registerCodeSchema } from './grain';
-import { logPlacements } from '../stats/cook-verdict';
+import { f0Sources, logPlacements, type F0Source } from '../enums';
 
 export const logPlacementSchema = z.enum(logPlacements, { error: 'must be chamber or centre' });
 /** How the screen names where the logged probe sat. */
 export const logPlacementLabels = { chamber: 'chamber probe', centre: 'probe at the jar centre' } as const;
-
-export const f0Sources = ['log', 'estimate'] as const;
-export type F0Source = (typeof f0Sources)[number];
 
 /** How the screen names each source: the estimate ignores the lag of the jar centre behind the chamber. */
 export const f0SourceLabels: Record<F0Source, string> = {

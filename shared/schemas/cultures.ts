@@ -1,11 +1,7 @@
 import { z } from 'zod';
-import { cultureStateSchema, cultureStates, type CultureState } from '../enums';
+import { agarResultSchema, cultureStateSchema, cultureStates, type CultureState } from '../enums';
 import { idSchema, listQueryOf, recordedDateSchema } from './common';
 import { registerCodeSchema } from './grain';
-
-export const agarResults = ['clean', 'contaminated', 'inconclusive'] as const;
-export const agarResultSchema = z.enum(agarResults);
-export type AgarResult = (typeof agarResults)[number];
 
 /** The only state changes a culture may make; retired is final. */
 export const cultureTransitions: Record<CultureState, readonly CultureState[]> = {

@@ -3,6 +3,7 @@ import {
   causeCategorySchema,
   contaminantSchema,
   factorSchema,
+  incidentSeveritySchema,
   incidentStatusSchema,
   jarStatusSchema,
   stageFoundSchema,
@@ -10,10 +11,6 @@ import {
 } from '../enums';
 import { dateRangeShape, fromNotAfterTo, idSchema, localDateSchema, pageQuerySchema } from './common';
 import { photoSchema } from './photos';
-
-export const incidentSeverities = ['low', 'medium', 'high'] as const;
-export const incidentSeveritySchema = z.enum(incidentSeverities);
-export type IncidentSeverity = (typeof incidentSeverities)[number];
 
 /** Quick picks for the flag screen; free text is accepted too. */
 export const signSuggestions = {

@@ -1,10 +1,6 @@
 import { z } from 'zod';
-import { jarStatusSchema, jarStatuses, type JarStatus } from '../enums';
+import { f0Sources, jarStatusSchema, jarStatuses, releasedToSchema, type JarStatus } from '../enums';
 import { dateRangeShape, idSchema, pageQuerySchema, recordedInstantSchema } from './common';
-
-export const releasedTargets = ['grow-room', 'customer'] as const;
-export const releasedToSchema = z.enum(releasedTargets);
-export type ReleasedTo = (typeof releasedTargets)[number];
 
 /** Statuses a jar leaves the lab's hands in: no further events. */
 export const endedStatuses: readonly JarStatus[] = ['discarded', 'released'];
@@ -349,7 +345,7 @@ export const jarStorySchema = z.object({
       gaugeKPa: z.number().nullable(),
       container: z.string().nullable(),
       f0: z.number().nullable(),
-      f0Source: z.enum(['log', 'estimate']).nullable(),
+      f0Source: z.enum(f0Sources).nullable(),
       logPlacement: z.enum(['chamber', 'centre']).nullable(),
     })
     .nullable(),

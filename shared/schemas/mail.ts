@@ -1,17 +1,6 @@
 import { z } from 'zod';
-import type { Role } from '../enums';
+import { mailKindSchema, mailStatusSchema, type MailKind, type Role } from '../enums';
 import { pageQuerySchema } from './common';
-
-export const mailKinds = [
-  'new-incident',
-  'cluster-alert',
-  'retraining',
-  'weekly-digest',
-  'action-assigned',
-  'action-overdue',
-] as const;
-export const mailKindSchema = z.enum(mailKinds);
-export type MailKind = (typeof mailKinds)[number];
 
 export const mailKindLabels: Record<MailKind, string> = {
   'new-incident': 'A new incident is filed',
@@ -47,10 +36,6 @@ export const updateMailPreferencesSchema = mailPreferencesSchema
   .strict()
   .refine((v) => Object.keys(v).length > 0, { message: 'name at least one kind of mail' });
 export type UpdateMailPreferencesInput = z.infer<typeof updateMailPreferencesSchema>;
-
-export const mailStatuses = ['sent', 'failed'] as const;
-export const mailStatusSchema = z.enum(mailStatuses);
-export type MailStatus = (typeof mailStatuses)[number];
 
 export const sentMailListQuerySchema = pageQuerySchema.extend({
   kind: mailKindSchema.optional(),

@@ -1,17 +1,16 @@
+import type { F0Source, LogPlacement } from '../enums';
+
 /**
  * How a cook run is judged (DESIGN §4.6). Only a log from a probe at the jar centre measures the dose
  * the grain received, so only such a log is held to the F0 target. A chamber log and the estimate from
  * minutes at the steam temperature can only overstate it: they never pass a run; the minutes at pressure
  * are judged against the container's minimum instead.
  */
-export const logPlacements = ['chamber', 'centre'] as const;
-export type LogPlacement = (typeof logPlacements)[number];
-
 export type CookJudgedBy = 'centre-probe' | 'minutes' | 'unjudged';
 
 export interface CookFacts {
   f0: number | null;
-  f0Source: 'log' | 'estimate' | null;
+  f0Source: F0Source | null;
   logPlacement: LogPlacement | null;
   minutesAtPressure: number;
   container: string | null;

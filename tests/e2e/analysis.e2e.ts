@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import type { WeeklyDto } from '../../shared/schemas/analysis';
-import { plantedProblems, sloppyIsoWeek, weekBefore } from '../../seed/planted-problems';
+import { plantedProblems, sloppyIsoWeek, weekBefore } from '../../server/demo-lab/planted-problems';
 import { desktop, newPage, shotsDir, signIn, useBrowser } from './support/browser';
 
 const browser = useBrowser();

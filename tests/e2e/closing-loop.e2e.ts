@@ -2,7 +2,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import type { LethalityDto, WeeklyDto } from '../../shared/schemas/analysis';
-import { plantedProblems, weekBefore } from '../../seed/planted-problems';
+import { plantedProblems, weekBefore } from '../../server/demo-lab/planted-problems';
 import { mailsTo } from '../setup/mail-sink';
 import { desktop, newPage, shotsDir, signIn, useBrowser } from './support/browser';
 

@@ -1,4 +1,4 @@
-import { dataSource } from '../../server/db/data-source';
+import { clearProduction as clearProductionRecord } from '../setup/clear-production';
 
 /** One jar of imported history, in the columns of POST /api/imports/history (DESIGN.md §5). */
 export interface HistoryJar {
@@ -49,26 +49,7 @@ export function isoWeekLabel(date: string): string {
 }
 
 /** Production and incident tables the analysis counts; emptied so a file's counts are exact. */
-export async function clearProduction(): Promise<void> {
-  for (const t of [
-    'incident_jars',
-    'incident_photos',
-    'incident_step_links',
-    'corrective_actions',
-    'incidents',
-    'jar_events',
-    'jars',
-    'cook_run_readings',
-    'cook_runs',
-    'session_step_checks',
-    'inoculation_sessions',
-    'agar_tests',
-    'cultures',
-    'prep_batches',
-  ]) {
-    await dataSource.query(`DELETE FROM \`${t}\``);
-  }
-}
+export const clearProduction = () => clearProductionRecord(['grain_lots']);
 
 export const planted = {
   shortRun: 'PX-CR-SHORT',

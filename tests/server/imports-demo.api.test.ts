@@ -7,11 +7,12 @@ import { GrainLot } from '../../server/grain/grain-lot.entity';
 import { PrepBatch } from '../../server/grain/prep-batch.entity';
 import { Incident } from '../../server/incidents/incident.entity';
 import { Jar } from '../../server/jars/jar.entity';
-import { addDays, isoWeek, mondayOf } from '../../seed/demo-calendar';
-import { planDemoGrain } from '../../seed/demo-grain';
-import { demoWeeks, planDemoHistory, type PlanJar } from '../../seed/demo-history';
-import { loadDemoLab } from '../../seed/demo-lab';
-import { plantedProblems, sloppyIsoWeek, weekBefore } from '../../seed/planted-problems';
+import { addDays, isoWeek, mondayOf } from '../../server/demo-lab/demo-calendar';
+import { planDemoGrain } from '../../server/demo-lab/demo-grain';
+import { demoWeeks, planDemoHistory, type PlanJar } from '../../server/demo-lab/demo-history';
+import { loadDemoLab } from '../../server/demo-lab/demo-lab';
+import { plantedProblems, sloppyIsoWeek, weekBefore } from '../../server/demo-lab/planted-problems';
+import { clearProduction } from '../setup/clear-production';
 import { signedIn } from '../setup/factories';
 import { createTestApp } from '../setup/test-app';
 
@@ -129,32 +130,12 @@ const EXPECTED_STATUSES: [number, string, number][] = [
   [1, 'contaminated', 9],
 ];
 
-/** Every table of the production record and the incident register, emptied in no particular order (no foreign keys). */
-const productionTables = [
-  'incident_jars',
-  'incident_photos',
-  'incident_step_links',
-  'corrective_actions',
-  'cluster_alerts',
-  'incidents',
-  'jar_events',
-  'jars',
-  'cook_run_readings',
-  'cook_runs',
-  'session_step_checks',
-  'inoculation_sessions',
-  'agar_tests',
-  'cultures',
-  'prep_batches',
-  'grain_lots',
-];
-
 describe('loadDemoLab', () => {
   const app = createTestApp();
 
   beforeAll(async () => {
     // Other files in this worker's database leave jars, runs and cultures behind; the loader only fills an empty record.
-    for (const t of productionTables) await dataSource.query(`DELETE FROM \`${t}\``);
+    await clearProduction();
     await loadDemoLab(() => undefined, LOADED_ON);
   }, 120_000);
 

@@ -70,6 +70,9 @@ describe('GET /api/queue', () => {
   it('keeps a cluster alert in the queue until a supervisor marks it looked at', async () => {
     // A run of its own and long-past dates, so no other file's incidents extend this alert.
     const run = await makeCookRun();
+    // Voided, so the incident the alert points at shows in no list.
+    const [jar] = await makeJars(1, { inoculatedOn: '2000-12-20', cookRunId: run.id });
+    const trigger = await makeIncident([jar!], { foundOn: '2001-01-01', voided: true });
     const alert = await dataSource.manager.save(
       dataSource.manager.create(ClusterAlert, {
         dimension: 'cookRun',
@@ -78,7 +81,7 @@ describe('GET /api/queue', () => {
         firstFoundOn: '2001-01-01',
         lastFoundOn: '2001-01-03',
         incidentCount: 3,
-        triggeredByIncidentId: 1,
+        triggeredByIncidentId: trigger.id,
       }),
     );
     expect((await queue()).clusterAlerts.items.map((a) => a.id)).toContain(alert.id);

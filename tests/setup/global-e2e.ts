@@ -17,7 +17,7 @@ export default async function setup(project: TestProject) {
   applyTestEnv(db.port, database, { PORT: String(port), HOST: '127.0.0.1', PUBLIC_URL: `http://127.0.0.1:${port}` });
   const { dataSource } = await import('../../server/db/data-source');
   const { startServer } = await import('../../server/main');
-  const { loadDemoLab } = await import('../../seed/demo-lab');
+  const { loadDemoLab } = await import('../../server/demo-lab/demo-lab');
   await dataSource.initialize();
   await dataSource.runMigrations({ transaction: 'each' });
   await loadDemoLab(() => undefined);

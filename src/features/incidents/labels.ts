@@ -4,8 +4,8 @@ import {
   type IncidentStatus,
   type StageFound,
   type Verdict,
+  type IncidentSeverity,
 } from '../../../shared/enums';
-import type { IncidentSeverity } from '../../../shared/schemas/incidents';
 import type { BadgeTone } from '../../components/ui/badge';
 
 export const statusLabels: Record<IncidentStatus, string> = {

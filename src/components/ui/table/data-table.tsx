@@ -17,7 +17,7 @@ import { Pager } from './pager';
 import { SkeletonRows, SortableHeader } from './table-parts';
 
 declare module '@tanstack/react-table' {
-  // eslint-disable-next-line @typescript-eslint/no-unused-vars
+  // eslint-disable-next-line @typescript-eslint/no-unused-vars -- the merged interface must repeat the library's type parameters
   interface ColumnMeta<TData extends RowData, TValue> {
     className?: string;
     /** Label shown beside the value in the phone layout, when the header is not plain text. */
@@ -94,7 +94,7 @@ export function DataTable<T>(props: DataTableProps<T>) {
     <div className="overflow-hidden rounded-lg border border-line bg-surface-raised">
       {/* relative: screen-reader-only text in cells is absolutely placed and must not widen the page.
           tabIndex: a scrollable region must be reachable by keyboard to scroll it. */}
-      {/* eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex */}
+      {/* eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex -- a scrolling region must take keyboard focus */}
       <div className="relative overflow-x-auto" role="region" aria-label={caption} tabIndex={0}>
         <table
           aria-busy={isLoading || isFetching || undefined}

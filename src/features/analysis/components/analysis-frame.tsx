@@ -144,7 +144,7 @@ export function Table({ caption, children, className, tableClassName }: TablePro
       role="region"
       aria-label={caption}
       // A region that scrolls must take focus, so a keyboard can scroll it (WCAG 2.1.1).
-      // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex
+      // eslint-disable-next-line jsx-a11y/no-noninteractive-tabindex -- a scrolling region must take keyboard focus
       tabIndex={0}
       // relative: screen-reader-only text in cells is absolutely placed and must not widen the page.
       className={cx('relative overflow-x-auto rounded-lg border-2 border-line bg-surface-raised', className)}

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { cookRunDetailSchema } from '../../../../shared/schemas/cook-runs';
-import type { LogPlacement } from '../../../../shared/stats/cook-verdict';
 import { upload } from '../../../lib/upload';
 import { cookRunsQueries } from './cook-runs-queries';
+import type { LogPlacement } from '../../../../shared/enums';
 
 export function useUploadReadings(cookRunId: number) {
   const queryClient = useQueryClient();

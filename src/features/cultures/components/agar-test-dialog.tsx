@@ -1,4 +1,4 @@
-import { agarResults, createAgarTestSchema } from '../../../../shared/schemas/cultures';
+import { createAgarTestSchema } from '../../../../shared/schemas/cultures';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
@@ -7,6 +7,7 @@ import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { cautionFootnote } from '../../../config/cautions';
 import { useAddAgarTest } from '../api/use-add-agar-test';
+import { agarResults } from '../../../../shared/enums';
 
 const resultOptions = agarResults.map((r) => ({ value: r, label: r.charAt(0).toUpperCase() + r.slice(1) }));
 const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));

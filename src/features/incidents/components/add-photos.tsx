@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
-import { PhotoPicker } from '../../photos/components/photo-picker';
+import { PhotoPicker } from '../../../components/photos/photo-picker';
 import { useAddIncidentPhotos } from '../api/use-incident-mutations';
 
 export function AddPhotos({ incidentId }: { incidentId: number }) {

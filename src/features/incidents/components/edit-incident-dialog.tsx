@@ -1,5 +1,5 @@
-import { contaminantNames, contaminants, stagesFound } from '../../../../shared/enums';
-import { incidentSeverities, updateIncidentSchema, type IncidentDetailDto } from '../../../../shared/schemas/incidents';
+import { contaminantNames, contaminants, stagesFound, incidentSeverities } from '../../../../shared/enums';
+import { updateIncidentSchema, type IncidentDetailDto } from '../../../../shared/schemas/incidents';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { Select } from '../../../components/ui/select';

@@ -1,6 +1,6 @@
 import type { UseFormReturn } from 'react-hook-form';
-import { stagesFound } from '../../../../shared/enums';
-import { incidentSeverities, signSuggestions } from '../../../../shared/schemas/incidents';
+import { stagesFound, incidentSeverities } from '../../../../shared/enums';
+import { signSuggestions } from '../../../../shared/schemas/incidents';
 import { Checkbox } from '../../../components/ui/checkbox';
 import type { FlagFormInput, FlagFormValues } from '../flag-form';
 import { severityLabels, stageLabels } from '../labels';

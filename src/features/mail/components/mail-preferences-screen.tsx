@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
-import type { Role } from '../../../../shared/enums';
-import { mailAudience, mailKindLabels, mailKinds, type MailKind } from '../../../../shared/schemas/mail';
+import { type Role, mailKinds, type MailKind } from '../../../../shared/enums';
+import { mailAudience, mailKindLabels } from '../../../../shared/schemas/mail';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';

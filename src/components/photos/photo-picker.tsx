@@ -1,10 +1,10 @@
 import { useEffect, useRef, useState } from 'react';
-import { photoAcceptedTypes, photoMaxBytes, type PhotoDto } from '../../../../shared/schemas/photos';
-import { Button } from '../../../components/ui/button';
-import { Icon } from '../../../components/ui/icon';
-import { errorMessage } from '../../../lib/api-client';
-import { cx } from '../../../lib/cx';
-import { useUploadPhoto } from '../api/use-upload-photo';
+import { photoAcceptedTypes, photoMaxBytes, type PhotoDto } from '../../../shared/schemas/photos';
+import { Button } from '../ui/button';
+import { Icon } from '../ui/icon';
+import { errorMessage } from '../../lib/api-client';
+import { cx } from '../../lib/cx';
+import { useUploadPhoto } from './use-upload-photo';
 
 interface Item {
   key: number;

@@ -1,4 +1,4 @@
-import type { Contaminant, Workspace } from '../shared/enums';
+import type { Contaminant, Workspace } from '../../shared/enums';
 import { addDays, isoWeekday, mondayOf } from './demo-calendar';
 import { demoCultures, regularCultures } from './demo-cultures';
 import { demoOperators } from './demo-people';

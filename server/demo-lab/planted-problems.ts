@@ -1,4 +1,4 @@
-import type { Contaminant } from '../shared/enums';
+import type { Contaminant } from '../../shared/enums';
 import { addDays, isoWeek, mondayOf } from './demo-calendar';
 
 /**

@@ -1,6 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
-import { photoField, photoSchema, type PhotoDto } from '../../../../shared/schemas/photos';
-import { upload } from '../../../lib/upload';
+import { photoField, photoSchema, type PhotoDto } from '../../../shared/schemas/photos';
+import { upload } from '../../lib/upload';
 
 interface UploadOne {
   file: File;

@@ -1,9 +1,9 @@
-import { Incident } from '../server/incidents/incident.entity';
-import { createIncident } from '../server/incidents/incidents.service';
-import { dataSource } from '../server/db/data-source';
-import { labNoon } from '../server/imports/lab-noon';
-import { User } from '../server/users/user.entity';
-import type { Contaminant } from '../shared/enums';
+import { Incident } from '../incidents/incident.entity';
+import { createIncident } from '../incidents/incidents.service';
+import { dataSource } from '../db/data-source';
+import { labNoon } from '../imports/lab-noon';
+import { User } from '../users/user.entity';
+import type { Contaminant } from '../../shared/enums';
 import { addDays } from './demo-calendar';
 import type { DemoPlan } from './demo-history';
 import { seededRandom } from './prng';

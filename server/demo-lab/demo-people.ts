@@ -1,4 +1,4 @@
-import type { Role } from '../shared/enums';
+import type { Role } from '../../shared/enums';
 
 /** Invented staff of the demo lab; the four sign-in names are fixed by DESIGN.md §5. */
 export const demoPassword = 'asepta-demo';

@@ -1,10 +1,10 @@
-import type { Actor } from '../server/audit/audit.service';
-import { dataSource } from '../server/db/data-source';
-import { Procedure } from '../server/procedures/procedure.entity';
-import { createProcedure, publishVersion } from '../server/procedures/procedures.service';
-import { createTrainingRecord } from '../server/training/training.service';
-import { User } from '../server/users/user.entity';
-import type { ProcedureStepInput } from '../shared/schemas/procedures';
+import type { Actor } from '../audit/audit.service';
+import { dataSource } from '../db/data-source';
+import { Procedure } from '../procedures/procedure.entity';
+import { createProcedure, publishVersion } from '../procedures/procedures.service';
+import { createTrainingRecord } from '../training/training.service';
+import { User } from '../users/user.entity';
+import type { ProcedureStepInput } from '../../shared/schemas/procedures';
 
 export const demoProcedureCode = 'STERILE-INOC';
 

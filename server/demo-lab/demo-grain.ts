@@ -1,10 +1,10 @@
 import { In, type EntityManager } from 'typeorm';
-import type { Actor } from '../server/audit/audit.service';
-import { GrainLot } from '../server/grain/grain-lot.entity';
-import { Grain } from '../server/grain/grain.entity';
-import { createGrainLot, createPrepBatch } from '../server/grain/grain.service';
-import { PrepBatch } from '../server/grain/prep-batch.entity';
-import { Jar } from '../server/jars/jar.entity';
+import type { Actor } from '../audit/audit.service';
+import { GrainLot } from '../grain/grain-lot.entity';
+import { Grain } from '../grain/grain.entity';
+import { createGrainLot, createPrepBatch } from '../grain/grain.service';
+import { PrepBatch } from '../grain/prep-batch.entity';
+import { Jar } from '../jars/jar.entity';
 import { addDays } from './demo-calendar';
 import type { DemoPlan, PlanJar } from './demo-history';
 import { seededRandom } from './prng';
