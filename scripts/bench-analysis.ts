@@ -66,7 +66,8 @@ async function runSizes(): Promise<void> {
     const b = Number(results.at(-1)![n]);
     return [n, ...results.map((r) => r[n] ?? '-'), Number.isFinite(a) && a > 0 ? `${(b / a).toFixed(2)}×` : '-'];
   });
-  for (const l of formatTable({ header: ['figure (median ms)', ...SIZES.map((s) => `${s} jars`), 'grew'], rows })) log(l);
+  for (const l of formatTable({ header: ['figure (median ms)', ...SIZES.map((s) => `${s} jars`), 'grew'], rows }))
+    log(l);
 }
 
 /** Signs in over HTTP as a browser would and returns the session cookie. */

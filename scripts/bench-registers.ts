@@ -53,7 +53,10 @@ export async function benchRegisters(get: Get, runs: number): Promise<Table> {
     const cases: [string, string | null][] = [
       ['page 1', `${r.url}?page=1&pageSize=${PAGE_SIZE}`],
       ['deep page', deep > 1 ? `${r.url}?page=${deep}&pageSize=${PAGE_SIZE}` : null],
-      [r.search ? `search ${r.search}` : 'search (none)', r.search ? `${r.url}?${r.search}&page=1&pageSize=${PAGE_SIZE}` : null],
+      [
+        r.search ? `search ${r.search}` : 'search (none)',
+        r.search ? `${r.url}?${r.search}&page=1&pageSize=${PAGE_SIZE}` : null,
+      ],
     ];
     for (const [what, url] of cases) {
       if (!url) continue;

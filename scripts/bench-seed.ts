@@ -13,7 +13,8 @@ const CULTURES = 40;
 const JARS_PER_RECORD = 50;
 const GRAIN_LOTS = 500;
 
-const digits = '(SELECT 0 d UNION ALL SELECT 1 UNION ALL SELECT 2 UNION ALL SELECT 3 UNION ALL SELECT 4 UNION ALL SELECT 5 UNION ALL SELECT 6 UNION ALL SELECT 7 UNION ALL SELECT 8 UNION ALL SELECT 9)';
+const digits =
+  '(SELECT 0 d UNION ALL SELECT 1 UNION ALL SELECT 2 UNION ALL SELECT 3 UNION ALL SELECT 4 UNION ALL SELECT 5 UNION ALL SELECT 6 UNION ALL SELECT 7 UNION ALL SELECT 8 UNION ALL SELECT 9)';
 
 /**
  * 0 … limit − 1 from cross-joined digit sets: no recursion limit, one statement per table. The leading
@@ -88,7 +89,9 @@ export async function seed(conn: mysql.Connection, today: string, jars: number, 
   );
   await conn.query(`UPDATE jars j JOIN incident_jars ij ON ij.jarId = j.id SET j.status = 'contaminated'`);
   await conn.query(`INSERT INTO procedures (code, title) VALUES ('BP-1', 'Bench inoculation procedure')`);
-  await conn.query(`INSERT INTO procedure_versions (procedureId, version, title) VALUES (1, 1, 'Bench inoculation procedure')`);
+  await conn.query(
+    `INSERT INTO procedure_versions (procedureId, version, title) VALUES (1, 1, 'Bench inoculation procedure')`,
+  );
   await conn.query(
     `INSERT INTO training_records (personName, procedureVersionId, trainerName, trainedOn)
      SELECT CONCAT('Bench trainee ', LPAD(n, 6, '0')), 1, 'Bench trainer', DATE_SUB(?, INTERVAL n DIV 20 DAY)

@@ -20,6 +20,7 @@ export class CookRun {
   @Column({ type: 'date', nullable: true })
   cookedOn: string | null;
 
+  @Index()
   @Column({ type: 'int' })
   minutesAtPressure: number;
 
@@ -33,6 +34,7 @@ export class CookRun {
   altitudeM: number;
 
   /** 1 L jar, 2 L jar, 3 kg bag…: minutes at pressure mean nothing without it. */
+  @Index()
   @Column({ type: 'varchar', length: 40, nullable: true })
   container: string | null;
 
@@ -46,6 +48,7 @@ export class CookRun {
   operatorName: string | null;
 
   /** F0 in minutes, from the temperature log when there is one, else the upper-bound estimate. */
+  @Index()
   @Column({ type: 'double', nullable: true })
   f0: number | null;
 

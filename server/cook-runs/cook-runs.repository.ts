@@ -3,7 +3,7 @@ import type { PageQuery } from '../../shared/schemas/common';
 import type { CookRunFilters, CookRunListQuery } from '../../shared/schemas/cook-runs';
 import type { CookRule } from '../../shared/stats/cook-verdict';
 import type { TemperatureSample } from '../../shared/stats/lethality';
-import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
+import { allSorted, pageSorted, whereContains, whereDateRange, type PageTotal, type SortSpec } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { CookRunReading } from './cook-run-reading.entity';
 import { CookRun } from './cook-run.entity';
@@ -56,7 +56,8 @@ export const cookRunsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { id }),
   findByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(CookRun, { code }),
 
-  list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], number]> => pageSorted(filtered(q, rule), q, sort),
+  list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], PageTotal]> =>
+    pageSorted(filtered(q, rule), q, sort),
   all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, rule: CookRule) =>
     allSorted(() => filtered(q, rule), q.sort, sort),
 

@@ -37,8 +37,41 @@ export function applySortAndPage<T extends ObjectLiteral>(
     .limit(q.pageSize);
 }
 
-export function pageResult<T>(items: T[], total: number, q: PageQuery): Page<T> {
-  return { items, total, page: q.page, pageSize: q.pageSize };
+/**
+ * Counting stops past this many rows: a register's total then costs a short index walk however large
+ * the lab grows, and the answer says the count was cut (the screen shows "more than 10,000").
+ */
+export const COUNT_CAP = 10_000;
+
+export interface PageTotal {
+  total: number;
+  totalCapped: boolean;
+}
+
+/** How many rows the query's filters match, counted up to the cap; its joins, sort and page are dropped. */
+export async function cappedTotal<T extends ObjectLiteral>(
+  qb: SelectQueryBuilder<T>,
+  cap = COUNT_CAP,
+): Promise<PageTotal> {
+  const [sql, params] = qb
+    .clone()
+    .select('1')
+    .orderBy()
+    .offset(undefined)
+    .limit(cap + 1)
+    .getQueryAndParameters();
+  const rows: { n: number | string }[] = await qb.connection.query(
+    `SELECT COUNT(*) AS n FROM (${sql}) counted`,
+    params,
+  );
+  const n = Number(rows[0]?.n ?? 0);
+  return n > cap ? { total: cap, totalCapped: true } : { total: n, totalCapped: false };
+}
+
+/** A page answer; a plain number is an exact total, from a list too short to need the cap. */
+export function pageResult<T>(items: T[], count: PageTotal | number, q: PageQuery): Page<T> {
+  const total = typeof count === 'number' ? { total: count, totalCapped: false } : count;
+  return { items, ...total, page: q.page, pageSize: q.pageSize };
 }
 
 /** Bounds a date column by the optional from/to of a filter, both ends inclusive. */
@@ -93,8 +126,13 @@ export async function allSorted<T extends ObjectLiteral>(
   }
 }
 
-export const pageSorted = <T extends ObjectLiteral>(
+/** One page of a single-table register, read along the sort column's index, and its capped total. */
+export const pageSorted = async <T extends ObjectLiteral>(
   qb: SelectQueryBuilder<T>,
   q: PageQuery,
   spec: SortSpec,
-): Promise<[T[], number]> => applySortAndPage(qb, q, spec.sortable, spec.defaultSort, spec.tieBreak).getManyAndCount();
+): Promise<[T[], PageTotal]> =>
+  Promise.all([
+    applySortAndPage(qb.clone(), q, spec.sortable, spec.defaultSort, spec.tieBreak).getMany(),
+    cappedTotal(qb),
+  ]);

@@ -10,12 +10,14 @@ export class Culture {
   @Column({ type: 'varchar', length: 40, unique: true })
   code: string;
 
+  @Index()
   @Column({ type: 'varchar', length: 120, nullable: true })
   species: string | null;
 
   @Column({ type: 'varchar', length: 120, nullable: true })
   strain: string | null;
 
+  @Index()
   @Column({ type: 'date', nullable: true })
   preparedOn: string | null;
 
@@ -29,6 +31,7 @@ export class Culture {
   @Column({ type: 'int', unsigned: true, nullable: true })
   parentCultureId: number | null;
 
+  @Index()
   @Column({ type: 'enum', enum: cultureStates, default: 'quarantined' })
   state: CultureState;
 

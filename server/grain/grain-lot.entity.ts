@@ -9,15 +9,18 @@ export class GrainLot {
   @Column({ type: 'int', unsigned: true })
   grainId: number;
 
+  @Index()
   @Column({ type: 'varchar', length: 80 })
   supplierLotCode: string;
 
+  @Index()
   @Column({ type: 'date' })
   receivedOn: string;
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 /** Wetness varies batch to batch, which is why jars point at their prep batch. */
 @Entity({ name: 'prep_batches' })
@@ -12,6 +12,7 @@ export class PrepBatch {
   @Column({ type: 'int', unsigned: true })
   grainLotId: number;
 
+  @Index()
   @Column({ type: 'date' })
   preparedOn: string;
 
@@ -27,6 +28,7 @@ export class PrepBatch {
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

@@ -30,6 +30,7 @@ export class Incident {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
+  @Index()
   @Column({ type: 'datetime' })
   foundAt: Date;
 
@@ -43,6 +44,7 @@ export class Incident {
   @Column({ type: 'varchar', length: 120 })
   foundByName: string;
 
+  @Index()
   @Column({ type: 'enum', enum: stagesFound, default: 'incubation' })
   stage: StageFound;
 
@@ -59,6 +61,7 @@ export class Incident {
   @Column({ type: 'varchar', length: 120, nullable: true })
   signTexture: string | null;
 
+  @Index()
   @Column({ type: 'enum', enum: severities, default: 'medium' })
   severity: Severity;
 
@@ -68,9 +71,11 @@ export class Incident {
   @Column({ type: 'boolean', default: false })
   sterilisedBeforeDisposal: boolean;
 
+  @Index()
   @Column({ type: 'enum', enum: incidentStatuses, default: 'open' })
   status: IncidentStatus;
 
+  @Index()
   @Column({ type: 'enum', enum: verdicts, default: 'pending' })
   verdict: Verdict;
 

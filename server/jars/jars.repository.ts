@@ -1,7 +1,7 @@
 import { In, IsNull, Not, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
-import { applySortAndPage, likePrefix, whereDateRange } from '../core/paging';
+import { applySortAndPage, cappedTotal, likePrefix, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
@@ -76,11 +76,19 @@ export const jarsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { id }),
   findByLabel: (label: string, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { label }),
 
-  async list(q: JarListQuery): Promise<[JarRawRow[], number]> {
-    const qb = applyFilters(rowQuery(dataSource.manager), q);
-    const total = await qb.clone().getCount();
-    const rows = await applySortAndPage(qb, q, sortable, 'label', 'j.id').getRawMany<JarRawRow>();
-    return [rows, total];
+  /**
+   * The page's ids from the jar table's own indexes first, then the display columns joined for those
+   * ids alone: neither the page nor its capped total joins every jar.
+   */
+  async list(q: JarListQuery): Promise<[JarRawRow[], PageTotal]> {
+    const filtered = applyFilters(dataSource.manager.createQueryBuilder(Jar, 'j'), q);
+    const ids = filtered.clone().select('j.id', 'id');
+    if (sortColumn(sortable, q.sort ?? 'label').column.startsWith('g.')) ids.innerJoin(Grain, 'g', 'g.id = j.grainId');
+    const [page, total] = await Promise.all([
+      applySortAndPage(ids, q, sortable, 'label', 'j.id').getRawMany<{ id: number | string }>(),
+      cappedTotal(filtered),
+    ]);
+    return [await this.rowsByIds(page.map((r) => Number(r.id))), total];
   },
 
   async exportRows(q: JarExportQuery): Promise<JarRawRow[]> {

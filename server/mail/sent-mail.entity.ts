@@ -15,15 +15,18 @@ export class SentMail {
   @Column({ type: 'int', unsigned: true, nullable: true })
   toUserId: number | null;
 
+  @Index()
   @Column({ type: 'varchar', length: 254 })
   toAddress: string;
 
+  @Index()
   @Column({ type: 'varchar', length: 300 })
   subject: string;
 
   @Column({ type: 'mediumtext' })
   textBody: string;
 
+  @Index()
   @Column({ type: 'enum', enum: mailStatuses })
   status: MailStatus;
 

@@ -1,7 +1,7 @@
 import { type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { SessionFilters, SessionListQuery } from '../../shared/schemas/sessions';
-import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
+import { allSorted, pageSorted, whereContains, whereDateRange, type PageTotal, type SortSpec } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { ProcedureStep } from '../procedures/procedure-step.entity';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
@@ -30,7 +30,7 @@ export const sessionsRepository = {
     m.find(ProcedureStep, { where: { versionId }, order: { position: 'ASC' } }),
   checks: (sessionId: number, m: EntityManager = dataSource.manager) => m.findBy(SessionStepCheck, { sessionId }),
 
-  list: (q: SessionListQuery): Promise<[InoculationSession[], number]> => pageSorted(filtered(q), q, sort),
+  list: (q: SessionListQuery): Promise<[InoculationSession[], PageTotal]> => pageSorted(filtered(q), q, sort),
   all: (q: SessionFilters & Pick<PageQuery, 'sort'>) => allSorted(() => filtered(q), q.sort, sort),
 
   async replaceChecks(m: EntityManager, sessionId: number, checks: { stepId: number; done: boolean }[]): Promise<void> {

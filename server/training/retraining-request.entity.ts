@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
 
 @Entity({ name: 'retraining_requests' })
 export class RetrainingRequest {
@@ -21,9 +21,11 @@ export class RetrainingRequest {
   @Column({ type: 'text', nullable: true })
   reason: string | null;
 
+  @Index()
   @Column({ type: 'datetime', nullable: true })
   doneAt: Date | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

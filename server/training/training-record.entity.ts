@@ -14,6 +14,7 @@ export class TrainingRecord {
   @Column({ type: 'int', unsigned: true, nullable: true })
   staffId: number | null;
 
+  @Index()
   @Column({ type: 'varchar', length: 120 })
   personName: string;
 
@@ -26,12 +27,14 @@ export class TrainingRecord {
   @Column({ type: 'varchar', length: 120 })
   trainerName: string;
 
+  @Index()
   @Column({ type: 'date' })
   trainedOn: string;
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

@@ -5,7 +5,7 @@ import type {
   TrainingRecordDto,
   TrainingRecordListQuery,
 } from '../../shared/schemas/training';
-import { applySortAndPage } from '../core/paging';
+import { applySortAndPage, cappedTotal, type PageTotal } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { User } from '../users/user.entity';
@@ -104,13 +104,13 @@ const toRequestDto = (r: Raw): RetrainRequestDto => ({
 });
 
 export const trainingRepository = {
-  async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], number]> {
+  async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], PageTotal]> {
     const qb = recordQuery(dataSource.manager);
     if (q.userId) qb.andWhere('t.userId = :userId', { userId: q.userId });
     if (q.staffId) qb.andWhere('t.staffId = :staffId', { staffId: q.staffId });
     if (q.procedureId) qb.andWhere('v.procedureId = :procedureId', { procedureId: q.procedureId });
     if (q.procedureVersionId) qb.andWhere('t.procedureVersionId = :pv', { pv: q.procedureVersionId });
-    const total = await qb.clone().getCount();
+    const total = await cappedTotal(qb);
     applySortAndPage(qb, q, recordSortable, '-trainedOn', 't.id');
     return [(await qb.getRawMany<Raw>()).map(toRecordDto), total];
   },
@@ -130,12 +130,12 @@ export const trainingRepository = {
       .andWhere('v.procedureId = :procedureId AND v.version <= :version', { procedureId, version })
       .getMany(),
 
-  async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], number]> {
+  async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], PageTotal]> {
     const qb = requestQuery(dataSource.manager);
     if (q.userId) qb.andWhere('r.userId = :userId', { userId: q.userId });
     if (q.staffId) qb.andWhere('r.staffId = :staffId', { staffId: q.staffId });
     if (q.open) qb.andWhere(q.open === 'true' ? 'r.doneAt IS NULL' : 'r.doneAt IS NOT NULL');
-    const total = await qb.clone().getCount();
+    const total = await cappedTotal(qb);
     applySortAndPage(qb, q, requestSortable, '-createdAt', 'r.id');
     return [(await qb.getRawMany<Raw>()).map(toRequestDto), total];
   },
