@@ -18,6 +18,7 @@ const sort: SortSpec = {
   },
   defaultSort: '-cookedOn',
   tieBreak: 'cr.id',
+  unique: ['cr.code'],
 };
 
 /**

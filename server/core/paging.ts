@@ -20,7 +20,9 @@ export function sortColumn(sortable: Record<string, string>, sort: string): { co
 
 /**
  * Applies `sort` (field or -field, from a whitelist of column expressions) and page/pageSize,
- * with a stable tie-break so that paging never repeats or skips a row.
+ * with a stable tie-break so that paging never repeats or skips a row. A column in `unique` needs
+ * none, and must go without: MariaDB reads a unique index in order only when ORDER BY names that
+ * column alone, and sorts the whole table otherwise.
  */
 export function applySortAndPage<T extends ObjectLiteral>(
   qb: SelectQueryBuilder<T>,
@@ -28,13 +30,12 @@ export function applySortAndPage<T extends ObjectLiteral>(
   sortable: Record<string, string>,
   defaultSort: string,
   tieBreak: string,
+  unique: readonly string[] = [],
 ): SelectQueryBuilder<T> {
   const { column, desc } = sortColumn(sortable, q.sort ?? defaultSort);
-  return qb
-    .orderBy(column, desc ? 'DESC' : 'ASC')
-    .addOrderBy(tieBreak, desc ? 'DESC' : 'ASC')
-    .offset((q.page - 1) * q.pageSize)
-    .limit(q.pageSize);
+  qb.orderBy(column, desc ? 'DESC' : 'ASC');
+  if (!unique.includes(column)) qb.addOrderBy(tieBreak, desc ? 'DESC' : 'ASC');
+  return qb.offset((q.page - 1) * q.pageSize).limit(q.pageSize);
 }
 
 /**
@@ -101,7 +102,10 @@ export function whereContains<T extends ObjectLiteral>(
 export interface SortSpec {
   sortable: Record<string, string>;
   defaultSort: string;
+  /** The table's id column: the tie-break, and how a page's rows are fetched once their ids are known. */
   tieBreak: string;
+  /** Sort columns unique on their own (codes, labels). */
+  unique?: readonly string[];
 }
 
 const exportChunk = 1000;
@@ -126,13 +130,28 @@ export async function allSorted<T extends ObjectLiteral>(
   }
 }
 
-/** One page of a single-table register, read along the sort column's index, and its capped total. */
-export const pageSorted = async <T extends ObjectLiteral>(
+/**
+ * One page of a register and its capped total. The page's ids come first, read along the sort
+ * column's index alone; whole rows are then fetched for those ids only, so a deep page skips index
+ * entries rather than whole rows.
+ */
+export async function pageSorted<T extends ObjectLiteral & { id: number }>(
   qb: SelectQueryBuilder<T>,
   q: PageQuery,
   spec: SortSpec,
-): Promise<[T[], PageTotal]> =>
-  Promise.all([
-    applySortAndPage(qb.clone(), q, spec.sortable, spec.defaultSort, spec.tieBreak).getMany(),
-    cappedTotal(qb),
-  ]);
+): Promise<[T[], PageTotal]> {
+  const idsQuery = applySortAndPage(
+    qb.clone().select(spec.tieBreak, 'id'),
+    q,
+    spec.sortable,
+    spec.defaultSort,
+    spec.tieBreak,
+    spec.unique,
+  );
+  const [idRows, total] = await Promise.all([idsQuery.getRawMany<{ id: number | string }>(), cappedTotal(qb)]);
+  const ids = idRows.map((r) => Number(r.id));
+  if (ids.length === 0) return [[], total];
+  const rows = await qb.clone().andWhere(`${spec.tieBreak} IN (:...pageIds)`, { pageIds: ids }).getMany();
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  return [ids.flatMap((id) => byId.get(id) ?? []), total];
+}

@@ -11,6 +11,7 @@ const sort: SortSpec = {
   sortable: { code: 'c.code', preparedOn: 'c.preparedOn', state: 'c.state', species: 'c.species' },
   defaultSort: 'code',
   tieBreak: 'c.id',
+  unique: ['c.code'],
 };
 
 function filtered(f: CultureFilters): SelectQueryBuilder<Culture> {

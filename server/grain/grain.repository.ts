@@ -64,6 +64,11 @@ export const grainRepository = {
       qb.innerJoin(GrainLot, 'l', 'l.id = pb.grainLotId').andWhere('l.grainId = :grainId', { grainId });
     }
     if (q.q) qb.andWhere('pb.code LIKE :q', { q: `%${q.q}%` });
-    return pageSorted(qb, q, { sortable: batchSortable, defaultSort: '-preparedOn', tieBreak: 'pb.id' });
+    return pageSorted(qb, q, {
+      sortable: batchSortable,
+      defaultSort: '-preparedOn',
+      tieBreak: 'pb.id',
+      unique: ['pb.code'],
+    });
   },
 };

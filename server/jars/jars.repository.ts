@@ -85,7 +85,7 @@ export const jarsRepository = {
     const ids = filtered.clone().select('j.id', 'id');
     if (sortColumn(sortable, q.sort ?? 'label').column.startsWith('g.')) ids.innerJoin(Grain, 'g', 'g.id = j.grainId');
     const [page, total] = await Promise.all([
-      applySortAndPage(ids, q, sortable, 'label', 'j.id').getRawMany<{ id: number | string }>(),
+      applySortAndPage(ids, q, sortable, 'label', 'j.id', ['j.label']).getRawMany<{ id: number | string }>(),
       cappedTotal(filtered),
     ]);
     return [await this.rowsByIds(page.map((r) => Number(r.id))), total];

@@ -12,6 +12,7 @@ const sort: SortSpec = {
   sortable: { code: 's.code', heldOn: 's.heldOn', operator: 's.operatorName' },
   defaultSort: '-heldOn',
   tieBreak: 's.id',
+  unique: ['s.code'],
 };
 
 function filtered(f: SessionFilters): SelectQueryBuilder<InoculationSession> {
