@@ -130,6 +130,30 @@ export async function allSorted<T extends ObjectLiteral>(
   }
 }
 
+/** The ids of one page, in order, from a query of filters alone (joined only where a filter needs it), and its capped total. */
+export async function pageIds<T extends ObjectLiteral>(
+  qb: SelectQueryBuilder<T>,
+  q: PageQuery,
+  spec: SortSpec,
+): Promise<[number[], PageTotal]> {
+  const idsQuery = applySortAndPage(
+    qb.clone().select(spec.tieBreak, 'id'),
+    q,
+    spec.sortable,
+    spec.defaultSort,
+    spec.tieBreak,
+    spec.unique,
+  );
+  const [idRows, total] = await Promise.all([idsQuery.getRawMany<{ id: number | string }>(), cappedTotal(qb)]);
+  return [idRows.map((r) => Number(r.id)), total];
+}
+
+/** Rows fetched by id, put back in the order of the ids. */
+export function inIdOrder<R>(ids: number[], rows: R[], idOf: (r: R) => number): R[] {
+  const byId = new Map(rows.map((r) => [idOf(r), r]));
+  return ids.flatMap((id) => byId.get(id) ?? []);
+}
+
 /**
  * One page of a register and its capped total. The page's ids come first, read along the sort
  * column's index alone; whole rows are then fetched for those ids only, so a deep page skips index
@@ -140,18 +164,8 @@ export async function pageSorted<T extends ObjectLiteral & { id: number }>(
   q: PageQuery,
   spec: SortSpec,
 ): Promise<[T[], PageTotal]> {
-  const idsQuery = applySortAndPage(
-    qb.clone().select(spec.tieBreak, 'id'),
-    q,
-    spec.sortable,
-    spec.defaultSort,
-    spec.tieBreak,
-    spec.unique,
-  );
-  const [idRows, total] = await Promise.all([idsQuery.getRawMany<{ id: number | string }>(), cappedTotal(qb)]);
-  const ids = idRows.map((r) => Number(r.id));
+  const [ids, total] = await pageIds(qb, q, spec);
   if (ids.length === 0) return [[], total];
   const rows = await qb.clone().andWhere(`${spec.tieBreak} IN (:...pageIds)`, { pageIds: ids }).getMany();
-  const byId = new Map(rows.map((r) => [r.id, r]));
-  return [ids.flatMap((id) => byId.get(id) ?? []), total];
+  return [inIdOrder(ids, rows, (r) => r.id), total];
 }

@@ -1,7 +1,7 @@
 import { In, IsNull, Not, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
-import { applySortAndPage, cappedTotal, likePrefix, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
+import { applySortAndPage, likePrefix, pageIds, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
@@ -82,13 +82,16 @@ export const jarsRepository = {
    */
   async list(q: JarListQuery): Promise<[JarRawRow[], PageTotal]> {
     const filtered = applyFilters(dataSource.manager.createQueryBuilder(Jar, 'j'), q);
-    const ids = filtered.clone().select('j.id', 'id');
-    if (sortColumn(sortable, q.sort ?? 'label').column.startsWith('g.')) ids.innerJoin(Grain, 'g', 'g.id = j.grainId');
-    const [page, total] = await Promise.all([
-      applySortAndPage(ids, q, sortable, 'label', 'j.id', ['j.label']).getRawMany<{ id: number | string }>(),
-      cappedTotal(filtered),
-    ]);
-    return [await this.rowsByIds(page.map((r) => Number(r.id))), total];
+    if (sortColumn(sortable, q.sort ?? 'label').column.startsWith('g.')) {
+      filtered.innerJoin(Grain, 'g', 'g.id = j.grainId');
+    }
+    const [ids, total] = await pageIds(filtered, q, {
+      sortable,
+      defaultSort: 'label',
+      tieBreak: 'j.id',
+      unique: ['j.label'],
+    });
+    return [await jarsRepository.rowsByIds(ids), total];
   },
 
   async exportRows(q: JarExportQuery): Promise<JarRawRow[]> {

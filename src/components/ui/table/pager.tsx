@@ -9,11 +9,13 @@ interface PagerProps extends Omit<TableState, 'sort'> {
   /** The server stopped counting at `total`: more rows follow, how many is not known. */
   totalCapped?: boolean;
   onChange: (patch: Partial<TableState>) => void;
+  /** What the pages hold, where a screen pages more than one thing (a grid's rows and its columns). */
+  noun?: string;
   /** The page sizes offered; the registers' sizes unless a screen needs others. */
   sizes?: readonly number[];
 }
 
-export function Pager({ page, pageSize, total, totalCapped = false, onChange, sizes = pageSizes }: PagerProps) {
+export function Pager({ page, pageSize, total, totalCapped = false, noun, onChange, sizes = pageSizes }: PagerProps) {
   const sizeId = useId();
   const pageCount = Math.max(1, Math.ceil(total / pageSize));
   const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
@@ -22,12 +24,14 @@ export function Pager({ page, pageSize, total, totalCapped = false, onChange, si
   return (
     <div className="no-print flex flex-col gap-3 border-t border-line px-4 py-3 sm:flex-row sm:items-center sm:justify-between">
       <p aria-live="polite" className="text-muted">
-        {total === 0 ? 'No rows' : `Showing ${first}–${last} of ${countText(total, totalCapped)}`}
+        {total === 0
+          ? 'No rows'
+          : `${noun ? `${noun}: s` : 'S'}howing ${first}–${last} of ${countText(total, totalCapped)}`}
       </p>
       <div className="flex flex-wrap items-center gap-3">
         <div className="flex items-center gap-2">
           <label htmlFor={sizeId} className="whitespace-nowrap text-muted">
-            Rows per page
+            {noun ? `${noun}, per page` : 'Rows per page'}
           </label>
           <select
             id={sizeId}
@@ -49,7 +53,7 @@ export function Pager({ page, pageSize, total, totalCapped = false, onChange, si
             disabled={page <= 1}
             onClick={() => onChange({ page: page - 1 })}
           >
-            <span className="sr-only">Previous page</span>
+            <span className="sr-only">Previous page{noun && ` of ${noun}`}</span>
           </Button>
           <span className="min-w-20 text-center tabular-nums">
             {totalCapped
@@ -62,7 +66,7 @@ export function Pager({ page, pageSize, total, totalCapped = false, onChange, si
             disabled={page >= pageCount && !totalCapped}
             onClick={() => onChange({ page: page + 1 })}
           >
-            <span className="sr-only">Next page</span>
+            <span className="sr-only">Next page{noun && ` of ${noun}`}</span>
           </Button>
         </div>
       </div>
