@@ -197,6 +197,16 @@ async function main() {
         url: '/api/analysis/crosstab?rows=operator&cols=week',
         sql: crosstabQuery('operator', 'week', frame),
       },
+      {
+        name: 'rates (by=session), a page (as the screen asks)',
+        url: '/api/analysis/rates?by=session&page=1&pageSize=25',
+        sql: ratesQuery('session', frame),
+      },
+      {
+        name: 'crosstab (operator × week), a window (as the screen asks)',
+        url: '/api/analysis/crosstab?rows=operator&cols=week&page=1&pageSize=25&colPage=1&colPageSize=20',
+        sql: crosstabQuery('operator', 'week', frame),
+      },
       { name: 'weekly table', url: '/api/analysis/weekly', sql: null },
       {
         name: 'causes, a page (as the screen asks)',
