@@ -1,119 +1,73 @@
 /**
- * npm run bench: seeds invented production (200,000 jars, 8,000 incidents) into a throwaway MariaDB and
- * prints, for the rates, crosstab and causes routes, the route's median time beside the median of the
- * bare SQL aggregation behind it. Prints figures; asserts nothing.
+ * npm run bench: seeds invented production into a throwaway MariaDB and prints, for the analysis routes,
+ * the route's median time beside the median of the bare SQL aggregation behind it; then every register's
+ * pages and twenty readers at once. Prints figures; asserts nothing.
+ *
+ * BENCH_SIZES: jar counts, comma-separated, each up to 2,000,000, run one after the other with a table of
+ * how each figure grew (default 200000 alone, about ten minutes; BENCH_SIZES=200000,1000000 takes an hour
+ * or more on two cores). Incidents are 4 % of jars unless BENCH_INCIDENTS says otherwise. BENCH_DATA_DIR
+ * keeps each size's seeded database there and reuses it next time (migrations still run).
+ * BENCH_RUNS (20), BENCH_USERS (20), BENCH_CAUSES_WHOLE=0 skips the every-row causes answer.
  */
 import 'reflect-metadata';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { spawn } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import os, { tmpdir } from 'node:os';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
 import { freePort } from './free-port';
 import { startMariaDb } from './mariadb';
+import { benchConcurrent, benchRegisters, type Get } from './bench-registers';
+import { seed } from './bench-seed';
+import { formatTable, median, percentile } from './bench-table';
 
-const JARS = Number(process.env.BENCH_JARS ?? 200_000);
-const INCIDENTS = Number(process.env.BENCH_INCIDENTS ?? 8_000);
+const SIZES = (process.env.BENCH_SIZES ?? process.env.BENCH_JARS ?? '200000').split(',').map(Number);
+const JARS = SIZES[0]!;
+// 4 % of jars contaminated: 8,000 incidents at 200,000 jars, 40,000 at 1,000,000.
+const INCIDENTS = Number(process.env.BENCH_INCIDENTS || Math.round(JARS * 0.04));
 const RUNS = Number(process.env.BENCH_RUNS ?? 20);
-const JARS_PER_SESSION = 40;
-const JARS_PER_COOK_RUN = 60;
-const JARS_PER_PREP_BATCH = 300;
-const SESSIONS_PER_DAY = 10;
-const CULTURES = 40;
+const USERS = Number(process.env.BENCH_USERS ?? 20);
+const MAX_JARS = 2_000_000;
 
 const database = 'asepta_bench';
 const dbUser = { user: 'asepta_bench', password: 'asepta-bench-only' };
 
 const log = (line: string) => process.stdout.write(`${line}\n`);
-const median = (xs: number[]) => {
-  const s = [...xs].sort((a, b) => a - b);
-  const m = Math.floor(s.length / 2);
-  return s.length % 2 ? s[m]! : (s[m - 1]! + s[m]!) / 2;
-};
-/** Nearest-rank percentile. */
-const percentile = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.ceil((p / 100) * xs.length) - 1]!;
 const loadAverage = () =>
   os
     .loadavg()
     .map((l) => l.toFixed(2))
     .join(', ');
 
-/** 0 … 10^6 − 1 from six cross-joined digit sets: no recursion limit, one statement per table. */
-const numbers = (limit: number) => `
-  (SELECT d0.d + 10 * d1.d + 100 * d2.d + 1000 * d3.d + 10000 * d4.d + 100000 * d5.d AS n
-   FROM ${Array.from({ length: 6 }, (_, i) => `(SELECT 0 d UNION ALL SELECT 1 UNION ALL SELECT 2 UNION ALL SELECT 3 UNION ALL SELECT 4 UNION ALL SELECT 5 UNION ALL SELECT 6 UNION ALL SELECT 7 UNION ALL SELECT 8 UNION ALL SELECT 9) d${i}`).join(', ')}
-  ) nums WHERE n < ${limit}`;
-
-async function seed(conn: mysql.Connection, today: string) {
-  const sessions = Math.ceil(JARS / JARS_PER_SESSION);
-  const cookRuns = Math.ceil(JARS / JARS_PER_COOK_RUN);
-  const prepBatches = Math.ceil(JARS / JARS_PER_PREP_BATCH);
-  const started = Date.now();
-  await conn.query(
-    `INSERT INTO cultures (code, state) SELECT CONCAT('BLC-', LPAD(n, 3, '0')), 'released' FROM ${numbers(CULTURES)}`,
-  );
-  await conn.query(
-    `INSERT INTO cook_runs (code, minutesAtPressure, gaugeKPa, altitudeM, cookedOn)
-     SELECT CONCAT('BCR-', LPAD(n, 5, '0')), ELT(1 + n MOD 7, 45, 60, 90, 90, 90, 120, 150), 103.4, 0,
-            DATE_SUB(?, INTERVAL FLOOR(n * ${JARS_PER_COOK_RUN} / ${JARS_PER_SESSION} / ${SESSIONS_PER_DAY}) + 1 DAY)
-     FROM ${numbers(cookRuns)}`,
-    [today],
-  );
-  await conn.query(
-    `INSERT INTO inoculation_sessions (code, heldOn, operatorName, workspace)
-     SELECT CONCAT('BS-', LPAD(n, 5, '0')), DATE_SUB(?, INTERVAL n DIV ${SESSIONS_PER_DAY} DAY),
-            ELT(1 + n MOD 12, 'Ines Marlow', 'Tobin Reyes', 'Uma Castell', 'Viggo Lantz', 'Wren Odell', 'Yara Pell',
-                'Zeno Hart', 'Alba Quist', 'Bo Ferrand', 'Cato Wilde', 'Dana Koss', 'Eli Varga'),
-            ELT(1 + n MOD 3, 'still-air-box', 'flow-hood', 'open-bench')
-     FROM ${numbers(sessions)}`,
-    [today],
-  );
-  await conn.query(
-    `INSERT INTO prep_batches (code, grainLotId, preparedOn) SELECT CONCAT('BPB-', LPAD(n, 4, '0')), 1, ? FROM ${numbers(prepBatches)}`,
-    [today],
-  );
-  // Ids start at 1 in the fresh tables, so each jar's attributes follow from its number n.
-  await conn.query(
-    `INSERT INTO jars (label, grainId, prepBatchId, cookRunId, sessionId, cultureId, room, shelf, status, inoculatedAt, inoculatedOn, imported)
-     SELECT CONCAT('BJ-', LPAD(n, 7, '0')), 1 + (n DIV ${JARS_PER_COOK_RUN}) MOD 7, 1 + n DIV ${JARS_PER_PREP_BATCH},
-            1 + n DIV ${JARS_PER_COOK_RUN}, 1 + n DIV ${JARS_PER_SESSION}, 1 + (n DIV ${JARS_PER_SESSION} + n MOD 2) MOD ${CULTURES},
-            ELT(1 + (n DIV ${JARS_PER_SESSION}) MOD 4, 'Room A', 'Room B', 'Room C', 'Room D'), CONCAT('S', n MOD 20),
-            'colonised', TIMESTAMP(DATE_SUB(?, INTERVAL n DIV ${JARS_PER_SESSION * SESSIONS_PER_DAY} DAY), '12:00:00'),
-            DATE_SUB(?, INTERVAL n DIV ${JARS_PER_SESSION * SESSIONS_PER_DAY} DAY), 1
-     FROM ${numbers(JARS)}`,
-    [today, today],
-  );
-  const step = Math.floor(JARS / INCIDENTS);
-  await conn.query(
-    `INSERT INTO incidents (foundAt, foundOn, foundByName, contaminant, status, verdict, imported, version)
-     SELECT TIMESTAMP(DATE_ADD(j.inoculatedOn, INTERVAL 3 + j.id MOD 11 DAY), '12:00:00'),
-            DATE_ADD(j.inoculatedOn, INTERVAL 3 + j.id MOD 11 DAY), 'Bench finder',
-            ELT(1 + j.id MOD 9, 'bacterial', 'trichoderma', 'penicillium', 'aspergillus', 'pin-mould', 'neurospora', 'cobweb', 'yeast', 'unknown'),
-            'closed', 'confirmed', 1, 1
-     FROM jars j WHERE j.id MOD ${step} = 1 ORDER BY j.id LIMIT ${INCIDENTS}`,
-  );
-  await conn.query(
-    `INSERT INTO incident_jars (incidentId, jarId)
-     SELECT (j.id - 1) DIV ${step} + 1, j.id FROM jars j WHERE j.id MOD ${step} = 1 ORDER BY j.id LIMIT ${INCIDENTS}`,
-  );
-  await conn.query(`UPDATE jars j JOIN incident_jars ij ON ij.jarId = j.id SET j.status = 'contaminated'`);
-  for (const t of [
-    'jars',
-    'incidents',
-    'incident_jars',
-    'cook_runs',
-    'inoculation_sessions',
-    'cultures',
-    'prep_batches',
-  ]) {
-    await conn.query(`ANALYZE TABLE \`${t}\``);
+/** Each size in a process of its own (the app's config and DataSource are read once per process); then how each figure grew. */
+async function runSizes(): Promise<void> {
+  const results: Record<string, string>[] = [];
+  for (const size of SIZES) {
+    const resultFile = path.join(tmpdir(), `asepta-bench-${process.pid}-${size}.json`);
+    const code = await new Promise<number | null>((resolve) => {
+      const child = spawn(process.execPath, [...process.execArgv, process.argv[1]!], {
+        stdio: 'inherit',
+        env: { ...process.env, BENCH_SIZES: String(size), BENCH_INCIDENTS: '', BENCH_RESULT_FILE: resultFile },
+      });
+      child.once('exit', resolve);
+    });
+    if (code !== 0) throw new Error(`the bench at ${size} jars ended with ${code}`);
+    results.push(JSON.parse(readFileSync(resultFile, 'utf8')) as Record<string, string>);
+    rmSync(resultFile, { force: true });
   }
-  const [[counts]] = (await conn.query(
-    'SELECT (SELECT COUNT(*) FROM jars) AS jars, (SELECT COUNT(*) FROM incidents) AS incidents',
-  )) as unknown as [[{ jars: number; incidents: number }]];
-  log(
-    `seeded ${counts.jars} jars and ${counts.incidents} incidents in ${((Date.now() - started) / 1000).toFixed(1)} s`,
-  );
+  const names = Object.keys(results[0]!);
+  const first = SIZES[0]!;
+  const last = SIZES.at(-1)!;
+  log('');
+  log(`How the median grew from ${first} to ${last} jars (the jars grew ${(last / first).toFixed(1)}×)`);
+  const rows = names.map((n) => {
+    const a = Number(results[0]![n]);
+    const b = Number(results.at(-1)![n]);
+    return [n, ...results.map((r) => r[n] ?? '-'), Number.isFinite(a) && a > 0 ? `${(b / a).toFixed(2)}×` : '-'];
+  });
+  for (const l of formatTable({ header: ['figure (median ms)', ...SIZES.map((s) => `${s} jars`), 'grew'], rows }))
+    log(l);
 }
 
 /** Signs in over HTTP as a browser would and returns the session cookie. */
@@ -144,8 +98,17 @@ async function time(fn: () => Promise<unknown>): Promise<number> {
   return performance.now() - t0;
 }
 
+/** A data directory kept under BENCH_DATA_DIR is seeded once and reused by later runs of the same size. */
+function dataDirFor(size: number): { dir: string; keep: boolean } {
+  const root = process.env.BENCH_DATA_DIR;
+  if (root) return { dir: path.resolve(root, `jars-${size}`), keep: true };
+  return { dir: mkdtempSync(path.join(tmpdir(), 'asepta-bench-db-')), keep: false };
+}
+
 async function main() {
-  const dataDir = mkdtempSync(path.join(tmpdir(), 'asepta-bench-db-'));
+  if (SIZES.length > 1) return runSizes();
+  if (!(JARS > 0 && JARS <= MAX_JARS)) throw new Error(`BENCH_SIZES: each size must be from 1 to ${MAX_JARS}`);
+  const { dir: dataDir, keep } = dataDirFor(JARS);
   const db = await startMariaDb({ dataDir, port: await freePort(), database, ...dbUser, fast: true });
   Object.assign(process.env, {
     NODE_ENV: 'test',
@@ -158,6 +121,8 @@ async function main() {
     // Errors only: a failed request's cause reaches the output beside the table.
     LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'error',
     SESSION_SECRET: 'bench-session-secret-0123456789',
+    // Twenty readers sign in at once from one address.
+    LOGIN_ADDRESS_FAILURE_LIMIT: '1000',
   });
   // Imported after the environment is set: config() reads it once.
   const { dataSource } = await import('../server/db/data-source');
@@ -173,9 +138,23 @@ async function main() {
   let server: ReturnType<ReturnType<typeof createApp>['listen']> | undefined;
   try {
     await dataSource.initialize();
+    const migrated = Date.now();
     await dataSource.runMigrations({ transaction: 'each' });
+    log(`migrations: ${((Date.now() - migrated) / 1000).toFixed(1)} s`);
     const today = todayLocal();
-    await seed(conn, today);
+    const count = async (table: string) =>
+      Number(((await conn.query(`SELECT COUNT(*) AS n FROM \`${table}\``)) as unknown as [[{ n: number }]])[0][0].n);
+    const held = await count('jars');
+    if (held === 0) {
+      const started = Date.now();
+      await seed(conn, today, JARS, INCIDENTS);
+      log(`seeded in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+    } else if (held !== JARS) {
+      throw new Error(`${dataDir} holds ${held} jars, not ${JARS}: remove it or choose another BENCH_DATA_DIR`);
+    } else {
+      log(`reusing the seeded data in ${dataDir}`);
+    }
+    log(`${await count('jars')} jars and ${await count('incidents')} incidents`);
     if (process.env.BENCH_HOLD) {
       // For reading query plans by hand: the seeded server stays up until this process gets SIGINT.
       log(`holding: mariadb -h 127.0.0.1 -P ${db.port} -u ${dbUser.user} -p${dbUser.password} ${database}`);
@@ -183,21 +162,24 @@ async function main() {
       return;
     }
 
-    await createUser(
-      { id: null, displayName: 'bench' },
-      { username: 'bench', displayName: 'Bench Reader', email: '', role: 'supervisor', password: 'bench-password' },
-    );
+    const [benchUser] = (await conn.query("SELECT id FROM users WHERE username = 'bench'")) as unknown as [unknown[]];
+    if (benchUser.length === 0) {
+      await createUser(
+        { id: null, displayName: 'bench' },
+        { username: 'bench', displayName: 'Bench Reader', email: '', role: 'admin', password: 'bench-password' },
+      );
+    }
     const app = createApp({ sessionStore: store });
     server = app.listen(0, '127.0.0.1');
     await new Promise((r) => server!.once('listening', r));
     const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
     const cookie = await signIn(base, 'bench', 'bench-password');
-    const get = async (url: string) => {
-      const res = await fetch(`${base}${url}`, { headers: { cookie } });
+    const get: Get = async (url, asCookie = cookie) => {
+      const res = await fetch(`${base}${url}`, { headers: { cookie: asCookie } });
       // Read the whole answer: the route's time includes sending every byte of it.
-      const text = await res.text();
-      if (res.status !== 200) throw new Error(`${url} answered ${res.status}: ${text.slice(0, 200)}`);
-      return text.length;
+      const body = await res.text();
+      if (res.status !== 200) throw new Error(`${url} answered ${res.status}: ${body.slice(0, 200)}`);
+      return { size: body.length, body };
     };
 
     const frame = await frameFor({}, today);
@@ -216,14 +198,28 @@ async function main() {
         sql: crosstabQuery('operator', 'week', frame),
       },
       {
+        name: 'rates (by=session), a page (as the screen asks)',
+        url: '/api/analysis/rates?by=session&page=1&pageSize=25',
+        sql: ratesQuery('session', frame),
+      },
+      {
+        name: 'crosstab (operator × week), a window (as the screen asks)',
+        url: '/api/analysis/crosstab?rows=operator&cols=week&page=1&pageSize=25&colPage=1&colPageSize=20',
+        sql: crosstabQuery('operator', 'week', frame),
+      },
+      { name: 'weekly table', url: '/api/analysis/weekly', sql: null },
+      {
         name: 'causes, a page (as the screen asks)',
         url: '/api/analysis/causes?page=1&pageSize=25&order=standing',
         sql: combinationsQuery(frame),
       },
-      { name: 'causes, every row (CSV-sized)', url: '/api/analysis/causes', sql: combinationsQuery(frame) },
+      ...(process.env.BENCH_CAUSES_WHOLE === '0'
+        ? []
+        : [{ name: 'causes, every row (CSV-sized)', url: '/api/analysis/causes', sql: combinationsQuery(frame) }]),
     ];
 
     const rows: string[][] = [];
+    const figures: Record<string, string> = {};
     const loadBefore = loadAverage();
     for (const c of cases) {
       let size = 0;
@@ -232,45 +228,59 @@ async function main() {
       for (let i = 0; i < RUNS + 2; i++) {
         // Alternate the two so that drift on the machine falls on both alike; the first two runs warm caches.
         const r = await time(async () => {
-          size = await get(c.url);
+          size = (await get(c.url)).size;
         });
-        const b = await time(() => conn.query(c.sql.sql, c.sql.params));
+        const b = c.sql ? await time(() => conn.query(c.sql.sql, c.sql.params)) : NaN;
         if (i >= 2) {
           route.push(r);
           bare.push(b);
         }
       }
       const [m, s] = [median(route), median(bare)];
+      figures[c.name] = m.toFixed(1);
       rows.push([
         c.name,
         m.toFixed(1),
         percentile(route, 95).toFixed(1),
-        s.toFixed(1),
-        (m / s).toFixed(2),
+        c.sql ? s.toFixed(1) : '-',
+        c.sql ? (m / s).toFixed(2) : '-',
         `${(size / 1024).toFixed(0)} KiB`,
       ]);
     }
-    const header = ['endpoint', 'route median ms', 'route p95 ms', 'bare SQL median ms', 'ratio', 'answer size'];
-    const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => r[i]!.length)));
-    const line = (cells: string[]) =>
-      cells.map((c, i) => (i === 0 ? c.padEnd(widths[i]!) : c.padStart(widths[i]!))).join('  ');
     log('');
     log(
-      `${RUNS} runs each (after 2 warm-up runs); targets: rates and crosstab < 250 ms, causes < 1000 ms, ratio < 1.5, a causes page < 200 kB`,
+      `${RUNS} runs each (after 2 warm-up runs); targets at 1,000,000 jars: rates, crosstab and weekly < 150 ms, every answer < 300 kB`,
     );
     log(
-      `jars: ${JARS}; load average (1, 5, 15 min) before: ${loadBefore}; after: ${loadAverage()}; cores: ${os.cpus().length}`,
+      `jars: ${JARS}; incidents: ${INCIDENTS}; load average (1, 5, 15 min) before: ${loadBefore}; after: ${loadAverage()}; cores: ${os.cpus().length}`,
     );
-    log(line(header));
-    log(widths.map((w) => '-'.repeat(w)).join('  '));
-    for (const r of rows) log(line(r));
+    const header = ['endpoint', 'route median ms', 'route p95 ms', 'bare SQL median ms', 'ratio', 'answer size'];
+    for (const l of formatTable({ header, rows })) log(l);
+
+    const registers = await benchRegisters(get, RUNS);
+    for (const r of registers.rows) figures[r[0]!] = r[3]!;
+    log('');
+    log(`Register pages at ${JARS} jars (${RUNS} runs each); target: each page < 50 ms with its total`);
+    for (const l of formatTable(registers)) log(l);
+
+    const cookies = [];
+    for (let i = 0; i < USERS; i++) cookies.push(await signIn(base, 'bench', 'bench-password'));
+    const together = await benchConcurrent(get, cookies, 10, [
+      { name: 'jar register, pages 1–40', url: (i) => `/api/jars?page=${1 + (i % 40)}&pageSize=25` },
+      { name: 'weekly table', url: () => '/api/analysis/weekly' },
+    ]);
+    for (const r of together.rows) figures[`${r[0]!} at once (p97.5)`] = r[4]!;
+    log('');
+    log(`${USERS} readers at once, 10 requests each; target: p97.5 < 300 ms, no errors`);
+    for (const l of formatTable(together)) log(l);
+    if (process.env.BENCH_RESULT_FILE) writeFileSync(process.env.BENCH_RESULT_FILE, JSON.stringify(figures));
   } finally {
     await new Promise((r) => (server ? server.close(r) : r(undefined)));
     await conn.end();
     await new Promise((r) => store.close().then(r, r));
     if (dataSource.isInitialized) await dataSource.destroy();
     await db.stop();
-    rmSync(dataDir, { recursive: true, force: true });
+    if (!keep) rmSync(dataDir, { recursive: true, force: true });
   }
 }
 

@@ -1,5 +1,6 @@
 #!/usr/bin/env bash
-# npm run bench: analysis timings on 200,000 invented jars in a throwaway MariaDB (prints figures, asserts nothing).
+# npm run bench: analysis and register timings on invented jars in a throwaway MariaDB (prints figures, asserts nothing).
+# A plain run seeds 200,000 jars; BENCH_SIZES=200000,1000000 runs both sizes in one go (see scripts/bench-analysis.ts).
 set -euo pipefail
 cd "$(dirname "$0")/.."
 export PATH="/usr/sbin:$PATH"

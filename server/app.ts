@@ -2,7 +2,7 @@ import 'reflect-metadata';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import compression from 'compression';
-import express, { type Express } from 'express';
+import express, { type Express, type RequestHandler } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.router';
@@ -74,8 +74,9 @@ export function createApp({ sessionStore, staticDir = config().STATIC_DIR }: App
   api.use(session);
   // CSRF before authentication: a forged request is refused before anyone's session is looked at.
   api.use(csrfProtection);
-  api.use(passport.initialize());
-  api.use(passport.session());
+  // passport's typings return `any`; the same two handlers also read the session for the jar page.
+  const signedIn: RequestHandler[] = [passport.initialize() as RequestHandler, passport.session() as RequestHandler];
+  api.use(signedIn);
   api.use(passwordGate);
   api.use('/auth', authRouter);
   api.use('/users', usersRouter);
@@ -103,7 +104,7 @@ export function createApp({ sessionStore, staticDir = config().STATIC_DIR }: App
 
   const clientDir = path.resolve(staticDir);
   if (existsSync(path.join(clientDir, 'index.html')))
-    serveClient(app, clientDir, { session: [session, passport.initialize(), passport.session()], jar: jarPageReads });
+    serveClient(app, clientDir, { session: [session, ...signedIn], jar: jarPageReads });
   app.use(errorHandler);
   return app;
 }

@@ -20,6 +20,7 @@ import { sendCsv } from '../core/csv';
 import { validate } from '../core/validate';
 import * as csv from './analysis.csv';
 import * as analysis from './analysis.service';
+import { crosstabPage, ratesPage } from './level-pages';
 
 export const analysisRouter = Router();
 
@@ -41,12 +42,12 @@ const query = <T>(req: { query: unknown }) => req.query as T;
 
 analysisRouter.get('/rates', validate({ query: ratesQuerySchema }), async (req, res) => {
   const q = query<RatesQuery>(req);
-  answer(res, q.format, await analysis.rates(q.by, q), csv.ratesCsv);
+  answer(res, q.format, ratesPage(await analysis.rates(q.by, q), q), csv.ratesCsv);
 });
 
 analysisRouter.get('/crosstab', validate({ query: crosstabQuerySchema }), async (req, res) => {
   const q = query<CrosstabQuery>(req);
-  answer(res, q.format, await analysis.crosstab(q.rows, q.cols, q), csv.crosstabCsv);
+  answer(res, q.format, crosstabPage(await analysis.crosstab(q.rows, q.cols, q), q), csv.crosstabCsv);
 });
 
 analysisRouter.get('/causes', validate({ query: causesQuerySchema }), async (req, res) => {

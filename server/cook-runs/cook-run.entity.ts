@@ -31,6 +31,7 @@ export class CookRun {
   @Column({ type: 'date', nullable: true })
   cookedOn: string | null;
 
+  @Index()
   @Column({ type: 'int' })
   minutesAtPressure: number;
 
@@ -44,6 +45,7 @@ export class CookRun {
   altitudeM: number;
 
   /** 1 L jar, 2 L jar, 3 kg bag…: minutes at pressure mean nothing without it. */
+  @Index()
   @Column({ type: 'varchar', length: 40, nullable: true })
   container: string | null;
 
@@ -61,6 +63,7 @@ export class CookRun {
   operatorName: string | null;
 
   /** F0 in minutes, from the temperature log when there is one, else the upper-bound estimate. */
+  @Index()
   @Column({ type: 'double', nullable: true })
   f0: number | null;
 

@@ -3,7 +3,7 @@ import type { PageQuery } from '../../shared/schemas/common';
 import type { CookRunFilters, CookRunListQuery } from '../../shared/schemas/cook-runs';
 import type { CookRule } from '../../shared/stats/cook-verdict';
 import type { TemperatureSample } from '../../shared/stats/lethality';
-import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
+import { allSorted, pageSorted, whereContains, whereDateRange, type PageTotal, type SortSpec } from '../core/paging';
 import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { CookRunReading } from './cook-run-reading.entity';
@@ -19,6 +19,7 @@ const sort: SortSpec = {
   },
   defaultSort: '-cookedOn',
   tieBreak: 'cr.id',
+  unique: ['cr.code'],
 };
 
 /**
@@ -60,7 +61,8 @@ export const cookRunsRepository = {
     findByValues(m, CookRun, 'code', codes, { id: true, code: true, minutesAtPressure: true }),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<CookRun>[]) => insertMany(m, CookRun, rows),
 
-  list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], number]> => pageSorted(filtered(q, rule), q, sort),
+  list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], PageTotal]> =>
+    pageSorted(filtered(q, rule), q, sort),
   all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, rule: CookRule) =>
     allSorted(() => filtered(q, rule), q.sort, sort),
 

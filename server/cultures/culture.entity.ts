@@ -20,12 +20,14 @@ export class Culture {
   @Column({ type: 'varchar', length: 40, unique: true })
   code: string;
 
+  @Index()
   @Column({ type: 'varchar', length: 120, nullable: true })
   species: string | null;
 
   @Column({ type: 'varchar', length: 120, nullable: true })
   strain: string | null;
 
+  @Index()
   @Column({ type: 'date', nullable: true })
   preparedOn: string | null;
 
@@ -43,6 +45,7 @@ export class Culture {
   @JoinColumn({ name: 'parentCultureId' })
   parentCulture?: Relation<Culture>;
 
+  @Index()
   @Column({ type: 'enum', enum: cultureStates, default: 'quarantined' })
   state: CultureState;
 

@@ -1,7 +1,7 @@
 import { In, type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { CultureFilters, CultureListQuery } from '../../shared/schemas/cultures';
-import { allSorted, pageSorted, whereContains, type SortSpec } from '../core/paging';
+import { allSorted, pageSorted, whereContains, type PageTotal, type SortSpec } from '../core/paging';
 import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { Photo } from '../photos/photo.entity';
@@ -12,6 +12,7 @@ const sort: SortSpec = {
   sortable: { code: 'c.code', preparedOn: 'c.preparedOn', state: 'c.state', species: 'c.species' },
   defaultSort: 'code',
   tieBreak: 'c.id',
+  unique: ['c.code'],
 };
 
 function filtered(f: CultureFilters): SelectQueryBuilder<Culture> {
@@ -33,7 +34,7 @@ export const culturesRepository = {
     dataSource.manager.find(AgarTest, { where: { cultureId }, order: { testedOn: 'DESC', id: 'DESC' } }),
   photoExists: async (id: number, m: EntityManager) => (await m.countBy(Photo, { id })) > 0,
 
-  list: (q: CultureListQuery): Promise<[Culture[], number]> => pageSorted(filtered(q), q, sort),
+  list: (q: CultureListQuery): Promise<[Culture[], PageTotal]> => pageSorted(filtered(q), q, sort),
   all: (q: CultureFilters & Pick<PageQuery, 'sort'>) => allSorted(() => filtered(q), q.sort, sort),
 
   /** Ancestors of a culture, nearest first; bounded so a corrupt loop cannot hang a request. */

@@ -24,15 +24,18 @@ export class GrainLot {
   @JoinColumn({ name: 'grainId' })
   grain?: Relation<Grain>;
 
+  @Index()
   @Column({ type: 'varchar', length: 80 })
   supplierLotCode: string;
 
+  @Index()
   @Column({ type: 'date' })
   receivedOn: string;
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

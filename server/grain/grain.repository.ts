@@ -5,7 +5,7 @@ import {
   type GrainLotListQuery,
   type PrepBatchListQuery,
 } from '../../shared/schemas/grain';
-import { applySortAndPage } from '../core/paging';
+import { pageSorted, type PageTotal } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { GrainLot } from './grain-lot.entity';
 import { Grain } from './grain.entity';
@@ -35,11 +35,11 @@ export const grainRepository = {
   lotsByIds: async (ids: number[], m: EntityManager = dataSource.manager) =>
     ids.length ? m.findBy(GrainLot, { id: In(ids) }) : [],
 
-  async listLots(q: GrainLotListQuery): Promise<[GrainLot[], number]> {
+  async listLots(q: GrainLotListQuery): Promise<[GrainLot[], PageTotal]> {
     const qb = dataSource.manager.createQueryBuilder(GrainLot, 'l');
     if (q.grainId) qb.andWhere('l.grainId = :grainId', { grainId: q.grainId });
     if (q.q) qb.andWhere('l.supplierLotCode LIKE :q', { q: `%${q.q}%` });
-    return applySortAndPage(qb, q, lotSortable, '-receivedOn', 'l.id').getManyAndCount();
+    return pageSorted(qb, q, { sortable: lotSortable, defaultSort: '-receivedOn', tieBreak: 'l.id' });
   },
 
   async batchCounts(lotIds: number[], m: EntityManager = dataSource.manager): Promise<Map<number, number>> {
@@ -57,13 +57,18 @@ export const grainRepository = {
   findBatchById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { id }),
   findBatchByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { code }),
 
-  async listBatches(q: PrepBatchListQuery, grainId: number | null): Promise<[PrepBatch[], number]> {
+  async listBatches(q: PrepBatchListQuery, grainId: number | null): Promise<[PrepBatch[], PageTotal]> {
     const qb = dataSource.manager.createQueryBuilder(PrepBatch, 'pb');
     if (q.grainLotId) qb.andWhere('pb.grainLotId = :lotId', { lotId: q.grainLotId });
     if (grainId !== null) {
       qb.innerJoin(GrainLot, 'l', 'l.id = pb.grainLotId').andWhere('l.grainId = :grainId', { grainId });
     }
     if (q.q) qb.andWhere('pb.code LIKE :q', { q: `%${q.q}%` });
-    return applySortAndPage(qb, q, batchSortable, '-preparedOn', 'pb.id').getManyAndCount();
+    return pageSorted(qb, q, {
+      sortable: batchSortable,
+      defaultSort: '-preparedOn',
+      tieBreak: 'pb.id',
+      unique: ['pb.code'],
+    });
   },
 };

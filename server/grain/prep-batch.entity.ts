@@ -2,6 +2,7 @@ import {
   Column,
   CreateDateColumn,
   Entity,
+  Index,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
@@ -26,6 +27,7 @@ export class PrepBatch {
   @JoinColumn({ name: 'grainLotId' })
   grainLot?: Relation<GrainLot>;
 
+  @Index()
   @Column({ type: 'date' })
   preparedOn: string;
 
@@ -41,6 +43,7 @@ export class PrepBatch {
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

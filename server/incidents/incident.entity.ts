@@ -34,6 +34,7 @@ export class Incident {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
+  @Index()
   @Column({ type: 'datetime' })
   foundAt: Date;
 
@@ -51,6 +52,7 @@ export class Incident {
   @Column({ type: 'varchar', length: 120 })
   foundByName: string;
 
+  @Index()
   @Column({ type: 'enum', enum: stagesFound, default: 'incubation' })
   stage: StageFound;
 
@@ -67,6 +69,7 @@ export class Incident {
   @Column({ type: 'varchar', length: 120, nullable: true })
   signTexture: string | null;
 
+  @Index()
   @Column({ type: 'enum', enum: incidentSeverities, default: 'medium' })
   severity: IncidentSeverity;
 
@@ -76,9 +79,11 @@ export class Incident {
   @Column({ type: 'boolean', default: false })
   sterilisedBeforeDisposal: boolean;
 
+  @Index()
   @Column({ type: 'enum', enum: incidentStatuses, default: 'open' })
   status: IncidentStatus;
 
+  @Index()
   @Column({ type: 'enum', enum: verdicts, default: 'pending' })
   verdict: Verdict;
 

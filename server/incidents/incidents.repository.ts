@@ -2,7 +2,7 @@ import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import { contaminantNames, contaminants } from '../../shared/enums';
 import type { IncidentFilters, IncidentListQuery } from '../../shared/schemas/incidents';
 import { AuditEvent } from '../audit/audit-event.entity';
-import { applySortAndPage, likePrefix, whereDateRange } from '../core/paging';
+import { applySortAndPage, likePrefix, pageSorted, whereDateRange } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { Jar } from '../jars/jar.entity';
 import { IncidentStepLink } from '../procedures/incident-step-link.entity';
@@ -75,7 +75,7 @@ export const incidentsRepository = {
   lockById: (m: EntityManager, id: number) =>
     m.createQueryBuilder(Incident, 'i').setLock('pessimistic_write').where('i.id = :id', { id }).getOne(),
 
-  list: (q: IncidentListQuery) => applySortAndPage(filtered(q), q, sortable, '-foundAt', 'i.id').getManyAndCount(),
+  list: (q: IncidentListQuery) => pageSorted(filtered(q), q, { sortable, defaultSort: '-foundAt', tieBreak: 'i.id' }),
 
   listAll: (f: IncidentFilters, sort: string | undefined, cap: number) =>
     applySortAndPage(filtered(f), { page: 1, pageSize: cap, sort }, sortable, '-foundAt', 'i.id').getMany(),

@@ -28,6 +28,7 @@ import { canEditDescriptive, checkFoundAt, loadForChange } from './incident-rule
 import { incidentsRepository } from './incidents.repository';
 import { toActionDto, toHistoryEntry, toIncidentDetail, toIncidentListItem } from './incidents.mapper';
 import { syncJarStatuses } from './jar-contamination';
+import { pageResult } from '../core/paging';
 
 async function resolveJars(m: EntityManager, input: Pick<CreateIncidentInput, 'jarIds' | 'jarLabels'>): Promise<Jar[]> {
   const labels = input.jarLabels ?? [];
@@ -126,7 +127,7 @@ export async function listIncidents(q: IncidentListQuery): Promise<Page<Incident
   const ids = rows.map((r) => r.id);
   const [codes, photos] = await Promise.all([incidentsRepository.jarCodes(ids), incidentsRepository.photoCounts(ids)]);
   const items = rows.map((r) => toIncidentListItem(r, codes.get(r.id)?.labels ?? [], photos.get(r.id) ?? 0));
-  return { items, total, page: q.page, pageSize: q.pageSize };
+  return pageResult(items, total, q);
 }
 
 export async function getIncident(id: number): Promise<IncidentDetailDto> {

@@ -80,6 +80,7 @@ export class Jar {
   @Column({ type: 'double', nullable: true })
   inoculumMl: number | null;
 
+  @Index()
   @Column({ type: 'varchar', length: 40, nullable: true })
   room: string | null;
 

@@ -1,7 +1,7 @@
 import { In, IsNull, Not, type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
-import { applySortAndPage, likePrefix, whereDateRange } from '../core/paging';
+import { applySortAndPage, likePrefix, pageIds, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
@@ -76,11 +76,22 @@ export const jarsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { id }),
   findByLabel: (label: string, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { label }),
 
-  async list(q: JarListQuery): Promise<[JarRawRow[], number]> {
-    const qb = applyFilters(rowQuery(dataSource.manager), q);
-    const total = await qb.clone().getCount();
-    const rows = await applySortAndPage(qb, q, sortable, 'label', 'j.id').getRawMany<JarRawRow>();
-    return [rows, total];
+  /**
+   * The page's ids from the jar table's own indexes first, then the display columns joined for those
+   * ids alone: neither the page nor its capped total joins every jar.
+   */
+  async list(q: JarListQuery): Promise<[JarRawRow[], PageTotal]> {
+    const filtered = applyFilters(dataSource.manager.createQueryBuilder(Jar, 'j'), q);
+    if (sortColumn(sortable, q.sort ?? 'label').column.startsWith('g.')) {
+      filtered.innerJoin(Grain, 'g', 'g.id = j.grainId');
+    }
+    const [ids, total] = await pageIds(filtered, q, {
+      sortable,
+      defaultSort: 'label',
+      tieBreak: 'j.id',
+      unique: ['j.label'],
+    });
+    return [await jarsRepository.rowsByIds(ids), total];
   },
 
   async exportRows(q: JarExportQuery): Promise<JarRawRow[]> {

@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { Role, MailKind } from '../../shared/enums';
 import type { SentMailListQuery } from '../../shared/schemas/mail';
-import { applySortAndPage } from '../core/paging';
+import { pageSorted, type PageTotal } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { User } from '../users/user.entity';
 import { MailPreference } from './mail-preference.entity';
@@ -53,12 +53,11 @@ export const mailRepository = {
   insertSent: (row: Omit<SentMail, 'id' | 'createdAt'>) =>
     dataSource.manager.save(dataSource.manager.create(SentMail, row)),
 
-  listSent(q: SentMailListQuery): Promise<[SentMail[], number]> {
+  listSent(q: SentMailListQuery): Promise<[SentMail[], PageTotal]> {
     const qb = dataSource.manager.createQueryBuilder(SentMail, 'm');
     if (q.kind) qb.andWhere('m.kind = :kind', { kind: q.kind });
     if (q.status) qb.andWhere('m.status = :status', { status: q.status });
-    applySortAndPage(qb, q, sentSortable, '-createdAt', 'm.id');
-    return qb.getManyAndCount();
+    return pageSorted(qb, q, { sortable: sentSortable, defaultSort: '-createdAt', tieBreak: 'm.id' });
   },
 
   findSent: (id: number) => dataSource.manager.findOneBy(SentMail, { id }),

@@ -30,15 +30,18 @@ export class SentMail {
   @JoinColumn({ name: 'toUserId' })
   toUser?: Relation<User>;
 
+  @Index()
   @Column({ type: 'varchar', length: 254 })
   toAddress: string;
 
+  @Index()
   @Column({ type: 'varchar', length: 300 })
   subject: string;
 
   @Column({ type: 'mediumtext' })
   textBody: string;
 
+  @Index()
   @Column({ type: 'enum', enum: mailStatuses })
   status: MailStatus;
 

@@ -48,6 +48,7 @@ export class InoculationSession {
   staff?: Relation<StaffMember>;
 
   /** The user's or staff person's name as it was when the session was recorded. */
+  @Index()
   @Column({ type: 'varchar', length: 120, nullable: true })
   operatorName: string | null;
 

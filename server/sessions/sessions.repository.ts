@@ -1,7 +1,7 @@
 import { type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { PageQuery } from '../../shared/schemas/common';
 import type { SessionFilters, SessionListQuery } from '../../shared/schemas/sessions';
-import { allSorted, pageSorted, whereContains, whereDateRange, type SortSpec } from '../core/paging';
+import { allSorted, pageSorted, whereContains, whereDateRange, type PageTotal, type SortSpec } from '../core/paging';
 import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { ProcedureStep } from '../procedures/procedure-step.entity';
@@ -13,6 +13,7 @@ const sort: SortSpec = {
   sortable: { code: 's.code', heldOn: 's.heldOn', operator: 's.operatorName' },
   defaultSort: '-heldOn',
   tieBreak: 's.id',
+  unique: ['s.code'],
 };
 
 function filtered(f: SessionFilters): SelectQueryBuilder<InoculationSession> {
@@ -41,7 +42,7 @@ export const sessionsRepository = {
     m.find(ProcedureStep, { where: { versionId }, order: { position: 'ASC' } }),
   checks: (sessionId: number, m: EntityManager = dataSource.manager) => m.findBy(SessionStepCheck, { sessionId }),
 
-  list: (q: SessionListQuery): Promise<[InoculationSession[], number]> => pageSorted(filtered(q), q, sort),
+  list: (q: SessionListQuery): Promise<[InoculationSession[], PageTotal]> => pageSorted(filtered(q), q, sort),
   all: (q: SessionFilters & Pick<PageQuery, 'sort'>) => allSorted(() => filtered(q), q.sort, sort),
 
   async replaceChecks(m: EntityManager, sessionId: number, checks: { stepId: number; done: boolean }[]): Promise<void> {

@@ -2,6 +2,7 @@ import {
   Column,
   CreateDateColumn,
   Entity,
+  Index,
   JoinColumn,
   ManyToOne,
   PrimaryGeneratedColumn,
@@ -49,9 +50,11 @@ export class RetrainingRequest {
   @Column({ type: 'text', nullable: true })
   reason: string | null;
 
+  @Index()
   @Column({ type: 'datetime', nullable: true })
   doneAt: Date | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

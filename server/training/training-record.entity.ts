@@ -35,6 +35,7 @@ export class TrainingRecord {
   @JoinColumn({ name: 'staffId' })
   staff?: Relation<StaffMember>;
 
+  @Index()
   @Column({ type: 'varchar', length: 120 })
   personName: string;
 
@@ -55,12 +56,14 @@ export class TrainingRecord {
   @Column({ type: 'varchar', length: 120 })
   trainerName: string;
 
+  @Index()
   @Column({ type: 'date' })
   trainedOn: string;
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
 
+  @Index()
   @CreateDateColumn({ type: 'datetime', precision: 6 })
   createdAt: Date;
 }

@@ -5,7 +5,7 @@ import type {
   TrainingRecordDto,
   TrainingRecordListQuery,
 } from '../../shared/schemas/training';
-import { applySortAndPage } from '../core/paging';
+import { inIdOrder, pageIds, type PageTotal } from '../core/paging';
 import { dateOnly, numberOrNull } from '../core/raw-values';
 import { dataSource } from '../db/data-source';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
@@ -103,15 +103,27 @@ const toRequestDto = (r: Raw): RetrainRequestDto => ({
 });
 
 export const trainingRepository = {
-  async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], number]> {
-    const qb = recordQuery(dataSource.manager);
+  async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], PageTotal]> {
+    const qb = dataSource.manager.createQueryBuilder(TrainingRecord, 't');
     if (q.userId) qb.andWhere('t.userId = :userId', { userId: q.userId });
     if (q.staffId) qb.andWhere('t.staffId = :staffId', { staffId: q.staffId });
-    if (q.procedureId) qb.andWhere('v.procedureId = :procedureId', { procedureId: q.procedureId });
+    if (q.procedureId) {
+      qb.andWhere(
+        't.procedureVersionId IN (SELECT pv.id FROM procedure_versions pv WHERE pv.procedureId = :procedureId)',
+        {
+          procedureId: q.procedureId,
+        },
+      );
+    }
     if (q.procedureVersionId) qb.andWhere('t.procedureVersionId = :pv', { pv: q.procedureVersionId });
-    const total = await qb.clone().getCount();
-    applySortAndPage(qb, q, recordSortable, '-trainedOn', 't.id');
-    return [(await qb.getRawMany<Raw>()).map(toRecordDto), total];
+    const [ids, total] = await pageIds(qb, q, {
+      sortable: recordSortable,
+      defaultSort: '-trainedOn',
+      tieBreak: 't.id',
+    });
+    if (ids.length === 0) return [[], total];
+    const rows = await recordQuery(dataSource.manager).where('t.id IN (:...ids)', { ids }).getRawMany<Raw>();
+    return [inIdOrder(ids, rows.map(toRecordDto), (r) => r.id), total];
   },
 
   async findRecord(id: number): Promise<TrainingRecordDto | undefined> {
@@ -129,14 +141,19 @@ export const trainingRepository = {
       .andWhere('v.procedureId = :procedureId AND v.version <= :version', { procedureId, version })
       .getMany(),
 
-  async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], number]> {
-    const qb = requestQuery(dataSource.manager);
+  async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], PageTotal]> {
+    const qb = dataSource.manager.createQueryBuilder(RetrainingRequest, 'r');
     if (q.userId) qb.andWhere('r.userId = :userId', { userId: q.userId });
     if (q.staffId) qb.andWhere('r.staffId = :staffId', { staffId: q.staffId });
     if (q.open) qb.andWhere(q.open === 'true' ? 'r.doneAt IS NULL' : 'r.doneAt IS NOT NULL');
-    const total = await qb.clone().getCount();
-    applySortAndPage(qb, q, requestSortable, '-createdAt', 'r.id');
-    return [(await qb.getRawMany<Raw>()).map(toRequestDto), total];
+    const [ids, total] = await pageIds(qb, q, {
+      sortable: requestSortable,
+      defaultSort: '-createdAt',
+      tieBreak: 'r.id',
+    });
+    if (ids.length === 0) return [[], total];
+    const rows = await requestQuery(dataSource.manager).where('r.id IN (:...ids)', { ids }).getRawMany<Raw>();
+    return [inIdOrder(ids, rows.map(toRequestDto), (r) => r.id), total];
   },
 
   async findRequest(id: number): Promise<RetrainRequestDto | undefined> {

@@ -14,11 +14,26 @@ const orderIssue = { path: ['to'], message: 'must not be before from' };
 export const periodQuerySchema = periodBase.refine((q) => inOrder(q), orderIssue);
 export type PeriodQuery = z.infer<typeof periodQuerySchema>;
 
-export const ratesQuerySchema = periodBase.extend({ by: factorSchema }).refine((q) => inOrder(q), orderIssue);
+/** A page of levels: without page, every level (the CSV); with page (pageSize default 25, at most 200), that page. */
+const levelPage = {
+  page: z.coerce.number().int().min(1).optional(),
+  pageSize: z.coerce.number().int().min(1).max(200).default(25),
+};
+
+export const ratesQuerySchema = periodBase
+  .extend({ by: factorSchema, ...levelPage })
+  .refine((q) => inOrder(q), orderIssue);
 export type RatesQuery = z.infer<typeof ratesQuerySchema>;
 
 export const crosstabQuerySchema = periodBase
-  .extend({ rows: factorSchema, cols: factorSchema })
+  .extend({
+    rows: factorSchema,
+    cols: factorSchema,
+    ...levelPage,
+    /** Columns page alike, so that a factor with hundreds of levels (weeks, sessions) fits a screen either way. */
+    colPage: z.coerce.number().int().min(1).optional(),
+    colPageSize: z.coerce.number().int().min(1).max(100).default(20),
+  })
   .refine((q) => inOrder(q), orderIssue)
   .refine((q) => q.rows !== q.cols, { path: ['cols'], message: 'must be a different factor from rows' });
 export type CrosstabQuery = z.infer<typeof crosstabQuerySchema>;
@@ -93,6 +108,17 @@ export interface RatesDto {
   rows: RateRow[];
 }
 
+/** Where a paged answer stands among all the levels. */
+export interface LevelPage {
+  /** Levels in all, over every page. */
+  total: number;
+  /** null when the answer holds every level. */
+  page: number | null;
+  pageSize: number | null;
+}
+
+export type RatesPageDto = RatesDto & LevelPage;
+
 export interface CrosstabCell extends Tally {
   row: string;
   col: string;
@@ -104,6 +130,12 @@ export interface CrosstabDto {
   rows: string[];
   cols: string[];
   cells: CrosstabCell[];
+}
+
+/** A window of the grid: `rows`, `cols` and `cells` hold only the levels of the page on each axis. */
+export interface CrosstabPageDto extends CrosstabDto {
+  rowPage: LevelPage;
+  colPage: LevelPage;
 }
 
 export interface FactorLevel {

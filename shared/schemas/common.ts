@@ -67,6 +67,8 @@ export function pageOf<T extends z.ZodTypeAny>(item: T) {
   return z.object({
     items: z.array(item),
     total: z.number().int(),
+    /** True when more rows match than were counted: `total` is then the cap, and the list goes on past it. */
+    totalCapped: z.boolean().optional(),
     page: z.number().int(),
     pageSize: z.number().int(),
   });
@@ -74,6 +76,7 @@ export function pageOf<T extends z.ZodTypeAny>(item: T) {
 export interface Page<T> {
   items: T[];
   total: number;
+  totalCapped?: boolean;
   page: number;
   pageSize: number;
 }

@@ -9,10 +9,11 @@ import { grainId, makeCookRun, makeJars } from '../setup/lab-rows';
 const MISSING_ID = 4_000_000_001;
 
 const insertJar = async (cookRunId: number, run = (sql: string, p: unknown[]) => dataSource.query(sql, p)) =>
-  run(
-    'INSERT INTO jars (label, grainId, cookRunId, inoculatedAt, inoculatedOn) VALUES (?, ?, ?, NOW(), CURDATE())',
-    [uniqueName('FK'), await grainId(), cookRunId],
-  );
+  run('INSERT INTO jars (label, grainId, cookRunId, inoculatedAt, inoculatedOn) VALUES (?, ?, ?, NOW(), CURDATE())', [
+    uniqueName('FK'),
+    await grainId(),
+    cookRunId,
+  ]);
 
 describe('foreign keys', () => {
   it('refuses a jar that names a cook run that does not exist', async () => {

@@ -51,6 +51,8 @@ interface DataTableProps<T> extends TableState {
   columns: ColumnDef<T, any>[];
   data: T[] | undefined;
   total: number;
+  /** The server stopped counting at `total`. */
+  totalCapped?: boolean;
   onChange: (patch: Partial<TableState>) => void;
   getRowId: (row: T) => string;
   isLoading?: boolean;
@@ -149,7 +151,7 @@ export function DataTable<T>(props: DataTableProps<T>) {
         </table>
       </div>
       {data ? (
-        <Pager page={page} pageSize={pageSize} total={total} onChange={onChange} />
+        <Pager page={page} pageSize={pageSize} total={total} totalCapped={props.totalCapped} onChange={onChange} />
       ) : (
         <p role="status" className="border-t border-line px-4 py-3 text-muted">
           Loading…

@@ -30,6 +30,7 @@ export function QueryTable<T extends { id: number }>({
       columns={columns}
       data={query.data?.items}
       total={query.data?.total ?? 0}
+      totalCapped={query.data?.totalCapped}
       getRowId={(row) => String(row.id)}
       page={state.page}
       pageSize={state.pageSize}

@@ -5,10 +5,10 @@ import type {
   BeforeAfterDto,
   CausesDto,
   ColonisationDto,
-  CrosstabDto,
+  CrosstabPageDto,
   JarsBehindDto,
   LethalityDto,
-  RatesDto,
+  RatesPageDto,
   WeeklyDto,
 } from '../../../../shared/schemas/analysis';
 import { localDateSchema } from '../../../../shared/schemas/common';
@@ -35,6 +35,14 @@ export function readFactor(params: URLSearchParams, key: string, fallback: Facto
   return parsed.success ? parsed.data : fallback;
 }
 
+/** Which page of row levels and of column levels a cross-table shows. */
+export interface CrosstabWindow {
+  page: number;
+  pageSize: number;
+  colPage: number;
+  colPageSize: number;
+}
+
 export type JarsOnly = 'all' | 'settled' | 'contaminated' | 'incubating';
 
 /** The address of a table's CSV export: the same route and filters, answered as a file. */
@@ -52,16 +60,16 @@ export const analysisQueries = {
       queryFn: ({ signal }) => get<WeeklyDto>('weekly', { ...p }, signal),
       placeholderData: keepPreviousData,
     }),
-  rates: (by: Factor, p: Period) =>
+  rates: (by: Factor, p: Period, page: number, pageSize: number) =>
     queryOptions({
-      queryKey: [...analysisQueries.all, 'rates', by, p] as const,
-      queryFn: ({ signal }) => get<RatesDto>('rates', { by, ...p }, signal),
+      queryKey: [...analysisQueries.all, 'rates', by, p, page, pageSize] as const,
+      queryFn: ({ signal }) => get<RatesPageDto>('rates', { by, ...p, page, pageSize }, signal),
       placeholderData: keepPreviousData,
     }),
-  crosstab: (rows: Factor, cols: Factor, p: Period) =>
+  crosstab: (rows: Factor, cols: Factor, p: Period, at: CrosstabWindow) =>
     queryOptions({
-      queryKey: [...analysisQueries.all, 'crosstab', rows, cols, p] as const,
-      queryFn: ({ signal }) => get<CrosstabDto>('crosstab', { rows, cols, ...p }, signal),
+      queryKey: [...analysisQueries.all, 'crosstab', rows, cols, p, at] as const,
+      queryFn: ({ signal }) => get<CrosstabPageDto>('crosstab', { rows, cols, ...p, ...at }, signal),
       placeholderData: keepPreviousData,
     }),
   causes: (p: Period, minJars: number, page: number, pageSize: number) =>

@@ -2,11 +2,20 @@ import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Select } from '../../../components/ui/select';
-import { patchParams } from '../../../lib/list-params';
+import { Pager } from '../../../components/ui/table/pager';
+import { pageSizes, patchParams, readTableState } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
 import { JarsLink } from './jars-link';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
 import { factorLabels, factorOptions, interval, percent } from './labels';
+
+/** Column pages stay narrow: a grid wider than a screen cannot be read a row at a time. */
+const colPageSizes = [10, 20, 40] as const;
+
+function whole(value: string | null, fallback: number): number {
+  const n = Number(value);
+  return Number.isInteger(n) && n >= 1 ? n : fallback;
+}
 
 /** Two factors at once: a grid shaded by rate, with the counts in every cell. */
 export function CrosstabScreen() {
@@ -15,7 +24,10 @@ export function CrosstabScreen() {
   const rows = readFactor(params, 'rows', 'grain');
   const colsWanted = readFactor(params, 'cols', 'cookMinutes');
   const cols = colsWanted === rows ? (rows === 'grain' ? 'cookMinutes' : 'grain') : colsWanted;
-  const table = useQuery(analysisQueries.crosstab(rows, cols, period));
+  const { page, pageSize } = readTableState(params, []);
+  const colPage = whole(params.get('colPage'), 1);
+  const colPageSize = whole(params.get('colPageSize'), colPageSizes[1]);
+  const table = useQuery(analysisQueries.crosstab(rows, cols, period, { page, pageSize, colPage, colPageSize }));
   const data = table.data;
   const cells = new Map(data?.cells.map((c) => [`${c.row}\u0000${c.col}`, c]));
   const top = Math.max(0.0001, ...(data?.cells.map((c) => c.rate ?? 0) ?? [0]));
@@ -33,14 +45,14 @@ export function CrosstabScreen() {
           label="Rows"
           options={factorOptions}
           value={rows}
-          onChange={(e) => setParams(patchParams(params, { rows: e.target.value }))}
+          onChange={(e) => setParams(patchParams(params, { rows: e.target.value, colPage: undefined }))}
           className="w-56"
         />
         <Select
           label="Columns"
           options={factorOptions.filter((o) => o.value !== rows)}
           value={cols}
-          onChange={(e) => setParams(patchParams(params, { cols: e.target.value }))}
+          onChange={(e) => setParams(patchParams(params, { cols: e.target.value, colPage: undefined }))}
           className="w-56"
         />
       </PeriodPicker>
@@ -48,7 +60,7 @@ export function CrosstabScreen() {
         isPending={table.isPending}
         error={table.error}
         onRetry={() => void table.refetch()}
-        isEmpty={!data || data.cells.length === 0}
+        isEmpty={!data || (data.rowPage.total === 0 && data.colPage.total === 0)}
         emptyTitle="No jars in this period record both factors."
       >
         {data && (
@@ -110,6 +122,29 @@ export function CrosstabScreen() {
                 ))}
               </tbody>
             </Table>
+            {data.rowPage.total > pageSizes[0] && (
+              <Pager
+                page={page}
+                pageSize={pageSize}
+                total={data.rowPage.total}
+                noun={factorLabels[rows]}
+                onChange={(patch) => setParams(patchParams(params, { colPage, ...patch }))}
+              />
+            )}
+            {data.colPage.total > colPageSizes[0] && (
+              <Pager
+                page={colPage}
+                pageSize={colPageSize}
+                total={data.colPage.total}
+                noun={factorLabels[cols]}
+                sizes={colPageSizes}
+                onChange={(patch) =>
+                  setParams(
+                    patchParams(params, { page, colPage: patch.page ?? 1, colPageSize: patch.pageSize ?? colPageSize }),
+                  )
+                }
+              />
+            )}
             <p className="mt-3 text-sm text-muted">
               Each cell: rate, then contaminated of jars. Darker cells have higher rates; hover a cell for its 95 %
               interval.

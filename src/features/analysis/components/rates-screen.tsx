@@ -4,7 +4,8 @@ import { Bar, BarChart, CartesianGrid, ErrorBar, ResponsiveContainer, Tooltip, X
 import { factorNames } from '../../../../shared/enums';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Select } from '../../../components/ui/select';
-import { patchParams } from '../../../lib/list-params';
+import { Pager } from '../../../components/ui/table/pager';
+import { pageSizes, patchParams, readTableState } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
 import { JarsLink } from './jars-link';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
@@ -17,7 +18,8 @@ export function RatesScreen() {
   const [params, setParams] = useSearchParams();
   const period = readPeriod(params);
   const by = readFactor(params, 'by', 'grain');
-  const rates = useQuery(analysisQueries.rates(by, period));
+  const { page, pageSize } = readTableState(params, []);
+  const rates = useQuery(analysisQueries.rates(by, period, page, pageSize));
   const data = rates.data;
   const bars = (data?.rows ?? []).slice(0, MAX_BARS).map((r) => ({
     level: r.level,
@@ -46,7 +48,7 @@ export function RatesScreen() {
         isPending={rates.isPending}
         error={rates.error}
         onRetry={() => void rates.refetch()}
-        isEmpty={!data || data.rows.length === 0}
+        isEmpty={!data || data.total === 0}
         emptyTitle={`No jars in this period record a ${factorNames[by]}.`}
       >
         {data && (
@@ -54,7 +56,7 @@ export function RatesScreen() {
             <figure className="mb-6 rounded-lg border-2 border-line bg-surface-raised p-4">
               <figcaption className="mb-2 font-semibold">
                 Rate by {factorNames[by]}, whiskers at the 95 % interval
-                {data.rows.length > MAX_BARS && ` (first ${MAX_BARS} of ${data.rows.length} levels)`}
+                {data.rows.length > MAX_BARS && ` (first ${MAX_BARS} of the ${data.rows.length} levels on this page)`}
               </figcaption>
               <div className="h-72 w-full">
                 <ResponsiveContainer width="100%" height="100%">
@@ -132,6 +134,14 @@ export function RatesScreen() {
                 </tr>
               </tbody>
             </Table>
+            {data.total > pageSizes[0] && (
+              <Pager
+                page={page}
+                pageSize={pageSize}
+                total={data.total}
+                onChange={(patch) => setParams(patchParams(params, patch))}
+              />
+            )}
             {data.notRecorded > 0 && (
               <p className="mt-3 text-sm text-muted">
                 {data.notRecorded} jars in this period do not record a {factorNames[by]} and are left out of the rows

@@ -55,6 +55,7 @@ export function GrainLotsTable({
       columns={columns}
       data={data?.items}
       total={data?.total ?? 0}
+      totalCapped={data?.totalCapped}
       getRowId={(l) => String(l.id)}
       {...table}
     />
@@ -94,6 +95,7 @@ export function PrepBatchesTable({ data, ...table }: TableProps<PrepBatchDto>) {
       columns={batchColumns}
       data={data?.items}
       total={data?.total ?? 0}
+      totalCapped={data?.totalCapped}
       getRowId={(b) => String(b.id)}
       {...table}
     />

@@ -4,6 +4,7 @@ import { buttonClasses } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { QueryTable } from '../../../components/ui/table/query-table';
 import { paths } from '../../../config/paths';
+import { countText } from '../../../lib/count-text';
 import { useListParams } from '../../../lib/use-list-params';
 import { jarsQueries, readJarFilters } from '../api/jars-queries';
 import { sessionJarColumns } from './jars-columns';
@@ -20,7 +21,7 @@ export function SessionJars({ sessionId, canWrite }: { sessionId: number; canWri
     <section aria-labelledby="session-jars-title" className="rounded-lg border border-line bg-surface-raised">
       <div className="flex flex-wrap items-center justify-between gap-3 p-4">
         <h2 id="session-jars-title" className="text-lg font-semibold">
-          Jars{total !== undefined ? ` (${total})` : ''}
+          Jars{total !== undefined ? ` (${countText(total, list.data?.totalCapped)})` : ''}
         </h2>
         <div className="flex flex-wrap gap-2">
           {Boolean(total) && (

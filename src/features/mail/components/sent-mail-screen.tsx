@@ -100,6 +100,7 @@ export function SentMailScreen() {
             page={page}
             pageSize={pageSize}
             total={sent.data.total}
+            totalCapped={sent.data.totalCapped}
             onChange={(patch) => setParams(patchParams(params, patch))}
           />
         </div>

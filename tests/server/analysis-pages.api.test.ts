@@ -1,0 +1,73 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { CrosstabPageDto, RatesPageDto } from '../../shared/schemas/analysis';
+import { dataSource } from '../../server/db/data-source';
+import { Jar } from '../../server/jars/jar.entity';
+import { createTestApp } from '../setup/test-app';
+import { signedIn, uniqueName } from '../setup/factories';
+import { jarFixtures } from './jars.fixtures';
+
+const app = createTestApp();
+// A month no other test plants in, so the period holds these jars alone.
+const period = 'from=2011-03-01&to=2011-03-31';
+let client: Awaited<ReturnType<typeof signedIn>>;
+
+beforeAll(async () => {
+  client = await signedIn(app, 'supervisor');
+  const grains = [await jarFixtures.grainId('rye'), await jarFixtures.grainId('millet')];
+  const sessions = [];
+  for (const day of ['2011-03-02', '2011-03-03', '2011-03-04']) sessions.push(await jarFixtures.session(day));
+  const prefix = uniqueName('LP').toUpperCase();
+  // Two jars per session, one on each grain.
+  await dataSource.manager.insert(
+    Jar,
+    sessions.flatMap((s, i) =>
+      grains.map((grainId, g) => ({
+        label: `${prefix}-${i}${g}`,
+        grainId,
+        sessionId: s.id,
+        status: 'colonised' as const,
+        inoculatedAt: new Date(`${s.heldOn}T10:00:00Z`),
+        inoculatedOn: s.heldOn,
+      })),
+    ),
+  );
+});
+
+describe('analysis answers a page of levels', () => {
+  it('pages rates by session, the overall figures still over every jar', async () => {
+    const whole = (await client.agent.get(`/api/analysis/rates?by=session&${period}`)).body as RatesPageDto;
+    expect(whole).toMatchObject({ total: 3, page: null, pageSize: null });
+    expect(whole.rows).toHaveLength(3);
+    const res = await client.agent.get(`/api/analysis/rates?by=session&${period}&page=2&pageSize=1`);
+    expect(res.status).toBe(200);
+    const paged = res.body as RatesPageDto;
+    expect(paged).toMatchObject({ total: 3, page: 2, pageSize: 1 });
+    expect(paged.rows).toEqual(whole.rows.slice(1, 2));
+    expect(paged.overall).toEqual(whole.overall);
+    expect(paged.overall.jars).toBe(6);
+  });
+
+  it('windows a crosstab on both axes and keeps only the cells inside', async () => {
+    const whole = (await client.agent.get(`/api/analysis/crosstab?rows=session&cols=grain&${period}`))
+      .body as CrosstabPageDto;
+    expect(whole.rowPage).toEqual({ total: 3, page: null, pageSize: null });
+    expect(whole.cells).toHaveLength(6);
+    const res = await client.agent.get(
+      `/api/analysis/crosstab?rows=session&cols=grain&${period}&page=1&pageSize=2&colPage=2&colPageSize=1`,
+    );
+    expect(res.status).toBe(200);
+    const window = res.body as CrosstabPageDto;
+    expect(window.rowPage).toEqual({ total: 3, page: 1, pageSize: 2 });
+    expect(window.colPage).toEqual({ total: 2, page: 2, pageSize: 1 });
+    expect(window.rows).toEqual(whole.rows.slice(0, 2));
+    expect(window.cols).toEqual(whole.cols.slice(1, 2));
+    expect(window.cells).toEqual(whole.cells.filter((c) => window.rows.includes(c.row) && window.cols.includes(c.col)));
+    expect(window.cells).toHaveLength(2);
+  });
+
+  it('refuses a page size past the most a screen asks for, naming the field', async () => {
+    const res = await client.agent.get(`/api/analysis/rates?by=session&${period}&page=1&pageSize=500`);
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body)).toContain('pageSize');
+  });
+});
