@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import type { Server } from 'node:http';
+import { createServer as createHttpServer, type Server } from 'node:http';
 import { createServer as createHttpsServer } from 'node:https';
 import { createApp } from './app';
 import { startAuthMaintenance } from './auth/auth-maintenance';
@@ -42,7 +42,9 @@ async function drain(server: Server): Promise<void> {
 }
 
 /** Config → DataSource → migrations → app → listen; close() undoes it in reverse. */
-export async function startServer(options: { migrate?: boolean; digest?: boolean } = {}): Promise<RunningServer> {
+export async function startServer(
+  options: { migrate?: boolean; digest?: boolean; port?: number } = {},
+): Promise<RunningServer> {
   const c = config();
   if (!dataSource.isInitialized) await dataSource.initialize();
   if (options.migrate ?? true) await dataSource.runMigrations({ transaction: 'each' });
@@ -53,26 +55,39 @@ export async function startServer(options: { migrate?: boolean; digest?: boolean
   const maintenance = startAuthMaintenance();
   void maintenance.run();
   const reminders = (options.digest ?? c.NODE_ENV !== 'test') ? startReminderScheduler() : undefined;
-  const server: Server = await new Promise((resolve, reject) => {
-    const s = c.HTTPS
-      ? createHttpsServer(labCertificate(c.TLS_DIR, c.HOST), app).listen(c.PORT, c.HOST, () => resolve(s))
-      : app.listen(c.PORT, c.HOST, () => resolve(s));
-    s.once('error', reject);
-  });
+  const port = options.port ?? c.PORT;
+  // Both servers are made first and listened on here: Express 5's app.listen hands a busy port to its
+  // callback rather than to 'error', and we must refuse to start rather than report a port someone else holds.
+  const server: Server = c.HTTPS ? createHttpsServer(labCertificate(c.TLS_DIR, c.HOST), app) : createHttpServer(app);
+  const stopWork = () => {
+    digest?.stop();
+    maintenance.stop();
+    reminders?.stop();
+    stopMailListeners();
+    closeMailTransport();
+  };
+  try {
+    await new Promise<void>((resolve, reject) => {
+      server.once('error', reject);
+      server.listen(port, c.HOST, () => {
+        server.off('error', reject);
+        resolve();
+      });
+    });
+  } catch (err) {
+    stopWork();
+    await sessionStore.close();
+    throw err;
+  }
   const address = server.address();
-  const port = typeof address === 'object' && address ? address.port : c.PORT;
-  const url = `${c.HTTPS ? 'https' : 'http'}://${c.HOST}:${port}`;
+  const url = `${c.HTTPS ? 'https' : 'http'}://${c.HOST}:${typeof address === 'object' && address ? address.port : port}`;
   logger.info(`Asepta is serving ${url}`);
   return {
     url,
     server,
     async close() {
       await drain(server);
-      digest?.stop();
-      maintenance.stop();
-      reminders?.stop();
-      stopMailListeners();
-      closeMailTransport();
+      stopWork();
       await sessionStore.close();
       if (dataSource.isInitialized) await dataSource.destroy();
     },

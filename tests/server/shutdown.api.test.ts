@@ -4,7 +4,8 @@ import { startServer } from '../../server/main';
 
 describe('shutdown', () => {
   it('lets a request that is in flight finish before the server closes', async () => {
-    const running = await startServer({ migrate: false, digest: false });
+    // Port 0: a free port of its own, so an app already serving the usual port cannot answer in its place.
+    const running = await startServer({ migrate: false, digest: false, port: 0 });
     const body = JSON.stringify({ username: 'someone', password: 'something' });
     const half = Math.floor(body.length / 2);
 
@@ -35,5 +36,19 @@ describe('shutdown', () => {
     expect(JSON.parse(res.text).error.code).toBe('csrf-invalid');
     await closing;
     expect(running.server.listening).toBe(false);
+  });
+});
+
+describe('start', () => {
+  it('refuses to start on a port another process already serves', async () => {
+    const other = http.createServer((_req, res) => res.end());
+    await new Promise<void>((resolve) => other.listen(0, '127.0.0.1', resolve));
+    const address = other.address();
+    const port = typeof address === 'object' && address ? address.port : 0;
+    try {
+      await expect(startServer({ migrate: false, digest: false, port })).rejects.toMatchObject({ code: 'EADDRINUSE' });
+    } finally {
+      await new Promise<void>((resolve) => other.close(() => resolve()));
+    }
   });
 });
