@@ -167,11 +167,12 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                       <span className={nowrap}>{percent(w.ucl)}</span>
                     </td>
                     <td className={tdw}>
-                      <div className="flex flex-wrap gap-1">
+                      {/* Narrow on purpose: the longest badge wraps so the table keeps 1366 px without scrolling. */}
+                      <div className="flex max-w-32 flex-wrap gap-1">
                         {w.outOfControl ? (
                           <Badge tone="danger">Out of control</Badge>
                         ) : w.belowLcl ? (
-                          <Badge tone="ok" className="whitespace-normal">
+                          <Badge tone="ok" className="whitespace-normal!">
                             Below the lower limit: a good week
                           </Badge>
                         ) : w.provisional ? (
