@@ -1,5 +1,5 @@
 import type { Factor, LogPlacement } from '../../shared/enums';
-import type { ActionSummary } from '../../shared/schemas/analysis';
+import type { ActionSummary } from '../../shared/schemas/analysis-actions';
 import { dataSource } from '../db/data-source';
 import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql, liveIncidentSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';

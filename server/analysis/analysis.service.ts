@@ -1,15 +1,11 @@
 import type { Factor } from '../../shared/enums';
-import type {
-  CausesDto,
-  ColonisationDto,
-  CrosstabDto,
-  JarsBehindDto,
-  JarsBehindQuery,
-  LethalityDto,
-  RatesDto,
-  WeeklyDto,
-  WeeklyRow,
-} from '../../shared/schemas/analysis';
+import type { CausesDto } from '../../shared/schemas/analysis-causes';
+import type { ColonisationDto } from '../../shared/schemas/analysis-colonisation';
+import type { CrosstabDto, RatesDto } from '../../shared/schemas/analysis-rates';
+import type { JarsBehindDto } from '../../shared/schemas/analysis-jars-behind';
+import type { JarsBehindQuery } from '../../shared/schemas/analysis';
+import type { LethalityDto } from '../../shared/schemas/analysis-lethality';
+import type { WeeklyDto, WeeklyRow } from '../../shared/schemas/analysis-weekly';
 import { kaplanMeier } from '../../shared/stats/kaplan-meier';
 import { judgeCook } from '../../shared/stats/cook-verdict';
 import { f0AtConstant } from '../../shared/stats/lethality';

@@ -1,11 +1,10 @@
 import type {
   ActionVerdictDto,
   ActionVerdictsDto,
-  ActionVerdictsQuery,
   BeforeAfterDto,
-  BeforeAfterQuery,
   PeriodCount,
-} from '../../shared/schemas/analysis';
+} from '../../shared/schemas/analysis-actions';
+import type { ActionVerdictsQuery, BeforeAfterQuery } from '../../shared/schemas/analysis';
 import { AppError, notFound, unprocessable } from '../core/errors';
 import { todayLocal } from '../core/local-time';
 import { analysisRepository, type ActionRow, type CountRow } from './analysis.repository';

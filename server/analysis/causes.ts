@@ -1,5 +1,6 @@
 import { factors, type Factor } from '../../shared/enums';
-import type { AdjustedRisk, CauseRow, FactorLevel, LeadDto, Standing } from '../../shared/schemas/analysis';
+import type { AdjustedRisk, CauseRow, LeadDto, Standing } from '../../shared/schemas/analysis-causes';
+import type { FactorLevel } from '../../shared/schemas/analysis';
 import { bhAdjust } from '../../shared/stats/benjamini-hochberg';
 import { fisherExactTwoSided } from '../../shared/stats/fisher';
 import { relativeRisk, type RelativeRisk } from '../../shared/stats/relative-risk';
