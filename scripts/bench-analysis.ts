@@ -131,7 +131,7 @@ async function main() {
   const { createUser } = await import('../server/users/users.service');
   const { todayLocal } = await import('../server/core/local-time');
   const { frameFor } = await import('../server/analysis/analysis.service');
-  const { ratesQuery, crosstabQuery, combinationsQuery } = await import('../server/analysis/analysis.repository');
+  const { ratesQuery, crosstabQuery, combinationsQuery } = await import('../server/analysis/analysis.queries');
 
   const store = createSessionStore();
   const conn = await mysql.createConnection({ host: '127.0.0.1', port: db.port, ...dbUser, database });

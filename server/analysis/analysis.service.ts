@@ -13,7 +13,8 @@ import { pChartLimits } from '../../shared/stats/p-chart';
 import { psiToKPa, sterilisingTemperatureC } from '../../shared/stats/steam';
 import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
-import { analysisRepository, type CountRow, type Period } from './analysis.repository';
+import { analysisRepository, type Period } from './analysis.repository';
+import type { CountRow } from './analysis.queries';
 import { buildCauses, byStanding } from './causes';
 import { addDays, mondayOf } from '../core/calendar';
 

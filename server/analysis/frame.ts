@@ -2,7 +2,8 @@ import type { Tally } from '../../shared/schemas/analysis';
 import { wilsonInterval } from '../../shared/stats/wilson';
 import { todayLocal } from '../core/local-time';
 import { getLabSettings } from '../settings/settings.service';
-import type { CountRow, Frame, Period } from './analysis.repository';
+import type { CountRow } from './analysis.queries';
+import type { Frame, Period } from './analysis.repository';
 import { addDays } from '../core/calendar';
 
 export async function frameFor(p: Period, today = todayLocal()): Promise<Frame> {
