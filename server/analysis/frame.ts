@@ -26,3 +26,17 @@ export function tally(c: CountRow): Tally {
     ci95: wilsonInterval(c.contaminated, c.jars),
   };
 }
+
+export const sum = (rows: CountRow[]): CountRow =>
+  rows.reduce(
+    (a, r) => ({
+      jars: a.jars + r.jars,
+      contaminated: a.contaminated + r.contaminated,
+      incubating: a.incubating + r.incubating,
+    }),
+    {
+      jars: 0,
+      contaminated: 0,
+      incubating: 0,
+    },
+  );
