@@ -10,87 +10,19 @@
  * BENCH_RUNS (20), BENCH_USERS (20), BENCH_CAUSES_WHOLE=0 skips the every-row causes answer.
  */
 import 'reflect-metadata';
-import { spawn } from 'node:child_process';
-import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import os, { tmpdir } from 'node:os';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
 import { freePort } from './free-port';
 import { startMariaDb } from './mariadb';
+import { INCIDENTS, JARS, MAX_JARS, RUNS, SIZES, USERS, database, dbUser, loadAverage, log } from './bench-config';
 import { benchConcurrent, benchRegisters, type Get } from './bench-registers';
 import { seed } from './bench-seed';
+import { runSizes } from './bench-sizes';
+import { signIn } from './bench-sign-in';
 import { formatTable, median, percentile } from './bench-table';
-
-const SIZES = (process.env.BENCH_SIZES ?? process.env.BENCH_JARS ?? '200000').split(',').map(Number);
-const JARS = SIZES[0]!;
-// 4 % of jars contaminated: 8,000 incidents at 200,000 jars, 40,000 at 1,000,000.
-const INCIDENTS = Number(process.env.BENCH_INCIDENTS || Math.round(JARS * 0.04));
-const RUNS = Number(process.env.BENCH_RUNS ?? 20);
-const USERS = Number(process.env.BENCH_USERS ?? 20);
-const MAX_JARS = 2_000_000;
-
-const database = 'asepta_bench';
-const dbUser = { user: 'asepta_bench', password: 'asepta-bench-only' };
-
-const log = (line: string) => process.stdout.write(`${line}\n`);
-const loadAverage = () =>
-  os
-    .loadavg()
-    .map((l) => l.toFixed(2))
-    .join(', ');
-
-/** Each size in a process of its own (the app's config and DataSource are read once per process); then how each figure grew. */
-async function runSizes(): Promise<void> {
-  const results: Record<string, string>[] = [];
-  for (const size of SIZES) {
-    const resultFile = path.join(tmpdir(), `asepta-bench-${process.pid}-${size}.json`);
-    const code = await new Promise<number | null>((resolve) => {
-      const child = spawn(process.execPath, [...process.execArgv, process.argv[1]!], {
-        stdio: 'inherit',
-        env: { ...process.env, BENCH_SIZES: String(size), BENCH_INCIDENTS: '', BENCH_RESULT_FILE: resultFile },
-      });
-      child.once('exit', resolve);
-    });
-    if (code !== 0) throw new Error(`the bench at ${size} jars ended with ${code}`);
-    results.push(JSON.parse(readFileSync(resultFile, 'utf8')) as Record<string, string>);
-    rmSync(resultFile, { force: true });
-  }
-  const names = Object.keys(results[0]!);
-  const first = SIZES[0]!;
-  const last = SIZES.at(-1)!;
-  log('');
-  log(`How the median grew from ${first} to ${last} jars (the jars grew ${(last / first).toFixed(1)}×)`);
-  const rows = names.map((n) => {
-    const a = Number(results[0]![n]);
-    const b = Number(results.at(-1)![n]);
-    return [n, ...results.map((r) => r[n] ?? '-'), Number.isFinite(a) && a > 0 ? `${(b / a).toFixed(2)}×` : '-'];
-  });
-  for (const l of formatTable({ header: ['figure (median ms)', ...SIZES.map((s) => `${s} jars`), 'grew'], rows }))
-    log(l);
-}
-
-/** Signs in over HTTP as a browser would and returns the session cookie. */
-async function signIn(base: string, username: string, password: string): Promise<string> {
-  const csrfRes = await fetch(`${base}/api/auth/csrf`);
-  const first = csrfRes.headers
-    .getSetCookie()
-    .map((c) => c.split(';')[0])
-    .join('; ');
-  const { token } = (await csrfRes.json()) as { token: string };
-  const login = await fetch(`${base}/api/auth/login`, {
-    method: 'POST',
-    headers: { cookie: first, 'content-type': 'application/json', 'x-csrf-token': token },
-    body: JSON.stringify({ username, password }),
-  });
-  if (login.status !== 200) throw new Error(`bench sign-in answered ${login.status}`);
-  return (
-    login.headers
-      .getSetCookie()
-      .map((c) => c.split(';')[0])
-      .join('; ') || first
-  );
-}
 
 async function time(fn: () => Promise<unknown>): Promise<number> {
   const t0 = performance.now();
@@ -131,7 +63,7 @@ async function main() {
   const { createUser } = await import('../server/users/users.service');
   const { todayLocal } = await import('../server/core/local-time');
   const { frameFor } = await import('../server/analysis/analysis.service');
-  const { ratesQuery, crosstabQuery, combinationsQuery } = await import('../server/analysis/analysis.repository');
+  const { ratesQuery, crosstabQuery, combinationsQuery } = await import('../server/analysis/analysis.queries');
 
   const store = createSessionStore();
   const conn = await mysql.createConnection({ host: '127.0.0.1', port: db.port, ...dbUser, database });

@@ -4,7 +4,8 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { freePort } from './free-port';
 import { startMariaDb } from './mariadb';
-import { malformedRequests, type Probe } from './fuzz-cases';
+import { malformedRequests } from './fuzz-cases';
+import type { Probe } from './fuzz-routes';
 import { signInOverHttp, type HttpSession } from './http-session';
 
 // npm run fuzz: malformed requests against every route of an app on a throwaway MariaDB, loopback

@@ -1,13 +1,10 @@
-import type {
-  BeforeAfterDto,
-  CausesDto,
-  FactorLevel,
-  ColonisationDto,
-  CrosstabDto,
-  LethalityDto,
-  RatesDto,
-  WeeklyDto,
-} from '../../shared/schemas/analysis';
+import type { BeforeAfterDto } from '../../shared/schemas/analysis-actions';
+import type { CausesDto } from '../../shared/schemas/analysis-causes';
+import type { FactorLevel } from '../../shared/schemas/analysis';
+import type { ColonisationDto } from '../../shared/schemas/analysis-colonisation';
+import type { CrosstabDto, RatesDto } from '../../shared/schemas/analysis-rates';
+import type { LethalityDto } from '../../shared/schemas/analysis-lethality';
+import type { WeeklyDto } from '../../shared/schemas/analysis-weekly';
 
 export interface CsvTable {
   filename: string;

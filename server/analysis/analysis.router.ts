@@ -20,6 +20,9 @@ import { sendCsv } from '../core/csv';
 import { validate } from '../core/validate';
 import * as csv from './analysis.csv';
 import * as analysis from './analysis.service';
+import { colonisation } from './colonisation';
+import { lethality } from './lethality';
+import { weeklyTable } from './weekly';
 import { crosstabPage, ratesPage } from './level-pages';
 
 export const analysisRouter = Router();
@@ -57,17 +60,17 @@ analysisRouter.get('/causes', validate({ query: causesQuerySchema }), async (req
 
 analysisRouter.get('/weekly', validate({ query: periodQuerySchema }), async (req, res) => {
   const q = query<PeriodQuery>(req);
-  answer(res, q.format, await analysis.weeklyTable(q), csv.weeklyCsv);
+  answer(res, q.format, await weeklyTable(q), csv.weeklyCsv);
 });
 
 analysisRouter.get('/colonisation', validate({ query: periodQuerySchema }), async (req, res) => {
   const q = query<PeriodQuery>(req);
-  answer(res, q.format, await analysis.colonisation(q), csv.colonisationCsv);
+  answer(res, q.format, await colonisation(q), csv.colonisationCsv);
 });
 
 analysisRouter.get('/lethality', validate({ query: periodQuerySchema }), async (req, res) => {
   const q = query<PeriodQuery>(req);
-  answer(res, q.format, await analysis.lethality(q), csv.lethalityCsv);
+  answer(res, q.format, await lethality(q), csv.lethalityCsv);
 });
 
 analysisRouter.get('/before-after', validate({ query: beforeAfterQuerySchema }), async (req, res) => {

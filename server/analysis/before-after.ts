@@ -1,14 +1,15 @@
 import type {
   ActionVerdictDto,
   ActionVerdictsDto,
-  ActionVerdictsQuery,
   BeforeAfterDto,
-  BeforeAfterQuery,
   PeriodCount,
-} from '../../shared/schemas/analysis';
+} from '../../shared/schemas/analysis-actions';
+import type { ActionVerdictsQuery, BeforeAfterQuery } from '../../shared/schemas/analysis';
 import { AppError, notFound, unprocessable } from '../core/errors';
 import { todayLocal } from '../core/local-time';
-import { analysisRepository, type ActionRow, type CountRow } from './analysis.repository';
+import { analysisRepository } from './analysis.repository';
+import type { ActionRow } from './analysis.rows';
+import type { CountRow } from './analysis.queries';
 import { frameFor, tally } from './frame';
 import { compareRates } from './comparison';
 import { addDays, daysBetween } from '../core/calendar';

@@ -1,6 +1,6 @@
 import { contaminants, factors, type Contaminant } from '../../shared/enums';
 import type { FactorLevel } from '../../shared/schemas/analysis';
-import type { CombinationRow } from './analysis.repository';
+import type { CombinationRow } from './analysis.rows';
 import { readDetections, type Detections } from './hints';
 
 export const CONFOUNDED_SHARE = 0.9;

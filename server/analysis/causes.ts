@@ -1,9 +1,10 @@
 import { factors, type Factor } from '../../shared/enums';
-import type { AdjustedRisk, CauseRow, FactorLevel, LeadDto, Standing } from '../../shared/schemas/analysis';
+import type { AdjustedRisk, CauseRow, LeadDto, Standing } from '../../shared/schemas/analysis-causes';
+import type { FactorLevel } from '../../shared/schemas/analysis';
 import { bhAdjust } from '../../shared/stats/benjamini-hochberg';
 import { fisherExactTwoSided } from '../../shared/stats/fisher';
 import { relativeRisk, type RelativeRisk } from '../../shared/stats/relative-risk';
-import type { CombinationRow } from './analysis.repository';
+import type { CombinationRow } from './analysis.rows';
 import { confoundedLevels, detectionsOf, indexLevels, readAllDetections } from './cause-levels';
 import { hintFor } from './hints';
 import { selectLeads, type Candidate } from './lead-selection';

@@ -1,4 +1,4 @@
-import type { RateComparison } from '../../shared/schemas/analysis';
+import type { RateComparison } from '../../shared/schemas/analysis-actions';
 import { fisherExactTwoSided } from '../../shared/stats/fisher';
 import { newcombeDifference } from '../../shared/stats/newcombe';
 

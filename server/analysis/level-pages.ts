@@ -1,4 +1,5 @@
-import type { CrosstabDto, CrosstabPageDto, LevelPage, RatesDto, RatesPageDto } from '../../shared/schemas/analysis';
+import type { CrosstabDto, CrosstabPageDto, RatesDto, RatesPageDto } from '../../shared/schemas/analysis-rates';
+import type { LevelPage } from '../../shared/schemas/analysis';
 
 /** Levels of one page, or all of them when no page is asked for (the CSV keeps every level). */
 function slice<T>(all: T[], page: number | undefined, pageSize: number): [T[], LevelPage] {

@@ -1,7 +1,7 @@
 import { readingsUploadQuerySchema, type CookRunDetailDto } from '../../shared/schemas/cook-runs';
 import type { Actor } from '../audit/audit.service';
 import { badRequest, unprocessable } from '../core/errors';
-import { assertCookRunExists, replaceCookRunReadings } from './cook-runs.service';
+import { assertCookRunExists, replaceCookRunReadings } from './cook-run-readings.service';
 import { parseReadingsCsv } from './readings-csv';
 
 const shownIssues = 50;

@@ -16,12 +16,11 @@ import {
   createCookRun,
   exportCookRuns,
   getCookRun,
-  getCookRunReadings,
   listCookRuns,
-  removeCookRunReadings,
   suggestCookRunCode,
   updateCookRun,
 } from './cook-runs.service';
+import { getCookRunReadings, removeCookRunReadings } from './cook-run-readings.service';
 import { cookRunCsv } from './cook-runs.mapper';
 import { uploadCookRunLog } from './cook-run-log.service';
 

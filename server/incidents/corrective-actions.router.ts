@@ -1,6 +1,5 @@
 import { Router } from 'express';
-import { actionListQuerySchema } from '../../shared/schemas/corrective-actions';
-import { updateActionSchema } from '../../shared/schemas/incidents';
+import { actionListQuerySchema, updateActionSchema } from '../../shared/schemas/corrective-actions';
 import { currentUser, requireRole, requireUser } from '../core/auth-guards';
 import { writeRoute } from '../core/record-routes';
 import { validate, validated } from '../core/validate';

@@ -1,5 +1,9 @@
 import type { EntityManager } from 'typeorm';
-import type { CorrectiveActionDto, CreateActionInput, UpdateActionInput } from '../../shared/schemas/incidents';
+import type {
+  CorrectiveActionDto,
+  CreateActionInput,
+  UpdateActionInput,
+} from '../../shared/schemas/corrective-actions';
 import { diffEntries, recordAudit } from '../audit/audit.service';
 import type { SessionUser } from '../core/auth-guards';
 import { AppError, notFound, unprocessable } from '../core/errors';

@@ -1,6 +1,6 @@
 import { In } from 'typeorm';
 import type { JarStatus } from '../../shared/enums';
-import type { IncidentJarDto, StepLinkDto } from '../../shared/schemas/incidents';
+import type { IncidentJarDto, StepLinkDto } from '../../shared/schemas/incident-detail';
 import { dataSource } from '../db/data-source';
 import { Jar } from '../jars/jar.entity';
 import { Photo } from '../photos/photo.entity';

@@ -1,4 +1,5 @@
-import type { IncidentDetailDto, ReviewIncidentInput, VoidIncidentInput } from '../../shared/schemas/incidents';
+import type { IncidentDetailDto } from '../../shared/schemas/incident-detail';
+import type { ReviewIncidentInput, VoidIncidentInput } from '../../shared/schemas/incidents';
 import { patchWithAudit, recordAudit } from '../audit/audit.service';
 import type { SessionUser } from '../core/auth-guards';
 import { unprocessable } from '../core/errors';

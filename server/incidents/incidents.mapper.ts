@@ -1,9 +1,6 @@
-import type {
-  CorrectiveActionDto,
-  HistoryEntryDto,
-  IncidentDetailDto,
-  IncidentListItemDto,
-} from '../../shared/schemas/incidents';
+import type { CorrectiveActionDto } from '../../shared/schemas/corrective-actions';
+import type { HistoryEntryDto, IncidentDetailDto } from '../../shared/schemas/incident-detail';
+import type { IncidentListItemDto } from '../../shared/schemas/incidents';
 import type { AuditEvent } from '../audit/audit-event.entity';
 import type { CorrectiveAction } from './corrective-action.entity';
 import type { Incident } from './incident.entity';

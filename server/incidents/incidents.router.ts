@@ -1,13 +1,13 @@
 import { Router } from 'express';
 import {
   addIncidentPhotosSchema,
-  createActionSchema,
   createIncidentSchema,
   incidentListQuerySchema,
   reviewIncidentSchema,
   updateIncidentSchema,
   voidIncidentSchema,
 } from '../../shared/schemas/incidents';
+import { createActionSchema } from '../../shared/schemas/corrective-actions';
 import { currentUser, requireRole } from '../core/auth-guards';
 import { csvExportRoute, detailRoute, idParam, listRoute, requireWriter, writeRoute } from '../core/record-routes';
 import { validate, validated } from '../core/validate';

@@ -4,11 +4,11 @@ import {
   descriptiveIncidentFields,
   type AddIncidentPhotosInput,
   type CreateIncidentInput,
-  type IncidentDetailDto,
   type IncidentListItemDto,
   type IncidentListQuery,
   type UpdateIncidentInput,
 } from '../../shared/schemas/incidents';
+import type { IncidentDetailDto } from '../../shared/schemas/incident-detail';
 import type { FieldIssue } from '../../shared/schemas/common';
 import { diffEntries, recordAudit } from '../audit/audit.service';
 import type { SessionUser } from '../core/auth-guards';

@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { Role } from '../../shared/enums';
-import type { JarEventInput, JarRowDto } from '../../shared/schemas/jars';
+import type { JarEventInput } from '../../shared/schemas/jar-events';
+import type { JarRowDto } from '../../shared/schemas/jars';
 import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
 import { badRequest, forbidden, notFound, unprocessable } from '../core/errors';
 import { localDate } from '../core/local-time';

@@ -1,6 +1,6 @@
 import QRCode from 'qrcode';
 import type { EntityManager } from 'typeorm';
-import type { JarLabelDto, LabelSheetQuery } from '../../shared/schemas/jars';
+import type { JarLabelDto, LabelSheetQuery } from '../../shared/schemas/jar-labels';
 import { conflict, notFound } from '../core/errors';
 import { jarPageUrl } from './jar-story.service';
 import { jarsRepository } from './jars.repository';

@@ -1,5 +1,5 @@
 import type { JarStatus } from '../../shared/enums';
-import { jarEventAllowedFrom, type JarEventInputType } from '../../shared/schemas/jars';
+import { jarEventAllowedFrom, type JarEventInputType } from '../../shared/schemas/jar-events';
 import { conflict } from '../core/errors';
 
 const statusWords: Record<JarStatus, string> = {

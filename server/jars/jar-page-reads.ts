@@ -1,4 +1,4 @@
-import { labelParamsSchema } from '../../shared/schemas/jars';
+import { labelParamsSchema } from '../../shared/schemas/jar-labels';
 import type { JarPageReadsDto } from '../../shared/schemas/page-reads';
 import type { SessionUser } from '../core/auth-guards';
 import { AppError } from '../core/errors';

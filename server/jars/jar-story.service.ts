@@ -1,4 +1,4 @@
-import type { AncestorDto, CultureSummaryDto, JarStoryDto } from '../../shared/schemas/jars';
+import type { AncestorDto, CultureSummaryDto, JarStoryDto } from '../../shared/schemas/jar-story';
 import { config } from '../core/config';
 import { notFound } from '../core/errors';
 import type { Culture } from '../cultures/culture.entity';

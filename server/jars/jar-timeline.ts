@@ -1,5 +1,5 @@
 import { contaminantNames, contaminants, type Contaminant } from '../../shared/enums';
-import type { JarStoryDto, TimelineEntryDto } from '../../shared/schemas/jars';
+import type { JarStoryDto, TimelineEntryDto } from '../../shared/schemas/jar-story';
 
 const eventTitles: Record<string, string> = {
   check: 'Checked',

@@ -1,5 +1,6 @@
 import type { JarStatus } from '../../shared/enums';
-import type { JarEventDto, JarRowDto } from '../../shared/schemas/jars';
+import type { JarEventDto } from '../../shared/schemas/jar-events';
+import type { JarRowDto } from '../../shared/schemas/jars';
 import type { JarEvent } from './jar-event.entity';
 import { dateOnly, dateOrNull, numberOrNull } from '../core/raw-values';
 

@@ -1,15 +1,8 @@
 import { Router } from 'express';
-import {
-  createJarBatchSchema,
-  jarEventInputSchema,
-  jarExportQuerySchema,
-  jarListQuerySchema,
-  labelParamsSchema,
-  labelSheetQuerySchema,
-  shelfQuerySchema,
-  shelfWalkSchema,
-  undoShelfMarkSchema,
-} from '../../shared/schemas/jars';
+import { createJarBatchSchema, jarExportQuerySchema, jarListQuerySchema } from '../../shared/schemas/jars';
+import { jarEventInputSchema } from '../../shared/schemas/jar-events';
+import { labelParamsSchema, labelSheetQuerySchema } from '../../shared/schemas/jar-labels';
+import { shelfQuerySchema, shelfWalkSchema, undoShelfMarkSchema } from '../../shared/schemas/jar-shelf';
 import { currentUser, requireUser } from '../core/auth-guards';
 import { todayLocal } from '../core/local-time';
 import {

@@ -6,8 +6,8 @@ import type {
   JarExportQuery,
   JarListQuery,
   JarRowDto,
-  ShelfQuery,
 } from '../../shared/schemas/jars';
+import type { ShelfQuery } from '../../shared/schemas/jar-shelf';
 import { recordAudit, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, unprocessable } from '../core/errors';
 import { localDate } from '../core/local-time';

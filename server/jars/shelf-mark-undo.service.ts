@@ -1,4 +1,5 @@
-import type { JarRowDto, UndoShelfMarkInput } from '../../shared/schemas/jars';
+import type { JarRowDto } from '../../shared/schemas/jars';
+import type { UndoShelfMarkInput } from '../../shared/schemas/jar-shelf';
 import { recordAudit } from '../audit/audit.service';
 import { AppError, conflict, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';

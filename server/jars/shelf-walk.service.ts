@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
-import type { JarEventInput, ShelfWalkInput, ShelfWalkResultDto } from '../../shared/schemas/jars';
+import type { JarEventInput } from '../../shared/schemas/jar-events';
+import type { ShelfWalkInput, ShelfWalkResultDto } from '../../shared/schemas/jar-shelf';
 import { recordAudit, type AuditEntry } from '../audit/audit.service';
 import { unprocessable } from '../core/errors';
 import { dataSource } from '../db/data-source';

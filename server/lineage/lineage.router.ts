@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { holdSchema } from '../../shared/schemas/jars';
+import { holdSchema } from '../../shared/schemas/jar-lineage';
 import { requireRole } from '../core/auth-guards';
 import { detailRoute, writeRoute } from '../core/record-routes';
 import { cultureLineage, holdLineage, jarLineage } from './lineage.service';

@@ -1,4 +1,4 @@
-import type { HoldResultDto, LineageNodeDto, LineageTreeDto, RecallRowDto } from '../../shared/schemas/jars';
+import type { HoldResultDto, LineageNodeDto, LineageTreeDto, RecallRowDto } from '../../shared/schemas/jar-lineage';
 import { recordAudit, type Actor } from '../audit/audit.service';
 import { notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';

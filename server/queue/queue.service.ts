@@ -1,6 +1,6 @@
 import type { QueueAction, QueueDto } from '../../shared/schemas/queue';
 import type { ActionListItemDto } from '../../shared/schemas/corrective-actions';
-import { defaultWeeklyPeriod, weeklyTable } from '../analysis/analysis.service';
+import { defaultWeeklyPeriod, weeklyTable } from '../analysis/weekly';
 import type { SessionUser } from '../core/auth-guards';
 import { listCookRuns } from '../cook-runs/cook-runs.service';
 import { listActions } from '../incidents/corrective-actions-list.service';

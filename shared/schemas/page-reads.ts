@@ -1,5 +1,5 @@
 import type { MeDto } from './auth';
-import type { JarStoryDto } from './jars';
+import type { JarStoryDto } from './jar-story';
 import type { LabSettingsDto } from './settings';
 
 /**

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { meSchema } from '../../shared/schemas/auth';
-import { jarStorySchema } from '../../shared/schemas/jars';
+import { jarStorySchema } from '../../shared/schemas/jar-story';
 import { pageReadsId, type JarPageReadsDto } from '../../shared/schemas/page-reads';
 import { authQueries } from '../features/auth/api/auth-queries';
 import { jarsQueries } from '../features/jars/api/jars-queries';

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { HistoryEntryDto } from '../../shared/schemas/incidents';
+import type { HistoryEntryDto } from '../../shared/schemas/incident-detail';
 import { describeHistoryEntry, type HistoryContext } from '../../src/features/incidents/history-text';
 import { setLabTimeZone } from '../../src/lib/format';
 

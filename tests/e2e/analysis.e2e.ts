@@ -1,6 +1,6 @@
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import type { WeeklyDto } from '../../shared/schemas/analysis';
+import type { WeeklyDto } from '../../shared/schemas/analysis-weekly';
 import { plantedProblems, sloppyIsoWeek, weekBefore } from '../../server/demo-lab/planted-problems';
 import { desktop, newPage, shotsDir, signIn, useBrowser } from './support/browser';
 

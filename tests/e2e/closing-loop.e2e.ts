@@ -1,7 +1,8 @@
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import type { LethalityDto, WeeklyDto } from '../../shared/schemas/analysis';
+import type { LethalityDto } from '../../shared/schemas/analysis-lethality';
+import type { WeeklyDto } from '../../shared/schemas/analysis-weekly';
 import { plantedProblems, weekBefore } from '../../server/demo-lab/planted-problems';
 import { mailsTo } from '../setup/mail-sink';
 import { desktop, newPage, shotsDir, signIn, useBrowser } from './support/browser';

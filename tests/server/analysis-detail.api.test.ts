@@ -1,13 +1,10 @@
 import pmf from '@stdlib/stats-base-dists-hypergeometric-pmf';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type {
-  ActionVerdictsDto,
-  BeforeAfterDto,
-  ColonisationDto,
-  JarsBehindDto,
-  LethalityDto,
-  RatesDto,
-} from '../../shared/schemas/analysis';
+import type { ActionVerdictsDto, BeforeAfterDto } from '../../shared/schemas/analysis-actions';
+import type { ColonisationDto } from '../../shared/schemas/analysis-colonisation';
+import type { JarsBehindDto } from '../../shared/schemas/analysis-jars-behind';
+import type { LethalityDto } from '../../shared/schemas/analysis-lethality';
+import type { RatesDto } from '../../shared/schemas/analysis-rates';
 import { psiToKPa } from '../../shared/stats/steam';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { CrosstabPageDto, RatesPageDto } from '../../shared/schemas/analysis';
+import type { CrosstabPageDto, RatesPageDto } from '../../shared/schemas/analysis-rates';
 import { dataSource } from '../../server/db/data-source';
 import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';

@@ -1,7 +1,8 @@
 import jStat from 'jstat';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Factor } from '../../shared/enums';
-import type { CauseRow, CausesDto, FactorLevel } from '../../shared/schemas/analysis';
+import type { CauseRow, CausesDto } from '../../shared/schemas/analysis-causes';
+import type { FactorLevel } from '../../shared/schemas/analysis';
 import { signedIn, type Client } from '../setup/factories';
 import { createTestApp } from '../setup/test-app';
 import { clearProduction } from './analysis-planted.fixture';

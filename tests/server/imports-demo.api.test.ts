@@ -1,6 +1,9 @@
 import { IsNull, Not } from 'typeorm';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { CausesDto, LethalityDto, RatesDto, WeeklyDto } from '../../shared/schemas/analysis';
+import type { CausesDto } from '../../shared/schemas/analysis-causes';
+import type { LethalityDto } from '../../shared/schemas/analysis-lethality';
+import type { RatesDto } from '../../shared/schemas/analysis-rates';
+import type { WeeklyDto } from '../../shared/schemas/analysis-weekly';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
 import { GrainLot } from '../../server/grain/grain-lot.entity';

@@ -1,6 +1,6 @@
 import supertest from 'supertest';
 import { afterAll, describe, expect, it } from 'vitest';
-import type { RatesDto } from '../../shared/schemas/analysis';
+import type { RatesDto } from '../../shared/schemas/analysis-rates';
 import type { LabSettingsDto } from '../../shared/schemas/settings';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { config } from '../../server/core/config';

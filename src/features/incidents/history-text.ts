@@ -1,5 +1,5 @@
 import { factorNames, factors, type Factor } from '../../../shared/enums';
-import type { HistoryEntryDto } from '../../../shared/schemas/incidents';
+import type { HistoryEntryDto } from '../../../shared/schemas/incident-detail';
 import { formatDate, formatDateTime } from '../../lib/format';
 import { fieldLabels, valueLabel } from './labels';
 

@@ -1,4 +1,4 @@
-import type { ShelfMark } from '../../../shared/schemas/jars';
+import type { ShelfMark } from '../../../shared/schemas/jar-shelf';
 import { newKey } from '../../lib/outbox/outbox-items';
 import { flushOutbox, isInFlight } from '../../lib/outbox/outbox-sender';
 import { getItem, putItem, removeItem } from '../../lib/outbox/outbox-store';

@@ -1,5 +1,6 @@
 import { useCallback, useState } from 'react';
-import type { JarRowDto, ShelfMark } from '../../../shared/schemas/jars';
+import type { JarRowDto } from '../../../shared/schemas/jars';
+import type { ShelfMark } from '../../../shared/schemas/jar-shelf';
 
 export interface WalkMark {
   jarId: number;

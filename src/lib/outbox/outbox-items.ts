@@ -1,5 +1,5 @@
 import type { CreateIncidentInput } from '../../../shared/schemas/incidents';
-import type { ShelfMark } from '../../../shared/schemas/jars';
+import type { ShelfMark } from '../../../shared/schemas/jar-shelf';
 
 /** A photo kept on the phone until the server has stored it; the key makes its upload idempotent. */
 export interface OutboxPhoto {

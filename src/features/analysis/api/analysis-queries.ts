@@ -1,16 +1,12 @@
 import { keepPreviousData, queryOptions } from '@tanstack/react-query';
 import { factorSchema, type Factor } from '../../../../shared/enums';
-import type {
-  ActionVerdictsDto,
-  BeforeAfterDto,
-  CausesDto,
-  ColonisationDto,
-  CrosstabPageDto,
-  JarsBehindDto,
-  LethalityDto,
-  RatesPageDto,
-  WeeklyDto,
-} from '../../../../shared/schemas/analysis';
+import type { ActionVerdictsDto, BeforeAfterDto } from '../../../../shared/schemas/analysis-actions';
+import type { CausesDto } from '../../../../shared/schemas/analysis-causes';
+import type { ColonisationDto } from '../../../../shared/schemas/analysis-colonisation';
+import type { CrosstabPageDto, RatesPageDto } from '../../../../shared/schemas/analysis-rates';
+import type { JarsBehindDto } from '../../../../shared/schemas/analysis-jars-behind';
+import type { LethalityDto } from '../../../../shared/schemas/analysis-lethality';
+import type { WeeklyDto } from '../../../../shared/schemas/analysis-weekly';
 import { localDateSchema } from '../../../../shared/schemas/common';
 import { api, apiUrl } from '../../../lib/api-client';
 

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { BeforeAfterDto } from '../../../../shared/schemas/analysis';
+import type { BeforeAfterDto } from '../../../../shared/schemas/analysis-actions';
 import { factorNames } from '../../../../shared/enums';
 import { ApiError } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
-import type { CauseRow, FactorLevel, Standing } from '../../../../shared/schemas/analysis';
+import type { CauseRow, Standing } from '../../../../shared/schemas/analysis-causes';
+import type { FactorLevel } from '../../../../shared/schemas/analysis';
 import { Badge } from '../../../components/ui/badge';
 import { paths } from '../../../config/paths';
 import { cx } from '../../../lib/cx';

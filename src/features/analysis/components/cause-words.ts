@@ -1,5 +1,6 @@
 import { factorNames } from '../../../../shared/enums';
-import type { AdjustedRisk, CauseRow, FactorLevel } from '../../../../shared/schemas/analysis';
+import type { AdjustedRisk, CauseRow } from '../../../../shared/schemas/analysis-causes';
+import type { FactorLevel } from '../../../../shared/schemas/analysis';
 import { percent } from './labels';
 
 /** "cook run CR-2614": a level as it reads mid-sentence. */

@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import type { LeadDto } from '../../../../shared/schemas/analysis';
+import type { LeadDto } from '../../../../shared/schemas/analysis-causes';
 import { paths } from '../../../config/paths';
 import type { Period } from '../api/analysis-queries';
 import { adjustedWords, crudeWords, levelWords, timesRest } from './cause-words';

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'react-router';
-import type { LethalityRow } from '../../../../shared/schemas/analysis';
+import type { LethalityRow } from '../../../../shared/schemas/analysis-lethality';
 import { Badge } from '../../../components/ui/badge';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';

@@ -8,7 +8,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import type { WeeklyDto, WeeklyRow } from '../../../../shared/schemas/analysis';
+import type { WeeklyDto, WeeklyRow } from '../../../../shared/schemas/analysis-weekly';
 import { percent } from './labels';
 
 interface DotProps {

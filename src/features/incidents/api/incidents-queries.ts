@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { pageOf } from '../../../../shared/schemas/common';
+import { incidentDetailSchema } from '../../../../shared/schemas/incident-detail';
 import {
-  incidentDetailSchema,
   incidentListItemSchema,
   incidentListQuerySchema,
   incidentSortFields,

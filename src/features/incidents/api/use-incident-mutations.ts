@@ -1,14 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import {
   correctiveActionSchema,
-  incidentDetailSchema,
-  type AddIncidentPhotosInput,
   type CreateActionInput,
-  type CreateIncidentInput,
-  type ReviewIncidentInput,
   type UpdateActionInput,
-  type UpdateIncidentInput,
-  type VoidIncidentInput,
+} from '../../../../shared/schemas/corrective-actions';
+import { incidentDetailSchema } from '../../../../shared/schemas/incident-detail';
+import type {
+  AddIncidentPhotosInput,
+  CreateIncidentInput,
+  ReviewIncidentInput,
+  UpdateIncidentInput,
+  VoidIncidentInput,
 } from '../../../../shared/schemas/incidents';
 import { api } from '../../../lib/api-client';
 import { incidentsQueries } from './incidents-queries';

@@ -1,6 +1,10 @@
 import { useState, type ReactNode } from 'react';
 import { factorNames } from '../../../../shared/enums';
-import { createActionSchema, updateActionSchema, type CorrectiveActionDto } from '../../../../shared/schemas/incidents';
+import {
+  createActionSchema,
+  updateActionSchema,
+  type CorrectiveActionDto,
+} from '../../../../shared/schemas/corrective-actions';
 import { Badge } from '../../../components/ui/badge';
 import type { PersonDto } from '../../../../shared/schemas/users';
 import { Button } from '../../../components/ui/button';

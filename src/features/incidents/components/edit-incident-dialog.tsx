@@ -1,5 +1,6 @@
 import { contaminantNames, contaminants, stagesFound, incidentSeverities } from '../../../../shared/enums';
-import { updateIncidentSchema, type IncidentDetailDto } from '../../../../shared/schemas/incidents';
+import { updateIncidentSchema } from '../../../../shared/schemas/incidents';
+import type { IncidentDetailDto } from '../../../../shared/schemas/incident-detail';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { Select } from '../../../components/ui/select';

@@ -1,4 +1,4 @@
-import type { HistoryEntryDto } from '../../../../shared/schemas/incidents';
+import type { HistoryEntryDto } from '../../../../shared/schemas/incident-detail';
 import { describeHistoryEntry, type HistoryContext } from '../history-text';
 
 /** The audit trail as recorded, in words: when on the lab's clock, who, what, and why. */

@@ -1,7 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
 import { contaminantNames, type Role } from '../../../../shared/enums';
-import type { CorrectiveActionDto, IncidentDetailDto } from '../../../../shared/schemas/incidents';
+import type { CorrectiveActionDto } from '../../../../shared/schemas/corrective-actions';
+import type { IncidentDetailDto } from '../../../../shared/schemas/incident-detail';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { Fact, Facts } from '../../../components/ui/facts';

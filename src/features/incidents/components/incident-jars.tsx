@@ -1,5 +1,5 @@
 import { Link } from 'react-router';
-import type { IncidentJarDto } from '../../../../shared/schemas/incidents';
+import type { IncidentJarDto } from '../../../../shared/schemas/incident-detail';
 import { paths } from '../../../config/paths';
 
 const linkClass = 'text-accent underline underline-offset-2 hover:decoration-2';

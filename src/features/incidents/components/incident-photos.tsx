@@ -1,4 +1,4 @@
-import type { IncidentPhotoDto } from '../../../../shared/schemas/incidents';
+import type { IncidentPhotoDto } from '../../../../shared/schemas/incident-detail';
 import { apiUrl } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/format';
 

@@ -1,5 +1,6 @@
 import { causeCategories, verdicts, type IncidentStatus } from '../../../../shared/enums';
-import { reviewIncidentSchema, type IncidentDetailDto } from '../../../../shared/schemas/incidents';
+import { reviewIncidentSchema } from '../../../../shared/schemas/incidents';
+import type { IncidentDetailDto } from '../../../../shared/schemas/incident-detail';
 import { Button } from '../../../components/ui/button';
 import { applyServerErrors, Form } from '../../../components/ui/form';
 import { Select } from '../../../components/ui/select';

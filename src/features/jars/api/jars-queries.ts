@@ -2,16 +2,11 @@ import { queryOptions } from '@tanstack/react-query';
 import { z } from 'zod';
 import { cultureStateSchema, jarStatusSchema, type JarStatus } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
-import {
-  jarLabelSchema,
-  jarListQuerySchema,
-  jarRowSchema,
-  jarSortFields,
-  jarStorySchema,
-  lineageNodeSchema,
-  shelfPlaceSchema,
-  type LineageTreeDto,
-} from '../../../../shared/schemas/jars';
+import { jarLabelSchema } from '../../../../shared/schemas/jar-labels';
+import { jarListQuerySchema, jarRowSchema, jarSortFields } from '../../../../shared/schemas/jars';
+import { jarStorySchema } from '../../../../shared/schemas/jar-story';
+import { lineageNodeSchema, type LineageTreeDto } from '../../../../shared/schemas/jar-lineage';
+import { shelfPlaceSchema } from '../../../../shared/schemas/jar-shelf';
 import { api, apiUrl } from '../../../lib/api-client';
 import { readTableState, type TableState } from '../../../lib/list-params';
 import { exportUrl, pagedListQuery, pickParam } from '../../../lib/list-query';

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { holdResultSchema } from '../../../../shared/schemas/jars';
+import { holdResultSchema } from '../../../../shared/schemas/jar-lineage';
 import { api } from '../../../lib/api-client';
 import { jarsQueries } from './jars-queries';
 

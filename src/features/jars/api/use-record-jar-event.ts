@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { jarRowSchema, type JarEventInput } from '../../../../shared/schemas/jars';
+import { jarRowSchema } from '../../../../shared/schemas/jars';
+import type { JarEventInput } from '../../../../shared/schemas/jar-events';
 import { api } from '../../../lib/api-client';
 import { jarsQueries } from './jars-queries';
 

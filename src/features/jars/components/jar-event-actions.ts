@@ -1,4 +1,4 @@
-import type { JarEventInputType } from '../../../../shared/schemas/jars';
+import type { JarEventInputType } from '../../../../shared/schemas/jar-events';
 
 /** The jar page's event buttons; kept apart from the dialog so the page can show them before the form's code arrives. */
 export const eventActions: Record<JarEventInputType, { label: string; title: string; done: string }> = {

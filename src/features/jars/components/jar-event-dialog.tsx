@@ -1,5 +1,9 @@
 import type { FieldErrors } from 'react-hook-form';
-import { jarEventInputSchema, type JarEventFields, type JarEventInputType } from '../../../../shared/schemas/jars';
+import {
+  jarEventInputSchema,
+  type JarEventFields,
+  type JarEventInputType,
+} from '../../../../shared/schemas/jar-events';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
 import { Select } from '../../../components/ui/select';

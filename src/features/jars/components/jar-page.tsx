@@ -2,12 +2,8 @@ import { useQuery } from '@tanstack/react-query';
 import { lazy, Suspense, useEffect, useState } from 'react';
 import { Link } from 'react-router';
 import type { Role } from '../../../../shared/enums';
-import {
-  jarEventAllowedFrom,
-  jarEventInputTypes,
-  type JarEventInputType,
-  type JarStoryDto,
-} from '../../../../shared/schemas/jars';
+import { jarEventAllowedFrom, jarEventInputTypes, type JarEventInputType } from '../../../../shared/schemas/jar-events';
+import type { JarStoryDto } from '../../../../shared/schemas/jar-story';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import { FullPageSpinner } from '../../../components/ui/spinner';

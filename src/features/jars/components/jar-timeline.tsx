@@ -1,4 +1,4 @@
-import type { TimelineEntryDto } from '../../../../shared/schemas/jars';
+import type { TimelineEntryDto } from '../../../../shared/schemas/jar-story';
 import { Link } from 'react-router';
 import { paths } from '../../../config/paths';
 import { cx } from '../../../lib/cx';

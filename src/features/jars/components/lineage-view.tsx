@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link } from 'react-router';
-import type { HoldResultDto, LineageTreeDto } from '../../../../shared/schemas/jars';
+import type { HoldResultDto, LineageTreeDto } from '../../../../shared/schemas/jar-lineage';
 import { Button } from '../../../components/ui/button';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { Notice } from '../../../components/ui/notice';
