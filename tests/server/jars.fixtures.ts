@@ -94,3 +94,21 @@ export async function makeJars(
 export function jarEvent(client: { agent: Agent; token: () => string }, jarId: number, body: Record<string, unknown>) {
   return client.agent.post(`/api/jars/${jarId}/events`).set('X-CSRF-Token', client.token()).send(body);
 }
+
+// BigInt: another file in this worker may have left a label past 2^53.
+export const labelNumber = (label: string) => BigInt(/[0-9]+$/.exec(label)?.[0] ?? '0');
+export const labelPrefix = (label: string) => label.replace(/[0-9]+$/, '');
+
+/** A batch of three rye jars in a fresh session from a fresh culture; overrides change any field. */
+export async function batchBody(overrides: Record<string, unknown> = {}) {
+  const session = await jarFixtures.session();
+  const culture = await jarFixtures.culture();
+  return {
+    sessionId: session.id,
+    count: 3,
+    grainId: await jarFixtures.grainId(),
+    cultureId: culture.id,
+    inoculatedAt: '2026-05-04T10:30:00Z',
+    ...overrides,
+  };
+}

@@ -4,26 +4,10 @@ import { CookRunReading } from '../../server/cook-runs/cook-run-reading.entity';
 import { dataSource } from '../../server/db/data-source';
 import { defaultContainerMinutes } from '../../shared/stats/cook-verdict';
 import { createTestApp } from '../setup/test-app';
-import { anonymousStatuses, postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { create, cycleCsv, newRun, postLog } from './cook-runs.fixtures';
 
 const app = createTestApp();
-
-const newRun = (over: Record<string, unknown> = {}) => ({
-  code: uniqueName('CR'),
-  vessel: 'Cooker A',
-  cookedOn: '2026-03-02',
-  minutesAtPressure: 90,
-  gaugeKPa: 103.4,
-  altitudeM: 0,
-  container: '1 L jar',
-  loadCount: 7,
-  ...over,
-});
-
-// The 1-minute cycle of TRADE.md §3 [COMP]: F0 = 12.239 by the rectangle rule, from L = 10^((T − 121.1)/10)
-// (PDA Technical Report No. 1, rev. 2007; Pistolesi & Mascherpa, F0: a technical note, 1988, rev. 2014).
-const cycleCelsius = [100, 105, 110, 115, 118, 120, ...Array<number>(10).fill(121), 118, 115, 110, 105, 100];
-const cycleCsv = (header: string, eol = '\n') => [header, ...cycleCelsius.map((c, m) => `${m},${c}`)].join(eol) + eol;
 
 let tech: Client;
 let admin: Client;
@@ -37,72 +21,6 @@ afterAll(() =>
     JSON.stringify(defaultContainerMinutes),
   ]),
 );
-
-const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/cook-runs', body);
-const postLog = (client: Client, id: number, csv: string) => postCsvAs(client, `/api/cook-runs/${id}/readings`, csv);
-
-describe('/api/cook-runs guards and validation', () => {
-  it('answers 401 without a session', async () => {
-    const urls = ['/api/cook-runs', '/api/cook-runs/1', '/api/cook-runs/export.csv'];
-    expect(await anonymousStatuses(app, urls)).toEqual([401, 401, 401]);
-  });
-
-  it('lets a trainer read but answers 403 to every write', async () => {
-    const trainer = await signedIn(app, 'trainer');
-    const run = (await create(tech, newRun())).body;
-    expect((await trainer.agent.get(`/api/cook-runs/${run.id}`)).status).toBe(200);
-    expect((await create(trainer, newRun())).status).toBe(403);
-    const patch = await sendAs(trainer, 'patch', `/api/cook-runs/${run.id}`, { loadCount: 3 });
-    expect(patch.status).toBe(403);
-    const upload = await postLog(trainer, run.id, cycleCsv('minute,celsius'));
-    expect(upload.status).toBe(403);
-  });
-
-  it.each([
-    ['minutesAtPressure', { minutesAtPressure: 90.5 }],
-    ['minutesAtPressure', { minutesAtPressure: undefined }],
-    ['container', { container: undefined }],
-    ['cookedOn', { cookedOn: undefined }],
-    ['cookedOn', { cookedOn: '2026-02-30' }],
-    ['gaugeKPa', { gaugeKPa: -5 }],
-    ['code', { code: 'has space' }],
-    ['operatorName', { operatorId: 1, operatorName: 'Both Given' }],
-  ])('answers 400 naming %s', async (field, over) => {
-    const res = await create(tech, newRun(over));
-    expect(res.status).toBe(400);
-    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(field);
-  });
-
-  it('answers 400 naming operatorId for an unknown user', async () => {
-    const res = await create(tech, newRun({ operatorId: 999999 }));
-    expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('operatorId');
-  });
-
-  it('answers 400 for a bad sort field and an oversized page', async () => {
-    const sort = await tech.agent.get('/api/cook-runs?sort=-vessel');
-    expect(sort.status).toBe(400);
-    expect(sort.body.error.issues[0].path).toBe('sort');
-    expect((await tech.agent.get('/api/cook-runs?pageSize=201')).body.error.issues[0].path).toBe('pageSize');
-  });
-
-  it('answers 404 for an unknown cook run', async () => {
-    expect((await tech.agent.get('/api/cook-runs/999999')).status).toBe(404);
-    const patch = await sendAs(tech, 'patch', '/api/cook-runs/999999', { loadCount: 2 });
-    expect(patch.status).toBe(404);
-    const upload = await postLog(tech, 999999, cycleCsv('minute,celsius'));
-    expect(upload.status).toBe(404);
-    expect((await tech.agent.get('/api/cook-runs/999999/readings')).status).toBe(404);
-  });
-
-  it('answers 409 naming code when the code is taken', async () => {
-    const body = newRun();
-    expect((await create(tech, body)).status).toBe(201);
-    const res = await create(tech, { ...body, vessel: 'Other' });
-    expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('code');
-  });
-});
 
 describe('/api/cook-runs lethality', () => {
   it('estimates F0 as an upper bound at sea level and writes an audit event', async () => {
@@ -249,83 +167,5 @@ describe('/api/cook-runs lethality', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ f0Source: 'estimate', readingsCount: 0 });
     expect(res.body.f0).toBeCloseTo(run.f0, 9);
-  });
-});
-
-describe('/api/cook-runs editing, listing and export', () => {
-  it('audits each changed field with its old and new value and re-estimates F0', async () => {
-    const run = (await create(tech, newRun())).body;
-    const res = await sendAs(tech, 'patch', `/api/cook-runs/${run.id}`, {
-      minutesAtPressure: 120,
-      vessel: 'Cooker B',
-      reason: 'gauge log re-read',
-    });
-    expect(res.status).toBe(200);
-    expect(res.body.minutesAtPressure).toBe(120);
-    expect(res.body.f0).toBeCloseTo((run.f0 / 90) * 120, 6);
-    const events = await dataSource.manager.findBy(AuditEvent, {
-      recordType: 'cook-run',
-      recordId: String(run.id),
-      action: 'update',
-    });
-    const byField = Object.fromEntries(events.map((e) => [e.field, e]));
-    expect(byField.minutesAtPressure).toMatchObject({ oldValue: '90', newValue: '120', reason: 'gauge log re-read' });
-    expect(byField.vessel).toMatchObject({ oldValue: 'Cooker A', newValue: 'Cooker B' });
-    expect(byField.f0).toBeDefined();
-    expect(byField.loadCount).toBeUndefined();
-  });
-
-  it('takes the run date from the start time in the lab time zone (Europe/London)', async () => {
-    const res = await create(tech, newRun({ cookedOn: undefined, startedAt: '2026-06-30T23:30:00Z' }));
-    expect(res.status).toBe(201);
-    expect(res.body.cookedOn).toBe('2026-07-01');
-    expect(res.body.startedAt).toBe('2026-06-30T23:30:00.000Z');
-  });
-
-  it('keeps a user operator by id and name', async () => {
-    const res = await create(tech, newRun({ operatorId: tech.user.id }));
-    expect(res.body).toMatchObject({ operatorId: tech.user.id, operatorName: 'Test technician' });
-  });
-
-  it('pages, sorts and filters on the server', async () => {
-    const container = uniqueName('jar');
-    for (const [minutes, day] of [
-      [60, '2026-01-05'],
-      [150, '2026-01-06'],
-      [90, '2026-01-07'],
-    ] as const) {
-      await create(tech, newRun({ container, minutesAtPressure: minutes, cookedOn: day }));
-    }
-    const c = encodeURIComponent(container);
-    const page1 = await tech.agent.get(`/api/cook-runs?container=${c}&sort=-minutesAtPressure&pageSize=2`);
-    expect(page1.body).toMatchObject({ total: 3, page: 1, pageSize: 2 });
-    expect(page1.body.items.map((r: { minutesAtPressure: number }) => r.minutesAtPressure)).toEqual([150, 90]);
-    const page2 = await tech.agent.get(`/api/cook-runs?container=${c}&sort=-minutesAtPressure&pageSize=2&page=2`);
-    expect(page2.body.items.map((r: { minutesAtPressure: number }) => r.minutesAtPressure)).toEqual([60]);
-    const ranged = await tech.agent.get(`/api/cook-runs?container=${c}&from=2026-01-06&to=2026-01-07&sort=cookedOn`);
-    expect(ranged.body.items.map((r: { cookedOn: string }) => r.cookedOn)).toEqual(['2026-01-06', '2026-01-07']);
-    const byF0 = await tech.agent.get(`/api/cook-runs?container=${c}&sort=f0`);
-    expect(byF0.body.items.map((r: { minutesAtPressure: number }) => r.minutesAtPressure)).toEqual([60, 90, 150]);
-  });
-
-  it('exports every matching run as CSV', async () => {
-    const container = uniqueName('3kg');
-    const a = (await create(tech, newRun({ container, notes: 'first, with a comma' }))).body;
-    const b = (await create(tech, newRun({ container }))).body;
-    const res = await tech.agent.get(`/api/cook-runs/export.csv?container=${encodeURIComponent(container)}&sort=code`);
-    expect(res.status).toBe(200);
-    expect(res.headers['content-type']).toMatch(/^text\/csv/);
-    const lines = res.text
-      .replace(/^\uFEFF/, '')
-      .trim()
-      .split('\r\n');
-    expect(lines[0]).toBe(
-      'code,cooked_on,started_at,vessel,container,minutes_at_pressure,gauge_kpa,gauge_psi,venting_minutes,altitude_m,load_count,operator,f0,f0_source,log_placement,judged_by,minimum_minutes,below_target,notes',
-    );
-    expect(lines).toHaveLength(3);
-    const codes = [a.code, b.code].sort();
-    expect(lines[1]!.startsWith(`${codes[0]},2026-03-02,`)).toBe(true);
-    expect(res.text).toContain('"first, with a comma"');
-    expect(res.text).toContain('estimated upper bound');
   });
 });
