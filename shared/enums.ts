@@ -138,9 +138,9 @@ export const mailStatuses = ['sent', 'failed'] as const;
 export const mailStatusSchema = z.enum(mailStatuses);
 export type MailStatus = (typeof mailStatuses)[number];
 
-/** The production records a cluster of incidents can share, for the cluster alert. */
-export const clusterDimensions = ['cookRun', 'culture', 'session'] as const;
-export type ClusterDimension = (typeof clusterDimensions)[number];
+/** The factors whose levels a cluster of incidents can share, for the cluster alert (same words as `factors`). */
+export const clusterFactors = ['cookRun', 'culture', 'session'] as const satisfies readonly Factor[];
+export type ClusterFactor = (typeof clusterFactors)[number];
 
 /** What started a weekly digest: the schedule or an admin's request. */
 export const digestTriggers = ['schedule', 'manual'] as const;

@@ -28,7 +28,7 @@ import { StaffMember } from '../staff/staff-member.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
 import { SessionStepCheck } from '../sessions/session-step-check.entity';
 import { LabSettings } from '../settings/lab-settings.entity';
-import { RetrainingRequest } from '../training/retraining-request.entity';
+import { RetrainRequest } from '../training/retrain-request.entity';
 import { TrainingRecord } from '../training/training-record.entity';
 import { User } from '../users/user.entity';
 
@@ -61,7 +61,7 @@ export const entities = [
   ProcedureStep,
   IncidentStepLink,
   TrainingRecord,
-  RetrainingRequest,
+  RetrainRequest,
   SentMail,
   MailPreference,
   ClusterAlert,

@@ -1,6 +1,6 @@
 import { In } from 'typeorm';
 import type { JarStatus } from '../../shared/enums';
-import type { IncidentJarDto, StepLinkDto } from '../../shared/schemas/incident-detail';
+import type { IncidentJarDto, IncidentStepLinkDto } from '../../shared/schemas/incident-detail';
 import { dataSource } from '../db/data-source';
 import { Jar } from '../jars/jar.entity';
 import { Photo } from '../photos/photo.entity';
@@ -140,7 +140,7 @@ export const incidentDetailRepository = {
     });
   },
 
-  async stepLinks(incidentId: number): Promise<StepLinkDto[]> {
+  async stepLinks(incidentId: number): Promise<IncidentStepLinkDto[]> {
     const rows: Record<string, unknown>[] = await dataSource.manager
       .createQueryBuilder()
       .select([

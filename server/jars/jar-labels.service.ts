@@ -1,6 +1,6 @@
 import QRCode from 'qrcode';
 import type { EntityManager } from 'typeorm';
-import type { JarLabelDto, LabelSheetQuery } from '../../shared/schemas/jar-labels';
+import type { LabelSheetRowDto, LabelSheetQuery } from '../../shared/schemas/jar-labels';
 import { conflict, notFound } from '../core/errors';
 import { jarPageUrl } from './jar-story.service';
 import { jarsRepository } from './jars.repository';
@@ -31,7 +31,7 @@ export async function jarQrSvg(jarId: number): Promise<string> {
   return QRCode.toString(jarPageUrl(jar.label), { type: 'svg', errorCorrectionLevel: 'M', margin: 1 });
 }
 
-export async function labelSheet(q: LabelSheetQuery): Promise<JarLabelDto[]> {
+export async function labelSheet(q: LabelSheetQuery): Promise<LabelSheetRowDto[]> {
   const raws = q.ids ? await jarsRepository.rowsByIds(q.ids) : await jarsRepository.rowsBySession(q.sessionId!);
   return raws.map(toJarRow).map((j) => ({
     id: j.id,

@@ -10,7 +10,7 @@ import {
 } from 'typeorm';
 import { Incident } from '../incidents/incident.entity';
 import { restrict } from '../db/relations';
-import { clusterDimensions, type ClusterDimension } from '../../shared/enums';
+import { clusterFactors, type ClusterFactor } from '../../shared/enums';
 
 /** A cluster that was alerted; later incidents that extend it update the row instead of mailing again. */
 @Entity({ name: 'cluster_alerts' })
@@ -19,8 +19,8 @@ export class ClusterAlert {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 
-  @Column({ type: 'enum', enum: clusterDimensions })
-  dimension: ClusterDimension;
+  @Column({ type: 'enum', enum: clusterFactors })
+  dimension: ClusterFactor;
 
   @Column({ type: 'int', unsigned: true })
   levelId: number;

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { Contaminant, ClusterDimension } from '../../shared/enums';
+import type { Contaminant, ClusterFactor } from '../../shared/enums';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
 import { dataSource } from '../db/data-source';
@@ -23,7 +23,7 @@ export interface IncidentJarRow {
 }
 
 /** Whitelisted jar columns per cluster dimension; never built from input. */
-export const dimensionColumn: Record<ClusterDimension, string> = {
+export const dimensionColumn: Record<ClusterFactor, string> = {
   cookRun: 'j.cookRunId',
   culture: 'j.cultureId',
   session: 'j.sessionId',
@@ -63,7 +63,7 @@ export const incidentMailRepository = {
   },
 
   /** Counting incidents (not voided, not ruled out) with a jar of this level found in [from, to]. */
-  async clusterIncidents(m: EntityManager, dimension: ClusterDimension, levelId: number, from: string, to: string) {
+  async clusterIncidents(m: EntityManager, dimension: ClusterFactor, levelId: number, from: string, to: string) {
     const rows = await m
       .createQueryBuilder(Incident, 'i')
       .innerJoin(IncidentJar, 'ij', 'ij.incidentId = i.id')
@@ -92,7 +92,7 @@ export const incidentMailRepository = {
   },
 
   /** The alerted cluster this window continues, if any. */
-  openAlert: (m: EntityManager, dimension: ClusterDimension, levelId: number, windowStart: string) =>
+  openAlert: (m: EntityManager, dimension: ClusterFactor, levelId: number, windowStart: string) =>
     m
       .createQueryBuilder(ClusterAlert, 'a')
       .where('a.dimension = :dimension AND a.levelId = :levelId AND a.lastFoundOn >= :windowStart', {

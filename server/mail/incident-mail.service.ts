@@ -10,20 +10,20 @@ import { clusterAlertMail, newIncidentMail } from './mail-templates';
 import { deliver, type DeliveryResult } from './mailer';
 import { withNamedLock } from './named-lock';
 import { isLiveIncident } from '../incidents/live-incidents';
-import { clusterDimensions, type ClusterDimension } from '../../shared/enums';
+import { clusterFactors, type ClusterFactor } from '../../shared/enums';
 
 const audienceRoles = (kind: 'new-incident' | 'cluster-alert') => {
   const a = mailAudience[kind];
   return a === 'addressee' ? [] : a;
 };
 
-const levelOf: Record<ClusterDimension, (j: IncidentJarRow) => { id: number | null; code: string | null }> = {
+const levelOf: Record<ClusterFactor, (j: IncidentJarRow) => { id: number | null; code: string | null }> = {
   cookRun: (j) => ({ id: j.cookRunId, code: j.cookRun }),
   culture: (j) => ({ id: j.cultureId, code: j.culture }),
   session: (j) => ({ id: j.sessionId, code: j.session }),
 };
 
-const listParam: Record<ClusterDimension, string> = {
+const listParam: Record<ClusterFactor, string> = {
   cookRun: 'cookRunId',
   culture: 'cultureId',
   session: 'sessionId',
@@ -31,7 +31,7 @@ const listParam: Record<ClusterDimension, string> = {
 
 export interface IncidentMailOutcome {
   newIncident: DeliveryResult;
-  clusters: { dimension: ClusterDimension; code: string; delivery: DeliveryResult }[];
+  clusters: { dimension: ClusterFactor; code: string; delivery: DeliveryResult }[];
 }
 
 /**
@@ -65,7 +65,7 @@ export async function notifyIncidentCreated(incidentId: number): Promise<Inciden
 
   const settings = await getLabSettings();
   const windowStart = addDays(incident.foundOn, -(settings.clusterDays - 1));
-  for (const dimension of clusterDimensions) {
+  for (const dimension of clusterFactors) {
     const levels = new Map<number, string>();
     for (const j of jars) {
       const { id, code } = levelOf[dimension](j);

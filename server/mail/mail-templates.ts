@@ -1,4 +1,4 @@
-import { contaminantNames, type Contaminant, type ClusterDimension } from '../../shared/enums';
+import { contaminantNames, type Contaminant, type ClusterFactor } from '../../shared/enums';
 import { mailCautions } from './mail-cautions';
 import { percent, renderMail, type MailBlock } from './mail-layout';
 import type { MailContent } from './mailer';
@@ -47,14 +47,14 @@ export function newIncidentMail(f: NewIncidentFacts): MailContent {
   return renderMail(`New incident #${f.id}: ${name}, ${jarCount(f.jars.length)}`, blocks);
 }
 
-export const dimensionLabels: Record<ClusterDimension, string> = {
+export const dimensionLabels: Record<ClusterFactor, string> = {
   cookRun: 'cook run',
   culture: 'culture',
   session: 'inoculation session',
 };
 
 /** TRADE.md §2 attribution rules of thumb [common practice], worded as leads. */
-const clusterLeads: Record<ClusterDimension, string> = {
+const clusterLeads: Record<ClusterFactor, string> = {
   cookRun:
     'Early contamination across one cook run points first at the sterilisation cycle: time at pressure, venting, the gauge, overloading and grain moisture.',
   culture: 'Contamination confined to one culture points at the culture itself: test it on agar before using it again.',
@@ -63,7 +63,7 @@ const clusterLeads: Record<ClusterDimension, string> = {
 };
 
 export interface ClusterFacts {
-  dimension: ClusterDimension;
+  dimension: ClusterFactor;
   code: string;
   incidents: { id: number; foundOn: string; contaminant: Contaminant; jars: number }[];
   threshold: number;

@@ -11,7 +11,7 @@ import { dataSource } from '../db/data-source';
 import { ProcedureVersion } from '../procedures/procedure-version.entity';
 import { User } from '../users/user.entity';
 import { StaffMember } from '../staff/staff-member.entity';
-import { RetrainingRequest } from './retraining-request.entity';
+import { RetrainRequest } from './retrain-request.entity';
 import { TrainingRecord } from './training-record.entity';
 
 type Raw = Record<string, unknown>;
@@ -62,9 +62,9 @@ const toRecordDto = (r: Raw): TrainingRecordDto => ({
   createdAt: iso(r.createdAt) ?? '',
 });
 
-function requestQuery(m: EntityManager): SelectQueryBuilder<RetrainingRequest> {
+function requestQuery(m: EntityManager): SelectQueryBuilder<RetrainRequest> {
   return m
-    .createQueryBuilder(RetrainingRequest, 'r')
+    .createQueryBuilder(RetrainRequest, 'r')
     .innerJoin(ProcedureVersion, 'v', 'v.id = r.procedureVersionId')
     .leftJoin(User, 'u', 'u.id = r.userId')
     .leftJoin(StaffMember, 'sm', 'sm.id = r.staffId')
@@ -134,7 +134,7 @@ export const trainingRepository = {
   /** Open requests this training answers: the same procedure, at this version or an older one. */
   openRequestsAnswered: (m: EntityManager, person: PersonKey, procedureId: number, version: number) =>
     m
-      .createQueryBuilder(RetrainingRequest, 'r')
+      .createQueryBuilder(RetrainRequest, 'r')
       .innerJoin(ProcedureVersion, 'v', 'v.id = r.procedureVersionId')
       .where(person.userId ? 'r.userId = :id' : 'r.staffId = :id', { id: person.userId ?? person.staffId })
       .andWhere('r.doneAt IS NULL')
@@ -142,7 +142,7 @@ export const trainingRepository = {
       .getMany(),
 
   async listRequests(q: RetrainRequestListQuery): Promise<[RetrainRequestDto[], PageTotal]> {
-    const qb = dataSource.manager.createQueryBuilder(RetrainingRequest, 'r');
+    const qb = dataSource.manager.createQueryBuilder(RetrainRequest, 'r');
     if (q.userId) qb.andWhere('r.userId = :userId', { userId: q.userId });
     if (q.staffId) qb.andWhere('r.staffId = :staffId', { staffId: q.staffId });
     if (q.open) qb.andWhere(q.open === 'true' ? 'r.doneAt IS NULL' : 'r.doneAt IS NOT NULL');

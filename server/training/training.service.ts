@@ -16,7 +16,7 @@ import { notifyRetrainRequested } from '../mail/retraining-mail.service';
 import { findVersion, getProcedureVersion } from '../procedures/procedures.service';
 import { requireActiveStaff } from '../staff/staff.service';
 import { User } from '../users/user.entity';
-import { RetrainingRequest } from './retraining-request.entity';
+import { RetrainRequest } from './retrain-request.entity';
 import { TrainingRecord } from './training-record.entity';
 import { trainingRepository } from './training.repository';
 
@@ -70,7 +70,7 @@ export async function createTrainingRecord(actor: Actor, input: CreateTrainingRe
     );
     const answered = await trainingRepository.openRequestsAnswered(m, person, version.procedureId, version.version);
     const now = new Date();
-    for (const r of answered) await m.update(RetrainingRequest, { id: r.id }, { doneAt: now });
+    for (const r of answered) await m.update(RetrainRequest, { id: r.id }, { doneAt: now });
     const entries: AuditEntry[] = [
       {
         action: 'create',
@@ -115,7 +115,7 @@ export async function createRetrainRequest(actor: Actor, input: CreateRetrainReq
   const version = await requireVersion(input.procedureVersionId);
   const id = await dataSource.transaction(async (m) => {
     const request = await m.save(
-      m.create(RetrainingRequest, {
+      m.create(RetrainRequest, {
         userId: person.userId,
         staffId: person.staffId,
         procedureVersionId: version.id,

@@ -28,7 +28,7 @@ export const incidentPhotoSchema = photoSchema.extend({
 });
 export type IncidentPhotoDto = z.infer<typeof incidentPhotoSchema>;
 
-export const stepLinkSchema = z.object({
+export const incidentStepLinkSchema = z.object({
   id: z.number().int(),
   stepId: z.number().int(),
   position: z.number().int().nullable(),
@@ -39,7 +39,7 @@ export const stepLinkSchema = z.object({
   note: z.string().nullable(),
   createdAt: z.string(),
 });
-export type StepLinkDto = z.infer<typeof stepLinkSchema>;
+export type IncidentStepLinkDto = z.infer<typeof incidentStepLinkSchema>;
 
 export const historyEntrySchema = z.object({
   id: z.string(),
@@ -73,7 +73,7 @@ export const incidentDetailSchema = incidentListItemSchema
     updatedAt: z.string(),
     jars: z.array(incidentJarSchema),
     photos: z.array(incidentPhotoSchema),
-    stepLinks: z.array(stepLinkSchema),
+    stepLinks: z.array(incidentStepLinkSchema),
     actions: z.array(correctiveActionSchema),
     history: z.array(historyEntrySchema),
   });

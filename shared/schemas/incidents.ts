@@ -24,7 +24,7 @@ export const reasonSchema = z
   .min(3, 'give a reason of at least 3 characters')
   .max(500, 'use at most 500 characters');
 
-export const jarLabelSchema = z
+export const jarLabelFieldSchema = z
   .string()
   .trim()
   .min(1, 'enter a jar label')
@@ -34,7 +34,7 @@ export const createIncidentSchema = z
   .object({
     jarIds: z.array(idSchema).min(1, 'name at least one jar').max(50, 'at most 50 jars per incident').optional(),
     jarLabels: z
-      .array(jarLabelSchema)
+      .array(jarLabelFieldSchema)
       .min(1, 'name at least one jar')
       .max(50, 'at most 50 jars per incident')
       .optional(),

@@ -27,7 +27,7 @@ export const labelSheetQuerySchema = z
   });
 export type LabelSheetQuery = z.infer<typeof labelSheetQuerySchema>;
 
-export const jarLabelSchema = z.object({
+export const labelSheetRowSchema = z.object({
   id: z.number().int(),
   label: z.string(),
   grain: z.string(),
@@ -37,6 +37,6 @@ export const jarLabelSchema = z.object({
   pageUrl: z.string(),
   qrPath: z.string(),
 });
-export type JarLabelDto = z.infer<typeof jarLabelSchema>;
+export type LabelSheetRowDto = z.infer<typeof labelSheetRowSchema>;
 
 export const labelParamsSchema = z.object({ label: z.string().trim().min(1).max(40) });

@@ -1,7 +1,7 @@
 import type { RouteObject } from 'react-router';
 import { paths } from '../config/paths';
 import { access } from '../config/roles';
-import { RoleGate } from './session-guard';
+import { RoleGate } from './sign-in-guard';
 
 export const analysisRoutes: RouteObject[] = [
   {

@@ -3,7 +3,7 @@ import type { RouteObject } from 'react-router';
 import { paths } from '../config/paths';
 import { productionRoles } from '../config/roles';
 import { jarsQueries } from '../features/jars/api/jars-queries';
-import { RoleGate } from './session-guard';
+import { RoleGate } from './sign-in-guard';
 
 export const jarRoutes = (queryClient: QueryClient): RouteObject[] => [
   {

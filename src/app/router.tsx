@@ -9,7 +9,7 @@ import { analysisRoutes } from './analysis-routes';
 import { authRoutes } from './auth-routes';
 import { jarRoutes } from './jar-routes';
 import { registerRoutes } from './register-routes';
-import { RoleGate, SessionLayout, sessionLoader } from './session-guard';
+import { RoleGate, SignedInLayout, signedInLoader } from './sign-in-guard';
 
 export function createAppRouter(queryClient: QueryClient) {
   return createBrowserRouter([
@@ -19,8 +19,8 @@ export function createAppRouter(queryClient: QueryClient) {
       children: [
         ...authRoutes(queryClient),
         {
-          loader: sessionLoader(queryClient),
-          element: <SessionLayout />,
+          loader: signedInLoader(queryClient),
+          element: <SignedInLayout />,
           children: [
             {
               // A failing screen shows its error inside the layout, so navigation stays usable.

@@ -2,7 +2,7 @@ import { queryOptions } from '@tanstack/react-query';
 import { z } from 'zod';
 import { cultureStateSchema, jarStatusSchema, type JarStatus } from '../../../../shared/enums';
 import { pageOf } from '../../../../shared/schemas/common';
-import { jarLabelSchema } from '../../../../shared/schemas/jar-labels';
+import { labelSheetRowSchema } from '../../../../shared/schemas/jar-labels';
 import { jarListQuerySchema, jarRowSchema, jarSortFields } from '../../../../shared/schemas/jars';
 import { jarStorySchema } from '../../../../shared/schemas/jar-story';
 import { lineageNodeSchema, type LineageTreeDto } from '../../../../shared/schemas/jar-lineage';
@@ -83,7 +83,7 @@ export const jarsQueries = {
   labels: (query: { sessionId?: number; ids?: string }) =>
     queryOptions({
       queryKey: [...jarsQueries.all, 'labels', query] as const,
-      queryFn: ({ signal }) => api.get('/jars/labels', { query, signal, schema: itemsOf(jarLabelSchema) }),
+      queryFn: ({ signal }) => api.get('/jars/labels', { query, signal, schema: itemsOf(labelSheetRowSchema) }),
     }),
   lineage: (kind: 'culture' | 'jar', id: number) =>
     queryOptions({

@@ -22,7 +22,7 @@ export const trainingQueries = {
     }),
   openRequests: () =>
     queryOptions({
-      queryKey: [...trainingQueries.all, 'requests', 'open'] as const,
+      queryKey: [...trainingQueries.all, 'retrain-requests', 'open'] as const,
       queryFn: ({ signal }) =>
         api.get('/training/retrain-requests', {
           query: { open: 'true', pageSize: 50 },

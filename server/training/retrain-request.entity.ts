@@ -14,7 +14,7 @@ import { User } from '../users/user.entity';
 import { restrict } from '../db/relations';
 
 @Entity({ name: 'retraining_requests' })
-export class RetrainingRequest {
+export class RetrainRequest {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
 

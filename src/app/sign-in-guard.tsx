@@ -15,7 +15,7 @@ import { setLabTimeZone } from '../lib/format';
 
 const returnPath = (url: URL) => `${url.pathname}${url.search}`;
 
-export const sessionLoader =
+export const signedInLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     // Both at once: on a weak signal one more round trip is more than half a second.
@@ -31,7 +31,7 @@ export const sessionLoader =
   };
 
 /** The signed-in area: the loader checks first; this catches a session that ends while a screen is open. */
-export function SessionLayout() {
+export function SignedInLayout() {
   const { data: me } = useMe();
   const location = useLocation();
   const signOut = useSignOut();
