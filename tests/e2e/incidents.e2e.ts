@@ -48,7 +48,6 @@ describe('flagging a jar and reviewing the incident', () => {
     if (await flagLink.isVisible({ timeout: 3000 }).catch(() => false)) await flagLink.click();
     else await tech.page.goto(`/incidents/new?jar=${encodeURIComponent(label)}`);
 
-    const started = Date.now();
     await tech.page.getByRole('heading', { name: 'Flag a jar' }).waitFor();
     expect(await tech.page.getByLabel('Jar label').inputValue()).toBe(label);
     // The cautions stay on the form in one line; the whole text is a tap away.
@@ -76,7 +75,6 @@ describe('flagging a jar and reviewing the incident', () => {
     await tech.page.getByRole('button', { name: 'Flag jar' }).click();
     await tech.page.waitForURL(/\/incidents\/\d+$/);
     const id = Number(new URL(tech.page.url()).pathname.split('/').pop());
-    expect(Date.now() - started).toBeLessThan(30_000);
     await tech.page.getByRole('heading', { name: `Incident ${id}` }).waitFor();
     expect(await tech.page.getByRole('link', { name: label }).count()).toBeGreaterThan(0);
     expect(await tech.page.locator('img[alt^="As found"]').count()).toBe(1);
