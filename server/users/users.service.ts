@@ -40,6 +40,12 @@ export async function resolveOperator(
   return null;
 }
 
+export const findUser = (id: number) => usersRepository.findById(id);
+export const findUserByUsername = (username: string) => usersRepository.findByUsername(username);
+/** A password the person chose: nothing left to replace at next sign-in. */
+export const setOwnPassword = (m: EntityManager, id: number, passwordHash: string) =>
+  usersRepository.setOwnPassword(m, id, passwordHash);
+
 export const noOperator: OperatorFields = { operatorId: null, operatorName: null };
 
 /** Every account's id, username and display name, for matching the names a history file gives. */
