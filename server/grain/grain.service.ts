@@ -16,7 +16,6 @@ import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { GrainLot } from './grain-lot.entity';
-import { Grain } from './grain.entity';
 import { toGrainDto, toGrainLotDto, toPrepBatchDto } from './grain.mapper';
 import { grainRepository } from './grain.repository';
 import { PrepBatch } from './prep-batch.entity';
@@ -33,7 +32,7 @@ export async function createGrain(actor: Actor, input: CreateGrainInput): Promis
     if (await grainRepository.findGrainByName(input.name, m)) {
       throw conflict('That grain is already on the list.', [{ path: 'name', message: 'is already on the grain list' }]);
     }
-    const grain = await m.save(m.create(Grain, { name: input.name, active: true }));
+    const grain = await grainRepository.insertGrain(m, { name: input.name, active: true });
     await recordAudit(m, actor, [
       { action: 'create', recordType: 'grain', recordId: grain.id, newValue: { name: grain.name } },
     ]);
@@ -49,7 +48,7 @@ const within =
   (work) =>
     manager ? work(manager) : dataSource.transaction(work);
 
-async function lotDtos(lots: GrainLot[], m: EntityManager = dataSource.manager): Promise<GrainLotDto[]> {
+async function lotDtos(lots: GrainLot[], m?: EntityManager): Promise<GrainLotDto[]> {
   const [grains, counts] = await Promise.all([
     grainRepository.grainsByIds([...new Set(lots.map((l) => l.grainId))], m),
     grainRepository.batchCounts(
@@ -61,7 +60,7 @@ async function lotDtos(lots: GrainLot[], m: EntityManager = dataSource.manager):
   return lots.map((l) => toGrainLotDto(l, grainById.get(l.grainId), counts.get(l.id) ?? 0));
 }
 
-async function batchDtos(batches: PrepBatch[], m: EntityManager = dataSource.manager): Promise<PrepBatchDto[]> {
+async function batchDtos(batches: PrepBatch[], m?: EntityManager): Promise<PrepBatchDto[]> {
   const lots = byId(await grainRepository.lotsByIds([...new Set(batches.map((b) => b.grainLotId))], m));
   const grains = byId(await grainRepository.grainsByIds([...new Set([...lots.values()].map((l) => l.grainId))], m));
   return batches.map((b) => {
@@ -96,14 +95,12 @@ export async function createGrainLot(
         { path: 'supplierLotCode', message: `is already recorded for ${grain.name}` },
       ]);
     }
-    const saved = await m.save(
-      m.create(GrainLot, {
-        grainId: input.grainId,
-        supplierLotCode: input.supplierLotCode,
-        receivedOn: input.receivedOn,
-        notes: input.notes || null,
-      }),
-    );
+    const saved = await grainRepository.insertLot(m, {
+      grainId: input.grainId,
+      supplierLotCode: input.supplierLotCode,
+      receivedOn: input.receivedOn,
+      notes: input.notes || null,
+    });
     await recordAudit(m, actor, [
       {
         action: 'create',
@@ -159,17 +156,15 @@ export async function createPrepBatch(
         { path: 'code', message: 'is already used by another prep batch' },
       ]);
     }
-    const saved = await m.save(
-      m.create(PrepBatch, {
-        code: input.code,
-        grainLotId: input.grainLotId,
-        preparedOn: input.preparedOn,
-        soakHours: input.soakHours ?? null,
-        simmerMinutes: input.simmerMinutes ?? null,
-        drainMinutes: input.drainMinutes ?? null,
-        notes: input.notes || null,
-      }),
-    );
+    const saved = await grainRepository.insertBatch(m, {
+      code: input.code,
+      grainLotId: input.grainLotId,
+      preparedOn: input.preparedOn,
+      soakHours: input.soakHours ?? null,
+      simmerMinutes: input.simmerMinutes ?? null,
+      drainMinutes: input.drainMinutes ?? null,
+      notes: input.notes || null,
+    });
     await recordAudit(m, actor, [
       {
         action: 'create',
