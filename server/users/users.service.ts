@@ -41,6 +41,7 @@ export async function resolveOperator(
 }
 
 export const findUser = (id: number) => usersRepository.findById(id);
+export const findActiveUser = (m: EntityManager, id: number) => usersRepository.findActive(id, m);
 export const findUserByUsername = (username: string) => usersRepository.findByUsername(username);
 /** A password the person chose: nothing left to replace at next sign-in. */
 export const setOwnPassword = (m: EntityManager, id: number, passwordHash: string) =>
