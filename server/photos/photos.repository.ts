@@ -8,4 +8,5 @@ export const photosRepository = {
     ids.length ? manager.findBy(Photo, { id: In(ids) }) : Promise.resolve([]),
   findBySha: (hashes: string[], manager: EntityManager = dataSource.manager) =>
     hashes.length ? manager.findBy(Photo, { sha256: In(hashes) }) : Promise.resolve([]),
+  insert: (m: EntityManager, fields: Partial<Photo>) => m.save(m.create(Photo, fields)),
 };
