@@ -126,6 +126,9 @@ export async function listIncidents(q: IncidentListQuery): Promise<Page<Incident
   return pageResult(items, total, q);
 }
 
+/** For other modules: the incident row itself, or null. */
+export const findIncident = (id: number) => incidentsRepository.findById(id);
+
 export async function getIncident(id: number): Promise<IncidentDetailDto> {
   const incident = await incidentsRepository.findById(id);
   if (!incident) throw notFound('Incident');
