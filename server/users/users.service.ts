@@ -7,7 +7,6 @@ import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
 import { config } from '../core/config';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
-import { User } from './user.entity';
 import { usersRepository } from './users.repository';
 import { toUserDto } from './users.mapper';
 
@@ -67,16 +66,14 @@ export async function createUser(actor: Actor, input: CreateUserInput): Promise<
   }
   const passwordHash = await hashPassword(input.password);
   return dataSource.transaction(async (m) => {
-    const user = await m.save(
-      m.create(User, {
-        username: input.username,
-        displayName: input.displayName,
-        email: input.email || null,
-        role: input.role,
-        passwordHash,
-        active: true,
-      }),
-    );
+    const user = await usersRepository.insert(m, {
+      username: input.username,
+      displayName: input.displayName,
+      email: input.email || null,
+      role: input.role,
+      passwordHash,
+      active: true,
+    });
     await recordAudit(m, actor, [
       {
         action: 'create',
@@ -101,7 +98,7 @@ export async function updateUser(actor: Actor, id: number, input: UpdateUserInpu
     const changes = { ...input, email: input.email === undefined ? undefined : input.email || null };
     const entries = diffEntries({ action: 'update', recordType: 'user', recordId: id }, user, changes);
     Object.assign(user, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
-    await m.save(user);
+    await usersRepository.save(m, user);
     await recordAudit(m, actor, entries);
     return toUserDto(user);
   });
