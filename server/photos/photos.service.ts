@@ -136,6 +136,9 @@ export async function openPhoto(id: number, variant: 'original' | 'thumb'): Prom
   return { stream: await storage.open(photo.storageKey), mime: photo.mime, sha256: photo.sha256, variant: 'original' };
 }
 
+/** For other modules that attach one photo and word their own refusal. */
+export const photoExists = (m: EntityManager, id: number) => photosRepository.exists(m, id);
+
 /** For other modules that attach photos: every id must exist, else a 422 naming the field. */
 export async function requirePhotos(manager: EntityManager, ids: number[], field: string): Promise<Photo[]> {
   const unique = [...new Set(ids)];
