@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import { dataSource } from '../db/data-source';
 import { LoginFailure } from './login-failure.entity';
+import { SessionRecord } from './session-record.entity';
 
 export interface LoginFailureCounts {
   byUser: string | null;
@@ -29,4 +30,26 @@ export const authRepository = {
       .from(LoginFailure)
       .where('failedAt < :before', { before })
       .execute(),
+
+  /** Deletes the user's sessions but `keepSessionId`; answers how many there were. */
+  async deleteOtherSessions(m: EntityManager, userId: number, keepSessionId: string): Promise<number> {
+    const result = await m
+      .createQueryBuilder()
+      .delete()
+      .from(SessionRecord)
+      // passport keeps the user id in the session's JSON as {"passport":{"user":<id>}}.
+      .where("JSON_VALUE(data, '$.passport.user') = :user", { user: String(userId) })
+      .andWhere('session_id <> :keep', { keep: keepSessionId })
+      .execute();
+    return result.affected ?? 0;
+  },
+  async deleteSessionsExpiredBefore(nowSeconds: number): Promise<number> {
+    const result = await dataSource.manager
+      .createQueryBuilder()
+      .delete()
+      .from(SessionRecord)
+      .where('expires < :now', { now: nowSeconds })
+      .execute();
+    return result.affected ?? 0;
+  },
 };
