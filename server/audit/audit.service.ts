@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { AuditEvent } from './audit-event.entity';
+import { auditRepository } from './audit.repository';
 
 export interface Actor {
   id: number | null;
@@ -25,8 +25,9 @@ function text(value: unknown): string | null {
 /** Takes the caller's transaction manager: an audit event commits or rolls back with its change. */
 export async function recordAudit(manager: EntityManager, actor: Actor, entries: AuditEntry[]): Promise<void> {
   if (entries.length === 0) return;
-  const rows = entries.map((e) =>
-    manager.create(AuditEvent, {
+  await auditRepository.insertMany(
+    manager,
+    entries.map((e) => ({
       userId: actor.id,
       userName: actor.displayName,
       action: e.action,
@@ -36,9 +37,8 @@ export async function recordAudit(manager: EntityManager, actor: Actor, entries:
       oldValue: text(e.oldValue),
       newValue: text(e.newValue),
       reason: e.reason ?? null,
-    }),
+    })),
   );
-  await manager.insert(AuditEvent, rows);
 }
 
 /** One audit entry per field whose value changed. */

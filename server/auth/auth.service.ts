@@ -5,9 +5,8 @@ import { AppError, badRequest, notFound } from '../core/errors';
 import { config } from '../core/config';
 import { dataSource } from '../db/data-source';
 import { recordAudit } from '../audit/audit.service';
-import { User } from '../users/user.entity';
 import { toMeDto } from '../users/users.mapper';
-import { hashPassword } from '../users/users.service';
+import { findUser, findUserByUsername, hashPassword, setOwnPassword } from '../users/users.service';
 import { forgiveAttempt, reserveLoginAttempt } from './login-limit.service';
 import { endOtherSessions } from './session-records';
 
@@ -22,7 +21,7 @@ export const invalidCredentials = () => new AppError(401, 'invalid-credentials',
 
 export async function verifyLogin(username: string, password: string, address: string): Promise<SessionUser> {
   const attempt = await reserveLoginAttempt(username, address);
-  const user = await dataSource.manager.findOneBy(User, { username });
+  const user = await findUserByUsername(username);
   const ok = await bcrypt.compare(password, user?.passwordHash ?? decoyHash());
   // The reserved attempt stays counted as the failure.
   if (!user || !ok || !user.active) throw invalidCredentials();
@@ -31,7 +30,7 @@ export async function verifyLogin(username: string, password: string, address: s
 }
 
 export async function loadSessionUser(id: number): Promise<SessionUser | null> {
-  const user = await dataSource.manager.findOneBy(User, { id });
+  const user = await findUser(id);
   return user?.active ? toMeDto(user) : null;
 }
 
@@ -44,7 +43,7 @@ export async function changePassword(
   input: ChangePasswordInput,
   from: { address: string; sessionId: string },
 ): Promise<void> {
-  const user = await dataSource.manager.findOneBy(User, { id: actor.id });
+  const user = await findUser(actor.id);
   if (!user) throw notFound('User');
   const attempt = await reserveLoginAttempt(user.username, from.address);
   if (!(await bcrypt.compare(input.currentPassword, user.passwordHash))) {
@@ -58,7 +57,7 @@ export async function changePassword(
   }
   const passwordHash = await hashPassword(input.newPassword);
   await dataSource.transaction(async (m) => {
-    await m.update(User, { id: user.id }, { passwordHash, mustChangePassword: false });
+    await setOwnPassword(m, user.id, passwordHash);
     const ended = await endOtherSessions(m, user.id, from.sessionId);
     await recordAudit(m, actor, [
       {

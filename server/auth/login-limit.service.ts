@@ -1,9 +1,8 @@
 import type { EntityManager } from 'typeorm';
 import { AppError } from '../core/errors';
 import { config } from '../core/config';
-import { dataSource } from '../db/data-source';
 import { withNamedLock } from '../mail/named-lock';
-import { LoginFailure } from './login-failure.entity';
+import { authRepository } from './auth.repository';
 
 const windowStart = () => new Date(Date.now() - config().LOGIN_WINDOW_MINUTES * 60_000);
 
@@ -19,14 +18,7 @@ export const tooManyAttempts = () =>
 async function isLoginBlocked(m: EntityManager, username: string, address: string): Promise<boolean> {
   const c = config();
   // On the lock's own connection: waiters hold pool connections, so asking the pool could deadlock.
-  const row = await m
-    .createQueryBuilder(LoginFailure, 'f')
-    .select('SUM(f.username = :username)', 'byUser')
-    .addSelect('COUNT(DISTINCT CASE WHEN f.address = :address THEN f.username END)', 'usernamesByAddress')
-    .addSelect('SUM(f.address = :address)', 'byAddress')
-    .where('f.failedAt >= :since', { since: windowStart() })
-    .andWhere('(f.username = :username OR f.address = :address)', { username, address })
-    .getRawOne<{ byUser: string | null; usernamesByAddress: string | null; byAddress: string | null }>();
+  const row = await authRepository.loginFailureCounts(m, username, address, windowStart());
   return (
     Number(row?.byUser ?? 0) >= c.LOGIN_FAILURE_LIMIT ||
     Number(row?.usernamesByAddress ?? 0) >= c.LOGIN_FAILURE_LIMIT ||
@@ -46,7 +38,7 @@ export interface LoginAttempt {
 export async function reserveLoginAttempt(username: string, address: string): Promise<LoginAttempt> {
   const reserved = await withNamedLock('asepta-login-attempts', 10, async (m) => {
     if (await isLoginBlocked(m, username, address)) throw tooManyAttempts();
-    const result = await m.insert(LoginFailure, {
+    const result = await authRepository.insertLoginFailure(m, {
       username: username.slice(0, 64),
       address: address.slice(0, 64),
       failedAt: new Date(),
@@ -59,15 +51,10 @@ export async function reserveLoginAttempt(username: string, address: string): Pr
 
 /** A correct password: successful sign-ins do not count. */
 export async function forgiveAttempt(attempt: LoginAttempt): Promise<void> {
-  await dataSource.manager.delete(LoginFailure, { id: attempt.id });
+  await authRepository.deleteLoginFailure(attempt.id);
 }
 
 /** Old rows carry no weight in the count; prune them so the table stays small. */
 export async function pruneLoginFailures(): Promise<void> {
-  await dataSource.manager
-    .createQueryBuilder()
-    .delete()
-    .from(LoginFailure)
-    .where('failedAt < :before', { before: new Date(Date.now() - 24 * 3600_000) })
-    .execute();
+  await authRepository.deleteLoginFailuresBefore(new Date(Date.now() - 24 * 3600_000));
 }

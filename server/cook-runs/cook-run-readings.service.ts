@@ -4,7 +4,6 @@ import { recordAudit, type Actor } from '../audit/audit.service';
 import { notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
 import { estimatedF0 } from './cook-run-lethality';
-import { CookRun } from './cook-run.entity';
 import { cookRunsRepository } from './cook-runs.repository';
 import { getCookRun } from './cook-runs.service';
 import type { LogPlacement } from '../../shared/enums';
@@ -73,7 +72,7 @@ export async function replaceCookRunReadings(
             },
           ]),
     ]);
-    await m.update(CookRun, { id }, { f0, f0Source: 'log', logPlacement: placement });
+    await cookRunsRepository.setF0(m, id, { f0, f0Source: 'log', logPlacement: placement });
   });
   return getCookRun(id);
 }
@@ -104,7 +103,7 @@ export async function removeCookRunReadings(actor: Actor, id: number): Promise<C
         newValue: 'estimate',
       },
     ]);
-    await m.update(CookRun, { id }, { f0, f0Source: 'estimate', logPlacement: null });
+    await cookRunsRepository.setF0(m, id, { f0, f0Source: 'estimate', logPlacement: null });
   });
   return getCookRun(id);
 }

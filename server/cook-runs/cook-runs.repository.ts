@@ -66,6 +66,10 @@ export const cookRunsRepository = {
   all: (q: CookRunFilters & Pick<PageQuery, 'sort'>, rule: CookRule) =>
     allSorted(() => filtered(q, rule), q.sort, sort),
 
+  /** The F0 a run carries and where it came from, set beside its temperature log. */
+  setF0: (m: EntityManager, id: number, fields: Pick<CookRun, 'f0' | 'f0Source' | 'logPlacement'>) =>
+    m.update(CookRun, { id }, fields),
+
   readingsCount: (cookRunId: number) => dataSource.manager.countBy(CookRunReading, { cookRunId }),
   readings: (cookRunId: number) =>
     dataSource.manager.find(CookRunReading, { where: { cookRunId }, order: { minute: 'ASC' } }),

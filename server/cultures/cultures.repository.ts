@@ -32,6 +32,8 @@ export const culturesRepository = {
     dataSource.manager.find(Culture, { where: { parentCultureId: id }, order: { code: 'ASC' } }),
   agarTests: (cultureId: number) =>
     dataSource.manager.find(AgarTest, { where: { cultureId }, order: { testedOn: 'DESC', id: 'DESC' } }),
+  setState: (m: EntityManager, id: number, state: Culture['state']) => m.update(Culture, { id }, { state }),
+  insertAgarTest: (m: EntityManager, fields: Partial<AgarTest>) => m.save(m.create(AgarTest, fields)),
   photoExists: async (id: number, m: EntityManager) => (await m.countBy(Photo, { id })) > 0,
 
   list: (q: CultureListQuery): Promise<[Culture[], PageTotal]> => pageSorted(filtered(q), q, sort),

@@ -16,7 +16,6 @@ import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { assertNewCodes } from '../core/new-codes';
 import { dataSource } from '../db/data-source';
-import { AgarTest } from './agar-test.entity';
 import { Culture } from './culture.entity';
 import { culturesRepository } from './cultures.repository';
 import { toAgarTestDto, toCultureDto, toCultureSummaryDto } from './cultures.mapper';
@@ -57,10 +56,7 @@ export async function getCulture(id: number): Promise<CultureDetailDto> {
  * For whoever makes jars from a culture: a warning to show (and keep) when the culture is not
  * released, or null when it is.
  */
-export async function cultureUseWarning(
-  cultureId: number,
-  m: EntityManager = dataSource.manager,
-): Promise<string | null> {
+export async function cultureUseWarning(cultureId: number, m?: EntityManager): Promise<string | null> {
   const culture = await culturesRepository.findById(cultureId, m);
   if (!culture) throw notFound('Culture');
   return culture.state === 'released' ? null : `Culture ${culture.code} is ${culture.state}, not released.`;
@@ -196,7 +192,7 @@ export async function changeCultureState(
         reason: input.reason,
       },
     ]);
-    await m.update(Culture, { id }, { state: input.state });
+    await culturesRepository.setState(m, id, input.state);
   });
   return getCulture(id);
 }
@@ -207,16 +203,14 @@ export async function addAgarTest(actor: Actor, cultureId: number, input: Create
     if (input.photoId && !(await culturesRepository.photoExists(input.photoId, m))) {
       throw badRequest('photoId: no such photo', [{ path: 'photoId', message: 'is not an uploaded photo' }]);
     }
-    const test = await m.save(
-      m.create(AgarTest, {
-        cultureId,
-        testedOn: input.testedOn,
-        result: input.result,
-        notes: input.notes || null,
-        photoId: input.photoId ?? null,
-        recordedById: actor.id,
-      }),
-    );
+    const test = await culturesRepository.insertAgarTest(m, {
+      cultureId,
+      testedOn: input.testedOn,
+      result: input.result,
+      notes: input.notes || null,
+      photoId: input.photoId ?? null,
+      recordedById: actor.id,
+    });
     await recordAudit(m, actor, [
       {
         action: 'agar-test',

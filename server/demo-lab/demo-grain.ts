@@ -2,7 +2,7 @@ import { In, type EntityManager } from 'typeorm';
 import type { Actor } from '../audit/audit.service';
 import { GrainLot } from '../grain/grain-lot.entity';
 import { Grain } from '../grain/grain.entity';
-import { createGrainLot, createPrepBatch } from '../grain/grain.service';
+import { insertGrainLot, insertPrepBatch } from '../grain/grain.service';
 import { PrepBatch } from '../grain/prep-batch.entity';
 import { Jar } from '../jars/jar.entity';
 import { addDays } from './demo-calendar';
@@ -95,7 +95,7 @@ export async function addDemoGrain(m: EntityManager, actor: Actor, plan: DemoGra
     const stored = await m.findOneBy(GrainLot, { grainId, supplierLotCode: lot.supplierLotCode });
     const id =
       stored?.id ??
-      (await createGrainLot(actor, { grainId, supplierLotCode: lot.supplierLotCode, receivedOn: lot.receivedOn }, m))
+      (await insertGrainLot(m, actor, { grainId, supplierLotCode: lot.supplierLotCode, receivedOn: lot.receivedOn }))
         .id;
     lotIds.set(lot, id);
   }
@@ -106,19 +106,15 @@ export async function addDemoGrain(m: EntityManager, actor: Actor, plan: DemoGra
     const id =
       stored.get(b.code) ??
       (
-        await createPrepBatch(
-          actor,
-          {
-            code: b.code,
-            grainLotId: lotIds.get(b.lot) ?? 0,
-            preparedOn: b.preparedOn,
-            soakHours: b.soakHours,
-            simmerMinutes: b.simmerMinutes,
-            drainMinutes: b.drainMinutes,
-            notes: b.notes ?? undefined,
-          },
-          m,
-        )
+        await insertPrepBatch(m, actor, {
+          code: b.code,
+          grainLotId: lotIds.get(b.lot) ?? 0,
+          preparedOn: b.preparedOn,
+          soakHours: b.soakHours,
+          simmerMinutes: b.simmerMinutes,
+          drainMinutes: b.drainMinutes,
+          notes: b.notes ?? undefined,
+        })
       ).id;
     await m.update(Jar, { label: In(b.jars.map((j) => j.label)) }, { prepBatchId: id });
   }

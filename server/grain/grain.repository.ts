@@ -23,6 +23,10 @@ const batchSortable: Record<(typeof prepBatchSortFields)[number], string> = {
 };
 
 export const grainRepository = {
+  insertGrain: (m: EntityManager, fields: Partial<Grain>) => m.save(m.create(Grain, fields)),
+  insertLot: (m: EntityManager, fields: Partial<GrainLot>) => m.save(m.create(GrainLot, fields)),
+  insertBatch: (m: EntityManager, fields: Partial<PrepBatch>) => m.save(m.create(PrepBatch, fields)),
+
   listGrains: (m: EntityManager = dataSource.manager) => m.find(Grain, { order: { name: 'ASC' } }),
   findGrainById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { id }),
   findGrainByName: (name: string, m: EntityManager = dataSource.manager) => m.findOneBy(Grain, { name }),

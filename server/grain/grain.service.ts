@@ -16,7 +16,6 @@ import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
 import { GrainLot } from './grain-lot.entity';
-import { Grain } from './grain.entity';
 import { toGrainDto, toGrainLotDto, toPrepBatchDto } from './grain.mapper';
 import { grainRepository } from './grain.repository';
 import { PrepBatch } from './prep-batch.entity';
@@ -33,7 +32,7 @@ export async function createGrain(actor: Actor, input: CreateGrainInput): Promis
     if (await grainRepository.findGrainByName(input.name, m)) {
       throw conflict('That grain is already on the list.', [{ path: 'name', message: 'is already on the grain list' }]);
     }
-    const grain = await m.save(m.create(Grain, { name: input.name, active: true }));
+    const grain = await grainRepository.insertGrain(m, { name: input.name, active: true });
     await recordAudit(m, actor, [
       { action: 'create', recordType: 'grain', recordId: grain.id, newValue: { name: grain.name } },
     ]);
@@ -41,15 +40,7 @@ export async function createGrain(actor: Actor, input: CreateGrainInput): Promis
   });
 }
 
-type InTransaction = <T>(work: (m: EntityManager) => Promise<T>) => Promise<T>;
-
-/** A caller that holds a transaction (the demo loader) passes its manager and owns the commit. */
-const within =
-  (manager: EntityManager | undefined): InTransaction =>
-  (work) =>
-    manager ? work(manager) : dataSource.transaction(work);
-
-async function lotDtos(lots: GrainLot[], m: EntityManager = dataSource.manager): Promise<GrainLotDto[]> {
+async function lotDtos(lots: GrainLot[], m?: EntityManager): Promise<GrainLotDto[]> {
   const [grains, counts] = await Promise.all([
     grainRepository.grainsByIds([...new Set(lots.map((l) => l.grainId))], m),
     grainRepository.batchCounts(
@@ -61,7 +52,7 @@ async function lotDtos(lots: GrainLot[], m: EntityManager = dataSource.manager):
   return lots.map((l) => toGrainLotDto(l, grainById.get(l.grainId), counts.get(l.id) ?? 0));
 }
 
-async function batchDtos(batches: PrepBatch[], m: EntityManager = dataSource.manager): Promise<PrepBatchDto[]> {
+async function batchDtos(batches: PrepBatch[], m?: EntityManager): Promise<PrepBatchDto[]> {
   const lots = byId(await grainRepository.lotsByIds([...new Set(batches.map((b) => b.grainLotId))], m));
   const grains = byId(await grainRepository.grainsByIds([...new Set([...lots.values()].map((l) => l.grainId))], m));
   return batches.map((b) => {
@@ -83,38 +74,35 @@ export async function getGrainLot(id: number): Promise<GrainLotDetailDto> {
   return { ...dto!, prepBatches: await batchDtos(batches) };
 }
 
-export async function createGrainLot(
-  actor: Actor,
-  input: CreateGrainLotInput,
-  manager?: EntityManager,
-): Promise<GrainLotDto> {
-  const lot = await within(manager)(async (m) => {
-    const grain = await grainRepository.findGrainById(input.grainId, m);
-    if (!grain) throw badRequest('grainId: no such grain', [{ path: 'grainId', message: 'is not on the grain list' }]);
-    if (await grainRepository.findLot(input.grainId, input.supplierLotCode, m)) {
-      throw conflict(`Lot ${input.supplierLotCode} of ${grain.name} is already recorded.`, [
-        { path: 'supplierLotCode', message: `is already recorded for ${grain.name}` },
-      ]);
-    }
-    const saved = await m.save(
-      m.create(GrainLot, {
-        grainId: input.grainId,
-        supplierLotCode: input.supplierLotCode,
-        receivedOn: input.receivedOn,
-        notes: input.notes || null,
-      }),
-    );
-    await recordAudit(m, actor, [
-      {
-        action: 'create',
-        recordType: 'grain-lot',
-        recordId: saved.id,
-        newValue: { grain: grain.name, supplierLotCode: saved.supplierLotCode },
-      },
+/** Inside the caller's transaction: the screen's one lot, or the demo loader's many. */
+export async function insertGrainLot(m: EntityManager, actor: Actor, input: CreateGrainLotInput): Promise<GrainLot> {
+  const grain = await grainRepository.findGrainById(input.grainId, m);
+  if (!grain) throw badRequest('grainId: no such grain', [{ path: 'grainId', message: 'is not on the grain list' }]);
+  if (await grainRepository.findLot(input.grainId, input.supplierLotCode, m)) {
+    throw conflict(`Lot ${input.supplierLotCode} of ${grain.name} is already recorded.`, [
+      { path: 'supplierLotCode', message: `is already recorded for ${grain.name}` },
     ]);
-    return saved;
+  }
+  const saved = await grainRepository.insertLot(m, {
+    grainId: input.grainId,
+    supplierLotCode: input.supplierLotCode,
+    receivedOn: input.receivedOn,
+    notes: input.notes || null,
   });
-  const [dto] = await lotDtos([lot], manager);
+  await recordAudit(m, actor, [
+    {
+      action: 'create',
+      recordType: 'grain-lot',
+      recordId: saved.id,
+      newValue: { grain: grain.name, supplierLotCode: saved.supplierLotCode },
+    },
+  ]);
+  return saved;
+}
+
+export async function createGrainLot(actor: Actor, input: CreateGrainLotInput): Promise<GrainLotDto> {
+  const lot = await dataSource.transaction((m) => insertGrainLot(m, actor, input));
+  const [dto] = await lotDtos([lot]);
   return dto!;
 }
 
@@ -143,42 +131,37 @@ export async function getPrepBatch(id: number, manager?: EntityManager): Promise
   return dto!;
 }
 
-export async function createPrepBatch(
-  actor: Actor,
-  input: CreatePrepBatchInput,
-  manager?: EntityManager,
-): Promise<PrepBatchDto> {
-  const batch = await within(manager)(async (m) => {
-    if (!(await grainRepository.findLotById(input.grainLotId, m))) {
-      throw badRequest('grainLotId: no such grain lot', [
-        { path: 'grainLotId', message: 'is not a recorded grain lot' },
-      ]);
-    }
-    if (await grainRepository.findBatchByCode(input.code, m)) {
-      throw conflict(`Prep batch ${input.code} already exists.`, [
-        { path: 'code', message: 'is already used by another prep batch' },
-      ]);
-    }
-    const saved = await m.save(
-      m.create(PrepBatch, {
-        code: input.code,
-        grainLotId: input.grainLotId,
-        preparedOn: input.preparedOn,
-        soakHours: input.soakHours ?? null,
-        simmerMinutes: input.simmerMinutes ?? null,
-        drainMinutes: input.drainMinutes ?? null,
-        notes: input.notes || null,
-      }),
-    );
-    await recordAudit(m, actor, [
-      {
-        action: 'create',
-        recordType: 'prep-batch',
-        recordId: saved.id,
-        newValue: { code: saved.code, grainLotId: saved.grainLotId },
-      },
+/** Inside the caller's transaction: the screen's one batch, or the demo loader's many. */
+export async function insertPrepBatch(m: EntityManager, actor: Actor, input: CreatePrepBatchInput): Promise<PrepBatch> {
+  if (!(await grainRepository.findLotById(input.grainLotId, m))) {
+    throw badRequest('grainLotId: no such grain lot', [{ path: 'grainLotId', message: 'is not a recorded grain lot' }]);
+  }
+  if (await grainRepository.findBatchByCode(input.code, m)) {
+    throw conflict(`Prep batch ${input.code} already exists.`, [
+      { path: 'code', message: 'is already used by another prep batch' },
     ]);
-    return saved;
+  }
+  const saved = await grainRepository.insertBatch(m, {
+    code: input.code,
+    grainLotId: input.grainLotId,
+    preparedOn: input.preparedOn,
+    soakHours: input.soakHours ?? null,
+    simmerMinutes: input.simmerMinutes ?? null,
+    drainMinutes: input.drainMinutes ?? null,
+    notes: input.notes || null,
   });
-  return getPrepBatch(batch.id, manager);
+  await recordAudit(m, actor, [
+    {
+      action: 'create',
+      recordType: 'prep-batch',
+      recordId: saved.id,
+      newValue: { code: saved.code, grainLotId: saved.grainLotId },
+    },
+  ]);
+  return saved;
+}
+
+export async function createPrepBatch(actor: Actor, input: CreatePrepBatchInput): Promise<PrepBatchDto> {
+  const batch = await dataSource.transaction((m) => insertPrepBatch(m, actor, input));
+  return getPrepBatch(batch.id);
 }

@@ -1,3 +1,4 @@
+import type { EntityManager } from 'typeorm';
 import type { ActionFilters, ActionListQuery } from '../../shared/schemas/corrective-actions';
 import { addDays } from '../core/calendar';
 import { pageSorted, whereContains, type SortSpec } from '../core/paging';
@@ -50,4 +51,10 @@ export const correctiveActionsRepository = {
           .where('i.id IN (:...ids)', { ids })
           .getMany()
       : Promise.resolve([]),
+
+  /** Locked until the transaction ends, so two edits of one action apply one after the other. */
+  findForUpdate: (m: EntityManager, id: number) =>
+    m.createQueryBuilder(CorrectiveAction, 'a').setLock('pessimistic_write').where('a.id = :id', { id }).getOne(),
+  insert: (m: EntityManager, fields: Partial<CorrectiveAction>) => m.save(m.create(CorrectiveAction, fields)),
+  save: (m: EntityManager, action: CorrectiveAction) => m.save(action),
 };

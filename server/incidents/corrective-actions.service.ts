@@ -10,13 +10,14 @@ import { AppError, notFound, unprocessable } from '../core/errors';
 import { todayLocal } from '../core/local-time';
 import { dataSource } from '../db/data-source';
 import { notifyActionAssigned } from '../mail/action-mail.service';
-import { User } from '../users/user.entity';
-import { CorrectiveAction } from './corrective-action.entity';
+import { findActiveUser } from '../users/users.service';
+import type { CorrectiveAction } from './corrective-action.entity';
+import { correctiveActionsRepository } from './corrective-actions.repository';
 import { loadForChange } from './incident-rules';
 import { toActionDto } from './incidents.mapper';
 
 async function ownerName(m: EntityManager, ownerId: number): Promise<string> {
-  const owner = await m.findOneBy(User, { id: ownerId, active: true });
+  const owner = await findActiveUser(m, ownerId);
   if (!owner)
     throw unprocessable(`ownerId: no active user has id ${ownerId}.`, [
       { path: 'ownerId', message: 'is not an active user' },
@@ -32,18 +33,16 @@ export async function createAction(
   const created = await dataSource.transaction(async (m) => {
     await loadForChange(m, incidentId);
     const name = input.ownerId !== undefined ? await ownerName(m, input.ownerId) : (input.ownerName ?? '');
-    const action = await m.save(
-      m.create(CorrectiveAction, {
-        incidentId,
-        what: input.what,
-        ownerId: input.ownerId ?? null,
-        ownerName: name,
-        ownerEmail: input.ownerId !== undefined ? null : (input.ownerEmail ?? null),
-        dueOn: input.dueOn,
-        factor: input.factor ?? null,
-        level: input.level ?? null,
-      }),
-    );
+    const action = await correctiveActionsRepository.insert(m, {
+      incidentId,
+      what: input.what,
+      ownerId: input.ownerId ?? null,
+      ownerName: name,
+      ownerEmail: input.ownerId !== undefined ? null : (input.ownerEmail ?? null),
+      dueOn: input.dueOn,
+      factor: input.factor ?? null,
+      level: input.level ?? null,
+    });
     const { what, ownerName: owner, dueOn, factor, level } = action;
     await recordAudit(m, user, [
       {
@@ -83,11 +82,7 @@ export async function updateAction(
 ): Promise<CorrectiveActionDto> {
   let reassigned = false;
   const updated = await dataSource.transaction(async (m) => {
-    const action = await m
-      .createQueryBuilder(CorrectiveAction, 'a')
-      .setLock('pessimistic_write')
-      .where('a.id = :id', { id })
-      .getOne();
+    const action = await correctiveActionsRepository.findForUpdate(m, id);
     if (!action) throw notFound('Corrective action');
     try {
       await loadForChange(m, action.incidentId);
@@ -119,7 +114,7 @@ export async function updateAction(
     reassigned = entries.some((e) => ['ownerId', 'ownerName', 'ownerEmail'].includes(e.field ?? ''));
     Object.assign(action, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
     checkMerged(action, today);
-    await m.save(action);
+    await correctiveActionsRepository.save(m, action);
     await recordAudit(m, user, entries);
     return toActionDto(action, today);
   });

@@ -77,7 +77,7 @@ export async function voidIncident(
     const incident = await loadForChange(m, id, input.version);
     incident.voided = true;
     incident.voidReason = input.reason;
-    await m.save(incident);
+    await incidentsRepository.save(m, incident);
     await recordAudit(m, user, [
       {
         action: 'void',

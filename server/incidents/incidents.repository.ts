@@ -75,6 +75,9 @@ export const incidentsRepository = {
   lockById: (m: EntityManager, id: number) =>
     m.createQueryBuilder(Incident, 'i').setLock('pessimistic_write').where('i.id = :id', { id }).getOne(),
 
+  insert: (m: EntityManager, fields: Partial<Incident>) => m.save(m.create(Incident, fields)),
+  save: (m: EntityManager, incident: Incident) => m.save(incident),
+
   list: (q: IncidentListQuery) => pageSorted(filtered(q), q, { sortable, defaultSort: '-foundAt', tieBreak: 'i.id' }),
 
   listAll: (f: IncidentFilters, sort: string | undefined, cap: number) =>
@@ -135,6 +138,12 @@ export const incidentsRepository = {
 
   jarIdsOf: async (m: EntityManager, incidentId: number) =>
     (await m.findBy(IncidentJar, { incidentId })).map((r) => r.jarId),
+
+  insertJarLinks: (m: EntityManager, rows: Pick<IncidentJar, 'incidentId' | 'jarId'>[]) => m.insert(IncidentJar, rows),
+  photoIdsOf: async (m: EntityManager, incidentId: number) =>
+    (await m.findBy(IncidentPhoto, { incidentId })).map((l) => l.photoId),
+  insertPhotoLinks: (m: EntityManager, rows: Pick<IncidentPhoto, 'incidentId' | 'photoId' | 'addedById'>[]) =>
+    m.insert(IncidentPhoto, rows),
 
   findJarsByIds: (m: EntityManager, ids: number[]) =>
     ids.length ? m.findBy(Jar, { id: In(ids) }) : Promise.resolve([]),

@@ -19,10 +19,8 @@ import { attachRecord, claimKey, type IdempotencyClaim } from '../idempotency/id
 import type { Jar } from '../jars/jar.entity';
 import { toPhotoDto } from '../photos/photos.mapper';
 import { requirePhotos } from '../photos/photos.service';
-import { IncidentJar } from './incident-jar.entity';
-import { IncidentPhoto } from './incident-photo.entity';
 import { emitIncidentCreated } from './incident-events';
-import { Incident } from './incident.entity';
+import type { Incident } from './incident.entity';
 import { incidentDetailRepository } from './incident-detail.repository';
 import { canEditDescriptive, checkFoundAt, loadForChange } from './incident-rules';
 import { incidentsRepository } from './incidents.repository';
@@ -61,32 +59,30 @@ export async function createIncident(
     const jars = await resolveJars(m, input);
     checkFoundAt(foundAt, foundOn, jars);
     const photos = input.photoIds?.length ? await requirePhotos(m, input.photoIds, 'photoIds') : [];
-    const incident = await m.save(
-      m.create(Incident, {
-        foundAt,
-        foundOn,
-        foundById: user.id,
-        foundByName: user.displayName,
-        createdById: user.id,
-        stage: input.stage,
-        contaminant: input.contaminant,
-        signColour: input.signColour || null,
-        signSmell: input.signSmell || null,
-        signTexture: input.signTexture || null,
-        severity: input.severity,
-        sealed: input.sealed,
-        sterilisedBeforeDisposal: input.sterilisedBeforeDisposal,
-        notes: input.notes || null,
-      }),
-    );
+    const incident = await incidentsRepository.insert(m, {
+      foundAt,
+      foundOn,
+      foundById: user.id,
+      foundByName: user.displayName,
+      createdById: user.id,
+      stage: input.stage,
+      contaminant: input.contaminant,
+      signColour: input.signColour || null,
+      signSmell: input.signSmell || null,
+      signTexture: input.signTexture || null,
+      severity: input.severity,
+      sealed: input.sealed,
+      sterilisedBeforeDisposal: input.sterilisedBeforeDisposal,
+      notes: input.notes || null,
+    });
     await attachRecord(m, claim, incident.id);
-    await m.insert(
-      IncidentJar,
+    await incidentsRepository.insertJarLinks(
+      m,
       jars.map((j) => ({ incidentId: incident.id, jarId: j.id })),
     );
     if (photos.length)
-      await m.insert(
-        IncidentPhoto,
+      await incidentsRepository.insertPhotoLinks(
+        m,
         photos.map((p) => ({ incidentId: incident.id, photoId: p.id, addedById: user.id })),
       );
     const labels = jars.map((j) => j.label).sort();
@@ -129,6 +125,9 @@ export async function listIncidents(q: IncidentListQuery): Promise<Page<Incident
   const items = rows.map((r) => toIncidentListItem(r, codes.get(r.id)?.labels ?? [], photos.get(r.id) ?? 0));
   return pageResult(items, total, q);
 }
+
+/** For other modules: the incident row itself, or null. */
+export const findIncident = (id: number) => incidentsRepository.findById(id);
 
 export async function getIncident(id: number): Promise<IncidentDetailDto> {
   const incident = await incidentsRepository.findById(id);
@@ -183,7 +182,7 @@ export async function updateIncident(
     );
     if (entries.length === 0) return;
     Object.assign(incident, changes, changes.foundAt ? { foundOn: localDate(changes.foundAt) } : {});
-    await m.save(incident);
+    await incidentsRepository.save(m, incident);
     await recordAudit(m, user, entries);
   });
   return getIncident(id);
@@ -200,11 +199,11 @@ export async function addIncidentPhotos(
     const incident = await loadForChange(m, id);
     if (!canEditDescriptive(user, incident)) throw notYours();
     const photos = await requirePhotos(m, input.photoIds, 'photoIds');
-    const existing = new Set((await m.findBy(IncidentPhoto, { incidentId: id })).map((l) => l.photoId));
+    const existing = new Set(await incidentsRepository.photoIdsOf(m, id));
     const fresh = photos.filter((p) => !existing.has(p.id));
     if (fresh.length === 0) return;
-    await m.insert(
-      IncidentPhoto,
+    await incidentsRepository.insertPhotoLinks(
+      m,
       fresh.map((p) => ({ incidentId: id, photoId: p.id, addedById: user.id })),
     );
     await recordAudit(

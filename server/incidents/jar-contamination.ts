@@ -1,10 +1,16 @@
-import { In, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { jarStatuses, type JarStatus } from '../../shared/enums';
 import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
 import { localDate } from '../core/local-time';
-import { JarEvent } from '../jars/jar-event.entity';
-import { Jar } from '../jars/jar.entity';
-import { jarIsContaminatedSql } from './live-incidents';
+import type { JarEvent } from '../jars/jar-event.entity';
+import type { Jar } from '../jars/jar.entity';
+import {
+  contaminatedJarIds,
+  insertJarEvent,
+  jarEventsOf,
+  lockJarsForStatus,
+  setJarStatus,
+} from '../jars/jar-status.service';
 
 /** Jars that have left the shelf keep their status: an incident on them is recorded, not re-shelved. */
 const flaggable: JarStatus[] = ['incubating', 'colonised', 'on-hold'];
@@ -41,16 +47,9 @@ export function statusBeforeContamination(jar: Pick<Jar, 'colonisedOn'>, events:
  */
 export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: number[], why: string): Promise<void> {
   if (jarIds.length === 0) return;
-  const jars = await m.createQueryBuilder(Jar, 'j').setLock('pessimistic_write').whereInIds(jarIds).getMany();
-  const liveRows: { id: number }[] = await m
-    .createQueryBuilder()
-    .select('j.id', 'id')
-    .from(Jar, 'j')
-    .where('j.id IN (:...ids)', { ids: jarIds })
-    .andWhere(jarIsContaminatedSql('j.id'))
-    .getRawMany();
-  const live = new Set(liveRows.map((r) => Number(r.id)));
-  const events = await m.findBy(JarEvent, { jarId: In(jarIds) });
+  const jars = await lockJarsForStatus(m, jarIds);
+  const live = await contaminatedJarIds(m, jarIds);
+  const events = await jarEventsOf(m, jarIds);
   const now = new Date();
   const audit: AuditEntry[] = [];
   for (const jar of jars) {
@@ -63,7 +62,7 @@ export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: nu
       );
     }
     if (!next || next === jar.status) continue;
-    await m.insert(JarEvent, {
+    await insertJarEvent(m, {
       jarId: jar.id,
       type: 'status',
       at: now,
@@ -73,7 +72,7 @@ export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: nu
       newStatus: next,
       note: why,
     });
-    await m.update(Jar, { id: jar.id }, { status: next });
+    await setJarStatus(m, jar.id, next);
     audit.push({
       action: 'status',
       recordType: 'jar',

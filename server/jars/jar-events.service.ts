@@ -6,7 +6,7 @@ import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service
 import { badRequest, forbidden, notFound, unprocessable } from '../core/errors';
 import { localDate } from '../core/local-time';
 import { dataSource } from '../db/data-source';
-import { Photo } from '../photos/photo.entity';
+import { photoExists } from '../photos/photos.service';
 import type { JarEvent } from './jar-event.entity';
 import type { Jar } from './jar.entity';
 import { statusAfter } from './jar-life';
@@ -66,7 +66,7 @@ export async function applyEvent(
 
   switch (input.type) {
     case 'check':
-      if (input.photoId && !(await m.existsBy(Photo, { id: input.photoId }))) {
+      if (input.photoId && !(await photoExists(m, input.photoId))) {
         throw unprocessable('photoId: no such photo', [{ path: 'photoId', message: 'no such photo' }]);
       }
       event.percentColonised = input.percentColonised;

@@ -46,7 +46,7 @@ export const digestRepository = {
     }));
   },
 
-  findRun: (m: EntityManager, isoWeek: string) => m.findOneBy(DigestRun, { isoWeek }),
+  findRun: (isoWeek: string) => dataSource.manager.findOneBy(DigestRun, { isoWeek }),
 
   /** INSERT IGNORE: answers false when another instance already holds this week. */
   async claimWeek(m: EntityManager, isoWeek: string, trigger: DigestRun['trigger']): Promise<boolean> {

@@ -2,7 +2,6 @@ import type { DigestResultDto } from '../../shared/schemas/mail';
 import { mailAudience } from '../../shared/schemas/mail';
 import { pChartLimits } from '../../shared/stats/p-chart';
 import { config } from '../core/config';
-import { dataSource } from '../db/data-source';
 import { getLabSettings } from '../settings/settings.service';
 import { digestRepository } from './digest.repository';
 import { addDays, isoWeekOf, labClock, mondayOf, weeksEndingAt } from '../core/calendar';
@@ -96,5 +95,5 @@ export function isDigestTime(now: Date): boolean {
 
 export async function digestAlreadySent(now: Date): Promise<boolean> {
   const clock = labClock(now, config().LAB_TIME_ZONE);
-  return (await digestRepository.findRun(dataSource.manager, isoWeekOf(clock.date))) !== null;
+  return (await digestRepository.findRun(isoWeekOf(clock.date))) !== null;
 }

@@ -102,4 +102,6 @@ export const incidentMailRepository = {
       })
       .orderBy('a.lastFoundOn', 'DESC')
       .getOne(),
+  saveAlert: (m: EntityManager, alert: ClusterAlert) => m.save(alert),
+  insertAlert: (m: EntityManager, fields: Partial<ClusterAlert>) => m.save(m.create(ClusterAlert, fields)),
 };

@@ -2,7 +2,6 @@ import { mailAudience } from '../../shared/schemas/mail';
 import { config } from '../core/config';
 import { logger } from '../core/logger';
 import { getLabSettings } from '../settings/settings.service';
-import { ClusterAlert } from './cluster-alert.entity';
 import { incidentMailRepository, type IncidentJarRow } from './incident-mail.repository';
 import { addDays } from '../core/calendar';
 import { mailRepository } from './mail.repository';
@@ -87,20 +86,18 @@ export async function notifyIncidentCreated(incidentId: number): Promise<Inciden
           // The same cluster growing: keep its span current, mail once only.
           existing.lastFoundOn = existing.lastFoundOn > incident.foundOn ? existing.lastFoundOn : incident.foundOn;
           existing.incidentCount = Math.max(existing.incidentCount, found.length);
-          await m.save(existing);
+          await incidentMailRepository.saveAlert(m, existing);
           return undefined;
         }
-        await m.save(
-          m.create(ClusterAlert, {
-            dimension,
-            levelId,
-            levelCode: code.slice(0, 40),
-            firstFoundOn,
-            lastFoundOn: incident.foundOn,
-            incidentCount: found.length,
-            triggeredByIncidentId: incident.id,
-          }),
-        );
+        await incidentMailRepository.insertAlert(m, {
+          dimension,
+          levelId,
+          levelCode: code.slice(0, 40),
+          firstFoundOn,
+          lastFoundOn: incident.foundOn,
+          incidentCount: found.length,
+          triggeredByIncidentId: incident.id,
+        });
         return { found, firstFoundOn };
       });
       if (!alert) continue;

@@ -8,4 +8,6 @@ export const photosRepository = {
     ids.length ? manager.findBy(Photo, { id: In(ids) }) : Promise.resolve([]),
   findBySha: (hashes: string[], manager: EntityManager = dataSource.manager) =>
     hashes.length ? manager.findBy(Photo, { sha256: In(hashes) }) : Promise.resolve([]),
+  exists: (m: EntityManager, id: number) => m.existsBy(Photo, { id }),
+  insert: (m: EntityManager, fields: Partial<Photo>) => m.save(m.create(Photo, fields)),
 };

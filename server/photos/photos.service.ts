@@ -6,7 +6,7 @@ import { AppError, badRequest, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
 import { claimKey, isKeyClash, type IdempotencyClaim } from '../idempotency/idempotency.service';
 import { checkPixels, checkType, unreadable, type Checked, type UploadedFile } from './photo-checks';
-import { Photo } from './photo.entity';
+import type { Photo } from './photo.entity';
 import { toPhotoDto } from './photos.mapper';
 import { photosRepository } from './photos.repository';
 import { photoStorage } from './photo-storage';
@@ -76,17 +76,15 @@ export async function uploadPhotos(
     await dataSource.transaction(async (m) => {
       await claimKey(m, claim);
       for (const { c, d } of decoded) {
-        const photo = await m.save(
-          m.create(Photo, {
-            sha256: c.sha256,
-            mime: c.mime,
-            bytes: c.file.buffer.length,
-            width: d.width,
-            height: d.height,
-            uploadedById: actor.id,
-            ...storageKeys(c.sha256, c.mime),
-          }),
-        );
+        const photo = await photosRepository.insert(m, {
+          sha256: c.sha256,
+          mime: c.mime,
+          bytes: c.file.buffer.length,
+          width: d.width,
+          height: d.height,
+          uploadedById: actor.id,
+          ...storageKeys(c.sha256, c.mime),
+        });
         known.set(photo.sha256, photo);
         await recordAudit(m, actor, [
           {
@@ -137,6 +135,9 @@ export async function openPhoto(id: number, variant: 'original' | 'thumb'): Prom
   }
   return { stream: await storage.open(photo.storageKey), mime: photo.mime, sha256: photo.sha256, variant: 'original' };
 }
+
+/** For other modules that attach one photo and word their own refusal. */
+export const photoExists = (m: EntityManager, id: number) => photosRepository.exists(m, id);
 
 /** For other modules that attach photos: every id must exist, else a 422 naming the field. */
 export async function requirePhotos(manager: EntityManager, ids: number[], field: string): Promise<Photo[]> {

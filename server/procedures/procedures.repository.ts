@@ -89,4 +89,10 @@ export const proceduresRepository = {
   },
 
   findStep: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(ProcedureStep, { id }),
+
+  insert: (m: EntityManager, fields: Pick<Procedure, 'code' | 'title'>) => m.save(m.create(Procedure, fields)),
+  setTitle: (m: EntityManager, id: number, title: string) => m.update(Procedure, { id }, { title }),
+  insertVersion: (m: EntityManager, fields: Partial<ProcedureVersion>) => m.save(m.create(ProcedureVersion, fields)),
+  insertSteps: (m: EntityManager, rows: Pick<ProcedureStep, 'versionId' | 'position' | 'text' | 'caution'>[]) =>
+    m.insert(ProcedureStep, rows),
 };

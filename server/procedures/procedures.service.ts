@@ -12,9 +12,7 @@ import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service
 import { conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
-import { ProcedureStep } from './procedure-step.entity';
-import { ProcedureVersion } from './procedure-version.entity';
-import { Procedure } from './procedure.entity';
+import type { ProcedureVersion } from './procedure-version.entity';
 import { proceduresRepository } from './procedures.repository';
 import { toProcedureDto, toStepDto, toVersionSummaryDto } from './procedures.mapper';
 
@@ -65,11 +63,15 @@ async function insertVersion(
   changeNote: string | null,
   steps: ProcedureStepInput[],
 ): Promise<ProcedureVersion> {
-  const saved = await m.save(
-    m.create(ProcedureVersion, { procedureId, version, title, changeNote, publishedById: actor.id }),
-  );
-  await m.insert(
-    ProcedureStep,
+  const saved = await proceduresRepository.insertVersion(m, {
+    procedureId,
+    version,
+    title,
+    changeNote,
+    publishedById: actor.id,
+  });
+  await proceduresRepository.insertSteps(
+    m,
     steps.map((s, i) => ({ versionId: saved.id, position: i + 1, text: s.text, caution: s.caution })),
   );
   return saved;
@@ -82,7 +84,7 @@ export async function createProcedure(actor: Actor, input: CreateProcedureInput)
     ]);
   }
   const id = await dataSource.transaction(async (m) => {
-    const procedure = await m.save(m.create(Procedure, { code: input.code, title: input.title }));
+    const procedure = await proceduresRepository.insert(m, { code: input.code, title: input.title });
     const version = await insertVersion(m, actor, procedure.id, 1, input.title, input.changeNote, input.steps);
     await recordAudit(m, actor, [
       {
@@ -137,7 +139,7 @@ export async function publishVersion(
         newValue: title,
         reason: input.changeNote,
       });
-      await m.update(Procedure, { id: procedureId }, { title });
+      await proceduresRepository.setTitle(m, procedureId, title);
     }
     await recordAudit(m, actor, entries);
     return version.id;

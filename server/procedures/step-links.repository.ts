@@ -96,4 +96,9 @@ export const stepLinksRepository = {
         }
       : undefined;
   },
+
+  exists: (incidentId: number, stepId: number) => dataSource.manager.existsBy(IncidentStepLink, { incidentId, stepId }),
+  findById: (m: EntityManager, id: number) => m.findOneBy(IncidentStepLink, { id }),
+  insert: (m: EntityManager, fields: Partial<IncidentStepLink>) => m.save(m.create(IncidentStepLink, fields)),
+  delete: (m: EntityManager, id: number) => m.delete(IncidentStepLink, { id }),
 };

@@ -2,12 +2,11 @@ import type { StepLinkDto, StepLinkInput } from '../../shared/schemas/procedures
 import { recordAudit, type Actor } from '../audit/audit.service';
 import { conflict, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
-import { Incident } from '../incidents/incident.entity';
-import { IncidentStepLink } from './incident-step-link.entity';
+import { findIncident } from '../incidents/incidents.service';
 import { stepLinksRepository } from './step-links.repository';
 
 async function requireIncident(id: number) {
-  const incident = await dataSource.manager.findOneBy(Incident, { id });
+  const incident = await findIncident(id);
   if (!incident) throw notFound('Incident');
   return incident;
 }
@@ -28,21 +27,19 @@ export async function linkStep(actor: Actor, incidentId: number, input: StepLink
   if (incident.voided) throw conflict('This incident is voided; it cannot be linked to a step.');
   const step = await stepLinksRepository.stepWithVersion(input.stepId);
   if (!step) throw notFound('Procedure step');
-  if (await dataSource.manager.existsBy(IncidentStepLink, { incidentId, stepId: input.stepId })) {
+  if (await stepLinksRepository.exists(incidentId, input.stepId)) {
     throw conflict('This incident is already linked to that step.', [
       { path: 'stepId', message: 'is already linked to this incident' },
     ]);
   }
   const id = await dataSource.transaction(async (m) => {
-    const link = await m.save(
-      m.create(IncidentStepLink, {
-        incidentId,
-        stepId: input.stepId,
-        linkedById: actor.id,
-        linkedByName: actor.displayName,
-        note: input.note,
-      }),
-    );
+    const link = await stepLinksRepository.insert(m, {
+      incidentId,
+      stepId: input.stepId,
+      linkedById: actor.id,
+      linkedByName: actor.displayName,
+      note: input.note,
+    });
     // Filed under the incident, so the incident's own history shows who blamed which step.
     await recordAudit(m, actor, [
       {
@@ -69,10 +66,10 @@ export async function linkStep(actor: Actor, incidentId: number, input: StepLink
 
 export async function unlinkStep(actor: Actor, linkId: number): Promise<void> {
   await dataSource.transaction(async (m) => {
-    const link = await m.findOneBy(IncidentStepLink, { id: linkId });
+    const link = await stepLinksRepository.findById(m, linkId);
     if (!link) throw notFound('Step link');
     const step = await stepLinksRepository.stepWithVersion(link.stepId, m);
-    await m.delete(IncidentStepLink, { id: linkId });
+    await stepLinksRepository.delete(m, linkId);
     await recordAudit(m, actor, [
       {
         action: 'unlink-step',

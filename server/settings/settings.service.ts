@@ -3,11 +3,12 @@ import type { LabSettingsDto, UpdateLabSettingsInput } from '../../shared/schema
 import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
 import { config } from '../core/config';
 import { dataSource } from '../db/data-source';
-import { LabSettings } from './lab-settings.entity';
+import type { LabSettings } from './lab-settings.entity';
+import { settingsRepository } from './settings.repository';
 
 /** The settings row is created by the LabDefaults migration, so it always exists. */
-export async function getLabSettings(manager: EntityManager = dataSource.manager): Promise<LabSettings> {
-  const row = await manager.findOneBy(LabSettings, { id: 1 });
+export async function getLabSettings(manager?: EntityManager): Promise<LabSettings> {
+  const row = await settingsRepository.find(manager);
   if (!row) throw new Error('lab_settings row 1 is missing: run the migrations');
   return row;
 }
@@ -31,12 +32,12 @@ export async function readLabSettings(): Promise<LabSettingsDto> {
 export async function updateLabSettings(actor: Actor, input: UpdateLabSettingsInput): Promise<LabSettingsDto> {
   return dataSource.transaction(async (m) => {
     // Locked so two admins saving at once cannot interleave their audit trails.
-    const row = await m.findOne(LabSettings, { where: { id: 1 }, lock: { mode: 'pessimistic_write' } });
+    const row = await settingsRepository.lock(m);
     if (!row) throw new Error('lab_settings row 1 is missing: run the migrations');
     const entries = diffEntries({ action: 'update', recordType: 'lab-settings', recordId: 1 }, row, input);
     if (entries.length === 0) return toLabSettingsDto(row);
     Object.assign(row, input);
-    await m.save(row);
+    await settingsRepository.save(m, row);
     await recordAudit(m, actor, entries);
     return toLabSettingsDto(await getLabSettings(m));
   });

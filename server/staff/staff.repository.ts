@@ -15,6 +15,8 @@ export const staffRepository = {
   },
 
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(StaffMember, { id }),
+  insert: (m: EntityManager, fields: Partial<StaffMember>) => m.save(m.create(StaffMember, fields)),
+  save: (m: EntityManager, member: StaffMember) => m.save(member),
 
   /** The table's collation ignores case, so this finds "ana" when "Ana" is stored. */
   findByName: (name: string, m: EntityManager = dataSource.manager) => m.findOneBy(StaffMember, { name }),

@@ -10,7 +10,7 @@ import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
 import { conflict, notFound, unprocessable } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
-import { StaffMember } from './staff-member.entity';
+import type { StaffMember } from './staff-member.entity';
 import { staffRepository } from './staff.repository';
 
 const toDto = (s: StaffMember): StaffMemberDto => ({
@@ -32,7 +32,7 @@ export async function listStaff(q: StaffListQuery): Promise<Page<StaffMemberDto>
 export async function createStaffMember(actor: Actor, input: CreateStaffMemberInput): Promise<StaffMemberDto> {
   return dataSource.transaction(async (m) => {
     if (await staffRepository.findByName(input.name, m)) throw taken(input.name);
-    const member = await m.save(m.create(StaffMember, { name: input.name, email: input.email || null, active: true }));
+    const member = await staffRepository.insert(m, { name: input.name, email: input.email || null, active: true });
     await recordAudit(m, actor, [
       { action: 'create', recordType: 'staff-member', recordId: member.id, newValue: { name: member.name } },
     ]);
@@ -54,14 +54,14 @@ export async function updateStaffMember(
     const changes = { ...input, email: input.email === undefined ? undefined : input.email || null };
     const entries = diffEntries({ action: 'update', recordType: 'staff-member', recordId: id }, member, changes);
     Object.assign(member, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
-    await m.save(member);
+    await staffRepository.save(m, member);
     await recordAudit(m, actor, entries);
     return toDto(member);
   });
 }
 
 /** An active staff person for a new record (training, a session); a deactivated one is refused by name. */
-export async function requireActiveStaff(id: number, path = 'staffId', m: EntityManager = dataSource.manager) {
+export async function requireActiveStaff(id: number, path = 'staffId', m?: EntityManager) {
   const member = await staffRepository.findById(id, m);
   if (!member) throw notFound('Staff member');
   if (!member.active) throw unprocessable(`${member.name} is deactivated.`, [{ path, message: 'is deactivated' }]);

@@ -103,6 +103,10 @@ const toRequestDto = (r: Raw): RetrainRequestDto => ({
 });
 
 export const trainingRepository = {
+  insertRecord: (m: EntityManager, fields: Partial<TrainingRecord>) => m.save(m.create(TrainingRecord, fields)),
+  insertRequest: (m: EntityManager, fields: Partial<RetrainRequest>) => m.save(m.create(RetrainRequest, fields)),
+  closeRequest: (m: EntityManager, id: number, doneAt: Date) => m.update(RetrainRequest, { id }, { doneAt }),
+
   async listRecords(q: TrainingRecordListQuery): Promise<[TrainingRecordDto[], PageTotal]> {
     const qb = dataSource.manager.createQueryBuilder(TrainingRecord, 't');
     if (q.userId) qb.andWhere('t.userId = :userId', { userId: q.userId });

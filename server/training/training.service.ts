@@ -15,9 +15,7 @@ import { dataSource } from '../db/data-source';
 import { notifyRetrainRequested } from '../mail/retraining-mail.service';
 import { findVersion, getProcedureVersion } from '../procedures/procedures.service';
 import { requireActiveStaff } from '../staff/staff.service';
-import { User } from '../users/user.entity';
-import { RetrainRequest } from './retrain-request.entity';
-import { TrainingRecord } from './training-record.entity';
+import { findUser } from '../users/users.service';
 import { trainingRepository } from './training.repository';
 
 /** The person trained or asked to retrain: an active user or an active staff person. */
@@ -26,7 +24,8 @@ async function requirePerson(input: { userId?: number; staffId?: number }) {
     const member = await requireActiveStaff(input.staffId);
     return { userId: null, staffId: member.id, name: member.name };
   }
-  const user = await dataSource.manager.findOneBy(User, { id: input.userId });
+  // The schema gives exactly one of userId and staffId.
+  const user = await findUser(input.userId as number);
   if (!user) throw notFound('User');
   if (!user.active)
     throw unprocessable('That account is deactivated.', [{ path: 'userId', message: 'is a deactivated account' }]);
@@ -56,21 +55,19 @@ export async function createTrainingRecord(actor: Actor, input: CreateTrainingRe
   const person = await requirePerson(input);
   const version = await requireVersion(input.procedureVersionId);
   const id = await dataSource.transaction(async (m) => {
-    const record = await m.save(
-      m.create(TrainingRecord, {
-        userId: person.userId,
-        staffId: person.staffId,
-        personName: person.name,
-        procedureVersionId: version.id,
-        trainerId: actor.id,
-        trainerName: actor.displayName,
-        trainedOn: input.trainedOn,
-        notes: input.notes,
-      }),
-    );
+    const record = await trainingRepository.insertRecord(m, {
+      userId: person.userId,
+      staffId: person.staffId,
+      personName: person.name,
+      procedureVersionId: version.id,
+      trainerId: actor.id,
+      trainerName: actor.displayName,
+      trainedOn: input.trainedOn,
+      notes: input.notes,
+    });
     const answered = await trainingRepository.openRequestsAnswered(m, person, version.procedureId, version.version);
     const now = new Date();
-    for (const r of answered) await m.update(RetrainRequest, { id: r.id }, { doneAt: now });
+    for (const r of answered) await trainingRepository.closeRequest(m, r.id, now);
     const entries: AuditEntry[] = [
       {
         action: 'create',
@@ -114,15 +111,13 @@ export async function createRetrainRequest(actor: Actor, input: CreateRetrainReq
   const person = await requirePerson(input);
   const version = await requireVersion(input.procedureVersionId);
   const id = await dataSource.transaction(async (m) => {
-    const request = await m.save(
-      m.create(RetrainRequest, {
-        userId: person.userId,
-        staffId: person.staffId,
-        procedureVersionId: version.id,
-        requestedById: actor.id,
-        reason: input.reason,
-      }),
-    );
+    const request = await trainingRepository.insertRequest(m, {
+      userId: person.userId,
+      staffId: person.staffId,
+      procedureVersionId: version.id,
+      requestedById: actor.id,
+      reason: input.reason,
+    });
     await recordAudit(m, actor, [
       {
         action: 'create',

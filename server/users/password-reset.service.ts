@@ -32,7 +32,7 @@ export async function resetPassword(actor: Actor, id: number, input: ResetPasswo
     const user = await usersRepository.findById(id, m);
     if (!user) throw notFound('User');
     Object.assign(user, { passwordHash, mustChangePassword: true });
-    await m.save(user);
+    await usersRepository.save(m, user);
     const ended = await endOtherSessions(m, id, '');
     await recordAudit(m, actor, [
       {

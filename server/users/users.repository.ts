@@ -16,6 +16,10 @@ export const usersRepository = {
   findActive: (id: number, manager: EntityManager = dataSource.manager) =>
     manager.findOneBy(User, { id, active: true }),
   findByUsername: (username: string) => dataSource.manager.findOneBy(User, { username }),
+  insert: (m: EntityManager, fields: Partial<User>) => m.save(m.create(User, fields)),
+  save: (m: EntityManager, user: User) => m.save(user),
+  setOwnPassword: (m: EntityManager, id: number, passwordHash: string) =>
+    m.update(User, { id }, { passwordHash, mustChangePassword: false }),
   accountNames: (m: EntityManager) => m.find(User, { select: { id: true, username: true, displayName: true } }),
   activePeople: () =>
     dataSource.manager.find(User, {

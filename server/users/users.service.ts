@@ -7,7 +7,6 @@ import { diffEntries, recordAudit, type Actor } from '../audit/audit.service';
 import { config } from '../core/config';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { dataSource } from '../db/data-source';
-import { User } from './user.entity';
 import { usersRepository } from './users.repository';
 import { toUserDto } from './users.mapper';
 
@@ -40,6 +39,13 @@ export async function resolveOperator(
   return null;
 }
 
+export const findUser = (id: number) => usersRepository.findById(id);
+export const findActiveUser = (m: EntityManager, id: number) => usersRepository.findActive(id, m);
+export const findUserByUsername = (username: string) => usersRepository.findByUsername(username);
+/** A password the person chose: nothing left to replace at next sign-in. */
+export const setOwnPassword = (m: EntityManager, id: number, passwordHash: string) =>
+  usersRepository.setOwnPassword(m, id, passwordHash);
+
 export const noOperator: OperatorFields = { operatorId: null, operatorName: null };
 
 /** Every account's id, username and display name, for matching the names a history file gives. */
@@ -60,16 +66,14 @@ export async function createUser(actor: Actor, input: CreateUserInput): Promise<
   }
   const passwordHash = await hashPassword(input.password);
   return dataSource.transaction(async (m) => {
-    const user = await m.save(
-      m.create(User, {
-        username: input.username,
-        displayName: input.displayName,
-        email: input.email || null,
-        role: input.role,
-        passwordHash,
-        active: true,
-      }),
-    );
+    const user = await usersRepository.insert(m, {
+      username: input.username,
+      displayName: input.displayName,
+      email: input.email || null,
+      role: input.role,
+      passwordHash,
+      active: true,
+    });
     await recordAudit(m, actor, [
       {
         action: 'create',
@@ -94,7 +98,7 @@ export async function updateUser(actor: Actor, id: number, input: UpdateUserInpu
     const changes = { ...input, email: input.email === undefined ? undefined : input.email || null };
     const entries = diffEntries({ action: 'update', recordType: 'user', recordId: id }, user, changes);
     Object.assign(user, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
-    await m.save(user);
+    await usersRepository.save(m, user);
     await recordAudit(m, actor, entries);
     return toUserDto(user);
   });

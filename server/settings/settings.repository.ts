@@ -1,0 +1,10 @@
+import type { EntityManager } from 'typeorm';
+import { dataSource } from '../db/data-source';
+import { LabSettings } from './lab-settings.entity';
+
+/** The lab has one settings row, id 1. */
+export const settingsRepository = {
+  find: (m: EntityManager = dataSource.manager) => m.findOneBy(LabSettings, { id: 1 }),
+  lock: (m: EntityManager) => m.findOne(LabSettings, { where: { id: 1 }, lock: { mode: 'pessimistic_write' } }),
+  save: (m: EntityManager, row: LabSettings) => m.save(row),
+};
