@@ -15,15 +15,19 @@ export function Badge({
   tone = 'neutral',
   children,
   className,
+  wrap = false,
 }: {
   tone?: BadgeTone;
   children: ReactNode;
   className?: string;
+  /** A long badge in a narrow column may take two lines instead of widening it. */
+  wrap?: boolean;
 }) {
   return (
     <span
       className={cx(
-        'inline-flex items-center rounded-full border px-2.5 py-0.5 text-sm font-medium whitespace-nowrap',
+        'inline-flex items-center rounded-full border px-2.5 py-0.5 text-sm font-medium',
+        wrap ? 'whitespace-normal' : 'whitespace-nowrap',
         tones[tone],
         className,
       )}

@@ -172,7 +172,7 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                         {w.outOfControl ? (
                           <Badge tone="danger">Out of control</Badge>
                         ) : w.belowLcl ? (
-                          <Badge tone="ok" className="whitespace-normal!">
+                          <Badge tone="ok" wrap>
                             Below the lower limit: a good week
                           </Badge>
                         ) : w.provisional ? (
