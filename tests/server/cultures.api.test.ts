@@ -4,8 +4,11 @@ import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { cultureUseWarning } from '../../server/cultures/cultures.service';
 import { dataSource } from '../../server/db/data-source';
 import { Photo } from '../../server/photos/photo.entity';
+import { pageOf } from '../../shared/schemas/common';
+import { cultureDetailSchema, cultureSchema } from '../../shared/schemas/cultures';
 import { createTestApp } from '../setup/test-app';
 import { anonymousStatuses, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -29,6 +32,10 @@ beforeAll(async () => {
 const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/cultures', body);
 const changeState = (client: Client, id: number, body: Record<string, unknown>) =>
   sendAs(client, 'post', `/api/cultures/${id}/state`, body);
+/** A new culture, as its create route answers. */
+const created = async (client: Client, body: Record<string, unknown>) =>
+  bodyOf(await create(client, body), cultureDetailSchema);
+const culturePageSchema = pageOf(cultureSchema);
 
 describe('/api/cultures guards and validation', () => {
   it('answers 401 without a session', async () => {
@@ -38,7 +45,7 @@ describe('/api/cultures guards and validation', () => {
 
   it('answers 403 to a trainer writing and to a technician changing state', async () => {
     const trainer = await signedIn(app, 'trainer');
-    const culture = (await create(tech, newCulture())).body;
+    const culture = await created(tech, newCulture());
     expect((await trainer.agent.get(`/api/cultures/${culture.id}`)).status).toBe(200);
     expect((await create(trainer, newCulture())).status).toBe(403);
     const test = await sendAs(trainer, 'post', `/api/cultures/${culture.id}/agar-tests`, {
@@ -58,19 +65,19 @@ describe('/api/cultures guards and validation', () => {
   ])('answers 400 naming %s', async (field, over) => {
     const res = await create(tech, newCulture(over));
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe(field);
+    expect(issuePath(res)).toBe(field);
   });
 
   it('answers 400 naming parentCultureId for an unknown parent and state for an unknown state', async () => {
     const res = await create(tech, newCulture({ parentCultureId: 999999 }));
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('parentCultureId');
-    const culture = (await create(tech, newCulture())).body;
+    expect(issuePath(res)).toBe('parentCultureId');
+    const culture = await created(tech, newCulture());
     const bad = await changeState(supervisor, culture.id, { state: 'approved', reason: 'x'.repeat(5) });
-    expect(bad.body.error.issues[0].path).toBe('state');
+    expect(issuePath(bad)).toBe('state');
     const noReason = await changeState(supervisor, culture.id, { state: 'released' });
     expect(noReason.status).toBe(400);
-    expect(noReason.body.error.issues[0].path).toBe('reason');
+    expect(issuePath(noReason)).toBe('reason');
   });
 
   it('answers 404 for an unknown culture', async () => {
@@ -90,23 +97,23 @@ describe('/api/cultures guards and validation', () => {
     await create(tech, body).then((r) => expect(r.status).toBe(201));
     const res = await create(tech, body);
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('code');
+    expect(issuePath(res)).toBe('code');
   });
 });
 
 describe('/api/cultures records', () => {
   it('creates a quarantined culture, infers the generation from its parent, and shows the family', async () => {
-    const parent = (await create(tech, newCulture({ generation: 3 }))).body;
+    const parent = await created(tech, newCulture({ generation: 3 }));
     expect(parent.state).toBe('quarantined');
     expect(parent.allowedStates).toEqual(['released', 'retired']);
-    const child = (await create(tech, newCulture({ parentCultureId: parent.id, generation: undefined }))).body;
+    const child = await created(tech, newCulture({ parentCultureId: parent.id, generation: undefined }));
     expect(child).toMatchObject({
       generation: 4,
       parentCode: parent.code,
       parent: { id: parent.id, code: parent.code },
     });
     const detail = await tech.agent.get(`/api/cultures/${parent.id}`);
-    expect(detail.body.children.map((c: { id: number }) => c.id)).toEqual([child.id]);
+    expect(bodyOf(detail, cultureDetailSchema).children.map((c) => c.id)).toEqual([child.id]);
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'culture',
       recordId: String(child.id),
@@ -116,7 +123,7 @@ describe('/api/cultures records', () => {
   });
 
   it('moves quarantined → released → retired with reasons in the audit trail, and refuses any other step', async () => {
-    const culture = (await create(tech, newCulture())).body;
+    const culture = await created(tech, newCulture());
     const released = await changeState(supervisor, culture.id, {
       state: 'released',
       reason: 'agar plate clean after 7 days',
@@ -125,7 +132,7 @@ describe('/api/cultures records', () => {
     expect(released.body).toMatchObject({ state: 'released', allowedStates: ['retired'] });
     const back = await changeState(supervisor, culture.id, { state: 'quarantined', reason: 'second thoughts' });
     expect(back.status).toBe(409);
-    expect(back.body.error.issues[0].path).toBe('state');
+    expect(issuePath(back)).toBe('state');
     const retired = await changeState(supervisor, culture.id, { state: 'retired', reason: 'syringes used up' });
     expect(retired.body).toMatchObject({ state: 'retired', allowedStates: [] });
     expect((await changeState(supervisor, culture.id, { state: 'released', reason: 'again' })).status).toBe(409);
@@ -141,13 +148,13 @@ describe('/api/cultures records', () => {
 
   it('lets an admin retire a quarantined culture directly', async () => {
     const admin = await signedIn(app, 'admin');
-    const culture = (await create(tech, newCulture())).body;
+    const culture = await created(tech, newCulture());
     const res = await changeState(admin, culture.id, { state: 'retired', reason: 'failed agar test' });
-    expect(res.body.state).toBe('retired');
+    expect(bodyOf(res, cultureDetailSchema).state).toBe('retired');
   });
 
   it('warns when a culture that is not released is used', async () => {
-    const culture = (await create(tech, newCulture())).body;
+    const culture = await created(tech, newCulture());
     expect(await cultureUseWarning(culture.id)).toBe(`Culture ${culture.code} is quarantined, not released.`);
     await changeState(supervisor, culture.id, { state: 'released', reason: 'agar clean' });
     expect(await cultureUseWarning(culture.id)).toBeNull();
@@ -156,7 +163,7 @@ describe('/api/cultures records', () => {
   });
 
   it('records agar tests, newest first, and checks the photo exists', async () => {
-    const culture = (await create(tech, newCulture())).body;
+    const culture = await created(tech, newCulture());
     const post = (body: Record<string, unknown>) =>
       sendAs(tech, 'post', `/api/cultures/${culture.id}/agar-tests`, body);
     // A photo row as the upload route leaves it; the test needs only its id.
@@ -170,16 +177,16 @@ describe('/api/cultures records', () => {
     expect(second.body).toMatchObject({ result: 'clean', photoId: photo.id, recordedById: tech.user.id });
     const badPhoto = await post({ testedOn: '2026-02-16', result: 'clean', photoId: 999999 });
     expect(badPhoto.status).toBe(400);
-    expect(badPhoto.body.error.issues[0].path).toBe('photoId');
+    expect(issuePath(badPhoto)).toBe('photoId');
     const badResult = await post({ testedOn: '2026-02-16', result: 'dirty' });
-    expect(badResult.body.error.issues[0].path).toBe('result');
+    expect(issuePath(badResult)).toBe('result');
     const detail = await tech.agent.get(`/api/cultures/${culture.id}`);
-    expect(detail.body.agarTests.map((t: { testedOn: string }) => t.testedOn)).toEqual(['2026-02-15', '2026-02-12']);
+    expect(bodyOf(detail, cultureDetailSchema).agarTests.map((t) => t.testedOn)).toEqual(['2026-02-15', '2026-02-12']);
   });
 
   it('audits edits field by field and refuses a parent loop', async () => {
-    const a = (await create(tech, newCulture())).body;
-    const b = (await create(tech, newCulture({ parentCultureId: a.id }))).body;
+    const a = await created(tech, newCulture());
+    const b = await created(tech, newCulture({ parentCultureId: a.id }));
     const res = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, {
       volumeMl: 250,
       strain: '',
@@ -198,22 +205,22 @@ describe('/api/cultures records', () => {
     ]);
     const loop = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, { parentCultureId: b.id });
     expect(loop.status).toBe(400);
-    expect(loop.body.error.issues[0].path).toBe('parentCultureId');
+    expect(issuePath(loop)).toBe('parentCultureId');
     const state = await sendAs(tech, 'patch', `/api/cultures/${a.id}`, { state: 'released' });
     expect(state.status).toBe(200);
-    expect(state.body.state).toBe('quarantined');
+    expect(bodyOf(state, cultureDetailSchema).state).toBe('quarantined');
   });
 
   it('pages, sorts and filters on the server, and exports CSV', async () => {
     const species = uniqueName('Hericium');
     for (const code of ['b', 'c', 'a']) await create(tech, newCulture({ code: `${species}-${code}`, species }));
-    const first = (await tech.agent.get(`/api/cultures?q=${species}&sort=-code&pageSize=2`)).body;
+    const first = bodyOf(await tech.agent.get(`/api/cultures?q=${species}&sort=-code&pageSize=2`), culturePageSchema);
     expect(first.total).toBe(3);
-    expect(first.items.map((c: { code: string }) => c.code)).toEqual([`${species}-c`, `${species}-b`]);
-    await changeState(supervisor, first.items[0].id, { state: 'released', reason: 'agar clean' });
-    const released = (await tech.agent.get(`/api/cultures?q=${species}&state=released`)).body;
-    expect(released.items.map((c: { code: string }) => c.code)).toEqual([`${species}-c`]);
-    expect((await tech.agent.get('/api/cultures?state=approved')).body.error.issues[0].path).toBe('state');
+    expect(first.items.map((c) => c.code)).toEqual([`${species}-c`, `${species}-b`]);
+    await changeState(supervisor, first.items[0]!.id, { state: 'released', reason: 'agar clean' });
+    const released = bodyOf(await tech.agent.get(`/api/cultures?q=${species}&state=released`), culturePageSchema);
+    expect(released.items.map((c) => c.code)).toEqual([`${species}-c`]);
+    expect(issuePath(await tech.agent.get('/api/cultures?state=approved'))).toBe('state');
 
     const csv = await tech.agent.get(`/api/cultures/export.csv?q=${species}&sort=code`);
     expect(csv.headers['content-type']).toMatch(/^text\/csv/);
