@@ -1,3 +1,5 @@
+import { cookRunDetailSchema } from '../../shared/schemas/cook-runs';
+import { bodyOf } from '../setup/bodies';
 import { postCsvAs, sendAs, uniqueName, type Client } from '../setup/factories';
 
 /** A valid new cook run: 90 min at 103.4 kPa, sea level, 1 L jars; overrides change any field. */
@@ -22,3 +24,7 @@ export const cycleCsv = (header: string, eol = '\n') =>
 export const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/cook-runs', body);
 export const postLog = (client: Client, id: number, csv: string) =>
   postCsvAs(client, `/api/cook-runs/${id}/readings`, csv);
+
+/** A cook run as the create, edit and log routes answer it. */
+export const runOf = (res: { body: unknown }) => bodyOf(res, cookRunDetailSchema);
+export const createdRun = async (client: Client, body: Record<string, unknown>) => runOf(await create(client, body));

@@ -1,9 +1,13 @@
 import supertest from 'supertest';
+import { z } from 'zod';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { dataSource } from '../../server/db/data-source';
+import { pageOf } from '../../shared/schemas/common';
+import { grainLotDetailSchema, grainLotSchema, grainSchema, prepBatchSchema } from '../../shared/schemas/grain';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 type Client = Awaited<ReturnType<typeof signedIn>>;
@@ -18,6 +22,12 @@ beforeAll(async () => {
 
 const post = (client: Client, url: string, body: Record<string, unknown>) =>
   client.agent.post(url).set('X-CSRF-Token', client.token()).send(body);
+const lotPageSchema = pageOf(grainLotSchema);
+const batchPageSchema = pageOf(prepBatchSchema);
+const createdLot = async (body: Record<string, unknown>) =>
+  bodyOf(await post(tech, '/api/grain-lots', body), grainLotSchema);
+const createdBatch = async (body: Record<string, unknown>) =>
+  bodyOf(await post(tech, '/api/prep-batches', body), prepBatchSchema);
 const newLot = (over: Record<string, unknown> = {}) => ({
   grainId: ryeId,
   supplierLotCode: uniqueName('SUP'),
@@ -53,9 +63,9 @@ describe('/api/grains', () => {
     const trainer = await signedIn(app, 'trainer');
     const res = await trainer.agent.get('/api/grains');
     expect(res.status).toBe(200);
-    const names = res.body.map((g: { name: string }) => g.name);
+    const names = bodyOf(res, z.array(grainSchema)).map((g) => g.name);
     const defaults = ['brown rice', 'maize', 'millet', 'oats', 'rye', 'sorghum', 'wheat'];
-    expect(names.filter((n: string) => defaults.includes(n))).toEqual(defaults);
+    expect(names.filter((n) => defaults.includes(n))).toEqual(defaults);
   });
 
   it('lets only an admin add a grain, refusing a name already listed in any case', async () => {
@@ -66,15 +76,16 @@ describe('/api/grains', () => {
     const res = await post(admin, '/api/grains', { name });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ name, active: true });
+    const grain = bodyOf(res, grainSchema);
     const clash = await post(admin, '/api/grains', { name: 'RYE' });
     expect(clash.status).toBe(409);
-    expect(clash.body.error.issues[0].path).toBe('name');
+    expect(issuePath(clash)).toBe('name');
     const bad = await post(admin, '/api/grains', { name: 'x' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('name');
+    expect(issuePath(bad)).toBe('name');
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'grain',
-      recordId: String(res.body.id),
+      recordId: String(grain.id),
     });
     expect(audit?.action).toBe('create');
   });
@@ -89,7 +100,7 @@ describe('/api/grain-lots', () => {
     expect(res.body).toMatchObject({ grain: 'rye', receivedOn: '2026-02-01', prepBatchCount: 0 });
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'grain-lot',
-      recordId: String(res.body.id),
+      recordId: String(bodyOf(res, grainLotSchema).id),
     });
     expect(audit?.userName).toBe('Test technician');
   });
@@ -97,15 +108,15 @@ describe('/api/grain-lots', () => {
   it('answers 400 naming the field, 404 for an unknown lot and 409 naming supplierLotCode', async () => {
     const unknown = await post(tech, '/api/grain-lots', newLot({ grainId: 999999 }));
     expect(unknown.status).toBe(400);
-    expect(unknown.body.error.issues[0].path).toBe('grainId');
+    expect(issuePath(unknown)).toBe('grainId');
     const date = await post(tech, '/api/grain-lots', newLot({ receivedOn: '2026-13-01' }));
-    expect(date.body.error.issues[0].path).toBe('receivedOn');
+    expect(issuePath(date)).toBe('receivedOn');
     expect((await tech.agent.get('/api/grain-lots/999999')).status).toBe(404);
     const body = newLot();
     await post(tech, '/api/grain-lots', body).then((r) => expect(r.status).toBe(201));
     const clash = await post(tech, '/api/grain-lots', body);
     expect(clash.status).toBe(409);
-    expect(clash.body.error.issues[0].path).toBe('supplierLotCode');
+    expect(issuePath(clash)).toBe('supplierLotCode');
   });
 
   it('pages lots and shows a lot with its prep batches', async () => {
@@ -115,19 +126,20 @@ describe('/api/grain-lots', () => {
     }
     const res = await tech.agent.get(`/api/grain-lots?q=${code}&sort=receivedOn&pageSize=2`);
     expect(res.body).toMatchObject({ total: 3, page: 1, pageSize: 2 });
-    expect(res.body.items.map((l: { receivedOn: string }) => l.receivedOn)).toEqual(['2026-01-01', '2026-01-02']);
-    const lot = res.body.items[0];
+    const page = bodyOf(res, lotPageSchema);
+    expect(page.items.map((l) => l.receivedOn)).toEqual(['2026-01-01', '2026-01-02']);
+    const lot = page.items[0]!;
     await post(tech, '/api/prep-batches', newBatch(lot.id));
-    const detail = await tech.agent.get(`/api/grain-lots/${lot.id}`);
-    expect(detail.body.prepBatchCount).toBe(1);
-    expect(detail.body.prepBatches).toHaveLength(1);
-    expect(detail.body.prepBatches[0]).toMatchObject({ grain: 'rye', supplierLotCode: lot.supplierLotCode });
+    const detail = bodyOf(await tech.agent.get(`/api/grain-lots/${lot.id}`), grainLotDetailSchema);
+    expect(detail.prepBatchCount).toBe(1);
+    expect(detail.prepBatches).toHaveLength(1);
+    expect(detail.prepBatches[0]).toMatchObject({ grain: 'rye', supplierLotCode: lot.supplierLotCode });
   });
 });
 
 describe('/api/prep-batches', () => {
   it('creates a batch with its prep times and audits it', async () => {
-    const lot = (await post(tech, '/api/grain-lots', newLot())).body;
+    const lot = await createdLot(newLot());
     const res = await post(tech, '/api/prep-batches', newBatch(lot.id));
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
@@ -137,50 +149,51 @@ describe('/api/prep-batches', () => {
       simmerMinutes: 12,
       drainMinutes: 45,
     });
-    expect((await tech.agent.get(`/api/prep-batches/${res.body.id}`)).body.code).toBe(res.body.code);
+    const batch = bodyOf(res, prepBatchSchema);
+    expect(bodyOf(await tech.agent.get(`/api/prep-batches/${batch.id}`), prepBatchSchema).code).toBe(batch.code);
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'prep-batch',
-      recordId: String(res.body.id),
+      recordId: String(batch.id),
     });
     expect(audit?.action).toBe('create');
   });
 
   it('answers 403 to a trainer, 400 naming the field, 404 and 409 naming code', async () => {
     const trainer = await signedIn(app, 'trainer');
-    const lot = (await post(tech, '/api/grain-lots', newLot())).body;
+    const lot = await createdLot(newLot());
     expect((await post(trainer, '/api/prep-batches', newBatch(lot.id))).status).toBe(403);
     const noLot = await post(tech, '/api/prep-batches', newBatch(999999));
-    expect(noLot.body.error.issues[0].path).toBe('grainLotId');
+    expect(issuePath(noLot)).toBe('grainLotId');
     const soak = await post(tech, '/api/prep-batches', newBatch(lot.id, { soakHours: 200 }));
     expect(soak.status).toBe(400);
-    expect(soak.body.error.issues[0].path).toBe('soakHours');
+    expect(issuePath(soak)).toBe('soakHours');
     const simmer = await post(tech, '/api/prep-batches', newBatch(lot.id, { simmerMinutes: 12.5 }));
-    expect(simmer.body.error.issues[0].path).toBe('simmerMinutes');
+    expect(issuePath(simmer)).toBe('simmerMinutes');
     expect((await tech.agent.get('/api/prep-batches/999999')).status).toBe(404);
     const body = newBatch(lot.id);
     await post(tech, '/api/prep-batches', body).then((r) => expect(r.status).toBe(201));
     const clash = await post(tech, '/api/prep-batches', body);
     expect(clash.status).toBe(409);
-    expect(clash.body.error.issues[0].path).toBe('code');
+    expect(issuePath(clash)).toBe('code');
   });
 
   it('filters by lot and by grain name or id', async () => {
     const sorghumId = ((await tech.agent.get('/api/grains')).body as { id: number; name: string }[]).find(
       (g) => g.name === 'sorghum',
     )!.id;
-    const ryeLot = (await post(tech, '/api/grain-lots', newLot())).body;
-    const sorghumLot = (await post(tech, '/api/grain-lots', newLot({ grainId: sorghumId }))).body;
+    const ryeLot = await createdLot(newLot());
+    const sorghumLot = await createdLot(newLot({ grainId: sorghumId }));
     const tag = uniqueName('F');
-    const a = (await post(tech, '/api/prep-batches', newBatch(ryeLot.id, { code: `${tag}-a` }))).body;
-    const b = (await post(tech, '/api/prep-batches', newBatch(sorghumLot.id, { code: `${tag}-b` }))).body;
+    const a = await createdBatch(newBatch(ryeLot.id, { code: `${tag}-a` }));
+    const b = await createdBatch(newBatch(sorghumLot.id, { code: `${tag}-b` }));
     const byLot = await tech.agent.get(`/api/prep-batches?grainLotId=${ryeLot.id}`);
-    expect(byLot.body.items.map((x: { id: number }) => x.id)).toEqual([a.id]);
+    expect(bodyOf(byLot, batchPageSchema).items.map((x) => x.id)).toEqual([a.id]);
     const byName = await tech.agent.get(`/api/prep-batches?q=${tag}&grain=Sorghum`);
-    expect(byName.body.items.map((x: { id: number }) => x.id)).toEqual([b.id]);
+    expect(bodyOf(byName, batchPageSchema).items.map((x) => x.id)).toEqual([b.id]);
     const byId = await tech.agent.get(`/api/prep-batches?q=${tag}&grain=${ryeId}`);
-    expect(byId.body.items.map((x: { id: number }) => x.id)).toEqual([a.id]);
+    expect(bodyOf(byId, batchPageSchema).items.map((x) => x.id)).toEqual([a.id]);
     const unknown = await tech.agent.get('/api/prep-batches?grain=quinoa-not-listed');
     expect(unknown.status).toBe(400);
-    expect(unknown.body.error.issues[0].path).toBe('grain');
+    expect(issuePath(unknown)).toBe('grain');
   });
 });

@@ -4,8 +4,11 @@ import { dataSource } from '../../server/db/data-source';
 import { ProcedureStep } from '../../server/procedures/procedure-step.entity';
 import { ProcedureVersion } from '../../server/procedures/procedure-version.entity';
 import { Procedure } from '../../server/procedures/procedure.entity';
+import { pageOf } from '../../shared/schemas/common';
+import { sessionDetailSchema, sessionSchema } from '../../shared/schemas/sessions';
 import { createTestApp } from '../setup/test-app';
 import { anonymousStatuses, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -39,6 +42,10 @@ beforeAll(async () => {
 const create = (client: Client, body: Record<string, unknown>) => sendAs(client, 'post', '/api/sessions', body);
 const patch = (client: Client, id: number, body: Record<string, unknown>) =>
   sendAs(client, 'patch', `/api/sessions/${id}`, body);
+/** A new session, as its create route answers. */
+const created = async (client: Client, body: Record<string, unknown>) =>
+  bodyOf(await create(client, body), sessionDetailSchema);
+const sessionPageSchema = pageOf(sessionSchema);
 
 describe('/api/sessions guards and validation', () => {
   it('answers 401 without a session', async () => {
@@ -48,7 +55,7 @@ describe('/api/sessions guards and validation', () => {
 
   it('lets a trainer read but answers 403 to writes', async () => {
     const trainer = await signedIn(app, 'trainer');
-    const session = (await create(tech, newSession())).body;
+    const session = await created(tech, newSession());
     expect((await trainer.agent.get(`/api/sessions/${session.id}`)).status).toBe(200);
     expect((await create(trainer, newSession())).status).toBe(403);
     expect((await patch(trainer, session.id, { notes: 'x' })).status).toBe(403);
@@ -64,14 +71,14 @@ describe('/api/sessions guards and validation', () => {
   ])('answers 400 naming %s', async (field, over) => {
     const res = await create(tech, newSession(over));
     expect(res.status).toBe(400);
-    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(field);
+    expect(errorOf(res).issues!.map((i: { path: string }) => i.path)).toContain(field);
   });
 
   it('answers 400 naming the field for an unknown operator, procedure version or step', async () => {
     const op = await create(tech, newSession({ operatorName: undefined, operatorId: 999999 }));
-    expect(op.body.error.issues[0].path).toBe('operatorId');
+    expect(issuePath(op)).toBe('operatorId');
     const version = await create(tech, newSession({ procedureVersionId: 999999 }));
-    expect(version.body.error.issues[0].path).toBe('procedureVersionId');
+    expect(issuePath(version)).toBe('procedureVersionId');
     const mine = await makeVersion(['Wipe the box with 70 % alcohol']);
     const other = await makeVersion(['Flame the needle']);
     const step = await create(
@@ -85,7 +92,7 @@ describe('/api/sessions guards and validation', () => {
       }),
     );
     expect(step.status).toBe(400);
-    expect(step.body.error.issues[0].path).toBe('checklist.1.stepId');
+    expect(issuePath(step)).toBe('checklist.1.stepId');
   });
 
   it('answers 404 for an unknown session', async () => {
@@ -98,15 +105,15 @@ describe('/api/sessions guards and validation', () => {
     expect((await create(tech, body)).status).toBe(201);
     const res = await create(tech, body);
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('code');
+    expect(issuePath(res)).toBe('code');
   });
 });
 
 describe('/api/sessions records', () => {
   it('stores a user operator by id and display name, or a staff name alone', async () => {
-    const mine = (await create(tech, newSession({ operatorName: undefined, operatorId: tech.user.id }))).body;
+    const mine = await created(tech, newSession({ operatorName: undefined, operatorId: tech.user.id }));
     expect(mine).toMatchObject({ operatorId: tech.user.id, operatorName: 'Test technician' });
-    const staff = (await create(tech, newSession({ operatorName: 'Former Staff' }))).body;
+    const staff = await created(tech, newSession({ operatorName: 'Former Staff' }));
     expect(staff).toMatchObject({ operatorId: null, operatorName: 'Former Staff', checklist: [], procedure: null });
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'session',
@@ -134,23 +141,22 @@ describe('/api/sessions records', () => {
       }),
     );
     expect(res.status).toBe(201);
-    expect(res.body.procedure).toMatchObject({ versionId: version.id, title: 'Inoculating jars', version: 1 });
-    expect(res.body.checklist.map((r: { position: number; done: boolean | null }) => [r.position, r.done])).toEqual([
+    const session = bodyOf(res, sessionDetailSchema);
+    expect(session.procedure).toMatchObject({ versionId: version.id, title: 'Inoculating jars', version: 1 });
+    expect(session.checklist.map((r) => [r.position, r.done])).toEqual([
       [1, true],
       [2, null],
       [3, false],
     ]);
-    expect(res.body.startedAt).toBe('2026-03-03T08:15:00.000Z');
+    expect(session.startedAt).toBe('2026-03-03T08:15:00.000Z');
   });
 
   it('audits field edits and checklist changes with old and new values', async () => {
     const { version, steps } = await makeVersion(['Wipe down', 'Flame the needle']);
-    const session = (
-      await create(
-        tech,
-        newSession({ procedureVersionId: version.id, checklist: [{ stepId: steps[0]!.id, done: false }] }),
-      )
-    ).body;
+    const session = await created(
+      tech,
+      newSession({ procedureVersionId: version.id, checklist: [{ stepId: steps[0]!.id, done: false }] }),
+    );
     const res = await patch(tech, session.id, {
       workspace: 'still-air-box',
       checklist: [
@@ -160,26 +166,27 @@ describe('/api/sessions records', () => {
       reason: 'ticked after the run',
     });
     expect(res.status).toBe(200);
-    expect(res.body.workspace).toBe('still-air-box');
-    expect(res.body.checklist.map((r: { done: boolean | null }) => r.done)).toEqual([true, true]);
+    const edited = bodyOf(res, sessionDetailSchema);
+    expect(edited.workspace).toBe('still-air-box');
+    expect(edited.checklist.map((r) => r.done)).toEqual([true, true]);
     const events = await dataSource.manager.findBy(AuditEvent, {
       recordType: 'session',
       recordId: String(session.id),
       action: 'update',
     });
-    const byField = Object.fromEntries(events.map((e) => [e.field, e]));
+    const byField = Object.fromEntries(events.map((e) => [String(e.field), e] as const));
     expect(byField.workspace).toMatchObject({
       oldValue: 'flow-hood',
       newValue: 'still-air-box',
       reason: 'ticked after the run',
     });
-    expect(JSON.parse(byField.checklist!.oldValue)).toEqual([{ stepId: steps[0]!.id, done: false }]);
-    expect(JSON.parse(byField.checklist!.newValue)).toHaveLength(2);
+    expect(JSON.parse(byField.checklist!.oldValue!)).toEqual([{ stepId: steps[0]!.id, done: false }]);
+    expect(JSON.parse(byField.checklist!.newValue!)).toHaveLength(2);
     const cleared = await patch(tech, session.id, { procedureVersionId: null });
     expect(cleared.body).toMatchObject({ procedureVersionId: null, checklist: [] });
     const noOperator = await patch(tech, session.id, { operatorId: null });
     expect(noOperator.status).toBe(400);
-    expect(noOperator.body.error.issues[0].path).toBe('operatorId');
+    expect(issuePath(noOperator)).toBe('operatorId');
   });
 
   it('pages, sorts and filters on the server, and exports CSV', async () => {
@@ -192,18 +199,24 @@ describe('/api/sessions records', () => {
     for (const [operatorName, heldOn, workspace] of rows) {
       await create(tech, newSession({ code: `${tag}-${heldOn}`, operatorName, heldOn, workspace, notes: tag }));
     }
-    const byOperator = (await tech.agent.get(`/api/sessions?q=${tag}&sort=operator&pageSize=2`)).body;
+    const byOperator = bodyOf(
+      await tech.agent.get(`/api/sessions?q=${tag}&sort=operator&pageSize=2`),
+      sessionPageSchema,
+    );
     expect(byOperator.total).toBe(3);
-    expect(byOperator.items.map((s: { operatorName: string }) => s.operatorName)).toEqual([
-      'Abel Operator',
-      'Bea Operator',
-    ]);
-    const hood = (await tech.agent.get(`/api/sessions?q=${tag}&workspace=flow-hood&sort=-heldOn`)).body;
-    expect(hood.items.map((s: { heldOn: string }) => s.heldOn)).toEqual(['2026-04-03', '2026-04-01']);
-    const ranged = (await tech.agent.get(`/api/sessions?q=${tag}&from=2026-04-02&to=2026-04-02`)).body;
-    expect(ranged.items.map((s: { operatorName: string }) => s.operatorName)).toEqual(['Abel Operator']);
-    const one = (await tech.agent.get(`/api/sessions?q=${tag}&operator=bea%20operator`)).body;
-    expect(one.items.map((s: { heldOn: string }) => s.heldOn)).toEqual(['2026-04-03']);
+    expect(byOperator.items.map((s) => s.operatorName)).toEqual(['Abel Operator', 'Bea Operator']);
+    const hood = bodyOf(
+      await tech.agent.get(`/api/sessions?q=${tag}&workspace=flow-hood&sort=-heldOn`),
+      sessionPageSchema,
+    );
+    expect(hood.items.map((s) => s.heldOn)).toEqual(['2026-04-03', '2026-04-01']);
+    const ranged = bodyOf(
+      await tech.agent.get(`/api/sessions?q=${tag}&from=2026-04-02&to=2026-04-02`),
+      sessionPageSchema,
+    );
+    expect(ranged.items.map((s) => s.operatorName)).toEqual(['Abel Operator']);
+    const one = bodyOf(await tech.agent.get(`/api/sessions?q=${tag}&operator=bea%20operator`), sessionPageSchema);
+    expect(one.items.map((s) => s.heldOn)).toEqual(['2026-04-03']);
     expect((await tech.agent.get('/api/sessions?sort=room')).status).toBe(400);
 
     const csv = await tech.agent.get(`/api/sessions/export.csv?q=${tag}&sort=heldOn`);
