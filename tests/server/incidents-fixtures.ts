@@ -1,6 +1,9 @@
 import { randomBytes } from 'node:crypto';
 import { Jimp } from 'jimp';
+import { z } from 'zod';
 import type { JarStatus } from '../../shared/enums';
+import { incidentDetailSchema } from '../../shared/schemas/incident-detail';
+import { photoSchema } from '../../shared/schemas/photos';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { localDate } from '../../server/core/local-time';
 import { CookRun } from '../../server/cook-runs/cook-run.entity';
@@ -9,6 +12,7 @@ import { dataSource } from '../../server/db/data-source';
 import { Grain } from '../../server/grain/grain.entity';
 import { Jar } from '../../server/jars/jar.entity';
 import { InoculationSession } from '../../server/sessions/inoculation-session.entity';
+import { bodyOf } from '../setup/bodies';
 import { uniqueName } from '../setup/factories';
 
 const dayMs = 86_400_000;
@@ -102,3 +106,9 @@ export function heicBytes(): Buffer {
   ftyp.write('mif1heic', 16, 'ascii');
   return Buffer.concat([ftyp, Buffer.alloc(2048, 1)]);
 }
+
+/** An incident as its create, detail and edit routes answer it. */
+export const incidentOf = (res: { body: unknown }) => bodyOf(res, incidentDetailSchema);
+
+/** The photos an upload answers with, one per file sent. */
+export const photosOf = (res: { body: unknown }) => bodyOf(res, z.array(photoSchema));

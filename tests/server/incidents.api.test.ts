@@ -8,9 +8,13 @@ import { JarEvent } from '../../server/jars/jar-event.entity';
 import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
-import { auditCount, makeJar, makeJpeg, makeProduction } from './incidents-fixtures';
+import { pageOf } from '../../shared/schemas/common';
+import { incidentListItemSchema } from '../../shared/schemas/incidents';
+import { auditCount, incidentOf, makeJar, makeJpeg, makeProduction, photosOf } from './incidents-fixtures';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
+const incidentPageSchema = pageOf(incidentListItemSchema);
 type Client = Awaited<ReturnType<typeof signedIn>>;
 
 const flag = (jarLabels: string[], extra: Record<string, unknown> = {}) => ({
@@ -52,7 +56,7 @@ describe('POST /api/incidents', () => {
       .attach('photos', await makeJpeg(), 'a.jpg');
     const res = await post(
       tech,
-      flag([a.label.toLowerCase(), b.label], { photoIds: [up.body[0].id], notes: 'two jars on shelf B2' }),
+      flag([a.label.toLowerCase(), b.label], { photoIds: [photosOf(up)[0]!.id], notes: 'two jars on shelf B2' }),
     );
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
@@ -62,15 +66,16 @@ describe('POST /api/incidents', () => {
       foundByName: 'Test technician',
       contaminant: 'trichoderma',
     });
-    expect(res.body.jars.map((j: { label: string }) => j.label).sort()).toEqual([a.label, b.label].sort());
-    expect(res.body.jars[0]).toMatchObject({
+    const incident = incidentOf(res);
+    expect(incident.jars.map((j) => j.label).sort()).toEqual([a.label, b.label].sort());
+    expect(incident.jars[0]).toMatchObject({
       status: 'contaminated',
       grain: 'rye',
       cookRun: { code: prod.cookRun.code },
       culture: { code: prod.culture.code },
     });
-    expect(res.body.photos).toHaveLength(1);
-    expect(res.body.history[0]).toMatchObject({
+    expect(incident.photos).toHaveLength(1);
+    expect(incident.history[0]).toMatchObject({
       action: 'create',
       recordType: 'incident',
       userName: 'Test technician',
@@ -81,7 +86,7 @@ describe('POST /api/incidents', () => {
     const events = await dataSource.manager.findBy(JarEvent, { jarId: a.id, newStatus: 'contaminated' });
     expect(events).toHaveLength(1);
     expect(await auditCount('jar', a.id)).toBe(1);
-    expect(await auditCount('incident', res.body.id)).toBe(1);
+    expect(await auditCount('incident', incident.id)).toBe(1);
   });
 
   it('answers 400 naming the field for a contaminant not on the list', async () => {
@@ -89,10 +94,10 @@ describe('POST /api/incidents', () => {
     const jar = await makeJar(await makeProduction());
     const res = await post(tech, flag([jar.label], { contaminant: 'purple' }));
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('contaminant');
+    expect(issuePath(res)).toBe('contaminant');
     const none = await post(tech, flag([]));
     expect(none.status).toBe(400);
-    expect(none.body.error.issues.map((i: { path: string }) => i.path)).toContain('jarLabels');
+    expect(errorOf(none).issues!.map((i: { path: string }) => i.path)).toContain('jarLabels');
   });
 
   it('answers 422 naming the label of an unknown jar and writes nothing', async () => {
@@ -100,7 +105,7 @@ describe('POST /api/incidents', () => {
     const jar = await makeJar(await makeProduction());
     const res = await post(tech, flag([jar.label, 'NO-SUCH-JAR']));
     expect(res.status).toBe(422);
-    expect(res.body.error.issues[0].path).toBe('jarLabels.1');
+    expect(issuePath(res)).toBe('jarLabels.1');
     expect((await dataSource.manager.findOneByOrFail(Jar, { id: jar.id })).status).toBe('incubating');
   });
 
@@ -112,12 +117,12 @@ describe('POST /api/incidents', () => {
       flag([jar.label], { foundAt: new Date(Date.now() - 10 * 86_400_000).toISOString() }),
     );
     expect(early.status).toBe(422);
-    expect(early.body.error.issues[0].path).toBe('foundAt');
+    expect(issuePath(early)).toBe('foundAt');
     const future = await post(tech, flag([jar.label], { foundAt: new Date(Date.now() + 86_400_000).toISOString() }));
     expect(future.status).toBe(422);
     const photo = await post(tech, flag([jar.label], { photoIds: [999999] }));
     expect(photo.status).toBe(422);
-    expect(photo.body.error.issues[0].path).toBe('photoIds');
+    expect(issuePath(photo)).toBe('photoIds');
   });
 
   it('tells listeners about a new incident after it is committed', async () => {
@@ -132,7 +137,7 @@ describe('POST /api/incidents', () => {
     });
     const res = await post(tech, flag([jar.label], { severity: 'high' }));
     const event = await heard;
-    expect(event).toMatchObject({ id: res.body.id, severity: 'high', jarLabels: [jar.label] });
+    expect(event).toMatchObject({ id: incidentOf(res).id, severity: 'high', jarLabels: [jar.label] });
   });
 });
 
@@ -143,10 +148,10 @@ describe('GET /api/incidents/:id', () => {
     const parent = await makeJar(prod, { status: 'colonised', daysAgo: 20 });
     const child = await makeJar(prod, { parentJarId: parent.id, daysAgo: 4 });
     const res = await post(tech, flag([child.label]));
-    const detail = await tech.agent.get(`/api/incidents/${res.body.id}`);
+    const detail = await tech.agent.get(`/api/incidents/${incidentOf(res).id}`);
     expect(detail.status).toBe(200);
-    expect(detail.body.jars[0].parentJar).toEqual({ id: parent.id, label: parent.label });
-    expect(detail.body.jars[0].ancestry).toEqual([
+    expect(incidentOf(detail).jars[0]!.parentJar).toEqual({ id: parent.id, label: parent.label });
+    expect(incidentOf(detail).jars[0]!.ancestry).toEqual([
       { kind: 'jar', id: parent.id, code: parent.label },
       { kind: 'culture', id: prod.culture.id, code: prod.culture.code },
     ]);
@@ -162,24 +167,27 @@ describe('GET /api/incidents', () => {
     const other = await makeProduction();
     const ids: number[] = [];
     for (const contaminant of ['bacterial', 'penicillium', 'bacterial']) {
-      ids.push((await post(tech, flag([(await makeJar(prod)).label], { contaminant }))).body.id);
+      ids.push(incidentOf(await post(tech, flag([(await makeJar(prod)).label], { contaminant }))).id);
     }
     await post(tech, flag([(await makeJar(other)).label]));
-    const list = (q: string) => tech.agent.get(`/api/incidents?${q}`);
+    const list = async (q: string) => {
+      const res = await tech.agent.get(`/api/incidents?${q}`);
+      return { res, page: bodyOf(res, incidentPageSchema) };
+    };
 
     const byRun = await list(`cookRunId=${prod.cookRun.id}&sort=id`);
-    expect(byRun.body).toMatchObject({ total: 3, page: 1, pageSize: 25 });
-    expect(byRun.body.items.map((i: { id: number }) => i.id)).toEqual(ids);
-    expect(byRun.body.items[0].jarLabels).toHaveLength(1);
-    expect((await list(`cultureId=${prod.culture.id}`)).body.total).toBe(3);
-    expect((await list(`sessionId=${prod.session.id}&contaminant=bacterial`)).body.total).toBe(2);
-    expect((await list(`operator=${encodeURIComponent(prod.operatorName)}`)).body.total).toBe(3);
+    expect(byRun.res.body).toMatchObject({ total: 3, page: 1, pageSize: 25 });
+    expect(byRun.page.items.map((i) => i.id)).toEqual(ids);
+    expect(byRun.page.items[0]!.jarLabels).toHaveLength(1);
+    expect((await list(`cultureId=${prod.culture.id}`)).page.total).toBe(3);
+    expect((await list(`sessionId=${prod.session.id}&contaminant=bacterial`)).page.total).toBe(2);
+    expect((await list(`operator=${encodeURIComponent(prod.operatorName)}`)).page.total).toBe(3);
     const paged = await list(`cookRunId=${prod.cookRun.id}&pageSize=2&page=2&sort=-id`);
-    expect(paged.body.items.map((i: { id: number }) => i.id)).toEqual([ids[0]]);
+    expect(paged.page.items.map((i) => i.id)).toEqual([ids[0]]);
     // Periods are inclusive local dates (DESIGN.md §3): today..today holds today's finds.
     const today = todayLocal();
-    expect((await list(`cookRunId=${prod.cookRun.id}&from=${today}&to=${today}`)).body.total).toBe(3);
-    expect((await list(`cookRunId=${prod.cookRun.id}&to=2000-01-01`)).body.total).toBe(0);
+    expect((await list(`cookRunId=${prod.cookRun.id}&from=${today}&to=${today}`)).page.total).toBe(3);
+    expect((await list(`cookRunId=${prod.cookRun.id}&to=2000-01-01`)).page.total).toBe(0);
   });
 
   it('answers 400 naming the field for a bad filter, sort or page size', async () => {
@@ -194,7 +202,7 @@ describe('GET /api/incidents', () => {
     const answers = [];
     for (const [q] of cases) {
       const res = await tech.agent.get(`/api/incidents?${q}`);
-      answers.push([q, res.status, res.body.error?.issues?.[0]?.path]);
+      answers.push([q, res.status, issuePath(res)]);
     }
     expect(answers).toEqual(cases.map(([q, field]) => [q, 400, field]));
   });
