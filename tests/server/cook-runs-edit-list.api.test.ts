@@ -3,7 +3,8 @@ import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
-import { create, newRun } from './cook-runs.fixtures';
+import { create, createdRun, newRun, runOf, runPageSchema } from './cook-runs.fixtures';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -14,21 +15,21 @@ beforeAll(async () => {
 
 describe('/api/cook-runs editing, listing and export', () => {
   it('audits each changed field with its old and new value and re-estimates F0', async () => {
-    const run = (await create(tech, newRun())).body;
+    const run = await createdRun(tech, newRun());
     const res = await sendAs(tech, 'patch', `/api/cook-runs/${run.id}`, {
       minutesAtPressure: 120,
       vessel: 'Cooker B',
       reason: 'gauge log re-read',
     });
     expect(res.status).toBe(200);
-    expect(res.body.minutesAtPressure).toBe(120);
-    expect(res.body.f0).toBeCloseTo((run.f0 / 90) * 120, 6);
+    expect(runOf(res).minutesAtPressure).toBe(120);
+    expect(runOf(res).f0).toBeCloseTo((run.f0! / 90) * 120, 6);
     const events = await dataSource.manager.findBy(AuditEvent, {
       recordType: 'cook-run',
       recordId: String(run.id),
       action: 'update',
     });
-    const byField = Object.fromEntries(events.map((e) => [e.field, e]));
+    const byField = Object.fromEntries(events.map((e) => [String(e.field), e] as const));
     expect(byField.minutesAtPressure).toMatchObject({ oldValue: '90', newValue: '120', reason: 'gauge log re-read' });
     expect(byField.vessel).toMatchObject({ oldValue: 'Cooker A', newValue: 'Cooker B' });
     expect(byField.f0).toBeDefined();
@@ -38,8 +39,8 @@ describe('/api/cook-runs editing, listing and export', () => {
   it('takes the run date from the start time in the lab time zone (Europe/London)', async () => {
     const res = await create(tech, newRun({ cookedOn: undefined, startedAt: '2026-06-30T23:30:00Z' }));
     expect(res.status).toBe(201);
-    expect(res.body.cookedOn).toBe('2026-07-01');
-    expect(res.body.startedAt).toBe('2026-06-30T23:30:00.000Z');
+    expect(runOf(res).cookedOn).toBe('2026-07-01');
+    expect(runOf(res).startedAt).toBe('2026-06-30T23:30:00.000Z');
   });
 
   it('keeps a user operator by id and name', async () => {
@@ -59,19 +60,19 @@ describe('/api/cook-runs editing, listing and export', () => {
     const c = encodeURIComponent(container);
     const page1 = await tech.agent.get(`/api/cook-runs?container=${c}&sort=-minutesAtPressure&pageSize=2`);
     expect(page1.body).toMatchObject({ total: 3, page: 1, pageSize: 2 });
-    expect(page1.body.items.map((r: { minutesAtPressure: number }) => r.minutesAtPressure)).toEqual([150, 90]);
+    expect(bodyOf(page1, runPageSchema).items.map((r) => r.minutesAtPressure)).toEqual([150, 90]);
     const page2 = await tech.agent.get(`/api/cook-runs?container=${c}&sort=-minutesAtPressure&pageSize=2&page=2`);
-    expect(page2.body.items.map((r: { minutesAtPressure: number }) => r.minutesAtPressure)).toEqual([60]);
+    expect(bodyOf(page2, runPageSchema).items.map((r) => r.minutesAtPressure)).toEqual([60]);
     const ranged = await tech.agent.get(`/api/cook-runs?container=${c}&from=2026-01-06&to=2026-01-07&sort=cookedOn`);
-    expect(ranged.body.items.map((r: { cookedOn: string }) => r.cookedOn)).toEqual(['2026-01-06', '2026-01-07']);
+    expect(bodyOf(ranged, runPageSchema).items.map((r) => r.cookedOn)).toEqual(['2026-01-06', '2026-01-07']);
     const byF0 = await tech.agent.get(`/api/cook-runs?container=${c}&sort=f0`);
-    expect(byF0.body.items.map((r: { minutesAtPressure: number }) => r.minutesAtPressure)).toEqual([60, 90, 150]);
+    expect(bodyOf(byF0, runPageSchema).items.map((r) => r.minutesAtPressure)).toEqual([60, 90, 150]);
   });
 
   it('exports every matching run as CSV', async () => {
     const container = uniqueName('3kg');
-    const a = (await create(tech, newRun({ container, notes: 'first, with a comma' }))).body;
-    const b = (await create(tech, newRun({ container }))).body;
+    const a = await createdRun(tech, newRun({ container, notes: 'first, with a comma' }));
+    const b = await createdRun(tech, newRun({ container }));
     const res = await tech.agent.get(`/api/cook-runs/export.csv?container=${encodeURIComponent(container)}&sort=code`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv/);

@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { anonymousStatuses, sendAs, signedIn, type Client } from '../setup/factories';
-import { create, cycleCsv, newRun, postLog } from './cook-runs.fixtures';
+import { create, createdRun, cycleCsv, newRun, postLog } from './cook-runs.fixtures';
+import { errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -18,7 +19,7 @@ describe('/api/cook-runs guards and validation', () => {
 
   it('lets a trainer read but answers 403 to every write', async () => {
     const trainer = await signedIn(app, 'trainer');
-    const run = (await create(tech, newRun())).body;
+    const run = await createdRun(tech, newRun());
     expect((await trainer.agent.get(`/api/cook-runs/${run.id}`)).status).toBe(200);
     expect((await create(trainer, newRun())).status).toBe(403);
     const patch = await sendAs(trainer, 'patch', `/api/cook-runs/${run.id}`, { loadCount: 3 });
@@ -39,20 +40,20 @@ describe('/api/cook-runs guards and validation', () => {
   ])('answers 400 naming %s', async (field, over) => {
     const res = await create(tech, newRun(over));
     expect(res.status).toBe(400);
-    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(field);
+    expect(errorOf(res).issues!.map((i: { path: string }) => i.path)).toContain(field);
   });
 
   it('answers 400 naming operatorId for an unknown user', async () => {
     const res = await create(tech, newRun({ operatorId: 999999 }));
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('operatorId');
+    expect(issuePath(res)).toBe('operatorId');
   });
 
   it('answers 400 for a bad sort field and an oversized page', async () => {
     const sort = await tech.agent.get('/api/cook-runs?sort=-vessel');
     expect(sort.status).toBe(400);
-    expect(sort.body.error.issues[0].path).toBe('sort');
-    expect((await tech.agent.get('/api/cook-runs?pageSize=201')).body.error.issues[0].path).toBe('pageSize');
+    expect(issuePath(sort)).toBe('sort');
+    expect(issuePath(await tech.agent.get('/api/cook-runs?pageSize=201'))).toBe('pageSize');
   });
 
   it('answers 404 for an unknown cook run', async () => {
@@ -69,6 +70,6 @@ describe('/api/cook-runs guards and validation', () => {
     expect((await create(tech, body)).status).toBe(201);
     const res = await create(tech, { ...body, vessel: 'Other' });
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('code');
+    expect(issuePath(res)).toBe('code');
   });
 });

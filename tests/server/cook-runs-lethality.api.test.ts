@@ -5,9 +5,8 @@ import { dataSource } from '../../server/db/data-source';
 import { defaultContainerMinutes } from '../../shared/stats/cook-verdict';
 import { createTestApp } from '../setup/test-app';
 import { postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
-import { cookRunReadingsSchema, cookRunSchema } from '../../shared/schemas/cook-runs';
-import { pageOf } from '../../shared/schemas/common';
-import { create, createdRun, cycleCsv, newRun, postLog, runOf } from './cook-runs.fixtures';
+import { cookRunReadingsSchema } from '../../shared/schemas/cook-runs';
+import { create, createdRun, cycleCsv, newRun, postLog, runOf, runPageSchema } from './cook-runs.fixtures';
 import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
@@ -24,8 +23,6 @@ afterAll(() =>
     JSON.stringify(defaultContainerMinutes),
   ]),
 );
-
-const runPageSchema = pageOf(cookRunSchema);
 
 describe('/api/cook-runs lethality', () => {
   it('estimates F0 as an upper bound at sea level and writes an audit event', async () => {

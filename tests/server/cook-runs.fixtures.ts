@@ -1,4 +1,5 @@
-import { cookRunDetailSchema } from '../../shared/schemas/cook-runs';
+import { pageOf } from '../../shared/schemas/common';
+import { cookRunDetailSchema, cookRunSchema } from '../../shared/schemas/cook-runs';
 import { bodyOf } from '../setup/bodies';
 import { postCsvAs, sendAs, uniqueName, type Client } from '../setup/factories';
 
@@ -28,3 +29,4 @@ export const postLog = (client: Client, id: number, csv: string) =>
 /** A cook run as the create, edit and log routes answer it. */
 export const runOf = (res: { body: unknown }) => bodyOf(res, cookRunDetailSchema);
 export const createdRun = async (client: Client, body: Record<string, unknown>) => runOf(await create(client, body));
+export const runPageSchema = pageOf(cookRunSchema);

@@ -11,7 +11,8 @@ import { dataSource } from '../../server/db/data-source';
 import { heicRefusal } from '../../shared/schemas/photos';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
-import { auditCount, heicBytes, makeJpeg, makePng, withExifOrientation } from './incidents-fixtures';
+import { auditCount, heicBytes, makeJpeg, makePng, photosOf, withExifOrientation } from './incidents-fixtures';
+import { errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -52,7 +53,7 @@ describe('POST /api/photos', () => {
     const bytes = await makeJpeg(800, 600);
     const res = await upload(tech, [{ bytes, name: 'jar.jpg' }]);
     expect(res.status).toBe(201);
-    const [photo] = res.body;
+    const photo = photosOf(res)[0]!;
     // SHA-256 as specified by NIST FIPS 180-4; node's crypto is the reference implementation here.
     expect(photo).toMatchObject({
       sha256: createHash('sha256').update(bytes).digest('hex'),
@@ -79,7 +80,7 @@ describe('POST /api/photos', () => {
     const tech = await signedIn(app, 'technician');
     const res = await upload(tech, [{ bytes: await makePng(64, 48), name: 'looks-like.txt' }]);
     expect(res.status).toBe(201);
-    expect(res.body[0]).toMatchObject({ mime: 'image/png', width: 64, height: 48 });
+    expect(photosOf(res)[0]).toMatchObject({ mime: 'image/png', width: 64, height: 48 });
   });
 
   it('answers 415 naming the field for a text file renamed .jpg, and stores nothing', async () => {
@@ -91,8 +92,8 @@ describe('POST /api/photos', () => {
       { bytes: Buffer.from('not a photo, just notes about jar 12\n'.repeat(20)), name: 'notes.jpg' },
     ]);
     expect(res.status).toBe(415);
-    expect(res.body.error.issues[0].path).toBe('photos.1');
-    expect(res.body.error.message).toMatch(/notes\.jpg.*not a JPEG, PNG or WebP/);
+    expect(issuePath(res)).toBe('photos.1');
+    expect(errorOf(res).message).toMatch(/notes\.jpg.*not a JPEG, PNG or WebP/);
     expect(await dataSource.manager.count(Photo)).toBe(rowsBefore);
     expect(storedFiles()).toHaveLength(filesBefore);
   });
@@ -101,7 +102,7 @@ describe('POST /api/photos', () => {
     const tech = await signedIn(app, 'technician');
     const res = await upload(tech, [{ bytes: heicBytes(), name: 'IMG_0001.HEIC' }]);
     expect(res.status).toBe(415);
-    expect(res.body.error.message).toBe(heicRefusal);
+    expect(errorOf(res).message).toBe(heicRefusal);
   });
 
   it('answers 413 for a photo over 12 MB and stores nothing', async () => {
@@ -110,7 +111,7 @@ describe('POST /api/photos', () => {
     const big = Buffer.concat([await makeJpeg(), Buffer.alloc(12 * 1024 * 1024)]);
     const res = await upload(tech, [{ bytes: big, name: 'big.jpg' }]);
     expect(res.status).toBe(413);
-    expect(res.body.error.issues[0].path).toBe('photos');
+    expect(issuePath(res)).toBe('photos');
     expect(await dataSource.manager.count(Photo)).toBe(rowsBefore);
   });
 
@@ -128,10 +129,10 @@ describe('POST /api/photos', () => {
     const tech = await signedIn(app, 'technician');
     const none = await tech.agent.post('/api/photos').set('X-CSRF-Token', tech.token()).field('note', 'x');
     expect(none.status).toBe(400);
-    expect(none.body.error.issues[0].path).toBe('photos');
+    expect(issuePath(none)).toBe('photos');
     const wrong = await upload(tech, [{ bytes: await makeJpeg(), name: 'a.jpg' }], 'file');
     expect(wrong.status).toBe(400);
-    expect(wrong.body.error.issues[0].path).toBe('photos');
+    expect(issuePath(wrong)).toBe('photos');
   });
 
   it('stores the same photo once when it is uploaded twice', async () => {
@@ -145,7 +146,8 @@ describe('POST /api/photos', () => {
     ]);
     expect(first.status).toBe(201);
     expect(second.status).toBe(201);
-    expect(second.body.map((p: { id: number }) => p.id)).toEqual([first.body[0].id, first.body[0].id]);
+    const firstId = photosOf(first)[0]!.id;
+    expect(photosOf(second).map((p) => p.id)).toEqual([firstId, firstId]);
     expect(await dataSource.manager.countBy(Photo, { sha256: sha })).toBe(1);
     expect(storedFiles().filter((f) => f.includes(sha))).toHaveLength(2);
   });
@@ -156,7 +158,7 @@ describe('POST /api/photos', () => {
     const bytes = withExifOrientation(await makeJpeg(300, 200), 6);
     const res = await upload(tech, [{ bytes, name: 'portrait.jpg' }]);
     expect(res.status).toBe(201);
-    expect(res.body[0]).toMatchObject({ width: 200, height: 300 });
+    expect(photosOf(res)[0]).toMatchObject({ width: 200, height: 300 });
   });
 
   it('keeps answering other requests while a large photo is decoded', async () => {
@@ -188,7 +190,7 @@ describe('GET /api/photos/:id', () => {
   it('serves files only to signed-in users and answers 404 for an unknown id', async () => {
     const tech = await signedIn(app, 'technician');
     const res = await upload(tech, [{ bytes: await makeJpeg(), name: 'a.jpg' }]);
-    const id = res.body[0].id as number;
+    const { id } = photosOf(res)[0]!;
     expect((await supertest(app).get(`/api/photos/${id}/original`)).status).toBe(401);
     expect((await supertest(app).get(`/api/photos/${id}/thumb`)).status).toBe(401);
     const trainer = await signedIn(app, 'trainer');
@@ -201,8 +203,9 @@ describe('GET /api/photos/:id', () => {
   it('answers 304 to a matching ETag', async () => {
     const tech = await signedIn(app, 'technician');
     const res = await upload(tech, [{ bytes: await makeJpeg(), name: 'a.jpg' }]);
-    const first = await tech.agent.get(res.body[0].url);
-    const again = await tech.agent.get(res.body[0].url).set('If-None-Match', first.headers.etag as string);
+    const { url } = photosOf(res)[0]!;
+    const first = await tech.agent.get(url);
+    const again = await tech.agent.get(url).set('If-None-Match', first.headers.etag as string);
     expect(again.status).toBe(304);
   });
 });
