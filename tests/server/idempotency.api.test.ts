@@ -6,7 +6,11 @@ import { JarEvent } from '../../server/jars/jar-event.entity';
 import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, type Client } from '../setup/factories';
-import { auditCount, makeJar, makeJpeg, makeProduction } from './incidents-fixtures';
+import { shelfPlaceSchema } from '../../shared/schemas/jar-shelf';
+import { jarRowSchema } from '../../shared/schemas/jars';
+import { auditCount, incidentOf, makeJar, makeJpeg, makeProduction, photosOf } from './incidents-fixtures';
+import { itemsOf } from './jars.fixtures';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -34,7 +38,7 @@ describe('Idempotency-Key on a new incident', () => {
     expect(first.status).toBe(201);
     expect(again.status).toBe(201);
     expect(again.headers['idempotent-replayed']).toBe('true');
-    expect(again.body.id).toBe(first.body.id);
+    expect(incidentOf(again).id).toBe(incidentOf(first).id);
     expect(await incidentsOf(jar.id)).toBe(1);
   });
 
@@ -47,9 +51,9 @@ describe('Idempotency-Key on a new incident', () => {
       postWithKey(tech, '/api/incidents', key, flag(jar.label)),
     ]);
     expect([a.status, b.status]).toEqual([201, 201]);
-    expect(a.body.id).toBe(b.body.id);
+    expect(incidentOf(a).id).toBe(incidentOf(b).id);
     expect(await incidentsOf(jar.id)).toBe(1);
-    expect(await auditCount('incident', a.body.id)).toBe(1);
+    expect(await auditCount('incident', incidentOf(a).id)).toBe(1);
   });
 
   it('keeps keys per user: the same key from another technician is their own write', async () => {
@@ -60,7 +64,7 @@ describe('Idempotency-Key on a new incident', () => {
     const a = await postWithKey(one, '/api/incidents', key, flag(j1.label));
     const b = await postWithKey(two, '/api/incidents', key, flag(j2.label));
     expect([a.status, b.status]).toEqual([201, 201]);
-    expect(a.body.id).not.toBe(b.body.id);
+    expect(incidentOf(a).id).not.toBe(incidentOf(b).id);
   });
 
   it('leaves a refused write unrecorded, so the fixed item can be sent under the same key', async () => {
@@ -69,7 +73,7 @@ describe('Idempotency-Key on a new incident', () => {
     const key = randomUUID();
     const refused = await postWithKey(tech, '/api/incidents', key, flag('NO-SUCH-JAR-1'));
     expect(refused.status).toBe(422);
-    expect(refused.body.error.issues[0].path).toBe('jarLabels.0');
+    expect(issuePath(refused)).toBe('jarLabels.0');
     const fixed = await postWithKey(tech, '/api/incidents', key, flag(jar.label));
     expect(fixed.status).toBe(201);
     expect(fixed.headers['idempotent-replayed']).toBeUndefined();
@@ -81,7 +85,7 @@ describe('Idempotency-Key on a new incident', () => {
     const jar = await makeJar(prod);
     const bad = await postWithKey(tech, '/api/incidents', 'short', flag(jar.label));
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('Idempotency-Key');
+    expect(issuePath(bad)).toBe('Idempotency-Key');
     const key = randomUUID();
     expect((await postWithKey(tech, '/api/incidents', key, flag(jar.label))).status).toBe(201);
     const other = await makeJar(prod);
@@ -89,7 +93,7 @@ describe('Idempotency-Key on a new incident', () => {
       marks: [{ jarId: other.id, mark: 'clean' }],
     });
     expect(reused.status).toBe(422);
-    expect(reused.body.error.code).toBe('idempotency-key-reused');
+    expect(errorOf(reused).code).toBe('idempotency-key-reused');
   });
 });
 
@@ -106,8 +110,8 @@ describe('Idempotency-Key on a photo upload', () => {
         .attach('photos', jpeg, 'jar.jpg');
     const [a, b] = await Promise.all([send(), send()]);
     expect([a.status, b.status]).toEqual([201, 201]);
-    expect(b.body[0].id).toBe(a.body[0].id);
-    expect(await auditCount('photo', a.body[0].id)).toBe(1);
+    expect(photosOf(b)[0]!.id).toBe(photosOf(a)[0]!.id);
+    expect(await auditCount('photo', photosOf(a)[0]!.id)).toBe(1);
   });
 });
 
@@ -145,7 +149,7 @@ describe('shelf marks: repeat, undo and the walk lists', () => {
     expect((await postWithKey(tech, '/api/jars/shelf-walk', randomUUID(), mark(jar.id, 'shaken'))).status).toBe(200);
     const late = await postWithKey(tech, '/api/jars/shelf-walk/undo', randomUUID(), { key });
     expect(late.status).toBe(409);
-    expect(late.body.error.issues[0].path).toBe('key');
+    expect(issuePath(late)).toBe('key');
   });
 
   it('walks only incubating jars and lists the rooms and shelves that hold them', async () => {
@@ -156,9 +160,9 @@ describe('shelf marks: repeat, undo and the walk lists', () => {
     const done = await makeJar(prod, { status: 'colonised' });
     await dataSource.manager.update(Jar, [growing.id, done.id], { room, shelf: 'B1' });
     const shelf = await tech.agent.get('/api/jars/shelf').query({ room, shelf: 'B1' });
-    expect(shelf.body.items.map((j: { id: number }) => j.id)).toEqual([growing.id]);
+    expect(bodyOf(shelf, itemsOf(jarRowSchema)).items.map((j) => j.id)).toEqual([growing.id]);
     const places = await tech.agent.get('/api/jars/shelves');
     expect(places.status).toBe(200);
-    expect(places.body.items).toContainEqual({ room, shelf: 'B1', incubating: 1 });
+    expect(bodyOf(places, itemsOf(shelfPlaceSchema)).items).toContainEqual({ room, shelf: 'B1', incubating: 1 });
   });
 });

@@ -5,7 +5,10 @@ import { JarEvent } from '../../server/jars/jar-event.entity';
 import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
-import { jarEvent, jarFixtures, makeJars } from './jars.fixtures';
+import { shelfWalkResultSchema } from '../../shared/schemas/jar-shelf';
+import { jarRowSchema } from '../../shared/schemas/jars';
+import { itemsOf, jarEvent, jarFixtures, jarRowOf, makeJars, storyOf } from './jars.fixtures';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -44,7 +47,9 @@ describe('POST /api/jars/:id/events', () => {
         })
       ).status,
     ).toBe(201);
-    expect((await jarEvent(tech, id, { type: 'shaken', at: '2026-05-10T09:02:00Z' })).body.status).toBe('incubating');
+    expect(jarRowOf(await jarEvent(tech, id, { type: 'shaken', at: '2026-05-10T09:02:00Z' })).status).toBe(
+      'incubating',
+    );
     const colonised = await jarEvent(tech, id, { type: 'colonised', at: '2026-05-18T08:00:00Z' });
     expect(colonised.body).toMatchObject({ status: 'colonised', colonisedOn: '2026-05-18', endedOn: null });
     const released = await jarEvent(tech, id, {
@@ -86,10 +91,10 @@ describe('POST /api/jars/:id/events', () => {
       { type: 'discarded', reason: 'tidy up' },
     ]) {
       const res = await jarEvent(tech, a!.id, body);
-      refused.push([body.type, res.status, res.body.error.issues[0].path]);
+      refused.push([body.type, res.status, issuePath(res)]);
     }
     expect(refused).toEqual(['shaken', 'check', 'hold', 'discarded'].map((t) => [t, 409, 'type']));
-    expect((await jarEvent(tech, a!.id, { type: 'shaken' })).body.error.issues[0].message).toBe(
+    expect(errorOf(await jarEvent(tech, a!.id, { type: 'shaken' })).issues![0]!.message).toBe(
       'A released jar cannot be shaken',
     );
     expect(await dataSource.manager.countBy(JarEvent, { jarId: a!.id })).toBe(eventsBefore);
@@ -104,13 +109,15 @@ describe('POST /api/jars/:id/events', () => {
     const sup = await signedIn(app, 'supervisor');
     const [jar] = await freshJars(tech, 1);
     await jarEvent(tech, jar!.id, { type: 'colonised' }).expect(201);
-    expect((await jarEvent(tech, jar!.id, { type: 'hold', reason: 'culture under test' })).body.status).toBe('on-hold');
+    expect(jarRowOf(await jarEvent(tech, jar!.id, { type: 'hold', reason: 'culture under test' })).status).toBe(
+      'on-hold',
+    );
     expect((await jarEvent(tech, jar!.id, { type: 'shaken' })).status).toBe(409);
     expect((await jarEvent(tech, jar!.id, { type: 'resume', reason: 'agar test clean' })).status).toBe(403);
     const resumed = await jarEvent(sup, jar!.id, { type: 'resume', reason: 'agar test clean' });
-    expect(resumed.body.status).toBe('colonised');
+    expect(jarRowOf(resumed).status).toBe('colonised');
     const story = await tech.agent.get(`/api/jars/${jar!.id}`);
-    expect(story.body.events.map((e: { type: string }) => e.type)).toEqual(['colonised', 'hold', 'resume']);
+    expect(storyOf(story).events.map((e) => e.type)).toEqual(['colonised', 'hold', 'resume']);
     const hold = (await audits(jar!.id)).find((a) => a.action === 'jar-hold');
     expect(hold).toMatchObject({
       field: 'status',
@@ -130,7 +137,7 @@ describe('POST /api/jars/:id/events', () => {
     expect((await jarEvent(tech, jar!.id, { type: 'moved', room: 'Incubation B', shelf })).status).toBe(400);
     const discarded = await jarEvent(tech, jar!.id, { type: 'discarded', reason: 'lid cracked in the move' });
     expect(discarded.body).toMatchObject({ status: 'discarded' });
-    expect(discarded.body.endedOn).not.toBeNull();
+    expect(jarRowOf(discarded).endedOn).not.toBeNull();
   });
 
   it('answers 400 naming the field for a bad event', async () => {
@@ -151,7 +158,7 @@ describe('POST /api/jars/:id/events', () => {
     const got = [];
     for (const [body] of cases) {
       const res = await jarEvent(tech, jar!.id, body);
-      got.push([body, res.status, res.body.error.issues[0].path]);
+      got.push([body, res.status, issuePath(res)]);
     }
     expect(got).toEqual(cases.map(([body, path]) => [body, 400, path]));
   });
@@ -167,7 +174,9 @@ describe('shelf walk', () => {
 
     const listed = await tech.agent.get(`/api/jars/shelf?room=Incubation C&shelf=${shelf}`);
     expect(listed.status).toBe(200);
-    expect(listed.body.items.map((j: { label: string }) => j.label)).toEqual(jars.slice(0, 3).map((j) => j.label));
+    expect(bodyOf(listed, itemsOf(jarRowSchema)).items.map((j) => j.label)).toEqual(
+      jars.slice(0, 3).map((j) => j.label),
+    );
 
     const marks = [
       { jarId: jars[0]!.id, mark: 'clean' },
@@ -176,8 +185,9 @@ describe('shelf walk', () => {
     ];
     const res = await tech.agent.post('/api/jars/shelf-walk').set('X-CSRF-Token', tech.token()).send({ marks });
     expect(res.status).toBe(200);
-    expect(res.body.marked).toBe(3);
-    expect(res.body.jars.map((j: { status: string }) => j.status)).toEqual(['incubating', 'colonised', 'incubating']);
+    const walk = bodyOf(res, shelfWalkResultSchema);
+    expect(walk.marked).toBe(3);
+    expect(walk.jars.map((j) => j.status)).toEqual(['incubating', 'colonised', 'incubating']);
     const clean = await dataSource.manager.find(JarEvent, {
       where: { jarId: jars[0]!.id, type: 'check' },
       order: { id: 'ASC' },
@@ -201,14 +211,14 @@ describe('shelf walk', () => {
         ],
       });
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('marks.1.mark');
+    expect(issuePath(res)).toBe('marks.1.mark');
     expect(await dataSource.manager.countBy(JarEvent, { jarId: jars[0]!.id })).toBe(0);
     const missing = await tech.agent
       .post('/api/jars/shelf-walk')
       .set('X-CSRF-Token', tech.token())
       .send({ marks: [{ jarId: 99999999, mark: 'clean' }] });
     expect(missing.status).toBe(422);
-    expect(missing.body.error.issues[0].path).toBe('marks.0.jarId');
+    expect(issuePath(missing)).toBe('marks.0.jarId');
     expect((await dataSource.manager.findOneByOrFail(Jar, { id: jars[0]!.id })).status).toBe('incubating');
   });
 
@@ -220,10 +230,8 @@ describe('shelf walk', () => {
         .post('/api/jars/shelf-walk')
         .set('X-CSRF-Token', tech.token())
         .send(body as object);
-    expect((await post({ marks: [] })).body.error.issues[0].path).toBe('marks');
-    expect((await post({ marks: [{ jarId: jar!.id, mark: 'sparkly' }] })).body.error.issues[0].path).toBe(
-      'marks.0.mark',
-    );
+    expect(issuePath(await post({ marks: [] }))).toBe('marks');
+    expect(issuePath(await post({ marks: [{ jarId: jar!.id, mark: 'sparkly' }] }))).toBe('marks.0.mark');
     const twice = await post({
       marks: [
         { jarId: jar!.id, mark: 'clean' },
@@ -231,6 +239,6 @@ describe('shelf walk', () => {
       ],
     });
     expect(twice.status).toBe(400);
-    expect(twice.body.error.issues[0].path).toBe('marks.1.jarId');
+    expect(issuePath(twice)).toBe('marks.1.jarId');
   });
 });

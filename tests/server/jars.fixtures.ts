@@ -1,3 +1,4 @@
+import { z } from 'zod';
 import { dataSource } from '../../server/db/data-source';
 import { CookRun } from '../../server/cook-runs/cook-run.entity';
 import { Culture } from '../../server/cultures/culture.entity';
@@ -6,6 +7,9 @@ import { Grain } from '../../server/grain/grain.entity';
 import { PrepBatch } from '../../server/grain/prep-batch.entity';
 import { InoculationSession } from '../../server/sessions/inoculation-session.entity';
 import type { CultureState } from '../../shared/enums';
+import { jarStorySchema } from '../../shared/schemas/jar-story';
+import { jarRowSchema } from '../../shared/schemas/jars';
+import { bodyOf } from '../setup/bodies';
 import type { Agent } from '../setup/test-app';
 import { uniqueName } from '../setup/factories';
 
@@ -90,6 +94,15 @@ export async function makeJars(
   if (res.status !== 201) throw new Error(`batch failed: ${res.status} ${JSON.stringify(res.body)}`);
   return (res.body as { jars: JarRow[] }).jars;
 }
+
+/** A list answered as `{ items }`, as the shelf, shelves and label-sheet routes answer. */
+export const itemsOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item) });
+
+/** A jar row, as the event route answers it. */
+export const jarRowOf = (res: { body: unknown }) => bodyOf(res, jarRowSchema);
+
+/** A jar's whole story, as its page reads it. */
+export const storyOf = (res: { body: unknown }) => bodyOf(res, jarStorySchema);
 
 export function jarEvent(client: { agent: Agent; token: () => string }, jarId: number, body: Record<string, unknown>) {
   return client.agent.post(`/api/jars/${jarId}/events`).set('X-CSRF-Token', client.token()).send(body);
