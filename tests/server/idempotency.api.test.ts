@@ -9,8 +9,7 @@ import { signedIn, type Client } from '../setup/factories';
 import { shelfPlaceSchema } from '../../shared/schemas/jar-shelf';
 import { jarRowSchema } from '../../shared/schemas/jars';
 import { auditCount, incidentOf, makeJar, makeJpeg, makeProduction, photosOf } from './incidents-fixtures';
-import { itemsOf } from './jars.fixtures';
-import { bodyOf, errorOf, issuePath } from '../setup/bodies';
+import { bodyOf, errorOf, issuePath, itemsOf } from '../setup/bodies';
 
 const app = createTestApp();
 

@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
-import { makeJpeg } from './incidents-fixtures';
+import { correctiveActionSchema } from '../../shared/schemas/corrective-actions';
+import { incidentOf, makeJpeg, photosOf } from './incidents-fixtures';
 import { eventsFor, newIncident, send } from './incidents-review.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -15,17 +17,17 @@ describe('audit events on every mutating route', () => {
       .set('X-CSRF-Token', tech.token())
       .attach('photos', await makeJpeg(), 'a.jpg')
       .attach('photos', await makeJpeg(), 'b.jpg');
-    const ids = up.body.map((p: { id: number }) => p.id);
+    const ids = photosOf(up).map((p) => p.id);
     const res = await send(tech, 'post', `/api/incidents/${id}/photos`, { photoIds: ids });
     expect(res.status).toBe(200);
-    expect(res.body.photos.map((p: { id: number }) => p.id)).toEqual(ids);
+    expect(incidentOf(res).photos.map((p) => p.id)).toEqual(ids);
     await send(tech, 'post', `/api/incidents/${id}/photos`, { photoIds: ids }).expect(200);
     expect(
       (await eventsFor('incident', id)).filter((e) => e.action === 'add-photo').map((e) => Number(e.newValue)),
     ).toEqual(ids);
     const missing = await send(tech, 'post', `/api/incidents/${id}/photos`, { photoIds: [999999] });
     expect(missing.status).toBe(422);
-    expect(missing.body.error.issues[0].path).toBe('photoIds');
+    expect(issuePath(missing)).toBe('photoIds');
   });
 
   it('corrective actions: create and complete with verification, each audited and in the history', async () => {
@@ -41,10 +43,10 @@ describe('audit events on every mutating route', () => {
     });
     expect(created.status).toBe(201);
     expect(created.body).toMatchObject({ ownerName: 'Test supervisor', overdue: true, doneOn: null });
-    const actionId = created.body.id as number;
+    const actionId = bodyOf(created, correctiveActionSchema).id;
     const unverified = await send(sup, 'patch', `/api/corrective-actions/${actionId}`, { doneOn: '2020-01-02' });
     expect(unverified.status).toBe(422);
-    expect(unverified.body.error.issues[0].path).toBe('verification');
+    expect(issuePath(unverified)).toBe('verification');
     const done = await send(sup, 'patch', `/api/corrective-actions/${actionId}`, {
       doneOn: '2020-01-02',
       verification: 'gauge read 103 kPa against the reference',
@@ -58,21 +60,21 @@ describe('audit events on every mutating route', () => {
       ['update', 'doneOn'],
       ['update', 'verification'],
     ]);
-    const history = (await sup.agent.get(`/api/incidents/${id}`)).body.history;
-    expect(history.filter((h: { recordType: string }) => h.recordType === 'corrective-action')).toHaveLength(3);
+    const { history } = incidentOf(await sup.agent.get(`/api/incidents/${id}`));
+    expect(history.filter((h) => h.recordType === 'corrective-action')).toHaveLength(3);
     const badOwner = await send(sup, 'post', `/api/incidents/${id}/actions`, {
       what: 'Retrain',
       ownerId: 999999,
       dueOn: '2030-01-01',
     });
-    expect(badOwner.body.error.issues[0].path).toBe('ownerId');
+    expect(issuePath(badOwner)).toBe('ownerId');
     const halfFactor = await send(sup, 'post', `/api/incidents/${id}/actions`, {
       what: 'Retrain',
       ownerName: 'A',
       dueOn: '2030-01-01',
       factor: 'operator',
     });
-    expect(halfFactor.body.error.issues[0].path).toBe('level');
+    expect(issuePath(halfFactor)).toBe('level');
     expect((await send(sup, 'patch', '/api/corrective-actions/999999', { what: 'Nothing' })).status).toBe(404);
   });
 });

@@ -7,8 +7,8 @@ import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 import { shelfWalkResultSchema } from '../../shared/schemas/jar-shelf';
 import { jarRowSchema } from '../../shared/schemas/jars';
-import { itemsOf, jarEvent, jarFixtures, jarRowOf, makeJars, storyOf } from './jars.fixtures';
-import { bodyOf, errorOf, issuePath } from '../setup/bodies';
+import { jarEvent, jarFixtures, jarRowOf, makeJars, storyOf } from './jars.fixtures';
+import { bodyOf, errorOf, issuePath, itemsOf } from '../setup/bodies';
 
 const app = createTestApp();
 

@@ -1,4 +1,3 @@
-import { z } from 'zod';
 import { dataSource } from '../../server/db/data-source';
 import { CookRun } from '../../server/cook-runs/cook-run.entity';
 import { Culture } from '../../server/cultures/culture.entity';
@@ -94,9 +93,6 @@ export async function makeJars(
   if (res.status !== 201) throw new Error(`batch failed: ${res.status} ${JSON.stringify(res.body)}`);
   return (res.body as { jars: JarRow[] }).jars;
 }
-
-/** A list answered as `{ items }`, as the shelf, shelves and label-sheet routes answer. */
-export const itemsOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item) });
 
 /** A jar row, as the event route answers it. */
 export const jarRowOf = (res: { body: unknown }) => bodyOf(res, jarRowSchema);

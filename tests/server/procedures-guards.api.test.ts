@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { create, newProcedure, steps, stepsOf } from './procedures.fixtures';
+import { errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -68,7 +69,7 @@ describe('procedures: validation and missing records', () => {
     const trainer = await signedIn(app, 'trainer');
     const res = await trainer.agent.post('/api/procedures').set('X-CSRF-Token', trainer.token()).send(body);
     expect(res.status).toBe(400);
-    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(path);
+    expect(errorOf(res).issues!.map((i: { path: string }) => i.path)).toContain(path);
   });
 
   it('answers 409 naming code when the code is taken', async () => {
@@ -77,7 +78,7 @@ describe('procedures: validation and missing records', () => {
     await create(trainer, body);
     const res = await trainer.agent.post('/api/procedures').set('X-CSRF-Token', trainer.token()).send(body);
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('code');
+    expect(issuePath(res)).toBe('code');
   });
 
   it('answers 400 naming changeNote when a new version gives no reason', async () => {
@@ -88,7 +89,7 @@ describe('procedures: validation and missing records', () => {
       .set('X-CSRF-Token', trainer.token())
       .send({ steps });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('changeNote');
+    expect(issuePath(res)).toBe('changeNote');
   });
 
   it('answers 404 for unknown procedures, versions, steps and incidents', async () => {

@@ -4,9 +4,14 @@ import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { makeIncident, makeJars } from '../setup/lab-rows';
+import { pageOf } from '../../shared/schemas/common';
+import { incidentListItemSchema } from '../../shared/schemas/incidents';
+import { stepLinkSchema } from '../../shared/schemas/procedures';
 import { create, stepsOf } from './procedures.fixtures';
+import { bodyOf, errorOf, issuePath, itemsOf } from '../setup/bodies';
 
 const app = createTestApp();
+const incidentPageSchema = pageOf(incidentListItemSchema);
 
 describe('procedures: incident–step links and step statistics', () => {
   it('links an incident to a step with an audit event on the incident, refuses a repeat, and unlinks', async () => {
@@ -40,17 +45,21 @@ describe('procedures: incident–step links and step statistics', () => {
       .set('X-CSRF-Token', trainer.token())
       .send({ stepId: flame!.id, note: 'twice' });
     expect(again.status).toBe(409);
-    expect(again.body.error.issues[0].path).toBe('stepId');
+    expect(issuePath(again)).toBe('stepId');
 
     expect((await stepsOf(trainer, proc.currentVersionId))[1]!.incidentsLinked).toBe(1);
     const list = await trainer.agent.get(`/api/incidents/${incident.id}/step-links`).expect(200);
-    expect(list.body.items).toHaveLength(1);
+    expect(bodyOf(list, itemsOf(stepLinkSchema)).items).toHaveLength(1);
     const ofStep = await trainer.agent.get(`/api/procedure-steps/${flame!.id}/links`).expect(200);
-    expect(ofStep.body.items.map((l: { incidentId: number }) => l.incidentId)).toEqual([incident.id]);
+    expect(bodyOf(ofStep, itemsOf(stepLinkSchema)).items.map((l) => l.incidentId)).toEqual([incident.id]);
     expect((await trainer.agent.get('/api/procedure-steps/999999/links')).status).toBe(404);
 
     expect(
-      (await trainer.agent.delete(`/api/step-links/${res.body.id}`).set('X-CSRF-Token', trainer.token())).status,
+      (
+        await trainer.agent
+          .delete(`/api/step-links/${bodyOf(res, stepLinkSchema).id}`)
+          .set('X-CSRF-Token', trainer.token())
+      ).status,
     ).toBe(204);
     expect((await stepsOf(trainer, proc.currentVersionId))[1]!.incidentsLinked).toBe(0);
     const unlink = await dataSource.manager.findOneBy(AuditEvent, {
@@ -66,9 +75,10 @@ describe('procedures: incident–step links and step statistics', () => {
     const jars = await makeJars(1, { inoculatedOn: '2024-03-04' });
     const incident = await makeIncident(jars, { foundOn: '2024-03-10', contaminant: 'neurospora' });
     const ids = async (q: string) =>
-      (await trainer.agent.get('/api/incidents').query({ q, pageSize: 200 }).expect(200)).body.items.map(
-        (i: { id: number }) => i.id,
-      );
+      bodyOf(
+        await trainer.agent.get('/api/incidents').query({ q, pageSize: 200 }).expect(200),
+        incidentPageSchema,
+      ).items.map((i) => i.id);
     expect(await ids(`#${incident.id}`)).toEqual([incident.id]);
     expect(await ids(String(incident.id))).toContain(incident.id);
     expect(await ids(jars[0]!.label)).toEqual([incident.id]);
@@ -83,6 +93,10 @@ describe('procedures: incident–step links and step statistics', () => {
       .set('X-CSRF-Token', trainer.token())
       .send({ stepId: 'x', note: '' });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues.map((i: { path: string }) => i.path).sort()).toEqual(['note', 'stepId']);
+    expect(
+      errorOf(res)
+        .issues!.map((i: { path: string }) => i.path)
+        .sort(),
+    ).toEqual(['note', 'stepId']);
   });
 });

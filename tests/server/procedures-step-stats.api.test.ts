@@ -2,9 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { makeIncident, makeJars, makeSession } from '../setup/lab-rows';
+import { stepStatsSchema } from '../../shared/schemas/procedures';
 import { create, stepsOf } from './procedures.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
+const statsOf = (res: { body: unknown }) => bodyOf(res, stepStatsSchema);
 
 describe('procedures: incident–step links and step statistics', () => {
   it('compares ticked and not-ticked sessions with Fisher’s exact test', async () => {
@@ -36,14 +39,14 @@ describe('procedures: incident–step links and step statistics', () => {
     await makeIncident(otherJars, { foundOn: '2024-03-12' });
 
     const res = await trainer.agent.get(`/api/procedure-steps/${flame!.id}/stats`).expect(200);
-    expect(res.body.ticked).toEqual({ jars: 4, contaminated: 3, incubating: 0, rate: 0.75 });
-    expect(res.body.notTicked).toEqual({ jars: 4, contaminated: 1, incubating: 0, rate: 0.25 });
-    expect(res.body.pValue).toBeCloseTo(34 / 70, 6);
+    expect(statsOf(res).ticked).toEqual({ jars: 4, contaminated: 3, incubating: 0, rate: 0.75 });
+    expect(statsOf(res).notTicked).toEqual({ jars: 4, contaminated: 1, incubating: 0, rate: 0.25 });
+    expect(statsOf(res).pValue).toBeCloseTo(34 / 70, 6);
 
     const wipeStats = await trainer.agent.get(`/api/procedure-steps/${wipe!.id}/stats`).expect(200);
-    expect(wipeStats.body.ticked).toMatchObject({ jars: 8, contaminated: 4 });
-    expect(wipeStats.body.notTicked).toEqual({ jars: 0, contaminated: 0, incubating: 0, rate: null });
-    expect(wipeStats.body.pValue).toBeNull();
+    expect(statsOf(wipeStats).ticked).toMatchObject({ jars: 8, contaminated: 4 });
+    expect(statsOf(wipeStats).notTicked).toEqual({ jars: 0, contaminated: 0, incubating: 0, rate: null });
+    expect(statsOf(wipeStats).pValue).toBeNull();
 
     const link = await trainer.agent
       .post(`/api/incidents/${(await makeIncident(tickedJars.slice(3), { foundOn: '2024-03-13' })).id}/step-links`)
@@ -51,11 +54,11 @@ describe('procedures: incident–step links and step statistics', () => {
       .send({ stepId: flame!.id, note: 'Port left wet.' });
     expect(link.status).toBe(201);
     const changed = await trainer.agent.get(`/api/procedure-steps/${flame!.id}/stats`).expect(200);
-    expect(changed.body.incidentsLinked).toBe(1);
-    expect(changed.body.ticked).toMatchObject({ jars: 4, contaminated: 4, rate: 1 });
+    expect(statsOf(changed).incidentsLinked).toBe(1);
+    expect(statsOf(changed).ticked).toMatchObject({ jars: 4, contaminated: 4, rate: 1 });
     // Table [[4,0],[1,3]], computed here from Fisher's (1935) hypergeometric rule: the tables with these
     // margins have weights 4, 24, 24, 4 over C(8,5) = 56; the two as unlikely as observed give 8/56 = 1/7.
-    expect(changed.body.pValue).toBeCloseTo(1 / 7, 9);
+    expect(statsOf(changed).pValue).toBeCloseTo(1 / 7, 9);
   });
 
   it('counts young clean jars as incubating and filters by inoculation date', async () => {
@@ -66,11 +69,11 @@ describe('procedures: incident–step links and step statistics', () => {
     const recent = await makeSession({ heldOn: today, checks: { [wipe!.id]: false } });
     await makeJars(2, { inoculatedOn: today, sessionId: recent.id });
     const res = await trainer.agent.get(`/api/procedure-steps/${wipe!.id}/stats`).expect(200);
-    expect(res.body.notTicked).toEqual({ jars: 2, contaminated: 0, incubating: 2, rate: 0 });
+    expect(statsOf(res).notTicked).toEqual({ jars: 2, contaminated: 0, incubating: 2, rate: 0 });
     const none = await trainer.agent.get(`/api/procedure-steps/${wipe!.id}/stats?to=2020-01-01`).expect(200);
-    expect(none.body.notTicked.jars).toBe(0);
+    expect(statsOf(none).notTicked.jars).toBe(0);
     const bad = await trainer.agent.get(`/api/procedure-steps/${wipe!.id}/stats?from=2024-02-30x`);
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('from');
+    expect(issuePath(bad)).toBe('from');
   });
 });

@@ -1,4 +1,7 @@
 import { expect } from 'vitest';
+import { pageOf } from '../../shared/schemas/common';
+import { procedureDetailSchema, procedureSchema, procedureVersionSchema } from '../../shared/schemas/procedures';
+import { bodyOf } from '../setup/bodies';
 import { uniqueName, type signedIn } from '../setup/factories';
 
 export type Client = Awaited<ReturnType<typeof signedIn>>;
@@ -9,15 +12,17 @@ export const steps = [
   { text: 'Flame the needle until it glows, then let it cool.' },
   { text: 'Inoculate through the port.' },
 ];
+export const procedurePageSchema = pageOf(procedureSchema);
+
 export const newProcedure = () => ({ code: uniqueName('P'), title: 'Sterile technique', steps });
 
 export async function create(client: Client, body: object = newProcedure()) {
   const res = await client.agent.post('/api/procedures').set('X-CSRF-Token', client.token()).send(body);
   expect(res.status).toBe(201);
-  return res.body as { id: number; versions: { id: number; version: number }[]; currentVersionId: number };
+  return bodyOf(res, procedureDetailSchema);
 }
 
 export async function stepsOf(client: Client, versionId: number) {
   const res = await client.agent.get(`/api/procedure-versions/${versionId}`).expect(200);
-  return res.body.steps as { id: number; position: number; text: string; incidentsLinked: number }[];
+  return bodyOf(res, procedureVersionSchema).steps;
 }

@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import { z } from 'zod';
 import { errorBodySchema, type ErrorBody } from '../../shared/schemas/common';
 
 /** An HTTP answer as supertest gives it, whose body it types as any. */
@@ -21,3 +21,6 @@ export const errorOf = (res: Answer): ErrorBody['error'] => bodyOf(res, errorBod
 
 /** The field named by an error's issue (the first unless told). */
 export const issuePath = (res: Answer, at = 0) => errorOf(res).issues?.[at]?.path;
+
+/** A list answered as `{ items }` without paging. */
+export const itemsOf = <T extends z.ZodType>(item: T) => z.object({ items: z.array(item) });
