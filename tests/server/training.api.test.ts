@@ -6,6 +6,9 @@ import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 import { makeIncident, makeJars, makeSession } from '../setup/lab-rows';
 import { mailsTo } from '../setup/mail-sink';
+import { bodyOf, issuePath } from '../setup/bodies';
+import { pageOf } from '../../shared/schemas/common';
+import { operatorsSchema, retrainRequestSchema, trainingRecordSchema } from '../../shared/schemas/training';
 
 const app = createTestApp();
 type Client = Awaited<ReturnType<typeof signedIn>>;
@@ -74,7 +77,7 @@ describe('training: records', () => {
     const proc = await procedure(trainer);
     const bad = await train(trainer, trainer.user.id, proc.currentVersionId, '12/01/2026');
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('trainedOn');
+    expect(issuePath(bad)).toBe('trainedOn');
     expect((await train(trainer, 999999, proc.currentVersionId)).status).toBe(404);
     expect((await train(trainer, trainer.user.id, 999999)).status).toBe(404);
   });
@@ -95,14 +98,17 @@ describe('training: records', () => {
       trainedOn: '2026-01-12',
     });
     expect(
-      await dataSource.manager.existsBy(AuditEvent, { recordType: 'training-record', recordId: String(res.body.id) }),
+      await dataSource.manager.existsBy(AuditEvent, {
+        recordType: 'training-record',
+        recordId: String(bodyOf(res, trainingRecordSchema).id),
+      }),
     ).toBe(true);
     await train(trainer, other.user.id, proc.currentVersionId).expect(201);
 
     const mine = await tech.agent.get(`/api/training-records?procedureId=${proc.id}`).expect(200);
-    expect(mine.body.items.map((r: { userId: number }) => r.userId)).toEqual([tech.user.id]);
+    expect(bodyOf(mine, pageOf(trainingRecordSchema)).items.map((r) => r.userId)).toEqual([tech.user.id]);
     const all = await trainer.agent.get(`/api/training-records?procedureId=${proc.id}`).expect(200);
-    expect(all.body.total).toBe(2);
+    expect(bodyOf(all, pageOf(trainingRecordSchema)).total).toBe(2);
   });
 });
 
@@ -124,10 +130,8 @@ describe('training: operators view', () => {
 
     const row = async () => {
       const res = await trainer.agent.get(`/api/training/operators?procedureId=${proc.id}`).expect(200);
-      return {
-        procedure: res.body.procedure,
-        me: res.body.operators.find((o: { userId: number }) => o.userId === tech.user.id),
-      };
+      const view = bodyOf(res, operatorsSchema);
+      return { procedure: view.procedure, me: view.operators.find((o) => o.userId === tech.user.id) };
     };
     const first = await row();
     expect(first.me).toMatchObject({
@@ -148,7 +152,7 @@ describe('training: operators view', () => {
       })
       .expect(201);
     const second = await row();
-    expect(second.procedure.currentVersion).toBe(2);
+    expect(second.procedure!.currentVersion).toBe(2);
     expect(second.me).toMatchObject({ trainedVersion: 1, trainedOnCurrent: false });
     expect((await trainer.agent.get('/api/training/operators?procedureId=999999')).status).toBe(404);
   });
@@ -186,10 +190,12 @@ describe('training: retraining requests', () => {
     expect(mail.html).toContain('<li>1. Wipe lids with 70 % isopropyl alcohol and let them dry.</li>');
 
     const open = await tech.agent.get('/api/training/retrain-requests?open=true').expect(200);
-    expect(open.body.items.map((r: { id: number }) => r.id)).toEqual([res.body.id]);
+    expect(bodyOf(open, pageOf(retrainRequestSchema)).items.map((r) => r.id)).toEqual([
+      bodyOf(res, retrainRequestSchema).id,
+    ]);
     await train(trainer, tech.user.id, proc.currentVersionId).expect(201);
     const after = await tech.agent.get('/api/training/retrain-requests?open=true').expect(200);
-    expect(after.body.total).toBe(0);
+    expect(bodyOf(after, pageOf(retrainRequestSchema)).total).toBe(0);
   });
 
   it('sends nothing to a person who opted out of retraining mail, but still records the request', async () => {
@@ -206,7 +212,7 @@ describe('training: retraining requests', () => {
       .set('X-CSRF-Token', trainer.token())
       .send({ userId: tech.user.id, procedureVersionId: proc.currentVersionId, reason: 'Refresher.' });
     expect(res.status).toBe(201);
-    expect(res.body.mailed).toBe(false);
+    expect(bodyOf(res, retrainRequestSchema).mailed).toBe(false);
     expect(mailsTo(tech.user.email!)).toHaveLength(0);
   });
 
@@ -220,7 +226,7 @@ describe('training: retraining requests', () => {
       .set('X-CSRF-Token', t)
       .send({ userId: tech.user.id, procedureVersionId: proc.currentVersionId, reason: ' ' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('reason');
+    expect(issuePath(bad)).toBe('reason');
     const missing = await trainer.agent
       .post('/api/training/retrain-requests')
       .set('X-CSRF-Token', t)
