@@ -18,6 +18,8 @@ import { plantedProblems, weekBefore } from '../../server/demo-lab/planted-probl
 import { clearProduction } from '../setup/clear-production';
 import { signedIn } from '../setup/factories';
 import { createTestApp } from '../setup/test-app';
+import { runPageSchema } from './cook-runs.fixtures';
+import { bodyOf } from '../setup/bodies';
 
 /** A fixed day, so the counts below are exact: the loader makes the same lab for the same day on any date. */
 const LOADED_ON = '2026-03-18';
@@ -131,7 +133,7 @@ describe('loadDemoLab', () => {
     expect(short).toMatchObject({ judgedBy: 'minutes', minimumMinutes: 90, f0UpperBound: true, belowTarget: true });
     expect((lethality.body as LethalityDto).runs.filter((r) => r.belowTarget).map((r) => r.cookRun)).toEqual([code]);
     const list = await supervisor.agent.get('/api/cook-runs').query({ belowTarget: 'true' });
-    expect(list.body.items.map((r: { code: string }) => r.code)).toEqual([code]);
+    expect(bodyOf(list, runPageSchema).items.map((r) => r.code)).toEqual([code]);
   });
 
   it('marks settled weeks above the 5 % target, the short run’s week among them, in control or not', async () => {

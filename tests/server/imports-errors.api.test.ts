@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { uniqueName } from '../setup/factories';
-import { counts, csv, errorsOf, importingSupervisor, row } from './imports.fixtures';
+import { counts, csv, errorsOf, importingSupervisor, rejectionOf, row } from './imports.fixtures';
 
 const app = createTestApp();
 const supervisor = () => importingSupervisor(app);
@@ -22,7 +22,7 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
     const before = await counts();
     const res = await sup.post(file);
     expect(res.status).toBe(422);
-    expect(errorsOf(res.body)).toEqual([
+    expect(errorsOf(rejectionOf(res))).toEqual([
       '3:inoculated_on',
       '4:grain',
       '5:cook_minutes',
@@ -33,10 +33,10 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
       '7:found_on',
       '8:contaminant',
     ]);
-    expect(res.body.errors[0].message).toContain('2026-02-30');
-    expect(res.body.errors[1].message).toContain('quinoa');
-    expect(res.body.errors[6].message).toContain('lichen');
-    expect(res.body.errors[7].message).toContain('before inoculated_on');
+    expect(rejectionOf(res).errors[0]!.message).toContain('2026-02-30');
+    expect(rejectionOf(res).errors[1]!.message).toContain('quinoa');
+    expect(rejectionOf(res).errors[6]!.message).toContain('lichen');
+    expect(rejectionOf(res).errors[7]!.message).toContain('before inoculated_on');
     expect(await counts()).toEqual(before);
   });
 
@@ -47,7 +47,7 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
     const before = await counts();
     const res = await sup.post(csv([row(tag, 2), row(tag, 3), row(tag, 2), row(tag, 1, { jar_label: `${tag}-j1` })]));
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([
+    expect(rejectionOf(res).errors).toEqual([
       { line: 4, column: 'jar_label', message: `"${tag}-J2" repeats the label on line 2` },
       { line: 5, column: 'jar_label', message: `"${tag}-j1" is already stored: jar labels are unique` },
     ]);
@@ -66,7 +66,7 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
       ]),
     );
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([
+    expect(rejectionOf(res).errors).toEqual([
       { line: 3, column: 'cook_minutes', message: `cook run ${tag}-CR has 90 minutes at pressure on line 2, not 45` },
       {
         line: 4,
@@ -92,7 +92,7 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
       ]),
     );
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([
+    expect(rejectionOf(res).errors).toEqual([
       { line: 3, column: 'inoculated_on', message: `session ${tag}-S is held on 2026-03-02 on line 2, not 2026-03-03` },
       { line: 4, column: 'operator', message: `session ${tag}-S has operator Orla Vance on line 2, not Bram Tolley` },
       {
@@ -115,7 +115,7 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
       'jar_label,grain,cook_run,inoculated_on,session,operator,outcome\nX-1,rye,CR,2026-03-02,S,Ann,clean\n',
     );
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([
+    expect(rejectionOf(res).errors).toEqual([
       { line: 1, column: 'cook_minutes', message: 'is missing from the header: it is a required column' },
       { line: 1, column: 'culture', message: 'is missing from the header: it is a required column' },
     ]);
@@ -128,12 +128,14 @@ describe('POST /api/imports/history — a whole file or nothing', () => {
     const short = `${good}${tag}-J2,rye,${tag}-CR,90,2026-03-02,${tag}-S,Orla Vance,${tag}-LC,clean,\n`;
     const res = await sup.post(short);
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([
-      { line: 3, column: '', message: expect.stringContaining('has 10 values but the header has 11') },
+    expect(rejectionOf(res).errors).toEqual([
+      { line: 3, column: '', message: expect.stringContaining('has 10 values but the header has 11') as string },
     ]);
     const quote = `${good}${tag}-J3,rye,${tag}-CR,90,2026-03-02,${tag}-S,"Orla "V" Vance",${tag}-LC,clean,,\n`;
     const bad = await sup.post(quote);
     expect(bad.status).toBe(422);
-    expect(bad.body.errors).toEqual([{ line: 3, column: '', message: expect.stringContaining('double quote') }]);
+    expect(rejectionOf(bad).errors).toEqual([
+      { line: 3, column: '', message: expect.stringContaining('double quote') as string },
+    ]);
   });
 });

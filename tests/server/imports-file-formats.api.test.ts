@@ -8,7 +8,8 @@ import { Jar } from '../../server/jars/jar.entity';
 import { InoculationSession } from '../../server/sessions/inoculation-session.entity';
 import { createTestApp } from '../setup/test-app';
 import { uniqueName } from '../setup/factories';
-import { counts, csv, errorsOf, importingSupervisor, row } from './imports.fixtures';
+import { counts, csv, errorsOf, importingSupervisor, rejectionOf, resultOf, row } from './imports.fixtures';
+import { issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 const supervisor = () => importingSupervisor(app);
@@ -71,7 +72,7 @@ describe('POST /api/imports/history — reading real exports', () => {
     ].join('\n');
     const res = await sup.post(file);
     expect(res.status).toBe(422);
-    expect(errorsOf(res.body)).toEqual(['7:inoculated_on', '9:outcome']);
+    expect(errorsOf(rejectionOf(res))).toEqual(['7:inoculated_on', '9:outcome']);
   });
 
   it('takes a multipart upload in the field file', async () => {
@@ -94,7 +95,7 @@ describe('POST /api/imports/history — reading real exports', () => {
         },
       );
     expect(res.status).toBe(200);
-    expect(res.body.imported).toEqual({ jars: 2, incidents: 1 });
+    expect(resultOf(res).imported).toEqual({ jars: 2, incidents: 1 });
   });
 
   it('answers 413 to a body or a multipart file over 10 MB', async () => {
@@ -107,7 +108,7 @@ describe('POST /api/imports/history — reading real exports', () => {
       .set('X-CSRF-Token', sup.token())
       .attach('file', big, { filename: 'big.csv', contentType: 'text/csv' });
     expect(multipart.status).toBe(413);
-    expect(multipart.body.error.issues[0].path).toBe('file');
+    expect(issuePath(multipart)).toBe('file');
     expect(await counts()).toEqual(before);
   });
 
@@ -122,6 +123,8 @@ describe('POST /api/imports/history — reading real exports', () => {
     ]);
     const res = await sup.post(latin1);
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([{ line: 3, column: '', message: expect.stringContaining('UTF-8') }]);
+    expect(rejectionOf(res).errors).toEqual([
+      { line: 3, column: '', message: expect.stringContaining('UTF-8') as string },
+    ]);
   });
 });

@@ -5,6 +5,8 @@ import { CookRun } from '../../server/cook-runs/cook-run.entity';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { postCsvAs, sendAs, signedIn, uniqueName } from '../setup/factories';
+import { runOf } from './cook-runs.fixtures';
+import { rejectionOf } from './imports.fixtures';
 
 // The history import writes through the cook-runs module's own insert, so the rules a run made on the
 // screen obeys hold for an imported one too: the F0 estimate from its minutes and its audit row.
@@ -49,8 +51,8 @@ describe('history import through the cook-runs module', () => {
     const imported = await dataSource.manager.findOneByOrFail(CookRun, { code: `${tag}-CR` });
     expect(imported.f0Source).toBe('estimate');
     expect(imported.f0).not.toBeNull();
-    expect(imported.f0).toBe(made.body.f0);
-    expect(imported.f0Source).toBe(made.body.f0Source);
+    expect(imported.f0).toBe(runOf(made).f0);
+    expect(imported.f0Source).toBe(runOf(made).f0Source);
   });
 
   it('records a create audit row for each imported run, by the importing supervisor', async () => {
@@ -68,7 +70,7 @@ describe('history import through the cook-runs module', () => {
     await sendAs(sup, 'post', '/api/cook-runs', screenRun(`${tag}-CR`, 60)).expect(201);
     const res = await postCsvAs(sup, '/api/imports/history', historyFile(tag, '90'));
     expect(res.status).toBe(422);
-    expect(res.body.errors.map((e: { column: string }) => e.column)).toContain('cook_minutes');
+    expect(rejectionOf(res).errors.map((e) => e.column)).toContain('cook_minutes');
     const [jar] = await dataSource.query<{ n: string }[]>('SELECT COUNT(*) AS n FROM jars WHERE label = ?', [
       `${tag}-J1`,
     ]);

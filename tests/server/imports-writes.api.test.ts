@@ -11,7 +11,7 @@ import { InoculationSession } from '../../server/sessions/inoculation-session.en
 import { localDate } from '../../server/core/local-time';
 import { createTestApp } from '../setup/test-app';
 import { uniqueName } from '../setup/factories';
-import { counts, csv, importingSupervisor, row, tables, type Row } from './imports.fixtures';
+import { counts, csv, importingSupervisor, resultOf, row, tables, type Row } from './imports.fixtures';
 
 const app = createTestApp();
 const supervisor = () => importingSupervisor(app);
@@ -170,6 +170,6 @@ describe('POST /api/imports/history — what is written', () => {
     }
     const res = await sup.post(lines.join('\n'));
     expect(res.status).toBe(200);
-    expect(res.body.imported).toEqual({ jars: 50_000, incidents: 2_000 });
+    expect(resultOf(res).imported).toEqual({ jars: 50_000, incidents: 2_000 });
   });
 });

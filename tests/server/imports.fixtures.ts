@@ -1,6 +1,12 @@
 import type { Express } from 'express';
-import { historyColumns, type ImportError } from '../../shared/schemas/imports';
+import {
+  historyColumns,
+  importRejectionSchema,
+  importResultSchema,
+  type ImportError,
+} from '../../shared/schemas/imports';
 import { dataSource } from '../../server/db/data-source';
+import { bodyOf } from '../setup/bodies';
 import { signedIn } from '../setup/factories';
 
 export type Row = Record<(typeof historyColumns)[number], string>;
@@ -53,3 +59,9 @@ export async function importingSupervisor(app: Express) {
 }
 
 export const errorsOf = (body: { errors: ImportError[] }) => body.errors.map((e) => `${e.line}:${e.column}`);
+
+/** A refused import: every bad line and column, nothing written. */
+export const rejectionOf = (res: { body: unknown }) => bodyOf(res, importRejectionSchema);
+
+/** What an accepted import wrote. */
+export const resultOf = (res: { body: unknown }) => bodyOf(res, importResultSchema);
