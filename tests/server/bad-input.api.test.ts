@@ -1,7 +1,10 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
+import { jarBatchResultSchema } from '../../shared/schemas/jars';
+import { rejectionOf } from './imports.fixtures';
 import { jarFixtures } from './jars.fixtures';
 import { postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -34,7 +37,7 @@ describe('sort names inherited from Object.prototype', () => {
     for (const name of inheritedNames) {
       const res = await admin.agent.get(url).query({ sort: name });
       expect({ url, name, status: res.status }).toEqual({ url, name, status: 400 });
-      expect(res.body.error.issues[0].path).toBe('sort');
+      expect(issuePath(res)).toBe('sort');
     }
   });
 });
@@ -56,7 +59,7 @@ describe('temperature log numbers out of physical range', () => {
     const csv = `minute,celsius\n0,100\n${'9'.repeat(400)},121\n`;
     const res = await postCsvAs(supervisor, `/api/cook-runs/${run.id}/readings`, csv);
     expect(res.status).toBe(422);
-    expect(res.body.error.issues[0].message).toMatch(/^line 3, minute: must be at most 2880 minutes/);
+    expect(errorOf(res).issues![0]!.message).toMatch(/^line 3, minute: must be at most 2880 minutes/);
   });
 
   it('answers 422 naming the line for a temperature beyond the physical range', async () => {
@@ -64,7 +67,7 @@ describe('temperature log numbers out of physical range', () => {
     const csv = `minute,celsius\n0,100\n1,1e400\n`;
     const res = await postCsvAs(supervisor, `/api/cook-runs/${run.id}/readings`, csv);
     expect(res.status).toBe(422);
-    expect(res.body.error.issues[0].message).toMatch(/^line 3, celsius:/);
+    expect(errorOf(res).issues![0]!.message).toMatch(/^line 3, celsius:/);
   });
 });
 
@@ -92,22 +95,27 @@ describe('dates and times', () => {
   ])('refuses %s as inoculatedAt with 400 naming the field', async (_what, value) => {
     const res = await batch(value);
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('inoculatedAt');
+    expect(issuePath(res)).toBe('inoculatedAt');
   });
 
   it('keeps the offset a time was written with', async () => {
     const res = await batch('2026-05-04T10:30:00+02:00');
     expect(res.status).toBe(201);
-    expect(new Date(res.body.jars[0].inoculatedAt).toISOString()).toBe('2026-05-04T08:30:00.000Z');
+    expect(new Date(bodyOf(res, jarBatchResultSchema).jars[0]!.inoculatedAt).toISOString()).toBe(
+      '2026-05-04T08:30:00.000Z',
+    );
   });
 
   it.each([true, -1, '2026-02-29T08:00:00Z'])('refuses %s as a jar event time', async (at) => {
     const made = await batch('2026-05-04T10:30:00Z');
-    const res = await sendAs(supervisor, 'post', `/api/jars/${made.body.jars[0].id}/events`, { type: 'shaken', at });
+    const res = await sendAs(supervisor, 'post', `/api/jars/${bodyOf(made, jarBatchResultSchema).jars[0]!.id}/events`, {
+      type: 'shaken',
+      at,
+    });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0]).toMatchObject({
+    expect(errorOf(res).issues![0]).toMatchObject({
       path: 'at',
-      message: expect.stringMatching(/^must be a date and time/),
+      message: expect.stringMatching(/^must be a date and time/) as string,
     });
   });
 
@@ -123,7 +131,7 @@ describe('dates and times', () => {
       ...over,
     });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0]).toEqual({ path: field, message: 'cannot be more than a day in the future' });
+    expect(errorOf(res).issues![0]).toEqual({ path: field, message: 'cannot be more than a day in the future' });
   });
 
   it('refuses an imported date more than a day ahead, naming line and column', async () => {
@@ -133,7 +141,7 @@ describe('dates and times', () => {
       `${tag}-1,rye,${tag}-CR,90,2099-01-01,${tag}-S,Invented Person,${tag}-LC,clean,,\n`;
     const res = await postCsvAs(supervisor, '/api/imports/history', csv);
     expect(res.status).toBe(422);
-    expect(res.body.errors).toEqual([
+    expect(rejectionOf(res).errors).toEqual([
       { line: 2, column: 'inoculated_on', message: '2099-01-01 is more than a day in the future' },
     ]);
   });
@@ -153,7 +161,7 @@ describe('multipart bodies that cannot be read', () => {
     it.each(uploads)(`%s answers 400 naming %s for ${what}`, async (url, field) => {
       const res = await admin.agent.post(url).set('X-CSRF-Token', admin.token()).set('Content-Type', type).send(body);
       expect(res.status).toBe(400);
-      expect(res.body.error).toMatchObject({ code: 'malformed-upload', issues: [{ path: field }] });
+      expect(errorOf(res)).toMatchObject({ code: 'malformed-upload', issues: [{ path: field }] });
     });
   }
 
@@ -165,6 +173,6 @@ describe('multipart bodies that cannot be read', () => {
       .set('Content-Type', 'multipart/form-data')
       .send('whatever');
     expect(res.status).toBe(400);
-    expect(res.body.error).toMatchObject({ code: 'malformed-upload', issues: [{ path: 'file' }] });
+    expect(errorOf(res)).toMatchObject({ code: 'malformed-upload', issues: [{ path: 'file' }] });
   });
 });

@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
+import { incidentOf } from './incidents-fixtures';
 import { signedIn } from '../setup/factories';
 import { eventsFor, newIncident, send } from './incidents-review.fixtures';
+import { issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -28,7 +30,7 @@ describe('audit events on every mutating route', () => {
     await send(tech, 'patch', `/api/incidents/${id}`, { version, notes: 'first' }).expect(200);
     const stale = await send(tech, 'patch', `/api/incidents/${id}`, { version, notes: 'second' });
     expect(stale.status).toBe(409);
-    expect(stale.body.error.issues[0].path).toBe('version');
+    expect(issuePath(stale)).toBe('version');
     expect((await eventsFor('incident', id)).filter((e) => e.action === 'update')).toHaveLength(1);
   });
 
@@ -45,17 +47,15 @@ describe('audit events on every mutating route', () => {
     });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ status: 'in-review', verdict: 'confirmed', causeCategory: 'machine' });
-    const review = res.body.history.filter((h: { action: string }) => h.action === 'review');
-    expect(
-      review.map((h: { field: string; oldValue: string; newValue: string }) => [h.field, h.oldValue, h.newValue]),
-    ).toEqual([
+    const review = incidentOf(res).history.filter((h) => h.action === 'review');
+    expect(review.map((h) => [h.field, h.oldValue, h.newValue])).toEqual([
       ['status', 'open', 'in-review'],
       ['verdict', 'pending', 'confirmed'],
       ['causeCategory', null, 'machine'],
       ['rootCauseNotes', null, 'gauge read low'],
     ]);
     expect(review[1]).toMatchObject({ userName: 'Test supervisor', reason: 'same run as three others' });
-    expect(Date.parse(review[1].at)).toBeGreaterThan(Date.now() - 60_000);
+    expect(Date.parse(review[1]!.at)).toBeGreaterThan(Date.now() - 60_000);
   });
 
   it('POST review enforces open → in review → closed and a verdict before closing', async () => {
@@ -64,16 +64,16 @@ describe('audit events on every mutating route', () => {
     const { id } = await newIncident(tech);
     const skip = await send(sup, 'post', `/api/incidents/${id}/review`, { status: 'closed', verdict: 'confirmed' });
     expect(skip.status).toBe(422);
-    expect(skip.body.error.issues[0].path).toBe('status');
+    expect(issuePath(skip)).toBe('status');
     await send(sup, 'post', `/api/incidents/${id}/review`, { status: 'in-review' }).expect(200);
     const pending = await send(sup, 'post', `/api/incidents/${id}/review`, { status: 'closed' });
     expect(pending.status).toBe(422);
-    expect(pending.body.error.issues[0].path).toBe('verdict');
+    expect(issuePath(pending)).toBe('verdict');
     await send(sup, 'post', `/api/incidents/${id}/review`, { status: 'closed', verdict: 'confirmed' }).expect(200);
     const edit = await send(sup, 'post', `/api/incidents/${id}/review`, { verdict: 'ruled-out' });
     expect(edit.status).toBe(422);
     const noReason = await send(sup, 'post', `/api/incidents/${id}/review`, { status: 'in-review' });
-    expect(noReason.body.error.issues[0].path).toBe('reason');
+    expect(issuePath(noReason)).toBe('reason');
     await send(sup, 'post', `/api/incidents/${id}/review`, {
       status: 'in-review',
       reason: 'new evidence from the agar test',

@@ -4,7 +4,7 @@ import { dataSource } from '../../server/db/data-source';
 import { jarIsContaminatedSql } from '../../server/incidents/live-incidents';
 import { Jar } from '../../server/jars/jar.entity';
 import type { signedIn } from '../setup/factories';
-import { makeJar, makeProduction } from './incidents-fixtures';
+import { incidentOf, makeJar, makeProduction } from './incidents-fixtures';
 
 export type Client = Awaited<ReturnType<typeof signedIn>>;
 
@@ -23,7 +23,8 @@ export async function newIncident(tech: Client, status: Jar['status'] = 'incubat
       sterilisedBeforeDisposal: false,
     });
   expect(res.status).toBe(201);
-  return { id: res.body.id as number, version: res.body.version as number, jar };
+  const { id, version } = incidentOf(res);
+  return { id, version, jar };
 }
 
 export const send = (c: Client, method: 'post' | 'patch', url: string, body: object) =>
@@ -31,7 +32,12 @@ export const send = (c: Client, method: 'post' | 'patch', url: string, body: obj
 export const jarStatus = async (id: number) => (await dataSource.manager.findOneByOrFail(Jar, { id })).status;
 export const isContaminated = async (id: number) =>
   Number(
-    (await dataSource.query(`SELECT ${jarIsContaminatedSql('j.id')} AS c FROM jars j WHERE j.id = ?`, [id]))[0].c,
+    (
+      await dataSource.query<{ c: number | string }[]>(
+        `SELECT ${jarIsContaminatedSql('j.id')} AS c FROM jars j WHERE j.id = ?`,
+        [id],
+      )
+    )[0]!.c,
   ) === 1;
 export const eventsFor = (recordType: string, recordId: number) =>
   dataSource.manager.find(AuditEvent, { where: { recordType, recordId: String(recordId) }, order: { id: 'ASC' } });

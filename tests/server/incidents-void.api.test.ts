@@ -1,7 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import { pageOf } from '../../shared/schemas/common';
+import { incidentListItemSchema } from '../../shared/schemas/incidents';
 import { createTestApp } from '../setup/test-app';
+import { incidentOf } from './incidents-fixtures';
 import { signedIn } from '../setup/factories';
 import { eventsFor, isContaminated, jarStatus, newIncident, send } from './incidents-review.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -14,10 +18,10 @@ describe('audit events on every mutating route', () => {
     expect(await isContaminated(jar.id)).toBe(true);
     const bad = await send(sup, 'post', `/api/incidents/${id}/void`, {});
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('reason');
+    expect(issuePath(bad)).toBe('reason');
     const res = await send(sup, 'post', `/api/incidents/${id}/void`, { reason: 'wrong jar scanned' });
     expect(res.body).toMatchObject({ voided: true, voidReason: 'wrong jar scanned' });
-    expect(res.body.history.at(-1)).toMatchObject({
+    expect(incidentOf(res).history.at(-1)).toMatchObject({
       action: 'void',
       field: 'voided',
       oldValue: 'false',
@@ -28,8 +32,13 @@ describe('audit events on every mutating route', () => {
     expect(await isContaminated(jar.id)).toBe(false);
     expect((await eventsFor('jar', jar.id)).map((e) => e.newValue)).toEqual(['contaminated', 'colonised']);
     const listed = await sup.agent.get(`/api/incidents?cookRunId=${jar.cookRunId}&voided=true`);
-    expect(listed.body.items.map((i: { id: number }) => i.id)).toEqual([id]);
-    expect((await sup.agent.get(`/api/incidents?cookRunId=${jar.cookRunId}&voided=false`)).body.total).toBe(0);
+    expect(bodyOf(listed, pageOf(incidentListItemSchema)).items.map((i) => i.id)).toEqual([id]);
+    expect(
+      bodyOf(
+        await sup.agent.get(`/api/incidents?cookRunId=${jar.cookRunId}&voided=false`),
+        pageOf(incidentListItemSchema),
+      ).total,
+    ).toBe(0);
     expect((await send(sup, 'post', `/api/incidents/${id}/void`, { reason: 'again' })).status).toBe(409);
     expect((await send(sup, 'post', `/api/incidents/${id}/review`, { verdict: 'confirmed' })).status).toBe(409);
   });
@@ -49,13 +58,13 @@ describe('audit events on every mutating route', () => {
     expect(second.status).toBe(201);
     await send(sup, 'post', `/api/incidents/${id}/void`, { reason: 'duplicate of the later report' }).expect(200);
     expect(await jarStatus(jar.id)).toBe('contaminated');
-    await send(sup, 'post', `/api/incidents/${second.body.id}/review`, {
+    await send(sup, 'post', `/api/incidents/${incidentOf(second).id}/review`, {
       verdict: 'ruled-out',
       reason: 'condensation, not yeast',
     }).expect(200);
     expect(await jarStatus(jar.id)).toBe('incubating');
     expect(await isContaminated(jar.id)).toBe(false);
-    await send(sup, 'post', `/api/incidents/${second.body.id}/review`, {
+    await send(sup, 'post', `/api/incidents/${incidentOf(second).id}/review`, {
       verdict: 'confirmed',
       reason: 'yeast grew on the agar',
     }).expect(200);

@@ -2,7 +2,9 @@ import QRCode from 'qrcode';
 import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
-import { batchBody, jarEvent, jarFixtures, makeJars } from './jars.fixtures';
+import { labelSheetRowSchema } from '../../shared/schemas/jar-labels';
+import { batchBody, jarEvent, jarFixtures, makeJars, storyOf } from './jars.fixtures';
+import { bodyOf, itemsOf } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -33,15 +35,16 @@ describe('the jar page, QR code and label sheet', () => {
 
     const res = await tech.agent.get(`/api/jars/by-label/${jar!.label}`);
     expect(res.status).toBe(200);
-    expect(res.body.jar).toMatchObject({ id: jar!.id, parentJarLabel: parent!.label, cookRunCode: cookRun.code });
-    expect(res.body.ancestry.map((a: { kind: string; label?: string; code?: string }) => a.label ?? a.code)).toEqual([
+    const story = storyOf(res);
+    expect(story.jar).toMatchObject({ id: jar!.id, parentJarLabel: parent!.label, cookRunCode: cookRun.code });
+    expect(story.ancestry.map((a) => (a.kind === 'jar' ? a.label : a.code))).toEqual([
       parent!.label,
       culture.code,
       parentCulture.code,
     ]);
-    expect(res.body.events.map((e: { type: string }) => e.type)).toEqual(['check', 'shaken']);
-    expect(res.body.pageUrl).toMatch(new RegExp(`/j/${jar!.label}$`));
-    const kinds = (res.body.timeline as { kind: string; at: string }[]).map((t) => t.kind);
+    expect(story.events.map((e) => e.type)).toEqual(['check', 'shaken']);
+    expect(story.pageUrl).toMatch(new RegExp(`/j/${jar!.label}$`));
+    const kinds = story.timeline.map((t) => t.kind);
     expect(kinds).toEqual([
       'culture',
       'culture',
@@ -53,11 +56,9 @@ describe('the jar page, QR code and label sheet', () => {
       'event',
       'event',
     ]);
-    const times = (res.body.timeline as { at: string }[]).map((t) =>
-      t.at.length === 10 ? `${t.at}T00:00:00.000Z` : t.at,
-    );
+    const times = story.timeline.map((t) => (t.at.length === 10 ? `${t.at}T00:00:00.000Z` : t.at));
     expect([...times].sort()).toEqual(times);
-    expect((await tech.agent.get(`/api/jars/${jar!.id}`)).body.jar.label).toBe(jar!.label);
+    expect(storyOf(await tech.agent.get(`/api/jars/${jar!.id}`)).jar.label).toBe(jar!.label);
   });
 
   it('draws a QR code that encodes the public jar address', async () => {
@@ -83,14 +84,15 @@ describe('the jar page, QR code and label sheet', () => {
     const jars = await makeJars(tech, body);
     const res = await tech.agent.get(`/api/jars/labels?sessionId=${body.sessionId}`);
     expect(res.status).toBe(200);
-    expect(res.body.items.map((l: { label: string }) => l.label)).toEqual(jars.map((j) => j.label));
-    expect(res.body.items[0]).toMatchObject({
+    const sheet = bodyOf(res, itemsOf(labelSheetRowSchema));
+    expect(sheet.items.map((l) => l.label)).toEqual(jars.map((j) => j.label));
+    expect(sheet.items[0]).toMatchObject({
       qrPath: `/api/jars/${jars[0]!.id}/qr.svg`,
       grain: 'rye',
       pageUrl: `http://127.0.0.1:5180/j/${jars[0]!.label}`,
     });
     const byIds = await tech.agent.get(`/api/jars/labels?ids=${jars[2]!.id},${jars[0]!.id}`);
-    expect(byIds.body.items.map((l: { id: number }) => l.id)).toEqual([jars[2]!.id, jars[0]!.id]);
+    expect(bodyOf(byIds, itemsOf(labelSheetRowSchema)).items.map((l) => l.id)).toEqual([jars[2]!.id, jars[0]!.id]);
   });
 
   it('exports the filtered jars as CSV', async () => {

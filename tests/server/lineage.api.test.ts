@@ -5,11 +5,14 @@ import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { dataSource } from '../../server/db/data-source';
 import { JarEvent } from '../../server/jars/jar-event.entity';
 import { Jar } from '../../server/jars/jar.entity';
+import { holdResultSchema } from '../../shared/schemas/jar-lineage';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { jarEvent, jarFixtures, makeJars, type JarRow } from './jars.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
+const holdOf = (res: { body: unknown }) => bodyOf(res, holdResultSchema);
 type Client = Awaited<ReturnType<typeof signedIn>>;
 
 interface Tree {
@@ -47,7 +50,7 @@ describe('lineage', () => {
       .set('X-CSRF-Token', sup.token())
       .send({});
     expect(noReason.status).toBe(400);
-    expect(noReason.body.error.issues[0].path).toBe('reason');
+    expect(issuePath(noReason)).toBe('reason');
     expect((await sup.agent.get('/api/lineage/culture/99999999')).status).toBe(404);
     expect((await sup.agent.get('/api/lineage/jar/99999999')).status).toBe(404);
     expect((await hold(sup, 'culture/99999999')).status).toBe(404);
@@ -80,8 +83,8 @@ describe('lineage', () => {
     const all = [...first, ...second];
     const res = await hold(sup, `culture/${culture.id}`);
     expect(res.status).toBe(200);
-    expect([...res.body.held].sort()).toEqual(all.map((j) => j.label).sort());
-    expect(res.body.recall).toEqual([]);
+    expect([...holdOf(res).held].sort()).toEqual(all.map((j) => j.label).sort());
+    expect(holdOf(res).recall).toEqual([]);
 
     const ids = all.map((j) => j.id);
     const jars = await dataSource.manager.findBy(Jar, { id: In(ids) });
@@ -102,8 +105,8 @@ describe('lineage', () => {
 
     // Holding again changes nothing and reports the jars as already held.
     const again = await hold(sup, `culture/${culture.id}`);
-    expect(again.body.held).toEqual([]);
-    expect(again.body.unchanged).toHaveLength(9);
+    expect(holdOf(again).held).toEqual([]);
+    expect(holdOf(again).unchanged).toHaveLength(9);
   });
 
   it('lists released descendants for recall, reaches jars of child cultures, and leaves ended jars alone', async () => {
@@ -130,11 +133,11 @@ describe('lineage', () => {
 
     const res = await hold(sup, `culture/${culture.id}`);
     expect(res.status).toBe(200);
-    expect([...res.body.held].sort()).toEqual([kept!.label, fromChild!.label].sort());
-    expect(res.body.recall).toEqual([
+    expect([...holdOf(res).held].sort()).toEqual([kept!.label, fromChild!.label].sort());
+    expect(holdOf(res).recall).toEqual([
       { label: sold!.label, releasedTo: 'customer', releasedToWho: 'Invented Growers Ltd', releasedOn: '2026-05-20' },
     ]);
-    expect(res.body.unchanged).toEqual([{ label: binned!.label, status: 'discarded' }]);
+    expect(holdOf(res).unchanged).toEqual([{ label: binned!.label, status: 'discarded' }]);
 
     const tree = (await sup.agent.get(`/api/lineage/culture/${culture.id}`)).body as Tree;
     const childNode = tree.children.find((c) => c.node.kind === 'culture')!;
@@ -148,7 +151,7 @@ describe('lineage', () => {
     const { first, second } = await threeGenerations(tech);
     const res = await hold(sup, `jar/${first[0]!.id}`, 'wet spot on a sibling transfer');
     expect(res.status).toBe(200);
-    expect([...res.body.held].sort()).toEqual([first[0]!, second[0]!, second[1]!].map((j) => j.label).sort());
+    expect([...holdOf(res).held].sort()).toEqual([first[0]!, second[0]!, second[1]!].map((j) => j.label).sort());
     expect((await dataSource.manager.findOneByOrFail(Jar, { id: first[1]!.id })).status).toBe('incubating');
   });
 });

@@ -2,8 +2,11 @@ import supertest from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/data-source';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
+import { pageOf } from '../../shared/schemas/common';
+import { userSchema } from '../../shared/schemas/users';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 const newUser = () => ({
@@ -31,10 +34,10 @@ describe('/api/users', () => {
     const res = await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(body);
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ username: body.username, role: 'technician', active: true });
-    expect(res.body.passwordHash).toBeUndefined();
+    expect(res.body).not.toHaveProperty('passwordHash');
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'user',
-      recordId: String(res.body.id),
+      recordId: String(bodyOf(res, userSchema).id),
       action: 'create',
     });
     expect(audit?.userName).toBe('Test admin');
@@ -46,7 +49,7 @@ describe('/api/users', () => {
     await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(body).expect(201);
     const res = await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(body);
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('username');
+    expect(issuePath(res)).toBe('username');
   });
 
   it('answers 400 naming the field for a bad role', async () => {
@@ -56,7 +59,7 @@ describe('/api/users', () => {
       .set('X-CSRF-Token', admin.token())
       .send({ ...newUser(), role: 'owner' });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('role');
+    expect(issuePath(res)).toBe('role');
   });
 
   it('answers 404 for an unknown user id', async () => {
@@ -71,14 +74,15 @@ describe('/api/users', () => {
   it('changes the role with an audit event holding old and new value', async () => {
     const admin = await signedIn(app, 'admin');
     const created = await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(newUser());
+    const { id } = bodyOf(created, userSchema);
     const res = await admin.agent
-      .patch(`/api/users/${created.body.id}`)
+      .patch(`/api/users/${id}`)
       .set('X-CSRF-Token', admin.token())
       .send({ role: 'supervisor' });
-    expect(res.body.role).toBe('supervisor');
+    expect(bodyOf(res, userSchema).role).toBe('supervisor');
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'user',
-      recordId: String(created.body.id),
+      recordId: String(id),
       field: 'role',
     });
     expect(audit).toMatchObject({ oldValue: 'technician', newValue: 'supervisor' });
@@ -90,9 +94,10 @@ describe('/api/users', () => {
       await admin.agent.post('/api/users').set('X-CSRF-Token', admin.token()).send(newUser());
     const res = await admin.agent.get('/api/users?page=1&pageSize=2&sort=-username');
     expect(res.status).toBe(200);
-    expect(res.body.items).toHaveLength(2);
-    expect(res.body.total).toBeGreaterThanOrEqual(4);
-    const names = res.body.items.map((u: { username: string }) => u.username);
+    const page = bodyOf(res, pageOf(userSchema));
+    expect(page.items).toHaveLength(2);
+    expect(page.total).toBeGreaterThanOrEqual(4);
+    const names = page.items.map((u) => u.username);
     expect([...names].sort().reverse()).toEqual(names);
     expect((await admin.agent.get('/api/users?pageSize=500')).status).toBe(400);
   });
@@ -104,7 +109,7 @@ describe('/api/users', () => {
       .set('X-CSRF-Token', admin.token())
       .send({ active: false });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('active');
+    expect(issuePath(res)).toBe('active');
   });
 });
 
