@@ -3,6 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { newIncident, send, type Client } from './incidents-review.fixtures';
+import { csrfSchema } from '../../shared/schemas/auth';
+import { correctiveActionSchema } from '../../shared/schemas/corrective-actions';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -37,7 +40,12 @@ describe('roles on every incident route', () => {
       ['void', 'post', `/api/incidents/${id}/void`, { reason: 'entered twice' }],
       ['photos', 'post', `/api/incidents/${id}/photos`, { photoIds: [1] }],
       ['action', 'post', `/api/incidents/${id}/actions`, { what: 'Retrain', ownerName: 'A', dueOn: '2030-01-01' }],
-      ['action edit', 'patch', `/api/corrective-actions/${action.body.id}`, { what: 'Retrain twice' }],
+      [
+        'action edit',
+        'patch',
+        `/api/corrective-actions/${bodyOf(action, correctiveActionSchema).id}`,
+        { what: 'Retrain twice' },
+      ],
     ];
     const forbiddenFor: Record<string, Client[]> = {
       create: [trainer],
@@ -69,7 +77,7 @@ describe('roles on every incident route', () => {
 
   it('answers 401 to a valid CSRF token without a session', async () => {
     const agent = supertest.agent(app);
-    const token = (await agent.get('/api/auth/csrf')).body.token as string;
+    const { token } = bodyOf(await agent.get('/api/auth/csrf'), csrfSchema);
     expect(
       (await agent.post('/api/incidents/1/review').set('X-CSRF-Token', token).send({ verdict: 'confirmed' })).status,
     ).toBe(401);

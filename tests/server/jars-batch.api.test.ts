@@ -2,9 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { dataSource } from '../../server/db/data-source';
 import { Jar } from '../../server/jars/jar.entity';
+import { jarBatchResultSchema } from '../../shared/schemas/jars';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { batchBody, jarEvent, jarFixtures, labelNumber, labelPrefix, makeJars } from './jars.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -14,14 +16,7 @@ describe('POST /api/jars/batch', () => {
     const body = await batchBody({ count: 12, room: 'Incubation A', shelf: `S-${Date.now()}`, inoculumMl: 2 });
     const res = await tech.agent.post('/api/jars/batch').set('X-CSRF-Token', tech.token()).send(body);
     expect(res.status).toBe(201);
-    const jars = res.body.jars as {
-      id: number;
-      label: string;
-      shelfPosition: number;
-      status: string;
-      inoculumMl: number;
-      sessionCode: string;
-    }[];
+    const { jars } = bodyOf(res, jarBatchResultSchema);
     expect(jars).toHaveLength(12);
     const first = labelNumber(jars[0]!.label);
     // The format follows the lab's latest numbered label (jar-labels.api.test.ts checks that rule).
@@ -65,8 +60,9 @@ describe('POST /api/jars/batch', () => {
       .set('X-CSRF-Token', tech.token())
       .send(await batchBody({ sessionId: session.id, count: 1, inoculatedAt: '2026-06-30T23:30:00Z' }));
     expect(res.status).toBe(201);
-    expect(res.body.jars[0].inoculatedOn).toBe('2026-07-01');
-    expect(res.body.warnings).toEqual([]);
+    const made = bodyOf(res, jarBatchResultSchema);
+    expect(made.jars[0]!.inoculatedOn).toBe('2026-07-01');
+    expect(made.warnings).toEqual([]);
   });
 
   it('takes the grain from the prep batch and warns about a quarantined culture and a date that is not the session day', async () => {
@@ -86,10 +82,11 @@ describe('POST /api/jars/batch', () => {
         }),
       );
     expect(res.status).toBe(201);
-    expect(res.body.jars[0]).toMatchObject({ grain: 'sorghum', prepBatchCode: batch.code, cultureCode: culture.code });
-    expect(res.body.warnings).toHaveLength(2);
-    expect(res.body.warnings[0]).toContain(`Culture ${culture.code} is quarantined`);
-    expect(res.body.warnings[1]).toContain('2026-05-04');
+    const made = bodyOf(res, jarBatchResultSchema);
+    expect(made.jars[0]).toMatchObject({ grain: 'sorghum', prepBatchCode: batch.code, cultureCode: culture.code });
+    expect(made.warnings).toHaveLength(2);
+    expect(made.warnings[0]).toContain(`Culture ${culture.code} is quarantined`);
+    expect(made.warnings[1]).toContain('2026-05-04');
   });
 
   it('answers 400 naming the field for a bad body', async () => {
@@ -109,7 +106,7 @@ describe('POST /api/jars/batch', () => {
     const got = [];
     for (const [body, path] of cases) {
       const res = await tech.agent.post('/api/jars/batch').set('X-CSRF-Token', tech.token()).send(body);
-      got.push([path, res.status, res.body.error.issues[0].path]);
+      got.push([path, res.status, issuePath(res)]);
     }
     expect(got).toEqual(cases.map(([, path]) => [path, 400, path]));
   });
@@ -124,7 +121,7 @@ describe('POST /api/jars/batch', () => {
         field === 'parentJarId' ? { cultureId: undefined, parentJarId: 99999999 } : { [field]: 99999999 },
       );
       const res = await tech.agent.post('/api/jars/batch').set('X-CSRF-Token', tech.token()).send(body);
-      got.push([field, res.status, res.body.error.issues[0].path]);
+      got.push([field, res.status, issuePath(res)]);
     }
     expect(got).toEqual(fields.map((f) => [f, 422, f]));
     expect(await dataSource.manager.count(Jar)).toBe(before);
@@ -139,6 +136,6 @@ describe('POST /api/jars/batch', () => {
       .set('X-CSRF-Token', tech.token())
       .send(await batchBody({ cultureId: undefined, parentJarId: parent!.id }));
     expect(res.status).toBe(409);
-    expect(res.body.error.issues[0].path).toBe('parentJarId');
+    expect(issuePath(res)).toBe('parentJarId');
   });
 });

@@ -2,8 +2,11 @@ import supertest from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { dataSource } from '../../server/db/data-source';
+import { meSchema } from '../../shared/schemas/auth';
+import { passwordResetSchema } from '../../shared/schemas/users';
 import { csrfAgent, createTestApp } from '../setup/test-app';
 import { makeUser, sendAs, signedIn, testPassword } from '../setup/factories';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -36,7 +39,7 @@ describe('POST /api/users/:id/password-reset', () => {
     const target = await makeUser('technician');
     const res = await sendAs(admin, 'post', `/api/users/${target.id}/password-reset`, { temporaryPassword: 'short' });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('temporaryPassword');
+    expect(issuePath(res)).toBe('temporaryPassword');
   });
 
   it('answers 404 for a user that does not exist', async () => {
@@ -50,18 +53,19 @@ describe('POST /api/users/:id/password-reset', () => {
     const before = await signIn(target.username, testPassword);
     const res = await sendAs(admin, 'post', `/api/users/${target.id}/password-reset`, {});
     expect(res.status).toBe(200);
-    expect(res.body.generatedPassword).toMatch(/^[A-Za-z2-9]{14}$/);
-    expect(res.body.user).toMatchObject({ id: target.id, mustChangePassword: true });
+    const reset = bodyOf(res, passwordResetSchema);
+    expect(reset.generatedPassword).toMatch(/^[A-Za-z2-9]{14}$/);
+    expect(reset.user).toMatchObject({ id: target.id, mustChangePassword: true });
     expect((await before.client.agent.get('/api/auth/me')).status).toBe(401);
     expect((await signIn(target.username, testPassword)).res.status).toBe(401);
-    expect((await signIn(target.username, res.body.generatedPassword as string)).res.status).toBe(200);
+    expect((await signIn(target.username, reset.generatedPassword!)).res.status).toBe(200);
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'user',
       recordId: String(target.id),
       action: 'reset-password',
     });
     expect(audit?.userName).toBe('Test admin');
-    expect(audit?.newValue).not.toContain(res.body.generatedPassword as string);
+    expect(audit?.newValue).not.toContain(reset.generatedPassword!);
   });
 
   it('holds every other route at 403 password-change-required until the person sets a new password', async () => {
@@ -69,25 +73,25 @@ describe('POST /api/users/:id/password-reset', () => {
     const target = await makeUser('technician');
     const temporaryPassword = 'temporary-pass-123';
     const reset = await sendAs(admin, 'post', `/api/users/${target.id}/password-reset`, { temporaryPassword });
-    expect(reset.body.generatedPassword).toBeNull();
+    expect(bodyOf(reset, passwordResetSchema).generatedPassword).toBeNull();
     const { client, res } = await signIn(target.username, temporaryPassword);
-    expect(res.body.mustChangePassword).toBe(true);
-    expect((await client.agent.get('/api/auth/me')).body.mustChangePassword).toBe(true);
+    expect(bodyOf(res, meSchema).mustChangePassword).toBe(true);
+    expect(bodyOf(await client.agent.get('/api/auth/me'), meSchema).mustChangePassword).toBe(true);
     const held = await client.agent.get('/api/jars');
     expect(held.status).toBe(403);
-    expect(held.body.error.code).toBe('password-change-required');
+    expect(errorOf(held).code).toBe('password-change-required');
     const same = await sendAs({ ...client, user: target }, 'post', '/api/auth/password', {
       currentPassword: temporaryPassword,
       newPassword: temporaryPassword,
     });
     expect(same.status).toBe(400);
-    expect(same.body.error.issues[0].path).toBe('newPassword');
+    expect(issuePath(same)).toBe('newPassword');
     const changed = await sendAs({ ...client, user: target }, 'post', '/api/auth/password', {
       currentPassword: temporaryPassword,
       newPassword: 'my-own-new-password',
     });
     expect(changed.status).toBe(204);
-    expect((await client.agent.get('/api/auth/me')).body.mustChangePassword).toBe(false);
+    expect(bodyOf(await client.agent.get('/api/auth/me'), meSchema).mustChangePassword).toBe(false);
     expect((await client.agent.get('/api/jars')).status).toBe(200);
     expect((await signIn(target.username, temporaryPassword)).res.status).toBe(401);
   });
@@ -96,7 +100,7 @@ describe('POST /api/users/:id/password-reset', () => {
     const admin = await signedIn(app, 'admin');
     const res = await sendAs(admin, 'post', `/api/users/${admin.user.id}/password-reset`, {});
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('temporaryPassword');
+    expect(issuePath(res)).toBe('temporaryPassword');
   });
 });
 
@@ -106,7 +110,7 @@ describe('PATCH /api/users/:id name and e-mail', () => {
     const target = await makeUser('trainer');
     const bad = await sendAs(admin, 'patch', `/api/users/${target.id}`, { email: 'not-an-address' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('email');
+    expect(issuePath(bad)).toBe('email');
     const res = await sendAs(admin, 'patch', `/api/users/${target.id}`, {
       displayName: 'Renamed Person',
       email: 'renamed@example.invalid',
