@@ -94,12 +94,6 @@ export default tseslint.config(
       ...vitest.configs.recommended.rules,
       'vitest/expect-expect': ['error', { assertFunctionNames: ['expect', 'expect*', '*.expect'] }],
       '@typescript-eslint/no-non-null-assertion': 'off',
-      // supertest types every answer's body as any; the tests read it only to compare it in expect().
-      '@typescript-eslint/no-unsafe-assignment': 'off',
-      '@typescript-eslint/no-unsafe-member-access': 'off',
-      '@typescript-eslint/no-unsafe-argument': 'off',
-      '@typescript-eslint/no-unsafe-call': 'off',
-      '@typescript-eslint/no-unsafe-return': 'off',
     },
   },
   { files: ['eslint.config.js'], ...tseslint.configs.disableTypeChecked },

@@ -3,6 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { all, plantHistory } from './analysis.fixtures';
+import { errorOf } from '../setup/bodies';
 
 const app = createTestApp();
 let reader: Awaited<ReturnType<typeof signedIn>>;
@@ -49,7 +50,7 @@ describe('GET /api/analysis/* — access and input', () => {
   ])('answers 400 naming the field for %s', async (url, field) => {
     const res = await reader.agent.get(url);
     expect(res.status).toBe(400);
-    expect(res.body.error.code).toBe('invalid-input');
-    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(field);
+    expect(errorOf(res).code).toBe('invalid-input');
+    expect(errorOf(res).issues!.map((i: { path: string }) => i.path)).toContain(field);
   });
 });

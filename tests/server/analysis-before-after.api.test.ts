@@ -8,6 +8,7 @@ import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { grainId, insertCookRun, insertIncident, insertJars } from './analysis-rows.fixtures';
 import { addDays, clearProduction } from './analysis-planted.fixture';
+import { issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 let reader: Awaited<ReturnType<typeof signedIn>>;
@@ -76,10 +77,10 @@ describe('GET /api/analysis/before-after', () => {
     expect((await reader.agent.get('/api/analysis/before-after?actionId=999999')).status).toBe(404);
     const res = await reader.agent.get(`/api/analysis/before-after?actionId=${bareActionId}`);
     expect(res.status).toBe(422);
-    expect(res.body.error.issues[0].path).toBe('actionId');
+    expect(issuePath(res)).toBe('actionId');
     const bad = await reader.agent.get('/api/analysis/before-after?actionId=x');
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('actionId');
+    expect(issuePath(bad)).toBe('actionId');
   });
 
   it('previews an open action as if done on the day being entered, so closing it shows its before/after', async () => {
@@ -99,10 +100,10 @@ describe('GET /api/analysis/before-after', () => {
     expect(body.ci95[0]).toBeCloseTo(0.0524, 4);
     const future = await reader.agent.get(`/api/analysis/before-after?actionId=${openId}&doneOn=2999-01-01`);
     expect(future.status).toBe(422);
-    expect(future.body.error.issues[0].path).toBe('doneOn');
+    expect(issuePath(future)).toBe('doneOn');
     const bad = await reader.agent.get(`/api/analysis/before-after?actionId=${openId}&doneOn=15.06.2025`);
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('doneOn');
+    expect(issuePath(bad)).toBe('doneOn');
   });
 
   it('waits for the after-period to settle: recent jars count for nothing yet, and the days remaining are given', async () => {
@@ -163,7 +164,7 @@ describe('GET /api/analysis/before-after', () => {
       )
     ).body as JarsBehindDto;
     expect(page2.items).toHaveLength(6);
-    expect((await reader.agent.get('/api/analysis/jars?factor=cookRun')).body.error.issues[0].path).toBe('level');
+    expect(issuePath(await reader.agent.get('/api/analysis/jars?factor=cookRun'))).toBe('level');
   });
 
   it('links each contaminated jar to its incident, and narrows by a second factor', async () => {
@@ -184,6 +185,6 @@ describe('GET /api/analysis/before-after', () => {
     expect(week.items.every((j) => j.label.startsWith('PX-BA-A'))).toBe(true);
     const half = await reader.agent.get(`${base}&factor2=week`);
     expect(half.status).toBe(400);
-    expect(half.body.error.issues[0].path).toBe('level2');
+    expect(issuePath(half)).toBe('level2');
   });
 });

@@ -12,6 +12,7 @@ import {
   recentJars,
   type HistoryJar,
 } from './analysis-planted.fixture';
+import { resultOf } from './imports.fixtures';
 
 export const today = localDate(new Date());
 export const RECENT_DAYS_AGO = 3;
@@ -91,7 +92,7 @@ export async function plantHistory(app: Express) {
     .set('Content-Type', 'text/csv')
     .send(historyCsv(all));
   if (res.status !== 200) throw new Error(`import failed: ${JSON.stringify(res.body).slice(0, 500)}`);
-  const imported: unknown = res.body.imported;
+  const { imported } = resultOf(res);
   const reader = await signedIn(app, 'technician');
   return { imported, reader };
 }

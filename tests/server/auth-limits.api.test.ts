@@ -8,6 +8,7 @@ import { config } from '../../server/core/config';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp, csrfAgent } from '../setup/test-app';
 import { makeUser, signedIn, testPassword, uniqueName } from '../setup/factories';
+import { errorOf } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -107,7 +108,7 @@ describe('anonymous traffic', () => {
       password: 'y',
     });
     expect(res.status).toBe(403);
-    expect(res.body.error.code).toBe('csrf-invalid');
+    expect(errorOf(res).code).toBe('csrf-invalid');
   });
 });
 

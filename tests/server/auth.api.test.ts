@@ -4,6 +4,8 @@ import { LoginFailure } from '../../server/auth/login-failure.entity';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp, csrfAgent } from '../setup/test-app';
 import { makeUser, signedIn, testPassword, uniqueName } from '../setup/factories';
+import { bodyOf, errorOf, issuePath } from '../setup/bodies';
+import { meSchema } from '../../shared/schemas/auth';
 
 const app = createTestApp();
 
@@ -24,7 +26,7 @@ describe('POST /api/auth/login', () => {
     expect(res.headers['set-cookie']?.[0]).not.toMatch(/Secure/);
     const me = await agent.get('/api/auth/me');
     expect(me.status).toBe(200);
-    expect(me.body.username).toBe(user.username);
+    expect(bodyOf(me, meSchema).username).toBe(user.username);
   });
 
   it('answers 401 with a clear code for a wrong password', async () => {
@@ -35,14 +37,14 @@ describe('POST /api/auth/login', () => {
       .set('X-CSRF-Token', token())
       .send({ username: user.username, password: 'wrong-password' });
     expect(res.status).toBe(401);
-    expect(res.body.error.code).toBe('invalid-credentials');
+    expect(errorOf(res).code).toBe('invalid-credentials');
   });
 
   it('answers 400 naming the field when the username is missing', async () => {
     const { agent, token } = await csrfAgent(app);
     const res = await agent.post('/api/auth/login').set('X-CSRF-Token', token()).send({ password: 'x' });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('username');
+    expect(issuePath(res)).toBe('username');
   });
 
   it('refuses a deactivated user', async () => {
@@ -109,7 +111,7 @@ describe('CSRF', () => {
   it('refuses a state-changing request without the token with 403, before authentication', async () => {
     const res = await supertest(app).post('/api/auth/logout');
     expect(res.status).toBe(403);
-    expect(res.body.error.code).toBe('csrf-invalid');
+    expect(errorOf(res).code).toBe('csrf-invalid');
   });
 
   it('answers 401 to a valid token without a session', async () => {
@@ -136,7 +138,7 @@ describe('sessions', () => {
   it('answers 401 on /me without a session', async () => {
     const res = await supertest(app).get('/api/auth/me');
     expect(res.status).toBe(401);
-    expect(res.body.error.code).toBe('unauthenticated');
+    expect(errorOf(res).code).toBe('unauthenticated');
   });
 
   it('keeps a session across a new app instance (sessions live in MariaDB)', async () => {
@@ -177,6 +179,6 @@ describe('POST /api/auth/password', () => {
       .set('X-CSRF-Token', client.token())
       .send({ currentPassword: 'not-it', newPassword: 'a-brand-new-secret' });
     expect(res.status).toBe(400);
-    expect(res.body.error.issues[0].path).toBe('currentPassword');
+    expect(issuePath(res)).toBe('currentPassword');
   });
 });

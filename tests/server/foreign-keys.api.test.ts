@@ -8,7 +8,10 @@ import { grainId, makeCookRun, makeJars } from '../setup/lab-rows';
 /** Far above any id a test makes, so it points at no row. */
 const MISSING_ID = 4_000_000_001;
 
-const insertJar = async (cookRunId: number, run = (sql: string, p: unknown[]) => dataSource.query(sql, p)) =>
+const insertJar = async (
+  cookRunId: number,
+  run: (sql: string, p: unknown[]) => Promise<unknown> = (sql, p) => dataSource.query(sql, p),
+) =>
   run('INSERT INTO jars (label, grainId, cookRunId, inoculatedAt, inoculatedOn) VALUES (?, ?, ?, NOW(), CURDATE())', [
     uniqueName('FK'),
     await grainId(),

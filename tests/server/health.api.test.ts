@@ -26,7 +26,7 @@ describe('schema', () => {
   });
 
   it('round-trips a four-byte character (utf8mb4)', async () => {
-    const [row] = await dataSource.query("SELECT '🍄 jar' AS v");
-    expect(row.v).toBe('🍄 jar');
+    const [row] = await dataSource.query<{ v: string }[]>("SELECT '🍄 jar' AS v");
+    expect(row!.v).toBe('🍄 jar');
   });
 });

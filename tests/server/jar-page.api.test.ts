@@ -69,7 +69,7 @@ describe('GET /j/:label, the page a jar QR code opens', () => {
     expect(res.status).toBe(200);
     const reads = readsIn(res.text);
     expect(reads?.me.username).toBe(tech.user.username);
-    expect(reads?.settings).toMatchObject({ timeZone: expect.any(String) });
+    expect(reads?.settings).toMatchObject({ timeZone: expect.any(String) as string });
     expect(reads?.jar).toBeUndefined();
     expect(preloads(res.text)).toEqual(['/api/jars/by-label/NO-SUCH-JAR-9']);
   });

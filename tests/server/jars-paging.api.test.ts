@@ -5,8 +5,12 @@ import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 import { jarFixtures } from './jars.fixtures';
+import { pageOf } from '../../shared/schemas/common';
+import { jarRowSchema } from '../../shared/schemas/jars';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
+const jarPageSchema = pageOf(jarRowSchema);
 const total = 5000;
 const prefix = uniqueName('PG').toUpperCase();
 const grainNames = ['rye', 'sorghum', 'millet', 'wheat'];
@@ -88,12 +92,7 @@ beforeAll(async () => {
 async function page(query: string) {
   const res = await client.agent.get(`/api/jars?q=${prefix}&${query}`);
   if (res.status !== 200) throw new Error(`${query}: ${res.status} ${JSON.stringify(res.body)}`);
-  return res.body as {
-    items: { id: number; label: string; grain: string; status: string }[];
-    total: number;
-    page: number;
-    pageSize: number;
-  };
+  return bodyOf(res, jarPageSchema);
 }
 
 describe('GET /api/jars over 5,000 jars', () => {
@@ -186,7 +185,7 @@ describe('GET /api/jars over 5,000 jars', () => {
     expect(want.every((w) => w.total > 0)).toBe(true);
     expect(got).toEqual(want);
     const q = await client.agent.get(`/api/jars?q=${prefix}-0499`);
-    expect(q.body.total).toBe(10);
+    expect(bodyOf(q, jarPageSchema).total).toBe(10);
   });
 
   it('exports every filtered jar, not just one page', async () => {

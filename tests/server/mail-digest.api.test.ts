@@ -8,6 +8,8 @@ import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { makeIncident, makeJars } from '../setup/lab-rows';
 import { mailsTo } from '../setup/mail-sink';
+import { digestResultSchema } from '../../shared/schemas/mail';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -164,9 +166,10 @@ describe('weekly digest', () => {
     const res = await admin.agent.post('/api/mail/digest').set('X-CSRF-Token', admin.token());
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ skipped: false, failed: 0 });
-    expect(res.body.week).toMatch(/^\d{4}-W\d{2}$/);
-    expect(
-      mailsTo(admin.user.email!).filter((m) => m.subject === `Weekly contamination digest: ${res.body.week}`),
-    ).toHaveLength(1);
+    const { week } = bodyOf(res, digestResultSchema);
+    expect(week).toMatch(/^\d{4}-W\d{2}$/);
+    expect(mailsTo(admin.user.email!).filter((m) => m.subject === `Weekly contamination digest: ${week}`)).toHaveLength(
+      1,
+    );
   });
 });

@@ -5,6 +5,8 @@ import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { optOut } from './mail.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
+import { mailPreferencesSchema } from '../../shared/schemas/mail';
 
 const app = createTestApp();
 
@@ -25,8 +27,8 @@ describe('/api/mail/preferences', () => {
       'action-overdue': true,
     });
     const res = await optOut(tech, { 'weekly-digest': false });
-    expect(res.body['weekly-digest']).toBe(false);
-    expect((await tech.agent.get('/api/mail/preferences')).body['weekly-digest']).toBe(false);
+    expect(bodyOf(res, mailPreferencesSchema)['weekly-digest']).toBe(false);
+    expect(bodyOf(await tech.agent.get('/api/mail/preferences'), mailPreferencesSchema)['weekly-digest']).toBe(false);
     const audit = await dataSource.manager.findOneBy(AuditEvent, {
       recordType: 'user',
       recordId: String(tech.user.id),
@@ -39,7 +41,7 @@ describe('/api/mail/preferences', () => {
       .set('X-CSRF-Token', tech.token())
       .send({ retraining: 'no' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('retraining');
+    expect(issuePath(bad)).toBe('retraining');
     const unknown = await tech.agent.put('/api/mail/preferences').set('X-CSRF-Token', tech.token()).send({ sms: true });
     expect(unknown.status).toBe(400);
   });

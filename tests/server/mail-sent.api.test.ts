@@ -4,6 +4,9 @@ import { notifyIncidentCreated } from '../../server/mail/incident-mail.service';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { makeIncident, makeJars } from '../setup/lab-rows';
+import { pageOf } from '../../shared/schemas/common';
+import { sentMailDetailSchema, sentMailSchema } from '../../shared/schemas/mail';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
 
@@ -24,12 +27,12 @@ describe('/api/mail/sent', () => {
     const incident = await makeIncident(jars, { foundOn: '2024-06-10' });
     await notifyIncidentCreated(incident.id);
     const res = await admin.agent.get('/api/mail/sent?kind=new-incident&pageSize=200').expect(200);
-    const row = res.body.items.find(
-      (m: { to: string; subject: string }) => m.to === sup.user.email && m.subject.includes(`#${incident.id}`),
+    const row = bodyOf(res, pageOf(sentMailSchema)).items.find(
+      (m) => m.to === sup.user.email && m.subject.includes(`#${incident.id}`),
     );
     expect(row).toMatchObject({ kind: 'new-incident', status: 'sent', toUserId: sup.user.id });
-    const detail = await admin.agent.get(`/api/mail/sent/${row.id}`).expect(200);
-    expect(detail.body.text).toContain(jars[0]!.label);
+    const detail = await admin.agent.get(`/api/mail/sent/${row!.id}`).expect(200);
+    expect(bodyOf(detail, sentMailDetailSchema).text).toContain(jars[0]!.label);
     expect((await admin.agent.get('/api/mail/sent/999999')).status).toBe(404);
     expect((await admin.agent.get('/api/mail/sent?status=lost')).status).toBe(400);
   });

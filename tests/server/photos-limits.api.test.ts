@@ -4,6 +4,8 @@ import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, type Client } from '../setup/factories';
 import { blackPng, makeWebp, pngBombHeader } from '../setup/images';
+import { errorOf } from '../setup/bodies';
+import { photosOf } from './incidents-fixtures';
 
 const app = createTestApp();
 
@@ -24,16 +26,16 @@ describe('pixel limit, read from the header before decoding', () => {
     const before = await dataSource.manager.count(Photo);
     const res = await upload(bytes(), 'bomb.png');
     expect(res.status).toBe(422);
-    expect(res.body.error.code).toBe('too-many-pixels');
-    expect(res.body.error.message).toContain(size);
-    expect(res.body.error.issues[0]).toEqual({ path: 'photos.0', message: 'may have at most 40 megapixels' });
+    expect(errorOf(res).code).toBe('too-many-pixels');
+    expect(errorOf(res).message).toContain(size);
+    expect(errorOf(res).issues![0]).toEqual({ path: 'photos.0', message: 'may have at most 40 megapixels' });
     expect(await dataSource.manager.count(Photo)).toBe(before);
   });
 
   it('still takes a photo just under the limit', async () => {
     const res = await upload(blackPng(1000, 800), 'small.png');
     expect(res.status).toBe(201);
-    expect(res.body[0]).toMatchObject({ mime: 'image/png', width: 1000, height: 800 });
+    expect(photosOf(res)[0]).toMatchObject({ mime: 'image/png', width: 1000, height: 800 });
   });
 });
 
@@ -41,8 +43,9 @@ describe('WebP photos', () => {
   it('stores a WebP with its size and a JPEG thumbnail', async () => {
     const res = await upload(await makeWebp(640, 360), 'shelf.webp');
     expect(res.status).toBe(201);
-    expect(res.body[0]).toMatchObject({ mime: 'image/webp', width: 640, height: 360 });
-    const thumb = await tech.agent.get(res.body[0].thumbUrl);
+    const [photo] = photosOf(res);
+    expect(photo).toMatchObject({ mime: 'image/webp', width: 640, height: 360 });
+    const thumb = await tech.agent.get(photo!.thumbUrl);
     expect(thumb.status).toBe(200);
     expect(thumb.headers['content-type']).toBe('image/jpeg');
   });

@@ -19,7 +19,9 @@ export const newProcedure = () => ({ code: uniqueName('P'), title: 'Sterile tech
 export async function create(client: Client, body: object = newProcedure()) {
   const res = await client.agent.post('/api/procedures').set('X-CSRF-Token', client.token()).send(body);
   expect(res.status).toBe(201);
-  return bodyOf(res, procedureDetailSchema);
+  const procedure = bodyOf(res, procedureDetailSchema);
+  // A new procedure is published as its version 1 at once, so it always has a current version.
+  return { ...procedure, currentVersionId: procedure.currentVersionId! };
 }
 
 export async function stepsOf(client: Client, versionId: number) {

@@ -7,6 +7,8 @@ import { ClusterAlert } from '../../server/mail/cluster-alert.entity';
 import { createTestApp } from '../setup/test-app';
 import { sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 import { makeCookRun, makeIncident, makeJars } from '../setup/lab-rows';
+import { correctiveActionSchema } from '../../shared/schemas/corrective-actions';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
 // Every active supervisor is mailed on each new incident: the people made here leave when the file ends,
@@ -47,7 +49,7 @@ describe('GET /api/queue', () => {
     const ids = q.incidentsToReview.items.map((i) => i.id);
     expect(ids[0]).toBe(older.id);
     expect(q.incidentsToReview.total).toBeGreaterThanOrEqual(2);
-    expect(q.actionsOverdue.items.find((a) => a.id === action.body.id)).toMatchObject({
+    expect(q.actionsOverdue.items.find((a) => a.id === bodyOf(action, correctiveActionSchema).id)).toMatchObject({
       incidentId: newer.id,
       what,
     });

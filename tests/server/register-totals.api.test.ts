@@ -5,6 +5,9 @@ import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 import { jarFixtures } from './jars.fixtures';
+import { pageOf } from '../../shared/schemas/common';
+import { jarRowSchema } from '../../shared/schemas/jars';
+import { bodyOf } from '../setup/bodies';
 
 const app = createTestApp();
 const planted = COUNT_CAP + 1;
@@ -40,7 +43,7 @@ describe('register totals past the count cap', () => {
     const over = await client.agent.get(`/api/jars?q=${prefix}`);
     expect(over.status).toBe(200);
     expect(over.body).toMatchObject({ total: COUNT_CAP, totalCapped: true, page: 1, pageSize: 25 });
-    expect(over.body.items).toHaveLength(25);
+    expect(bodyOf(over, pageOf(jarRowSchema)).items).toHaveLength(25);
     const under = await client.agent.get(`/api/jars?q=${prefix}-0999`);
     expect(under.body).toMatchObject({ total: 10, totalCapped: false });
   });
@@ -48,6 +51,6 @@ describe('register totals past the count cap', () => {
   it('still pages past the cap, to the last jar', async () => {
     const last = await client.agent.get(`/api/jars?q=${prefix}&sort=label&pageSize=25&page=401`);
     expect(last.status).toBe(200);
-    expect(last.body.items.map((j: { label: string }) => j.label)).toEqual([`${prefix}-10000`]);
+    expect(bodyOf(last, pageOf(jarRowSchema)).items.map((j) => j.label)).toEqual([`${prefix}-10000`]);
   });
 });

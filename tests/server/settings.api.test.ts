@@ -1,14 +1,18 @@
 import supertest from 'supertest';
+import { z } from 'zod';
 import { afterAll, describe, expect, it } from 'vitest';
 import type { RatesDto } from '../../shared/schemas/analysis-rates';
-import type { LabSettingsDto } from '../../shared/schemas/settings';
+import { labSettingsSchema, type LabSettingsDto } from '../../shared/schemas/settings';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { config } from '../../server/core/config';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
+import { bodyOf, errorOf } from '../setup/bodies';
 
 const app = createTestApp();
+/** The settings as read: the editable ones, when they changed, and the lab's time zone. */
+const labSettingsReadSchema = labSettingsSchema.extend({ updatedAt: z.string(), timeZone: z.string() });
 const defaults = {
   cookBucketEdges: [60, 90, 120, 180],
   lethalityTarget: 15,
@@ -48,7 +52,7 @@ describe('/api/settings', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject(defaults);
     // The lab's clock for greetings, "today" and dates on screen: read-only, from LAB_TIME_ZONE.
-    expect(res.body.timeZone).toBe(config().LAB_TIME_ZONE);
+    expect(bodyOf(res, labSettingsReadSchema).timeZone).toBe(config().LAB_TIME_ZONE);
   });
 
   it.each(['technician', 'supervisor', 'trainer'] as const)('answers 403 to a %s changing them', async (role) => {
@@ -82,7 +86,7 @@ describe('/api/settings', () => {
     const admin = await signedIn(app, 'admin');
     const res = await admin.agent.patch('/api/settings').set('X-CSRF-Token', admin.token()).send(body);
     expect(res.status).toBe(400);
-    expect(res.body.error.issues.map((i: { path: string }) => i.path)).toContain(field);
+    expect(errorOf(res).issues!.map((i: { path: string }) => i.path)).toContain(field);
   });
 
   it('changes settings in one transaction with an audit event per field, and the buckets follow', async () => {

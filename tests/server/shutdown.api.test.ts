@@ -1,6 +1,7 @@
 import http from 'node:http';
 import { describe, expect, it } from 'vitest';
 import { startServer } from '../../server/main';
+import { errorBodySchema } from '../../shared/schemas/common';
 
 describe('shutdown', () => {
   it('lets a request that is in flight finish before the server closes', async () => {
@@ -33,7 +34,7 @@ describe('shutdown', () => {
     const res = await answered;
     // No CSRF token: the app answered the whole request (403) instead of cutting the connection.
     expect(res.status).toBe(403);
-    expect(JSON.parse(res.text).error.code).toBe('csrf-invalid');
+    expect(errorBodySchema.parse(JSON.parse(res.text)).error.code).toBe('csrf-invalid');
     await closing;
     expect(running.server.listening).toBe(false);
   });

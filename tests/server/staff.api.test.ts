@@ -8,6 +8,10 @@ import { StaffMember } from '../../server/staff/staff-member.entity';
 import { historyColumns } from '../../shared/schemas/imports';
 import { createTestApp } from '../setup/test-app';
 import { postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
+import { bodyOf, issuePath } from '../setup/bodies';
+import { pageOf } from '../../shared/schemas/common';
+import { staffMemberSchema } from '../../shared/schemas/staff';
+import { operatorsSchema, retrainRequestSchema, trainingRecordSchema } from '../../shared/schemas/training';
 
 const app = createTestApp();
 const person = () => `Staffer ${uniqueName('p')}`;
@@ -15,7 +19,7 @@ const person = () => `Staffer ${uniqueName('p')}`;
 async function addStaff(client: Client, name = person(), email?: string) {
   const res = await sendAs(client, 'post', '/api/staff', { name, email });
   expect(res.status).toBe(201);
-  return res.body as { id: number; name: string; email: string | null; active: boolean };
+  return bodyOf(res, staffMemberSchema);
 }
 
 async function procedureVersion(trainer: Client) {
@@ -44,9 +48,9 @@ describe('/api/staff', () => {
     const trainer = await signedIn(app, 'trainer');
     const noName = await sendAs(trainer, 'post', '/api/staff', { name: '  ' });
     expect(noName.status).toBe(400);
-    expect(noName.body.error.issues[0].path).toBe('name');
+    expect(issuePath(noName)).toBe('name');
     const badMail = await sendAs(trainer, 'post', '/api/staff', { name: person(), email: 'nope' });
-    expect(badMail.body.error.issues[0].path).toBe('email');
+    expect(issuePath(badMail)).toBe('email');
   });
 
   it('answers 404 for a staff person that does not exist', async () => {
@@ -61,13 +65,13 @@ describe('/api/staff', () => {
     expect(added).toMatchObject({ name, email: 'someone@example.invalid', active: true });
     const twin = await sendAs(supervisor, 'post', '/api/staff', { name: name.toUpperCase() });
     expect(twin.status).toBe(409);
-    expect(twin.body.error.issues[0].path).toBe('name');
+    expect(issuePath(twin)).toBe('name');
     const found = await supervisor.agent.get(`/api/staff?q=${encodeURIComponent(name)}&pageSize=5`);
     expect(found.body).toMatchObject({ total: 1, page: 1, pageSize: 5, items: [{ id: added.id }] });
     const edited = await sendAs(supervisor, 'patch', `/api/staff/${added.id}`, { email: '', active: false });
     expect(edited.body).toMatchObject({ email: null, active: false });
     const inactive = await supervisor.agent.get(`/api/staff?q=${encodeURIComponent(name)}&active=true`);
-    expect(inactive.body.total).toBe(0);
+    expect(bodyOf(inactive, pageOf(staffMemberSchema)).total).toBe(0);
     const events = await dataSource.manager.findBy(AuditEvent, {
       recordType: 'staff-member',
       recordId: String(added.id),
@@ -96,11 +100,11 @@ describe('staff people in training', () => {
     expect(trained.status).toBe(201);
     expect(trained.body).toMatchObject({ userId: null, staffId: staff.id, personName: staff.name });
     const listed = await trainer.agent.get(`/api/training-records?staffId=${staff.id}`);
-    expect(listed.body.items).toHaveLength(1);
+    expect(bodyOf(listed, pageOf(trainingRecordSchema)).items).toHaveLength(1);
     const open = await trainer.agent.get(`/api/training/retrain-requests?staffId=${staff.id}&open=true`);
-    expect(open.body.total).toBe(0);
+    expect(bodyOf(open, pageOf(retrainRequestSchema)).total).toBe(0);
     const view = await trainer.agent.get(`/api/training/operators?procedureId=${p.id}`);
-    const row = (view.body.operators as { staffId: number | null }[]).find((o) => o.staffId === staff.id);
+    const row = bodyOf(view, operatorsSchema).operators.find((o) => o.staffId === staff.id);
     expect(row).toMatchObject({ userId: null, role: null, displayName: staff.name, trainedOnCurrent: true });
   });
 
@@ -111,13 +115,13 @@ describe('staff people in training', () => {
     const body = { procedureVersionId: p.currentVersionId, trainedOn: '2026-11-20' };
     const neither = await sendAs(trainer, 'post', '/api/training-records', body);
     expect(neither.status).toBe(400);
-    expect(neither.body.error.issues[0].path).toBe('userId');
+    expect(issuePath(neither)).toBe('userId');
     const both = await sendAs(trainer, 'post', '/api/training-records', { ...body, staffId: staff.id, userId: 1 });
     expect(both.status).toBe(400);
     await sendAs(trainer, 'patch', `/api/staff/${staff.id}`, { active: false });
     const gone = await sendAs(trainer, 'post', '/api/training-records', { ...body, staffId: staff.id });
     expect(gone.status).toBe(422);
-    expect(gone.body.error.issues[0].path).toBe('staffId');
+    expect(issuePath(gone)).toBe('staffId');
     expect((await sendAs(trainer, 'post', '/api/training-records', { ...body, staffId: 999999 })).status).toBe(404);
   });
 });
