@@ -5,6 +5,7 @@ import { rejectionOf } from './imports.fixtures';
 import { jarFixtures } from './jars.fixtures';
 import { postCsvAs, sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 import { bodyOf, errorOf, issuePath } from '../setup/bodies';
+import { runOf } from './cook-runs.fixtures';
 
 const app = createTestApp();
 
@@ -44,14 +45,14 @@ describe('sort names inherited from Object.prototype', () => {
 
 /** A cook run of its own for a test that sends it a temperature log. */
 const newRun = async () =>
-  (
+  runOf(
     await sendAs(supervisor, 'post', '/api/cook-runs', {
       code: uniqueName('CR'),
       cookedOn: '2026-03-02',
       minutesAtPressure: 90,
       container: '1 L jar',
-    })
-  ).body as { id: number };
+    }),
+  );
 
 describe('temperature log numbers out of physical range', () => {
   it('answers 422 naming the line for a 400-digit minute', async () => {

@@ -2,6 +2,8 @@ import { randomBytes } from 'node:crypto';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { anonymousStatuses, sendAs, signedIn, type Client } from '../setup/factories';
+import { bodyOf, errorOf } from '../setup/bodies';
+import { suggestedCodeSchema } from '../../shared/schemas/common';
 
 const app = createTestApp();
 // A prefix of its own, so the highest number under it is the one this file stores.
@@ -52,12 +54,12 @@ describe.each([
   it('answers 409 naming code when the suggested code is taken before it is used', async () => {
     const p = prefix();
     await sendAs(tech, 'post', `/api/${register}`, body(`${p}10`));
-    const { code } = (await tech.agent.get(url)).body as { code: string };
+    const { code } = bodyOf(await tech.agent.get(url), suggestedCodeSchema);
     expect(code).toBe(`${p}11`);
     expect((await sendAs(tech, 'post', `/api/${register}`, body(code))).status).toBe(201);
     const again = await sendAs(tech, 'post', `/api/${register}`, body(code.toLowerCase()));
     expect(again.status).toBe(409);
-    expect(again.body.error.issues).toEqual([{ path: 'code', message: expect.any(String) as string }]);
+    expect(errorOf(again).issues).toEqual([{ path: 'code', message: expect.any(String) as string }]);
     expect((await tech.agent.get(url)).body).toEqual({ code: `${p}12` });
   });
 });

@@ -1,6 +1,6 @@
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { ActionListItemDto } from '../../shared/schemas/corrective-actions';
+import { actionPageSchema, correctiveActionSchema } from '../../shared/schemas/corrective-actions';
 import { localDate } from '../../server/core/local-time';
 import { dataSource } from '../../server/db/data-source';
 import { sendOverdueReminders } from '../../server/mail/action-mail.service';
@@ -8,6 +8,7 @@ import { createTestApp } from '../setup/test-app';
 import { sendAs, signedIn, uniqueName, type Client } from '../setup/factories';
 import { makeIncident, makeJars } from '../setup/lab-rows';
 import { mailsTo, readMailSink } from '../setup/mail-sink';
+import { bodyOf, issuePath } from '../setup/bodies';
 
 const app = createTestApp();
 // Every active supervisor is mailed on each new incident: the people made here leave when the file ends,
@@ -31,10 +32,7 @@ beforeAll(async () => {
 const addAction = (body: Record<string, unknown>) =>
   sendAs(sup, 'post', `/api/incidents/${incidentId}/actions`, { what: uniqueName('Check the gauge'), ...body });
 const list = async (client: Client, query: string) =>
-  (await client.agent.get(`/api/corrective-actions?${query}`).expect(200)).body as {
-    items: ActionListItemDto[];
-    total: number;
-  };
+  bodyOf(await client.agent.get(`/api/corrective-actions?${query}`).expect(200), actionPageSchema);
 
 describe('corrective action owners and mail', () => {
   it('mails a user owner at their account address on assignment', async () => {
@@ -42,10 +40,11 @@ describe('corrective action owners and mail', () => {
     expect(res.status).toBe(201);
     const mails = mailsTo(tech.user.email!).filter((m) => m.subject.includes(`incident #${incidentId}`));
     expect(mails).toHaveLength(1);
-    expect(mails[0]!.text).toContain(res.body.what);
+    const action = bodyOf(res, correctiveActionSchema);
+    expect(mails[0]!.text).toContain(action.what);
     const row = await dataSource.query<{ assignedMailAt: Date | null }[]>(
       'SELECT assignedMailAt FROM corrective_actions WHERE id = ?',
-      [res.body.id],
+      [action.id],
     );
     expect(row[0]!.assignedMailAt).not.toBeNull();
   });
@@ -61,16 +60,16 @@ describe('corrective action owners and mail', () => {
   it('answers 400 naming ownerEmail for a bad address or an address beside a user owner', async () => {
     const bad = await addAction({ ownerName: 'Staff Person', ownerEmail: 'not-an-address', dueOn: today });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('ownerEmail');
+    expect(issuePath(bad)).toBe('ownerEmail');
     const both = await addAction({ ownerId: tech.user.id, ownerEmail: 'x@example.invalid', dueOn: today });
     expect(both.status).toBe(400);
-    expect(both.body.error.issues[0].path).toBe('ownerEmail');
+    expect(issuePath(both)).toBe('ownerEmail');
   });
 
   it('reminds the owner of an overdue action once, however often reminders run', async () => {
     const email = `${uniqueName('late')}@example.invalid`;
     const res = await addAction({ ownerName: 'Late Owner', ownerEmail: email, dueOn: daysFrom(-1) });
-    expect(res.body.overdue).toBe(true);
+    expect(bodyOf(res, correctiveActionSchema).overdue).toBe(true);
     const first = await sendOverdueReminders();
     expect(first.reminded).toBeGreaterThanOrEqual(1);
     // Two runs at once, as two app instances would: the lock and the claimed row keep it to one mail.
@@ -93,16 +92,16 @@ describe('GET /api/corrective-actions', () => {
     expect((await supertest(app).get('/api/corrective-actions')).status).toBe(401);
     const bad = await tech.agent.get('/api/corrective-actions?state=late');
     expect(bad.status).toBe(400);
-    expect(bad.body.error.issues[0].path).toBe('state');
+    expect(issuePath(bad)).toBe('state');
     const level = await tech.agent.get('/api/corrective-actions?level=CR-1');
-    expect(level.body.error.issues[0].path).toBe('factor');
+    expect(issuePath(level)).toBe('factor');
   });
 
   it('filters open, overdue, due soon, done, mine, by incident and by factor level, paged on the server', async () => {
     const owner = await signedIn(app, 'technician');
     const level = uniqueName('CR');
     const mk = async (dueOn: string) =>
-      (await addAction({ ownerId: owner.user.id, dueOn, factor: 'cookRun', level })).body as { id: number };
+      bodyOf(await addAction({ ownerId: owner.user.id, dueOn, factor: 'cookRun', level }), correctiveActionSchema);
     const late = await mk(daysFrom(-3));
     const soon = await mk(daysFrom(2));
     const later = await mk(daysFrom(30));

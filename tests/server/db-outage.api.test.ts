@@ -7,6 +7,8 @@ import { freePort } from '../../scripts/free-port';
 import { startMariaDb, type MariaDbHandle } from '../../scripts/mariadb';
 import { startChildApp, type ChildApp } from '../setup/child-app';
 import { testDbUser } from '../setup/throwaway-db';
+import { bodyOf, errorOf } from '../setup/bodies';
+import { csrfSchema } from '../../shared/schemas/auth';
 
 // Its own MariaDB: this file stops and starts it, which the worker's shared database must never see.
 const dataDir = mkdtempSync(path.join(tmpdir(), 'asepta-outage-db-'));
@@ -38,7 +40,7 @@ describe('the database goes away under a running app', () => {
     app = await startChildApp({ port, database, ...testDbUser }, { MAINTENANCE_INTERVAL_SECONDS: '1' });
 
     const agent = supertest.agent(app.url);
-    const csrf = async () => ((await agent.get('/api/auth/csrf')).body as { token: string }).token;
+    const csrf = async () => bodyOf(await agent.get('/api/auth/csrf'), csrfSchema).token;
     // No accounts in this empty lab: a sign-in that reaches the user table is 401 when all is well.
     expect((await agent.get('/api/health')).body).toEqual({ status: 'ok', db: 'up' });
     const token = await csrf();
@@ -48,7 +50,7 @@ describe('the database goes away under a running app', () => {
     expect(down.body).toEqual({ status: 'error', db: 'down' });
     const login = await agent.post('/api/auth/login').set('X-CSRF-Token', token).send({ username: 'a', password: 'b' });
     expect(login.status).toBe(503);
-    expect(login.body.error.code).toBe('database-unavailable');
+    expect(errorOf(login).code).toBe('database-unavailable');
     // The sweep that used to reject unhandled runs every second here: wait until it has failed once.
     await app.waitForLog((l) => l.includes('auth maintenance failed'), 'a failed maintenance sweep');
     expect(app.child.exitCode).toBeNull();

@@ -16,7 +16,7 @@ let tech: Client;
 let ryeId: number;
 beforeAll(async () => {
   tech = await signedIn(app, 'technician');
-  const grains = (await tech.agent.get('/api/grains')).body as { id: number; name: string }[];
+  const grains = bodyOf(await tech.agent.get('/api/grains'), z.array(grainSchema));
   ryeId = grains.find((g) => g.name === 'rye')!.id;
 });
 
@@ -178,7 +178,7 @@ describe('/api/prep-batches', () => {
   });
 
   it('filters by lot and by grain name or id', async () => {
-    const sorghumId = ((await tech.agent.get('/api/grains')).body as { id: number; name: string }[]).find(
+    const sorghumId = bodyOf(await tech.agent.get('/api/grains'), z.array(grainSchema)).find(
       (g) => g.name === 'sorghum',
     )!.id;
     const ryeLot = await createdLot(newLot());

@@ -3,6 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { createTestApp } from '../setup/test-app';
 import { signedIn } from '../setup/factories';
 import { batchBody, jarEvent, makeJars } from './jars.fixtures';
+import { bodyOf, issuePath } from '../setup/bodies';
+import { csrfSchema } from '../../shared/schemas/auth';
 
 const app = createTestApp();
 
@@ -21,7 +23,7 @@ describe('jar routes: sign-in and roles', () => {
 
   it('answers 401 to writes with a CSRF token but no session', async () => {
     const agent = supertest.agent(app);
-    const { token } = (await agent.get('/api/auth/csrf')).body as { token: string };
+    const { token } = bodyOf(await agent.get('/api/auth/csrf'), csrfSchema);
     for (const url of ['/api/jars/batch', '/api/jars/1/events', '/api/jars/shelf-walk']) {
       expect((await agent.post(url).set('X-CSRF-Token', token).send({})).status).toBe(401);
     }
@@ -76,7 +78,7 @@ describe('jar routes: sign-in and roles', () => {
     const got = [];
     for (const [url] of bad) {
       const res = await tech.agent.get(url);
-      got.push([url, res.status, res.body.error.issues[0].path]);
+      got.push([url, res.status, issuePath(res)]);
     }
     expect(got).toEqual(bad.map(([url, path]) => [url, 400, path]));
   });

@@ -7,7 +7,7 @@ import { PrepBatch } from '../../server/grain/prep-batch.entity';
 import { InoculationSession } from '../../server/sessions/inoculation-session.entity';
 import type { CultureState } from '../../shared/enums';
 import { jarStorySchema } from '../../shared/schemas/jar-story';
-import { jarRowSchema } from '../../shared/schemas/jars';
+import { jarBatchResultSchema, jarRowSchema } from '../../shared/schemas/jars';
 import { bodyOf } from '../setup/bodies';
 import type { Agent } from '../setup/test-app';
 import { uniqueName } from '../setup/factories';
@@ -91,7 +91,7 @@ export async function makeJars(
 ): Promise<JarRow[]> {
   const res = await client.agent.post('/api/jars/batch').set('X-CSRF-Token', client.token()).send(body);
   if (res.status !== 201) throw new Error(`batch failed: ${res.status} ${JSON.stringify(res.body)}`);
-  return (res.body as { jars: JarRow[] }).jars;
+  return bodyOf(res, jarBatchResultSchema).jars;
 }
 
 /** A jar row, as the event route answers it. */

@@ -1,9 +1,10 @@
 import supertest from 'supertest';
+import { z } from 'zod';
 import { describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/data-source';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { pageOf } from '../../shared/schemas/common';
-import { userSchema } from '../../shared/schemas/users';
+import { personSchema, userSchema } from '../../shared/schemas/users';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 import { bodyOf, issuePath } from '../setup/bodies';
@@ -118,7 +119,7 @@ describe('GET /api/users/people', () => {
     const tech = await signedIn(app, 'technician');
     const res = await tech.agent.get('/api/users/people');
     expect(res.status).toBe(200);
-    const me = (res.body as { id: number; displayName: string; role: string }[]).find((p) => p.id === tech.user.id);
+    const me = bodyOf(res, z.array(personSchema)).find((p) => p.id === tech.user.id);
     expect(me).toEqual({ id: tech.user.id, displayName: 'Test technician', role: 'technician' });
     expect(JSON.stringify(res.body)).not.toContain('@');
   });

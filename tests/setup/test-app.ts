@@ -3,6 +3,8 @@ import supertest from 'supertest';
 import { afterAll } from 'vitest';
 import { createApp, type AppDeps } from '../../server/app';
 import { createSessionStore } from '../../server/auth/session';
+import { csrfSchema } from '../../shared/schemas/auth';
+import { bodyOf } from './bodies';
 
 /** The real app over the worker's MariaDB; the session store is closed when the file ends. */
 export function createTestApp(deps: Omit<AppDeps, 'sessionStore'> = {}): Express {
@@ -21,7 +23,7 @@ export async function csrfAgent(
   let token = '';
   const refresh = async () => {
     const res = await agent.get('/api/auth/csrf').expect(200);
-    token = (res.body as { token: string }).token;
+    token = bodyOf(res, csrfSchema).token;
   };
   await refresh();
   return { agent, token: () => token, refresh };
