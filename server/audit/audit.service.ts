@@ -52,22 +52,27 @@ export function diffEntries<T extends object>(
     .map((k) => ({ ...base, field: k, oldValue: before[k], newValue: after[k] }));
 }
 
+/** How the module that owns a record writes it, inside the transaction it is given. */
+export type SaveRecord<T> = (manager: EntityManager, record: T) => Promise<unknown>;
+
 /**
- * Applies a patch to a loaded record inside the caller's transaction, with one audit event per changed
- * field (and any extra entries). Nothing is written when nothing changed; returns the entries.
+ * Applies a patch to a loaded record inside the caller's transaction, saved through the owning module's
+ * repository, with one audit event per changed field (and any extra entries). Nothing is written when
+ * nothing changed; returns the entries.
  */
 export async function patchWithAudit<T extends object>(
   manager: EntityManager,
   actor: Actor,
   record: T,
   changes: Partial<T>,
+  save: SaveRecord<T>,
   base: Omit<AuditEntry, 'field' | 'oldValue' | 'newValue'>,
   extra: AuditEntry[] = [],
 ): Promise<AuditEntry[]> {
   const entries = [...diffEntries(base, record, changes), ...extra];
   if (entries.length === 0) return entries;
   Object.assign(record, Object.fromEntries(Object.entries(changes).filter(([, v]) => v !== undefined)));
-  await manager.save(record);
+  await save(manager, record);
   await recordAudit(manager, actor, entries);
   return entries;
 }

@@ -148,7 +148,7 @@ export async function updateCookRun(actor: Actor, id: number, input: UpdateCookR
       changes.f0 = estimatedF0({ ...run, ...changes });
       changes.f0Source = 'estimate';
     }
-    await patchWithAudit(m, actor, run, changes, {
+    await patchWithAudit(m, actor, run, changes, cookRunsRepository.save, {
       action: 'update',
       recordType: 'cook-run',
       recordId: id,

@@ -156,7 +156,7 @@ export async function updateCulture(actor: Actor, id: number, input: UpdateCultu
     for (const key of ['species', 'strain', 'notes'] as const) {
       if (changes[key] !== undefined) normalised[key] = changes[key] || null;
     }
-    await patchWithAudit(m, actor, culture, normalised, {
+    await patchWithAudit(m, actor, culture, normalised, culturesRepository.save, {
       action: 'update',
       recordType: 'culture',
       recordId: id,

@@ -198,7 +198,7 @@ export async function updateSession(actor: Actor, id: number, input: UpdateSessi
       await sessionsRepository.replaceChecks(m, id, after);
       checklistEntries.push({ ...base, field: 'checklist', oldValue: oldList, newValue: newList });
     }
-    await patchWithAudit(m, actor, session, changes, base, checklistEntries);
+    await patchWithAudit(m, actor, session, changes, sessionsRepository.save, base, checklistEntries);
   });
   return getSession(id);
 }
