@@ -1,5 +1,9 @@
 import type { EntityManager } from 'typeorm';
+import type { AuditEvent } from './audit-event.entity';
 import { auditRepository } from './audit.repository';
+
+/** A stored audit event, as the modules whose history it tells read it. */
+export type AuditEventRecord = AuditEvent;
 
 export interface Actor {
   id: number | null;

@@ -20,6 +20,9 @@ import { Culture } from './culture.entity';
 import { culturesRepository } from './cultures.repository';
 import { toAgarTestDto, toCultureDto, toCultureSummaryDto } from './cultures.mapper';
 
+/** A stored culture, as other modules read it. */
+export type CultureRecord = Culture;
+
 async function withParentCodes(rows: Culture[]): Promise<CultureDto[]> {
   const parentIds = [...new Set(rows.map((c) => c.parentCultureId).filter((id): id is number => id !== null))];
   const parents = new Map((await culturesRepository.byIds(parentIds)).map((p) => [p.id, p.code]));
