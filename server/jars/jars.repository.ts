@@ -1,7 +1,8 @@
-import { In, IsNull, Not, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { In, IsNull, Not, type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
 import { applySortAndPage, likePrefix, pageIds, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
+import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
@@ -13,7 +14,6 @@ import { LabSettings } from '../settings/lab-settings.entity';
 import { JarEvent } from './jar-event.entity';
 import { Jar } from './jar.entity';
 import type { JarRawRow } from './jars.mapper';
-import { sequencedLabelSql } from './label-sequence';
 
 const sortable = {
   label: 'j.label',
@@ -75,6 +75,9 @@ function applyFilters(qb: SelectQueryBuilder<Jar>, f: JarFilters): SelectQueryBu
 export const jarsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { id }),
   findByLabel: (label: string, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { label }),
+  findByLabels: (m: EntityManager, labels: string[]) =>
+    findByValues(m, Jar, 'label', labels, { id: true, label: true }),
+  insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Jar>[]) => insertMany(m, Jar, rows),
 
   /**
    * The page's ids from the jar table's own indexes first, then the display columns joined for those
@@ -168,36 +171,6 @@ export const jarsRepository = {
       .where('s.id = 1')
       .setLock('pessimistic_write')
       .getRawOne();
-  },
-
-  /** The label of the latest jar numbered in sequence: it sets the lab's label format. */
-  async latestSequencedLabel(m: EntityManager): Promise<string | null> {
-    const raw = await m
-      .createQueryBuilder(Jar, 'j')
-      .select('j.label', 'label')
-      .where('j.label REGEXP :pattern', { pattern: sequencedLabelSql })
-      .orderBy('j.id', 'DESC')
-      .limit(1)
-      .getRawOne<{ label: string }>();
-    return raw?.label ?? null;
-  },
-
-  /**
-   * The digits of the highest label under the prefix, compared as text (length, then value) so that
-   * no number is ever rounded; call after lockSequences.
-   */
-  async highestLabelDigits(m: EntityManager, prefix: string): Promise<string | null> {
-    const digits = `TRIM(LEADING '0' FROM SUBSTRING(j.label, ${prefix.length + 1}))`;
-    const raw = await m
-      .createQueryBuilder(Jar, 'j')
-      .select(digits, 'digits')
-      .where('j.label LIKE :start', { start: likePrefix(prefix) })
-      .andWhere('j.label REGEXP :pattern', { pattern: `^${prefix}[0-9]+$` })
-      .orderBy(`CHAR_LENGTH(${digits})`, 'DESC')
-      .addOrderBy(digits, 'DESC')
-      .limit(1)
-      .getRawOne<{ digits: string }>();
-    return raw ? raw.digits || '0' : null;
   },
 
   /** Call after lockSequences. */
