@@ -61,6 +61,7 @@ export const cookRunsRepository = {
     findByValues(m, CookRun, 'code', codes, { id: true, code: true, minutesAtPressure: true }),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<CookRun>[]) => insertMany(m, CookRun, rows),
   save: (m: EntityManager, run: CookRun) => m.save(run),
+  updateByCode: (m: EntityManager, code: string, fields: Partial<CookRun>) => m.update(CookRun, { code }, fields),
 
   list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], PageTotal]> =>
     pageSorted(filtered(q, rule), q, sort),

@@ -116,6 +116,26 @@ export async function insertCookRuns(m: EntityManager, actor: Actor, inputs: New
   return ids;
 }
 
+/** What a history file leaves out about a run (the cycle, the vessel, the operator). */
+export type CookRunDetails = Pick<
+  CookRun,
+  | 'vessel'
+  | 'cookedOn'
+  | 'startedAt'
+  | 'minutesAtPressure'
+  | 'gaugeKPa'
+  | 'ventingMinutes'
+  | 'altitudeM'
+  | 'container'
+  | 'loadCount'
+  | 'operatorId'
+  | 'operatorName'
+>;
+
+/** Inside the caller's transaction (the demo loader's): the details and the F0 estimate of their cycle. */
+export const setCookRunDetails = (m: EntityManager, code: string, details: CookRunDetails) =>
+  cookRunsRepository.updateByCode(m, code, { ...details, f0: estimatedF0(details), f0Source: 'estimate' });
+
 /** The cook runs already recorded under any of the codes (compared as the column's collation does). */
 export const cookRunsByCodes = (m: EntityManager, codes: string[]) => cookRunsRepository.findByCodes(m, codes);
 

@@ -133,6 +133,13 @@ export async function insertCultures(
 }
 
 /** The cultures already recorded under any of the codes (compared as the column's collation does). */
+/** Inside the caller's transaction (the demo loader's): what a history file leaves out about a culture. */
+export const setCultureDetails = (
+  m: EntityManager,
+  code: string,
+  details: Pick<Culture, 'species' | 'strain' | 'generation' | 'volumeMl' | 'parentCultureId' | 'preparedOn' | 'state'>,
+) => culturesRepository.updateByCode(m, code, details);
+
 export const culturesByCodes = (m: EntityManager, codes: string[]) => culturesRepository.findByCodes(m, codes);
 
 export async function createCulture(actor: Actor, input: CreateCultureInput): Promise<CultureDetailDto> {

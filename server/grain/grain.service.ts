@@ -74,6 +74,11 @@ export async function getGrainLot(id: number): Promise<GrainLotDetailDto> {
   return { ...dto!, prepBatches: await batchDtos(batches) };
 }
 
+/** A grain's lot by its supplier's code, or null. */
+export const findGrainLot = (m: EntityManager, grainId: number, supplierLotCode: string) =>
+  grainRepository.findLot(grainId, supplierLotCode, m);
+export const prepBatchesByCodes = (m: EntityManager, codes: string[]) => grainRepository.batchesByCodes(m, codes);
+
 /** Inside the caller's transaction: the screen's one lot, or the demo loader's many. */
 export async function insertGrainLot(m: EntityManager, actor: Actor, input: CreateGrainLotInput): Promise<GrainLot> {
   const grain = await grainRepository.findGrainById(input.grainId, m);

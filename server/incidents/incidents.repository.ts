@@ -78,6 +78,7 @@ export const incidentsRepository = {
 
   insert: (m: EntityManager, fields: Partial<Incident>) => m.save(m.create(Incident, fields)),
   save: (m: EntityManager, incident: Incident) => m.save(incident),
+  anyFiled: () => dataSource.manager.existsBy(Incident, { imported: false }),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Incident>[]) => insertMany(m, Incident, rows),
 
   list: (q: IncidentListQuery) => pageSorted(filtered(q), q, { sortable, defaultSort: '-foundAt', tieBreak: 'i.id' }),

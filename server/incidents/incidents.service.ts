@@ -129,6 +129,9 @@ export async function listIncidents(q: IncidentListQuery): Promise<Page<Incident
   return pageResult(items, total, q);
 }
 
+/** Whether anyone has filed an incident, as against incidents imported with a history. */
+export const anyFiledIncident = () => incidentsRepository.anyFiled();
+
 /** For other modules: the incident row itself, or null. */
 export const findIncident = (id: number) => incidentsRepository.findById(id);
 

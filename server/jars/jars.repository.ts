@@ -76,7 +76,10 @@ export const jarsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { id }),
   findByLabel: (label: string, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { label }),
   findByLabels: (m: EntityManager, labels: string[]) =>
-    findByValues(m, Jar, 'label', labels, { id: true, label: true }),
+    findByValues(m, Jar, 'label', labels, { id: true, label: true, status: true }),
+  any: () => dataSource.manager.exists(Jar),
+  updateByIds: (m: EntityManager, ids: number[], fields: Partial<Jar>) =>
+    ids.length === 0 ? Promise.resolve() : m.update(Jar, { id: In(ids) }, fields),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Jar>[]) => insertMany(m, Jar, rows),
 
   /**

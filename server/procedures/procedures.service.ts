@@ -152,6 +152,8 @@ export async function publishVersion(
 }
 
 /** For other modules (training, seed): the version a person should be trained on now. */
+export const findProcedureByCode = (code: string) => proceduresRepository.findByCode(code);
+
 export async function currentVersionOf(procedureId: number): Promise<ProcedureVersion | undefined> {
   return (await proceduresRepository.currentVersions([procedureId])).get(procedureId);
 }

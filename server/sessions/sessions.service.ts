@@ -150,6 +150,13 @@ export async function insertSessions(
 }
 
 /** The sessions already recorded under any of the codes (compared as the column's collation does). */
+/** Inside the caller's transaction (the demo loader's): what a history file leaves out about a session. */
+export const setSessionDetails = (
+  m: EntityManager,
+  code: string,
+  details: Pick<InoculationSession, 'startedAt' | 'workspace'>,
+) => sessionsRepository.updateByCode(m, code, details);
+
 export const sessionsByCodes = (m: EntityManager, codes: string[]) => sessionsRepository.findByCodes(m, codes);
 
 export async function createSession(actor: Actor, input: CreateSessionInput): Promise<SessionDetailDto> {
