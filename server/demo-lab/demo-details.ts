@@ -7,7 +7,7 @@ import { setSessionDetails } from '../sessions/sessions.service';
 import { accountNames } from '../users/users.service';
 import { addDays } from './demo-calendar';
 import { demoCultures } from './demo-cultures';
-import type { DemoPlan } from './demo-history';
+import type { DemoPlan } from './demo-plan';
 
 const HOUR = 3_600_000;
 /** 15 psi gauge, the usual set-point (shared/TRADE.md §1); the invented lab sits at 85 m. */

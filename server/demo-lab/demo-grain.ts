@@ -3,7 +3,7 @@ import type { Actor } from '../audit/audit.service';
 import { findGrainLot, insertGrainLot, insertPrepBatch, listGrains, prepBatchesByCodes } from '../grain/grain.service';
 import { jarsByLabels, setJarDetails } from '../jars/jar-details.service';
 import { addDays } from './demo-calendar';
-import type { DemoPlan, PlanJar } from './demo-history';
+import type { DemoPlan, PlanJar } from './demo-plan';
 import { seededRandom } from './prng';
 
 export interface PlanLot {

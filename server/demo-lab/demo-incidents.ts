@@ -3,7 +3,7 @@ import { labNoon } from '../imports/lab-noon';
 import { findUserByUsername } from '../users/users.service';
 import type { Contaminant } from '../../shared/enums';
 import { addDays } from './demo-calendar';
-import type { DemoPlan } from './demo-history';
+import type { DemoPlan } from './demo-plan';
 import { seededRandom } from './prng';
 
 const findings: { contaminant: Contaminant; colour: string; smell: string | null; texture: string; days: number }[] = [
