@@ -45,6 +45,19 @@ export async function recordAudit(manager: EntityManager, actor: Actor, entries:
   );
 }
 
+/** One create event per new record (its id and what to remember of it), in the caller's transaction. */
+export const recordCreated = (
+  manager: EntityManager,
+  actor: Actor,
+  recordType: string,
+  created: { id: number; newValue: unknown }[],
+) =>
+  recordAudit(
+    manager,
+    actor,
+    created.map((c) => ({ action: 'create', recordType, recordId: c.id, newValue: c.newValue })),
+  );
+
 /** One audit entry per field whose value changed. */
 export function diffEntries<T extends object>(
   base: Omit<AuditEntry, 'field' | 'oldValue' | 'newValue'>,

@@ -8,7 +8,7 @@ import type {
   UpdateCookRunInput,
 } from '../../shared/schemas/cook-runs';
 import type { CookRule } from '../../shared/stats/cook-verdict';
-import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
+import { patchWithAudit, recordCreated, type Actor } from '../audit/audit.service';
 import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { localDate } from '../core/local-time';
@@ -103,15 +103,11 @@ export async function insertCookRuns(m: EntityManager, actor: Actor, inputs: New
   const rows: Partial<CookRun>[] = [];
   for (const input of inputs) rows.push(cookRunRow(input, await resolveOperator(m, input)));
   const ids = await cookRunsRepository.insertMany(m, rows);
-  await recordAudit(
+  await recordCreated(
     m,
     actor,
-    rows.map((r, i) => ({
-      action: 'create',
-      recordType: 'cook-run',
-      recordId: ids[i]!,
-      newValue: { code: r.code, minutesAtPressure: r.minutesAtPressure },
-    })),
+    'cook-run',
+    rows.map((r, i) => ({ id: ids[i]!, newValue: { code: r.code, minutesAtPressure: r.minutesAtPressure } })),
   );
   return ids;
 }

@@ -11,7 +11,7 @@ import {
   type CultureListQuery,
   type UpdateCultureInput,
 } from '../../shared/schemas/cultures';
-import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
+import { patchWithAudit, recordAudit, recordCreated, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { assertNewCodes } from '../core/new-codes';
@@ -119,15 +119,11 @@ export async function insertCultures(
     });
   }
   const ids = await culturesRepository.insertMany(m, rows);
-  await recordAudit(
+  await recordCreated(
     m,
     actor,
-    rows.map((r, i) => ({
-      action: 'create',
-      recordType: 'culture',
-      recordId: ids[i]!,
-      newValue: { code: r.code, state: r.state },
-    })),
+    'culture',
+    rows.map((r, i) => ({ id: ids[i]!, newValue: { code: r.code, state: r.state } })),
   );
   return ids;
 }

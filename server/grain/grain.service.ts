@@ -11,7 +11,7 @@ import type {
   PrepBatchDto,
   PrepBatchListQuery,
 } from '../../shared/schemas/grain';
-import { recordAudit, type Actor } from '../audit/audit.service';
+import { recordCreated, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
@@ -33,9 +33,7 @@ export async function createGrain(actor: Actor, input: CreateGrainInput): Promis
       throw conflict('That grain is already on the list.', [{ path: 'name', message: 'is already on the grain list' }]);
     }
     const grain = await grainRepository.insertGrain(m, { name: input.name, active: true });
-    await recordAudit(m, actor, [
-      { action: 'create', recordType: 'grain', recordId: grain.id, newValue: { name: grain.name } },
-    ]);
+    await recordCreated(m, actor, 'grain', [{ id: grain.id, newValue: { name: grain.name } }]);
     return toGrainDto(grain);
   });
 }
@@ -94,13 +92,8 @@ export async function insertGrainLot(m: EntityManager, actor: Actor, input: Crea
     receivedOn: input.receivedOn,
     notes: input.notes || null,
   });
-  await recordAudit(m, actor, [
-    {
-      action: 'create',
-      recordType: 'grain-lot',
-      recordId: saved.id,
-      newValue: { grain: grain.name, supplierLotCode: saved.supplierLotCode },
-    },
+  await recordCreated(m, actor, 'grain-lot', [
+    { id: saved.id, newValue: { grain: grain.name, supplierLotCode: saved.supplierLotCode } },
   ]);
   return saved;
 }
@@ -155,13 +148,8 @@ export async function insertPrepBatch(m: EntityManager, actor: Actor, input: Cre
     drainMinutes: input.drainMinutes ?? null,
     notes: input.notes || null,
   });
-  await recordAudit(m, actor, [
-    {
-      action: 'create',
-      recordType: 'prep-batch',
-      recordId: saved.id,
-      newValue: { code: saved.code, grainLotId: saved.grainLotId },
-    },
+  await recordCreated(m, actor, 'prep-batch', [
+    { id: saved.id, newValue: { code: saved.code, grainLotId: saved.grainLotId } },
   ]);
   return saved;
 }

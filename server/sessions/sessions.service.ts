@@ -7,7 +7,7 @@ import type {
   SessionListQuery,
   UpdateSessionInput,
 } from '../../shared/schemas/sessions';
-import { patchWithAudit, recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import { patchWithAudit, recordCreated, type Actor, type AuditEntry } from '../audit/audit.service';
 import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
@@ -136,15 +136,11 @@ export async function insertSessions(
   for (const [i, input] of inputs.entries()) {
     if (input.checklist?.length) await sessionsRepository.replaceChecks(m, ids[i]!, input.checklist);
   }
-  await recordAudit(
+  await recordCreated(
     m,
     actor,
-    rows.map((r, i) => ({
-      action: 'create',
-      recordType: 'session',
-      recordId: ids[i]!,
-      newValue: { code: r.code, heldOn: r.heldOn, operator: r.operatorName },
-    })),
+    'session',
+    rows.map((r, i) => ({ id: ids[i]!, newValue: { code: r.code, heldOn: r.heldOn, operator: r.operatorName } })),
   );
   return ids;
 }
