@@ -1,7 +1,15 @@
 import { In, IsNull, Not, type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
-import { applySortAndPage, likePrefix, pageIds, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
+import {
+  applySortAndPage,
+  inIdOrder,
+  likePrefix,
+  pageIds,
+  sortColumn,
+  whereDateRange,
+  type PageTotal,
+} from '../core/paging';
 import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
@@ -115,8 +123,7 @@ export const jarsRepository = {
   async rowsByIds(ids: number[], m: EntityManager = dataSource.manager): Promise<JarRawRow[]> {
     if (ids.length === 0) return [];
     const rows = await rowQuery(m).where('j.id IN (:...ids)', { ids }).getRawMany<JarRawRow>();
-    const byId = new Map(rows.map((r) => [Number(r.id), r]));
-    return ids.flatMap((id) => byId.get(id) ?? []);
+    return inIdOrder(ids, rows, (r) => Number(r.id));
   },
 
   async rowsBySession(sessionId: number): Promise<JarRawRow[]> {
