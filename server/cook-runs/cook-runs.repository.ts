@@ -60,6 +60,8 @@ export const cookRunsRepository = {
   findByCodes: (m: EntityManager, codes: string[]) =>
     findByValues(m, CookRun, 'code', codes, { id: true, code: true, minutesAtPressure: true }),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<CookRun>[]) => insertMany(m, CookRun, rows),
+  save: (m: EntityManager, run: CookRun) => m.save(run),
+  updateByCode: (m: EntityManager, code: string, fields: Partial<CookRun>) => m.update(CookRun, { code }, fields),
 
   list: (q: CookRunListQuery, rule: CookRule): Promise<[CookRun[], PageTotal]> =>
     pageSorted(filtered(q, rule), q, sort),

@@ -8,7 +8,7 @@ import type {
   UpdateCookRunInput,
 } from '../../shared/schemas/cook-runs';
 import type { CookRule } from '../../shared/stats/cook-verdict';
-import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
+import { patchWithAudit, recordCreated, type Actor } from '../audit/audit.service';
 import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { localDate } from '../core/local-time';
@@ -103,18 +103,34 @@ export async function insertCookRuns(m: EntityManager, actor: Actor, inputs: New
   const rows: Partial<CookRun>[] = [];
   for (const input of inputs) rows.push(cookRunRow(input, await resolveOperator(m, input)));
   const ids = await cookRunsRepository.insertMany(m, rows);
-  await recordAudit(
+  await recordCreated(
     m,
     actor,
-    rows.map((r, i) => ({
-      action: 'create',
-      recordType: 'cook-run',
-      recordId: ids[i]!,
-      newValue: { code: r.code, minutesAtPressure: r.minutesAtPressure },
-    })),
+    'cook-run',
+    rows.map((r, i) => ({ id: ids[i]!, newValue: { code: r.code, minutesAtPressure: r.minutesAtPressure } })),
   );
   return ids;
 }
+
+/** What a history file leaves out about a run (the cycle, the vessel, the operator). */
+export type CookRunDetails = Pick<
+  CookRun,
+  | 'vessel'
+  | 'cookedOn'
+  | 'startedAt'
+  | 'minutesAtPressure'
+  | 'gaugeKPa'
+  | 'ventingMinutes'
+  | 'altitudeM'
+  | 'container'
+  | 'loadCount'
+  | 'operatorId'
+  | 'operatorName'
+>;
+
+/** Inside the caller's transaction (the demo loader's): the details and the F0 estimate of their cycle. */
+export const setCookRunDetails = (m: EntityManager, code: string, details: CookRunDetails) =>
+  cookRunsRepository.updateByCode(m, code, { ...details, f0: estimatedF0(details), f0Source: 'estimate' });
 
 /** The cook runs already recorded under any of the codes (compared as the column's collation does). */
 export const cookRunsByCodes = (m: EntityManager, codes: string[]) => cookRunsRepository.findByCodes(m, codes);
@@ -148,7 +164,7 @@ export async function updateCookRun(actor: Actor, id: number, input: UpdateCookR
       changes.f0 = estimatedF0({ ...run, ...changes });
       changes.f0Source = 'estimate';
     }
-    await patchWithAudit(m, actor, run, changes, {
+    await patchWithAudit(m, actor, run, changes, cookRunsRepository.save, {
       action: 'update',
       recordType: 'cook-run',
       recordId: id,

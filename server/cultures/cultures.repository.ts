@@ -27,6 +27,8 @@ export const culturesRepository = {
   findByCodes: (m: EntityManager, codes: string[]) =>
     findByValues(m, Culture, 'code', codes, { id: true, code: true, state: true }),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Culture>[]) => insertMany(m, Culture, rows),
+  save: (m: EntityManager, culture: Culture) => m.save(culture),
+  updateByCode: (m: EntityManager, code: string, fields: Partial<Culture>) => m.update(Culture, { code }, fields),
   byIds: async (ids: number[]) => (ids.length ? dataSource.manager.findBy(Culture, { id: In(ids) }) : []),
   children: (id: number) =>
     dataSource.manager.find(Culture, { where: { parentCultureId: id }, order: { code: 'ASC' } }),

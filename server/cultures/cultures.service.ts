@@ -11,7 +11,7 @@ import {
   type CultureListQuery,
   type UpdateCultureInput,
 } from '../../shared/schemas/cultures';
-import { patchWithAudit, recordAudit, type Actor } from '../audit/audit.service';
+import { patchWithAudit, recordAudit, recordCreated, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { assertNewCodes } from '../core/new-codes';
@@ -19,6 +19,9 @@ import { dataSource } from '../db/data-source';
 import { Culture } from './culture.entity';
 import { culturesRepository } from './cultures.repository';
 import { toAgarTestDto, toCultureDto, toCultureSummaryDto } from './cultures.mapper';
+
+/** A stored culture, as other modules read it. */
+export type CultureRecord = Culture;
 
 async function withParentCodes(rows: Culture[]): Promise<CultureDto[]> {
   const parentIds = [...new Set(rows.map((c) => c.parentCultureId).filter((id): id is number => id !== null))];
@@ -116,20 +119,23 @@ export async function insertCultures(
     });
   }
   const ids = await culturesRepository.insertMany(m, rows);
-  await recordAudit(
+  await recordCreated(
     m,
     actor,
-    rows.map((r, i) => ({
-      action: 'create',
-      recordType: 'culture',
-      recordId: ids[i]!,
-      newValue: { code: r.code, state: r.state },
-    })),
+    'culture',
+    rows.map((r, i) => ({ id: ids[i]!, newValue: { code: r.code, state: r.state } })),
   );
   return ids;
 }
 
 /** The cultures already recorded under any of the codes (compared as the column's collation does). */
+/** Inside the caller's transaction (the demo loader's): what a history file leaves out about a culture. */
+export const setCultureDetails = (
+  m: EntityManager,
+  code: string,
+  details: Pick<Culture, 'species' | 'strain' | 'generation' | 'volumeMl' | 'parentCultureId' | 'preparedOn' | 'state'>,
+) => culturesRepository.updateByCode(m, code, details);
+
 export const culturesByCodes = (m: EntityManager, codes: string[]) => culturesRepository.findByCodes(m, codes);
 
 export async function createCulture(actor: Actor, input: CreateCultureInput): Promise<CultureDetailDto> {
@@ -156,7 +162,7 @@ export async function updateCulture(actor: Actor, id: number, input: UpdateCultu
     for (const key of ['species', 'strain', 'notes'] as const) {
       if (changes[key] !== undefined) normalised[key] = changes[key] || null;
     }
-    await patchWithAudit(m, actor, culture, normalised, {
+    await patchWithAudit(m, actor, culture, normalised, culturesRepository.save, {
       action: 'update',
       recordType: 'culture',
       recordId: id,

@@ -35,18 +35,39 @@ export async function findByValues<T extends ObjectLiteral>(
 }
 
 /**
- * Inserts the rows a chunk at a time and answers their ids in the rows' order: the ORM writes the
- * INSERT, and MariaDB's RETURNING lists the new ids in VALUES order, with no reload of each row.
+ * Inserts the rows a chunk at a time and answers their ids in the rows' order (MariaDB's RETURNING lists
+ * them in VALUES order). Each value goes through the driver's own conversion for its column, as an ORM
+ * insert converts it; a column a row leaves out takes its default, and a version column starts at 1.
+ * The statement is written here rather than by the query builder, which spends about a tenth of a
+ * millisecond a row: seconds on a 50,000-row history file.
  */
 export async function insertMany<T extends ObjectLiteral>(
   m: EntityManager,
   target: EntityTarget<T>,
   rows: QueryDeepPartialEntity<T>[],
 ): Promise<number[]> {
+  if (rows.length === 0) return [];
+  const meta = m.connection.getMetadata(target);
+  const driver = m.connection.driver;
+  const given = new Set(rows.flatMap((r) => Object.keys(r)));
+  const columns = meta.columns.filter((c) => !c.isGenerated && (given.has(c.propertyName) || c.isVersion));
+  const [primary] = meta.primaryColumns;
+  if (!primary) throw new Error(`${meta.tableName} has no primary key to answer`);
+  const head = `INSERT INTO ${driver.escape(meta.tableName)} (${columns.map((c) => driver.escape(c.databaseName)).join(', ')}) VALUES `;
   const ids: number[] = [];
   for (const chunk of chunks(rows, insertChunk)) {
-    const [sql, params] = m.createQueryBuilder().insert().into(target).values(chunk).getQueryAndParameters();
-    const returned = await m.query<{ id: unknown }[]>(`${sql} RETURNING \`id\``, params);
+    const params: unknown[] = [];
+    const tuples = chunk.map((row) => {
+      const values = columns.map((c) => {
+        const value: unknown = (row as Record<string, unknown>)[c.propertyName];
+        if (value === undefined) return c.isVersion ? '1' : 'DEFAULT';
+        params.push(driver.preparePersistentValue(value, c));
+        return '?';
+      });
+      return `(${values.join(', ')})`;
+    });
+    const sql = `${head}${tuples.join(', ')} RETURNING ${driver.escape(primary.databaseName)} AS id`;
+    const returned = await m.query<{ id: unknown }[]>(sql, params);
     if (returned.length !== chunk.length) throw new Error('an insert returned a different number of rows');
     for (const r of returned) ids.push(Number(r.id));
   }

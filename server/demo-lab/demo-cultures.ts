@@ -12,113 +12,39 @@ export interface DemoCulture {
   colonises: readonly [number, number];
 }
 
-export const demoCultures: DemoCulture[] = [
-  {
-    code: 'LC-0917',
-    species: 'Pleurotus ostreatus',
-    strain: 'Grey Harbour',
-    generation: 1,
-    volumeMl: 600,
-    weeks: { from: 15, to: 10 },
-    colonises: [10, 14],
-  },
-  {
-    code: 'LC-0919',
-    species: 'Hericium erinaceus',
-    strain: 'Snowdrift',
-    generation: 1,
-    volumeMl: 400,
-    weeks: { from: 15, to: 10 },
-    colonises: [14, 21],
-  },
-  {
-    code: 'LC-0921',
-    species: 'Lentinula edodes',
-    strain: 'Cedar Lane',
-    generation: 1,
-    volumeMl: 400,
-    weeks: { from: 14, to: 9 },
-    colonises: [21, 30],
-  },
-  {
-    code: 'LC-0925',
-    species: 'Pleurotus ostreatus',
-    strain: 'Grey Harbour',
-    generation: 2,
-    parent: 'LC-0917',
-    volumeMl: 600,
-    weeks: { from: 9, to: 5 },
-    colonises: [10, 14],
-  },
-  {
-    code: 'LC-0927',
-    species: 'Hericium erinaceus',
-    strain: 'Snowdrift',
-    generation: 2,
-    parent: 'LC-0919',
-    volumeMl: 400,
-    weeks: { from: 9, to: 3 },
-    colonises: [14, 21],
-  },
-  {
-    code: 'LC-0928',
-    species: 'Lentinula edodes',
-    strain: 'Cedar Lane',
-    generation: 2,
-    parent: 'LC-0921',
-    volumeMl: 400,
-    weeks: { from: 8, to: 2 },
-    colonises: [21, 30],
-  },
-  {
-    code: 'LC-0929',
-    species: 'Pleurotus ostreatus',
-    strain: 'Grey Harbour',
-    generation: 3,
-    parent: 'LC-0925',
-    volumeMl: 600,
-    weeks: { from: 5, to: 0 },
-    colonises: [10, 14],
-  },
-  {
-    code: 'LC-0931',
-    species: 'Pleurotus djamor',
-    strain: 'Coral Dusk',
-    generation: 2,
-    volumeMl: 500,
-    weeks: { from: 8, to: 5 },
-    colonises: [8, 12],
-  },
-  {
-    code: 'LC-0933',
-    species: 'Pleurotus eryngii',
-    strain: 'Tall Ridge',
-    generation: 1,
-    volumeMl: 500,
-    weeks: { from: 7, to: 0 },
-    colonises: [12, 18],
-  },
-  {
-    code: 'LC-0936',
-    species: 'Pleurotus ostreatus',
-    strain: 'Grey Harbour',
-    generation: 3,
-    parent: 'LC-0925',
-    volumeMl: 300,
-    weeks: { from: 9, to: 7 },
-    colonises: [10, 14],
-  },
-  {
-    code: 'LC-0938',
-    species: 'Hericium erinaceus',
-    strain: 'Snowdrift',
-    generation: 3,
-    parent: 'LC-0927',
-    volumeMl: 500,
-    weeks: { from: 2, to: 0 },
-    colonises: [14, 21],
-  },
+/** Each invented strain's species and its days to full colonisation on grain, common practice (shared/TRADE.md §1). */
+const strains = {
+  'Grey Harbour': { species: 'Pleurotus ostreatus', colonises: [10, 14] },
+  Snowdrift: { species: 'Hericium erinaceus', colonises: [14, 21] },
+  'Cedar Lane': { species: 'Lentinula edodes', colonises: [21, 30] },
+  'Coral Dusk': { species: 'Pleurotus djamor', colonises: [8, 12] },
+  'Tall Ridge': { species: 'Pleurotus eryngii', colonises: [12, 18] },
+} as const;
+
+/** code, strain, generation, parent culture, volume (ml), used from … until … weeks back. */
+const rows: [string, keyof typeof strains, number, string | null, number, number, number][] = [
+  ['LC-0917', 'Grey Harbour', 1, null, 600, 15, 10],
+  ['LC-0919', 'Snowdrift', 1, null, 400, 15, 10],
+  ['LC-0921', 'Cedar Lane', 1, null, 400, 14, 9],
+  ['LC-0925', 'Grey Harbour', 2, 'LC-0917', 600, 9, 5],
+  ['LC-0927', 'Snowdrift', 2, 'LC-0919', 400, 9, 3],
+  ['LC-0928', 'Cedar Lane', 2, 'LC-0921', 400, 8, 2],
+  ['LC-0929', 'Grey Harbour', 3, 'LC-0925', 600, 5, 0],
+  ['LC-0931', 'Coral Dusk', 2, null, 500, 8, 5],
+  ['LC-0933', 'Tall Ridge', 1, null, 500, 7, 0],
+  ['LC-0936', 'Grey Harbour', 3, 'LC-0925', 300, 9, 7],
+  ['LC-0938', 'Snowdrift', 3, 'LC-0927', 500, 2, 0],
 ];
+
+export const demoCultures: DemoCulture[] = rows.map(([code, strain, generation, parent, volumeMl, from, to]) => ({
+  code,
+  ...strains[strain],
+  strain,
+  generation,
+  ...(parent ? { parent } : {}),
+  volumeMl,
+  weeks: { from, to },
+}));
 
 /** LC-0931 is only ever given to jars on purpose, as the planted bad culture. */
 export const regularCultures = demoCultures.filter((c) => c.code !== 'LC-0931');

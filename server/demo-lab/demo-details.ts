@@ -1,15 +1,13 @@
-import { In, type EntityManager } from 'typeorm';
-import { CookRun } from '../cook-runs/cook-run.entity';
-import { Culture } from '../cultures/culture.entity';
+import type { EntityManager } from 'typeorm';
+import { setCookRunDetails } from '../cook-runs/cook-runs.service';
+import { culturesByCodes, setCultureDetails } from '../cultures/cultures.service';
 import { labNoon } from '../imports/lab-noon';
-import { Jar } from '../jars/jar.entity';
-import { InoculationSession } from '../sessions/inoculation-session.entity';
-import { User } from '../users/user.entity';
-import { f0AtConstant } from '../../shared/stats/lethality';
-import { sterilisingTemperatureC } from '../../shared/stats/steam';
+import { jarsByLabels, setJarDetails, setParentJar } from '../jars/jar-details.service';
+import { setSessionDetails } from '../sessions/sessions.service';
+import { accountNames } from '../users/users.service';
 import { addDays } from './demo-calendar';
 import { demoCultures } from './demo-cultures';
-import type { DemoPlan } from './demo-history';
+import type { DemoPlan } from './demo-plan';
 
 const HOUR = 3_600_000;
 /** 15 psi gauge, the usual set-point (shared/TRADE.md §1); the invented lab sits at 85 m. */
@@ -27,70 +25,56 @@ const vessels: Record<string, string> = {
  * dates and grain-to-grain parents — written onto the imported records, inside the loader's transaction.
  */
 export async function addPlanDetails(m: EntityManager, plan: DemoPlan, timeZone: string, today: string): Promise<void> {
-  const users = await m.find(User, { select: { id: true, displayName: true } });
+  const users = await accountNames(m);
   const userId = (name: string) => users.find((u) => u.displayName === name)?.id ?? null;
   const loads = new Map<string, number>();
   for (const j of plan.jars) loads.set(j.run.code, (loads.get(j.run.code) ?? 0) + 1);
 
   for (const r of plan.runs) {
-    await m.update(
-      CookRun,
-      { code: r.code },
-      {
-        vessel: vessels[r.container] ?? null,
-        cookedOn: r.cookedOn,
-        startedAt: new Date(labNoon(r.cookedOn, timeZone).getTime() + 3 * HOUR),
-        gaugeKPa,
-        ventingMinutes: 10,
-        altitudeM,
-        container: r.container,
-        loadCount: loads.get(r.code) ?? 0,
-        operatorId: userId(r.operator),
-        operatorName: r.operator,
-        f0: f0AtConstant(sterilisingTemperatureC(gaugeKPa, altitudeM), r.minutes),
-        f0Source: 'estimate',
-      },
-    );
+    await setCookRunDetails(m, r.code, {
+      vessel: vessels[r.container] ?? null,
+      cookedOn: r.cookedOn,
+      startedAt: new Date(labNoon(r.cookedOn, timeZone).getTime() + 3 * HOUR),
+      minutesAtPressure: r.minutes,
+      gaugeKPa,
+      ventingMinutes: 10,
+      altitudeM,
+      container: r.container,
+      loadCount: loads.get(r.code) ?? 0,
+      operatorId: userId(r.operator),
+      operatorName: r.operator,
+    });
   }
 
   for (const s of plan.sessions) {
-    await m.update(
-      InoculationSession,
-      { code: s.code },
-      {
-        startedAt: new Date(labNoon(s.heldOn, timeZone).getTime() + (s.startHour - 12) * HOUR),
-        workspace: s.workspace,
-      },
-    );
+    await setSessionDetails(m, s.code, {
+      startedAt: new Date(labNoon(s.heldOn, timeZone).getTime() + (s.startHour - 12) * HOUR),
+      workspace: s.workspace,
+    });
   }
 
   const firstUse = new Map<string, string>();
   for (const j of plan.jars)
     if (!firstUse.has(j.culture) || j.session.heldOn < firstUse.get(j.culture)!)
       firstUse.set(j.culture, j.session.heldOn);
-  const cultures = await m.find(Culture, { where: { code: In(demoCultures.map((c) => c.code)) } });
+  const cultureCodes = demoCultures.map((c) => c.code);
+  const cultures = await culturesByCodes(m, cultureCodes);
   const cultureId = (code: string | undefined) => cultures.find((c) => c.code === code)?.id ?? null;
   for (const c of demoCultures) {
     const used = firstUse.get(c.code);
-    await m.update(
-      Culture,
-      { code: c.code },
-      {
-        species: c.species,
-        strain: c.strain,
-        generation: c.generation,
-        volumeMl: c.volumeMl,
-        parentCultureId: cultureId(c.parent),
-        preparedOn: used ? addDays(used, -12) : null,
-        state: c.weeks.to > 2 && c.code !== 'LC-0931' ? 'retired' : 'released',
-      },
-    );
+    await setCultureDetails(m, c.code, {
+      species: c.species,
+      strain: c.strain,
+      generation: c.generation,
+      volumeMl: c.volumeMl,
+      parentCultureId: cultureId(c.parent),
+      preparedOn: used ? addDays(used, -12) : null,
+      state: c.weeks.to > 2 && c.code !== 'LC-0931' ? 'retired' : 'released',
+    });
   }
 
-  const jars = await m.find(Jar, {
-    select: { id: true, label: true, status: true },
-    where: { label: In(plan.jars.map((j) => j.label)) },
-  });
+  const labels = plan.jars.map((j) => j.label);
+  const jars = await jarsByLabels(m, labels);
   const byLabel = new Map(jars.map((j) => [j.label, j]));
   const groups = new Map<string, number[]>();
   const group = (key: string, id: number) => groups.set(key, [...(groups.get(key) ?? []), id]);
@@ -107,13 +91,12 @@ export async function addPlanDetails(m: EntityManager, plan: DemoPlan, timeZone:
     const [kind, a, b] = key.split('|');
     const set =
       kind === 'room' ? { room: a, shelf: b } : kind === 'ml' ? { inoculumMl: Number(a) } : { colonisedOn: a };
-    await m.update(Jar, { id: In(ids) }, set);
+    await setJarDetails(m, ids, set);
   }
 
-  // A grain-to-grain jar takes its inoculum from the parent jar, not from a culture.
   for (const p of plan.jars) {
     const child = byLabel.get(p.label);
     const parent = p.parent && byLabel.get(p.parent.label);
-    if (child && parent) await m.update(Jar, { id: child.id }, { parentJarId: parent.id, cultureId: null });
+    if (child && parent) await setParentJar(m, child.id, parent.id);
   }
 }

@@ -1,12 +1,9 @@
-import { In, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { Actor } from '../audit/audit.service';
-import { GrainLot } from '../grain/grain-lot.entity';
-import { Grain } from '../grain/grain.entity';
-import { insertGrainLot, insertPrepBatch } from '../grain/grain.service';
-import { PrepBatch } from '../grain/prep-batch.entity';
-import { Jar } from '../jars/jar.entity';
+import { findGrainLot, insertGrainLot, insertPrepBatch, listGrains, prepBatchesByCodes } from '../grain/grain.service';
+import { jarsByLabels, setJarDetails } from '../jars/jar-details.service';
 import { addDays } from './demo-calendar';
-import type { DemoPlan, PlanJar } from './demo-history';
+import type { DemoPlan, PlanJar } from './demo-plan';
 import { seededRandom } from './prng';
 
 export interface PlanLot {
@@ -87,21 +84,22 @@ export function planDemoGrain(plan: DemoPlan): DemoGrainPlan {
  * transaction, then points each imported jar at its batch (history files carry no batch).
  */
 export async function addDemoGrain(m: EntityManager, actor: Actor, plan: DemoGrainPlan): Promise<void> {
-  const grainIds = new Map((await m.find(Grain)).map((g) => [g.name.toLowerCase(), g.id]));
+  const grainIds = new Map((await listGrains(m)).map((g) => [g.name.toLowerCase(), g.id]));
   const lotIds = new Map<PlanLot, number>();
   for (const lot of plan.lots) {
     const grainId = grainIds.get(lot.grain);
     if (grainId === undefined) throw new Error(`The demo grain ${lot.grain} is not on the grain list`);
-    const stored = await m.findOneBy(GrainLot, { grainId, supplierLotCode: lot.supplierLotCode });
+    const stored = await findGrainLot(m, grainId, lot.supplierLotCode);
     const id =
       stored?.id ??
       (await insertGrainLot(m, actor, { grainId, supplierLotCode: lot.supplierLotCode, receivedOn: lot.receivedOn }))
         .id;
     lotIds.set(lot, id);
   }
-  const stored = new Map(
-    (await m.find(PrepBatch, { where: { code: In(plan.batches.map((b) => b.code)) } })).map((b) => [b.code, b.id]),
-  );
+  const batchCodes = plan.batches.map((b) => b.code);
+  const stored = new Map((await prepBatchesByCodes(m, batchCodes)).map((b) => [b.code, b.id]));
+  const labels = plan.batches.flatMap((b) => b.jars.map((j) => j.label));
+  const jarIds = new Map((await jarsByLabels(m, labels)).map((j) => [j.label, j.id]));
   for (const b of plan.batches) {
     const id =
       stored.get(b.code) ??
@@ -116,6 +114,7 @@ export async function addDemoGrain(m: EntityManager, actor: Actor, plan: DemoGra
           notes: b.notes ?? undefined,
         })
       ).id;
-    await m.update(Jar, { label: In(b.jars.map((j) => j.label)) }, { prepBatchId: id });
+    const ids = b.jars.flatMap((j) => jarIds.get(j.label) ?? []);
+    await setJarDetails(m, ids, { prepBatchId: id });
   }
 }

@@ -1,51 +1,10 @@
-import type { Contaminant, Workspace } from '../../shared/enums';
 import { addDays, isoWeekday, mondayOf } from './demo-calendar';
+import { contaminate, plantBadCulture } from './demo-contamination';
 import { demoCultures, regularCultures } from './demo-cultures';
 import { demoOperators } from './demo-people';
+import type { DemoPlan, PlanJar, PlanRun, PlanSession } from './demo-plan';
 import { plantedProblems as planted } from './planted-problems';
 import { seededRandom, type Random } from './prng';
-
-export type Container = '1 L jar' | '2 L jar' | '3 kg bag';
-
-export interface PlanRun {
-  code: string;
-  cookedOn: string;
-  minutes: number;
-  container: Container;
-  grain: string;
-  operator: string;
-}
-
-export interface PlanSession {
-  code: string;
-  heldOn: string;
-  operator: string;
-  workspace: Workspace;
-  startHour: number;
-}
-
-export interface PlanJar {
-  label: string;
-  run: PlanRun;
-  session: PlanSession;
-  culture: string;
-  /** Usually the run's grain; a mixed load holds jars of two. */
-  grain: string;
-  /** Grain-to-grain: the jar this one was inoculated from (its culture is then the chain's root). */
-  parent: PlanJar | null;
-  contaminant: Contaminant | null;
-  foundOn: string | null;
-  /** Days to full colonisation if it stays clean. */
-  colonisesIn: number;
-  /** Planted or a parent: left out of the background contamination draw. */
-  fixed: boolean;
-}
-
-export interface DemoPlan {
-  runs: PlanRun[];
-  sessions: PlanSession[];
-  jars: PlanJar[];
-}
 
 const grains = [
   ['rye', 30],
@@ -63,19 +22,6 @@ const containers = [
 ] as const;
 /** ISO weeks of history, the current one included: enough settled weeks for a steady p-chart centre line. */
 export const demoWeeks = 16;
-/** Share of the other jars found contaminated so far: a few per cent is good practice (shared/TRADE.md §1). */
-const backgroundRate = 0.035;
-/** Days from inoculation to a visible contaminant, common practice (shared/TRADE.md §2). */
-const background: readonly (readonly [Contaminant, number, number, number])[] = [
-  ['trichoderma', 30, 5, 14],
-  ['penicillium', 20, 6, 14],
-  ['bacterial', 20, 2, 7],
-  ['pin-mould', 10, 2, 4],
-  ['aspergillus', 6, 6, 14],
-  ['yeast', 6, 2, 6],
-  ['cobweb', 5, 12, 20],
-  ['neurospora', 3, 1, 3],
-];
 
 function makeRun(rng: Random, cookedOn: string, over: Partial<PlanRun> = {}): PlanRun {
   const container = rng.weighted(containers);
@@ -215,77 +161,6 @@ export function planDemoHistory(today: string): DemoPlan {
   return finish(runs, sessions, jars, shortRun);
 }
 
-/**
- * LC-0931 goes to five jars in each of eight sessions, two in each of its four weeks, away from the
- * other planted causes; an even spread keeps the culture, not one of its weeks, the lead.
- */
-function plantBadCulture(
-  rng: Random,
-  jars: PlanJar[],
-  sessions: PlanSession[],
-  weeksBack: (s: PlanSession) => number,
-  shortRunDay: string,
-) {
-  const c = planted.badCulture;
-  const weeks = new Set(c.weeksBeforeCurrent as readonly number[]);
-  const eligible = sessions.filter(
-    (s) => weeks.has(weeksBack(s)) && s.operator !== demoOperators.relief && s.heldOn !== shortRunDay,
-  );
-  const chosen = [...weeks].flatMap((w) =>
-    rng.shuffle(eligible.filter((s) => weeksBack(s) === w)).slice(0, c.sessions / weeks.size),
-  );
-  const perSession = c.jars / c.sessions;
-  for (const s of chosen) {
-    const own = jars.filter((j) => j.session === s && !j.fixed && !j.parent).slice(0, perSession);
-    for (const j of own) Object.assign(j, { culture: c.code, fixed: true });
-  }
-}
-
-function contaminate(
-  rng: Random,
-  today: string,
-  jars: PlanJar[],
-  shortRun: PlanRun | undefined,
-  weeksBack: (s: PlanSession) => number,
-) {
-  const plant = (set: PlanJar[], count: number, kinds: Contaminant[], [lo, hi]: readonly [number, number]) => {
-    for (const j of rng.shuffle(set).slice(0, count)) {
-      j.contaminant = rng.pick(kinds);
-      j.foundOn = addDays(j.session.heldOn, rng.int(lo, hi));
-    }
-  };
-  const s = planted.shortCookRun;
-  const b = planted.badCulture;
-  const w = planted.sloppyWeek;
-  plant(
-    jars.filter((j) => j.run === shortRun),
-    s.contaminated,
-    s.contaminants,
-    s.daysToDetection,
-  );
-  for (const week of b.weeksBeforeCurrent)
-    plant(
-      jars.filter((j) => j.culture === b.code && weeksBack(j.session) === week),
-      b.contaminated / b.weeksBeforeCurrent.length,
-      b.contaminants,
-      b.daysToDetection,
-    );
-  plant(
-    jars.filter((j) => j.fixed && j.session.operator === w.operator),
-    w.contaminated,
-    w.contaminants,
-    w.daysToDetection,
-  );
-  const others = jars.filter((j) => !j.fixed);
-  const drawn = rng.shuffle(others).slice(0, Math.round(backgroundRate * others.length));
-  for (const j of drawn) {
-    const [kind, , lo, hi] = rng.weighted(background.map((x) => [x, x[1]] as const));
-    const foundOn = addDays(j.session.heldOn, rng.int(lo, hi));
-    // Still clean on the shelf until its contaminant shows; redrawing it onto an older jar would inflate settled weeks.
-    if (foundOn <= today) Object.assign(j, { contaminant: kind, foundOn });
-  }
-}
-
 /** Labels and codes in date order, numbered so the planted short run is CR-2614 in its natural place. */
 function finish(runs: PlanRun[], sessions: PlanSession[], jars: PlanJar[], shortRun: PlanRun | undefined): DemoPlan {
   const ordered = [...runs].sort((a, b) => a.cookedOn.localeCompare(b.cookedOn));
@@ -296,30 +171,4 @@ function finish(runs: PlanRun[], sessions: PlanSession[], jars: PlanJar[], short
   );
   byDate.forEach((j, i) => (j.label = `J${String(i + 1).padStart(5, '0')}`));
   return { runs: ordered, sessions, jars: byDate };
-}
-
-const cell = (v: string) => (/[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v);
-
-/** The plan as a history file, the same format a lab would upload. */
-export function planToCsv(plan: DemoPlan): string {
-  const header =
-    'jar_label,grain,cook_run,cook_minutes,inoculated_on,session,operator,culture,outcome,contaminant,found_on';
-  const lines = plan.jars.map((j) =>
-    [
-      j.label,
-      j.grain,
-      j.run.code,
-      String(j.run.minutes),
-      j.session.heldOn,
-      j.session.code,
-      j.session.operator,
-      j.culture,
-      j.contaminant ? 'contaminated' : 'clean',
-      j.contaminant ?? '',
-      j.foundOn ?? '',
-    ]
-      .map(cell)
-      .join(','),
-  );
-  return [header, ...lines].join('\n') + '\n';
 }

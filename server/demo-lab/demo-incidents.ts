@@ -1,11 +1,9 @@
-import { Incident } from '../incidents/incident.entity';
-import { createIncident } from '../incidents/incidents.service';
-import { dataSource } from '../db/data-source';
+import { anyFiledIncident, createIncident } from '../incidents/incidents.service';
 import { labNoon } from '../imports/lab-noon';
-import { User } from '../users/user.entity';
+import { findUserByUsername } from '../users/users.service';
 import type { Contaminant } from '../../shared/enums';
 import { addDays } from './demo-calendar';
-import type { DemoPlan } from './demo-history';
+import type { DemoPlan } from './demo-plan';
 import { seededRandom } from './prng';
 
 const findings: { contaminant: Contaminant; colour: string; smell: string | null; texture: string; days: number }[] = [
@@ -38,8 +36,8 @@ const findings: { contaminant: Contaminant; colour: string; smell: string | null
  * service as a technician would file them; skipped once the register holds any filed incident.
  */
 export async function loadOpenIncidents(plan: DemoPlan, today: string, timeZone: string, log: (line: string) => void) {
-  if (await dataSource.manager.existsBy(Incident, { imported: false })) return;
-  const tech = await dataSource.manager.findOneBy(User, { username: 'technician' });
+  if (await anyFiledIncident()) return;
+  const tech = await findUserByUsername('technician');
   if (!tech) return;
   const rng = seededRandom(0x0f1a6);
   const candidates = plan.jars.filter(

@@ -3,12 +3,12 @@ import { config } from '../core/config';
 import { localDate } from '../core/local-time';
 import { dataSource } from '../db/data-source';
 import { importHistory } from '../imports/imports.service';
-import { Jar } from '../jars/jar.entity';
-import { User } from '../users/user.entity';
-import { createUser } from '../users/users.service';
+import { anyJarStored } from '../jars/jar-details.service';
+import { createUser, findUserByUsername } from '../users/users.service';
 import { addPlanDetails } from './demo-details';
 import { addDemoGrain, planDemoGrain } from './demo-grain';
-import { planDemoHistory, planToCsv } from './demo-history';
+import { planDemoHistory } from './demo-history';
+import { planToCsv } from './demo-history-csv';
 import { loadOpenIncidents } from './demo-incidents';
 import { demoAccounts, demoPassword } from './demo-people';
 import { loadDemoProcedures } from './demo-procedures';
@@ -22,7 +22,7 @@ const seeder: Actor = { id: null, displayName: 'demo loader' };
 export async function loadDemoLab(log: (line: string) => void = console.log, today?: string): Promise<void> {
   let created = 0;
   for (const account of demoAccounts) {
-    if (await dataSource.manager.existsBy(User, { username: account.username })) continue;
+    if (await findUserByUsername(account.username)) continue;
     await createUser(seeder, { ...account, password: demoPassword });
     created += 1;
   }
@@ -33,14 +33,14 @@ export async function loadDemoLab(log: (line: string) => void = console.log, tod
 
 /** Sixteen weeks of production ending today, imported as a lab would import its history; skipped once jars exist. */
 async function loadDemoProduction(log: (line: string) => void, today: string): Promise<void> {
-  if (await dataSource.manager.exists(Jar)) {
+  if (await anyJarStored()) {
     log('Demo lab: production already loaded');
     return;
   }
   const timeZone = config().LAB_TIME_ZONE;
   const plan = planDemoHistory(today);
   const grain = planDemoGrain(plan);
-  const supervisor = await dataSource.manager.findOneBy(User, { username: 'supervisor' });
+  const supervisor = await findUserByUsername('supervisor');
   const actor: Actor = supervisor ? { id: supervisor.id, displayName: supervisor.displayName } : seeder;
   const imported = await dataSource.transaction(async (m) => {
     const outcome = await importHistory(actor, Buffer.from(planToCsv(plan)), m, today);

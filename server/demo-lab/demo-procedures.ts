@@ -1,9 +1,7 @@
 import type { Actor } from '../audit/audit.service';
-import { dataSource } from '../db/data-source';
-import { Procedure } from '../procedures/procedure.entity';
-import { createProcedure, publishVersion } from '../procedures/procedures.service';
+import { createProcedure, findProcedureByCode, publishVersion } from '../procedures/procedures.service';
 import { createTrainingRecord } from '../training/training.service';
-import { User } from '../users/user.entity';
+import { findUserByUsername } from '../users/users.service';
 import type { ProcedureStepInput } from '../../shared/schemas/procedures';
 
 export const demoProcedureCode = 'STERILE-INOC';
@@ -54,10 +52,10 @@ const version2: ProcedureStepInput[] = [
 
 /** The sterile-technique procedure with two versions and two training records; skipped when present. */
 export async function loadDemoProcedures(log: (line: string) => void = console.log): Promise<void> {
-  if (await dataSource.manager.existsBy(Procedure, { code: demoProcedureCode })) return;
-  const users = await dataSource.manager.findBy(User, {});
-  const byName = (u: string) => users.find((x) => x.username === u);
-  const trainer = byName('trainer');
+  if (await findProcedureByCode(demoProcedureCode)) return;
+  const [trainer, technician, supervisor] = await Promise.all(
+    ['trainer', 'technician', 'supervisor'].map((u) => findUserByUsername(u)),
+  );
   const actor: Actor = trainer
     ? { id: trainer.id, displayName: trainer.displayName }
     : { id: null, displayName: 'demo loader' };
@@ -72,8 +70,6 @@ export async function loadDemoProcedures(log: (line: string) => void = console.l
     changeNote: 'Flaming between jars is now a step of its own, after port contaminations in one session.',
     steps: version2,
   });
-  const technician = byName('technician');
-  const supervisor = byName('supervisor');
   if (technician && v1)
     await createTrainingRecord(actor, {
       userId: technician.id,

@@ -60,6 +60,8 @@ export const grainRepository = {
 
   findBatchById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { id }),
   findBatchByCode: (code: string, m: EntityManager = dataSource.manager) => m.findOneBy(PrepBatch, { code }),
+  batchesByCodes: async (m: EntityManager, codes: string[]) =>
+    codes.length ? m.findBy(PrepBatch, { code: In(codes) }) : [],
 
   async listBatches(q: PrepBatchListQuery, grainId: number | null): Promise<[PrepBatch[], PageTotal]> {
     const qb = dataSource.manager.createQueryBuilder(PrepBatch, 'pb');

@@ -11,7 +11,7 @@ import type {
   PrepBatchDto,
   PrepBatchListQuery,
 } from '../../shared/schemas/grain';
-import { recordAudit, type Actor } from '../audit/audit.service';
+import { recordCreated, type Actor } from '../audit/audit.service';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
@@ -33,9 +33,7 @@ export async function createGrain(actor: Actor, input: CreateGrainInput): Promis
       throw conflict('That grain is already on the list.', [{ path: 'name', message: 'is already on the grain list' }]);
     }
     const grain = await grainRepository.insertGrain(m, { name: input.name, active: true });
-    await recordAudit(m, actor, [
-      { action: 'create', recordType: 'grain', recordId: grain.id, newValue: { name: grain.name } },
-    ]);
+    await recordCreated(m, actor, 'grain', [{ id: grain.id, newValue: { name: grain.name } }]);
     return toGrainDto(grain);
   });
 }
@@ -74,6 +72,11 @@ export async function getGrainLot(id: number): Promise<GrainLotDetailDto> {
   return { ...dto!, prepBatches: await batchDtos(batches) };
 }
 
+/** A grain's lot by its supplier's code, or null. */
+export const findGrainLot = (m: EntityManager, grainId: number, supplierLotCode: string) =>
+  grainRepository.findLot(grainId, supplierLotCode, m);
+export const prepBatchesByCodes = (m: EntityManager, codes: string[]) => grainRepository.batchesByCodes(m, codes);
+
 /** Inside the caller's transaction: the screen's one lot, or the demo loader's many. */
 export async function insertGrainLot(m: EntityManager, actor: Actor, input: CreateGrainLotInput): Promise<GrainLot> {
   const grain = await grainRepository.findGrainById(input.grainId, m);
@@ -89,13 +92,8 @@ export async function insertGrainLot(m: EntityManager, actor: Actor, input: Crea
     receivedOn: input.receivedOn,
     notes: input.notes || null,
   });
-  await recordAudit(m, actor, [
-    {
-      action: 'create',
-      recordType: 'grain-lot',
-      recordId: saved.id,
-      newValue: { grain: grain.name, supplierLotCode: saved.supplierLotCode },
-    },
+  await recordCreated(m, actor, 'grain-lot', [
+    { id: saved.id, newValue: { grain: grain.name, supplierLotCode: saved.supplierLotCode } },
   ]);
   return saved;
 }
@@ -150,13 +148,8 @@ export async function insertPrepBatch(m: EntityManager, actor: Actor, input: Cre
     drainMinutes: input.drainMinutes ?? null,
     notes: input.notes || null,
   });
-  await recordAudit(m, actor, [
-    {
-      action: 'create',
-      recordType: 'prep-batch',
-      recordId: saved.id,
-      newValue: { code: saved.code, grainLotId: saved.grainLotId },
-    },
+  await recordCreated(m, actor, 'prep-batch', [
+    { id: saved.id, newValue: { code: saved.code, grainLotId: saved.grainLotId } },
   ]);
   return saved;
 }

@@ -16,7 +16,7 @@ import { staffForNames } from '../staff/staff.service';
 import { checkRows, loadCodes, loadContext, resolveOperator, sortErrors, type HistoryContext } from './history-checks';
 import { parseHistoryCsv } from './history-csv';
 import { isBlankRecord, mapHeader, matchKey, readRow, type HistoryRow } from './history-rows';
-import { daysBetween, labNoon, sqlDateTime } from './lab-noon';
+import { daysBetween, labNoon } from './lab-noon';
 
 export type HistoryImportOutcome = { ok: true; result: ImportResult } | { ok: false; errors: ImportError[] };
 
@@ -180,10 +180,10 @@ async function writeRows(
   const timeZone = config().LAB_TIME_ZONE;
   const today = asOf ?? localDate(new Date(), timeZone);
   const { observationWindowDays } = await getLabSettings(m);
-  const noon = new Map<string, string>();
+  const noon = new Map<string, Date>();
   const noonOf = (date: string) => {
     let at = noon.get(date);
-    if (!at) noon.set(date, (at = sqlDateTime(labNoon(date, timeZone))));
+    if (!at) noon.set(date, (at = labNoon(date, timeZone)));
     return at;
   };
 

@@ -29,9 +29,6 @@ export function labNoon(date: string, timeZone: string): Date {
   return new Date(at);
 }
 
-/** MariaDB DATETIME text for a UTC instant; the DataSource stores datetimes in UTC. */
-export const sqlDateTime = (at: Date) => at.toISOString().slice(0, 19).replace('T', ' ');
-
 /** Whole days from a to b, both YYYY-MM-DD. */
 export function daysBetween(a: string, b: string): number {
   return Math.round((Date.parse(`${b}T00:00:00Z`) - Date.parse(`${a}T00:00:00Z`)) / 86_400_000);

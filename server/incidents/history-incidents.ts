@@ -1,63 +1,36 @@
 import type { EntityManager } from 'typeorm';
+import type { Contaminant } from '../../shared/enums';
 import { chunks, insertChunk } from '../db/bulk';
+import { incidentsRepository } from './incidents.repository';
 
 /** A contaminated jar of a history file: found, confirmed and closed long ago. */
 export interface HistoryIncident {
   jarId: number;
-  foundAt: string;
+  foundAt: Date;
   foundOn: string;
   foundById: number | null;
   foundByName: string;
-  contaminant: string;
+  contaminant: Contaminant;
   createdById: number | null;
 }
 
-const columns = [
-  'foundAt',
-  'foundOn',
-  'foundById',
-  'foundByName',
-  'stage',
-  'contaminant',
-  'status',
-  'verdict',
-  'imported',
-  'createdById',
-  'version',
-] as const;
-
-const columnList = columns.map((c) => `\`${c}\``).join(', ');
-const valuesSql = (columnCount: number, rowCount: number) =>
-  Array.from({ length: rowCount }, () => `(${Array.from({ length: columnCount }, () => '?').join(', ')})`).join(', ');
-
 /**
  * Writes one closed, confirmed incident per imported contaminated jar, with its jar link, inside the
- * caller's transaction. RETURNING lists the rows in VALUES order, which pairs each incident with its jar.
+ * caller's transaction through the incidents repository's bulk insert; the ids come back in the rows'
+ * order, which pairs each incident with its jar.
  */
 export async function insertHistoryIncidents(m: EntityManager, rows: HistoryIncident[]): Promise<number> {
-  for (const chunk of chunks(rows, insertChunk)) {
-    const params = chunk.flatMap((r) => [
-      r.foundAt,
-      r.foundOn,
-      r.foundById,
-      r.foundByName,
-      'incubation',
-      r.contaminant,
-      'closed',
-      'confirmed',
-      true,
-      r.createdById,
-      1,
-    ]);
-    const returned = await m.query<{ id: number }[]>(
-      `INSERT INTO \`incidents\` (${columnList}) VALUES ${valuesSql(columns.length, chunk.length)} RETURNING \`id\``,
-      params,
-    );
-    if (returned.length !== chunk.length) throw new Error('incident insert returned a different number of rows');
-    await m.query(
-      `INSERT INTO \`incident_jars\` (\`incidentId\`, \`jarId\`) VALUES ${valuesSql(2, chunk.length)}`,
-      chunk.flatMap((r, i) => [Number(returned[i]!.id), r.jarId]),
-    );
-  }
+  const ids = await incidentsRepository.insertMany(
+    m,
+    rows.map(({ jarId: _jarId, ...r }) => ({
+      ...r,
+      stage: 'incubation',
+      status: 'closed',
+      verdict: 'confirmed',
+      imported: true,
+    })),
+  );
+  const links = rows.map((r, i) => ({ incidentId: ids[i]!, jarId: r.jarId }));
+  for (const chunk of chunks(links, insertChunk)) await incidentsRepository.insertJarLinks(m, chunk);
   return rows.length;
 }

@@ -48,7 +48,7 @@ export async function reviewIncident(
       rootCauseNotes: input.rootCauseNotes === '' ? null : input.rootCauseNotes,
     };
     const wasRuledOut = incident.verdict === 'ruled-out';
-    const entries = await patchWithAudit(m, user, incident, changes, {
+    const entries = await patchWithAudit(m, user, incident, changes, incidentsRepository.save, {
       action: 'review',
       recordType: 'incident',
       recordId: id,

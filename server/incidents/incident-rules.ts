@@ -2,7 +2,7 @@ import type { EntityManager } from 'typeorm';
 import type { IncidentStatus } from '../../shared/enums';
 import type { SessionUser } from '../core/auth-guards';
 import { AppError, conflict, notFound, unprocessable } from '../core/errors';
-import type { Jar } from '../jars/jar.entity';
+import type { JarRecord } from '../jars/jar-status.service';
 import type { Incident } from './incident.entity';
 import { incidentsRepository } from './incidents.repository';
 
@@ -44,7 +44,7 @@ export function checkTransition(from: IncidentStatus, to: IncidentStatus): void 
 const clockSkewMs = 5 * 60_000;
 
 /** Found in the future, or before a jar was inoculated, is a typing slip worth stopping. */
-export function checkFoundAt(foundAt: Date, foundOn: string, jars: Pick<Jar, 'label' | 'inoculatedOn'>[]): void {
+export function checkFoundAt(foundAt: Date, foundOn: string, jars: Pick<JarRecord, 'label' | 'inoculatedOn'>[]): void {
   if (foundAt.getTime() > Date.now() + clockSkewMs) {
     throw unprocessable('foundAt: cannot be in the future.', [{ path: 'foundAt', message: 'cannot be in the future' }]);
   }

@@ -1,7 +1,7 @@
 import type { CorrectiveActionDto } from '../../shared/schemas/corrective-actions';
 import type { HistoryEntryDto, IncidentDetailDto } from '../../shared/schemas/incident-detail';
 import type { IncidentListItemDto } from '../../shared/schemas/incidents';
-import type { AuditEvent } from '../audit/audit-event.entity';
+import type { AuditEventRecord } from '../audit/audit.service';
 import type { CorrectiveAction } from './corrective-action.entity';
 import type { Incident } from './incident.entity';
 
@@ -38,7 +38,7 @@ export const toActionDto = (a: CorrectiveAction, today: string): CorrectiveActio
   createdAt: a.createdAt.toISOString(),
 });
 
-export const toHistoryEntry = (e: AuditEvent): HistoryEntryDto => ({
+export const toHistoryEntry = (e: AuditEventRecord): HistoryEntryDto => ({
   id: String(e.id),
   at: e.at.toISOString(),
   userName: e.userName,

@@ -1,8 +1,9 @@
-import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { In, type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import { contaminantNames, contaminants } from '../../shared/enums';
 import type { IncidentFilters, IncidentListQuery } from '../../shared/schemas/incidents';
 import { AuditEvent } from '../audit/audit-event.entity';
 import { applySortAndPage, likePrefix, pageSorted, whereDateRange } from '../core/paging';
+import { insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { Jar } from '../jars/jar.entity';
 import { IncidentStepLink } from '../procedures/incident-step-link.entity';
@@ -77,6 +78,8 @@ export const incidentsRepository = {
 
   insert: (m: EntityManager, fields: Partial<Incident>) => m.save(m.create(Incident, fields)),
   save: (m: EntityManager, incident: Incident) => m.save(incident),
+  anyFiled: () => dataSource.manager.existsBy(Incident, { imported: false }),
+  insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Incident>[]) => insertMany(m, Incident, rows),
 
   list: (q: IncidentListQuery) => pageSorted(filtered(q), q, { sortable, defaultSort: '-foundAt', tieBreak: 'i.id' }),
 

@@ -16,7 +16,7 @@ import { forbidden, notFound, unprocessable } from '../core/errors';
 import { localDate, todayLocal } from '../core/local-time';
 import { dataSource } from '../db/data-source';
 import { attachRecord, claimKey, type IdempotencyClaim } from '../idempotency/idempotency.service';
-import type { Jar } from '../jars/jar.entity';
+import type { JarRecord } from '../jars/jar-status.service';
 import { toPhotoDto } from '../photos/photos.mapper';
 import { requirePhotos } from '../photos/photos.service';
 import { emitIncidentCreated } from './incident-events';
@@ -28,7 +28,10 @@ import { toActionDto, toHistoryEntry, toIncidentDetail, toIncidentListItem } fro
 import { syncJarStatuses } from './jar-contamination';
 import { pageResult } from '../core/paging';
 
-async function resolveJars(m: EntityManager, input: Pick<CreateIncidentInput, 'jarIds' | 'jarLabels'>): Promise<Jar[]> {
+async function resolveJars(
+  m: EntityManager,
+  input: Pick<CreateIncidentInput, 'jarIds' | 'jarLabels'>,
+): Promise<JarRecord[]> {
   const labels = input.jarLabels ?? [];
   const ids = input.jarIds ?? [];
   const [byLabel, byId] = await Promise.all([
@@ -125,6 +128,9 @@ export async function listIncidents(q: IncidentListQuery): Promise<Page<Incident
   const items = rows.map((r) => toIncidentListItem(r, codes.get(r.id)?.labels ?? [], photos.get(r.id) ?? 0));
   return pageResult(items, total, q);
 }
+
+/** Whether anyone has filed an incident, as against incidents imported with a history. */
+export const anyFiledIncident = () => incidentsRepository.anyFiled();
 
 /** For other modules: the incident row itself, or null. */
 export const findIncident = (id: number) => incidentsRepository.findById(id);

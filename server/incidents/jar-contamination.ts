@@ -2,10 +2,10 @@ import type { EntityManager } from 'typeorm';
 import { jarStatuses, type JarStatus } from '../../shared/enums';
 import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
 import { localDate } from '../core/local-time';
-import type { JarEvent } from '../jars/jar-event.entity';
-import type { Jar } from '../jars/jar.entity';
 import {
   contaminatedJarIds,
+  type JarEventRecord,
+  type JarRecord,
   insertJarEvent,
   jarEventsOf,
   lockJarsForStatus,
@@ -17,7 +17,7 @@ const flaggable: JarStatus[] = ['incubating', 'colonised', 'on-hold'];
 
 const isJarStatus = (s: string | null): s is JarStatus => s !== null && (jarStatuses as readonly string[]).includes(s);
 
-function impliedStatus(e: JarEvent, current: JarStatus): JarStatus {
+function impliedStatus(e: JarEventRecord, current: JarStatus): JarStatus {
   if (isJarStatus(e.newStatus)) return e.newStatus;
   if (e.type === 'hold') return 'on-hold';
   if (e.type === 'discarded') return 'discarded';
@@ -26,7 +26,7 @@ function impliedStatus(e: JarEvent, current: JarStatus): JarStatus {
 }
 
 /** Replays the jar's events to find the status it had before it last became contaminated. */
-export function statusBeforeContamination(jar: Pick<Jar, 'colonisedOn'>, events: JarEvent[]): JarStatus {
+export function statusBeforeContamination(jar: Pick<JarRecord, 'colonisedOn'>, events: JarEventRecord[]): JarStatus {
   const ordered = [...events].sort((a, b) => a.at.getTime() - b.at.getTime() || a.id - b.id);
   let status: JarStatus = 'incubating';
   let before: JarStatus | undefined;

@@ -3,6 +3,7 @@ import type { EntityManager } from 'typeorm';
 import type { LabelSheetRowDto, LabelSheetQuery } from '../../shared/schemas/jar-labels';
 import { conflict, notFound } from '../core/errors';
 import { jarPageUrl } from './jar-story.service';
+import { jarLabelsRepository } from './jar-labels.repository';
 import { jarsRepository } from './jars.repository';
 import { toJarRow } from './jars.mapper';
 import { defaultLabelFormat, labelFormatOf, labelsAfter } from './label-sequence';
@@ -15,9 +16,9 @@ const labelMaxLength = 40;
  * Call inside the transaction that holds the sequence lock.
  */
 export async function nextJarLabels(m: EntityManager, count: number): Promise<string[]> {
-  const latest = await jarsRepository.latestSequencedLabel(m);
+  const latest = await jarLabelsRepository.latestSequencedLabel(m);
   const format = (latest ? labelFormatOf(latest) : null) ?? defaultLabelFormat;
-  const labels = labelsAfter(format, await jarsRepository.highestLabelDigits(m, format.prefix), count);
+  const labels = labelsAfter(format, await jarLabelsRepository.highestLabelDigits(m, format.prefix), count);
   if (labels.some((l) => l.length > labelMaxLength)) {
     throw conflict(`The label sequence ${format.prefix}… has run past ${labelMaxLength} characters.`);
   }

@@ -1,7 +1,12 @@
 import type { EntityManager } from 'typeorm';
 import type { JarStatus } from '../../shared/enums';
 import type { JarEvent } from './jar-event.entity';
+import type { Jar } from './jar.entity';
 import { jarStatusRepository } from './jar-status.repository';
+
+/** A stored jar and one of its events, as other modules read them. */
+export type JarRecord = Jar;
+export type JarEventRecord = JarEvent;
 
 /** For the incidents module, which decides each jar's status from its live incidents. */
 export const lockJarsForStatus = (m: EntityManager, ids: number[]) => jarStatusRepository.lockByIds(m, ids);

@@ -1,7 +1,7 @@
 import type { AncestorDto, CultureSummaryDto, JarStoryDto } from '../../shared/schemas/jar-story';
 import { config } from '../core/config';
 import { notFound } from '../core/errors';
-import type { Culture } from '../cultures/culture.entity';
+import type { CultureRecord } from '../cultures/cultures.service';
 import type { Jar } from './jar.entity';
 import { jarStoryRepository } from './jar-story.repository';
 import { buildTimeline } from './jar-timeline';
@@ -11,7 +11,7 @@ import { isoOrNull, toJarEventDto, toJarRow } from './jars.mapper';
 
 export const jarPageUrl = (label: string) => `${config().publicUrl}/j/${encodeURIComponent(label)}`;
 
-const cultureSummary = (c: Culture): CultureSummaryDto => ({
+const cultureSummary = (c: CultureRecord): CultureSummaryDto => ({
   id: c.id,
   code: c.code,
   species: c.species,

@@ -1,7 +1,16 @@
-import { In, IsNull, Not, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { In, IsNull, Not, type EntityManager, type QueryDeepPartialEntity, type SelectQueryBuilder } from 'typeorm';
 import type { JarExportQuery, JarFilters, JarListQuery } from '../../shared/schemas/jars';
 import type { JarStatus } from '../../shared/enums';
-import { applySortAndPage, likePrefix, pageIds, sortColumn, whereDateRange, type PageTotal } from '../core/paging';
+import {
+  applySortAndPage,
+  inIdOrder,
+  likePrefix,
+  pageIds,
+  sortColumn,
+  whereDateRange,
+  type PageTotal,
+} from '../core/paging';
+import { findByValues, insertMany } from '../db/bulk';
 import { dataSource } from '../db/data-source';
 import { CookRun } from '../cook-runs/cook-run.entity';
 import { Culture } from '../cultures/culture.entity';
@@ -13,7 +22,6 @@ import { LabSettings } from '../settings/lab-settings.entity';
 import { JarEvent } from './jar-event.entity';
 import { Jar } from './jar.entity';
 import type { JarRawRow } from './jars.mapper';
-import { sequencedLabelSql } from './label-sequence';
 
 const sortable = {
   label: 'j.label',
@@ -75,6 +83,12 @@ function applyFilters(qb: SelectQueryBuilder<Jar>, f: JarFilters): SelectQueryBu
 export const jarsRepository = {
   findById: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { id }),
   findByLabel: (label: string, m: EntityManager = dataSource.manager) => m.findOneBy(Jar, { label }),
+  findByLabels: (m: EntityManager, labels: string[]) =>
+    findByValues(m, Jar, 'label', labels, { id: true, label: true, status: true }),
+  any: () => dataSource.manager.exists(Jar),
+  updateByIds: (m: EntityManager, ids: number[], fields: Partial<Jar>) =>
+    ids.length === 0 ? Promise.resolve() : m.update(Jar, { id: In(ids) }, fields),
+  insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Jar>[]) => insertMany(m, Jar, rows),
 
   /**
    * The page's ids from the jar table's own indexes first, then the display columns joined for those
@@ -109,8 +123,7 @@ export const jarsRepository = {
   async rowsByIds(ids: number[], m: EntityManager = dataSource.manager): Promise<JarRawRow[]> {
     if (ids.length === 0) return [];
     const rows = await rowQuery(m).where('j.id IN (:...ids)', { ids }).getRawMany<JarRawRow>();
-    const byId = new Map(rows.map((r) => [Number(r.id), r]));
-    return ids.flatMap((id) => byId.get(id) ?? []);
+    return inIdOrder(ids, rows, (r) => Number(r.id));
   },
 
   async rowsBySession(sessionId: number): Promise<JarRawRow[]> {
@@ -168,36 +181,6 @@ export const jarsRepository = {
       .where('s.id = 1')
       .setLock('pessimistic_write')
       .getRawOne();
-  },
-
-  /** The label of the latest jar numbered in sequence: it sets the lab's label format. */
-  async latestSequencedLabel(m: EntityManager): Promise<string | null> {
-    const raw = await m
-      .createQueryBuilder(Jar, 'j')
-      .select('j.label', 'label')
-      .where('j.label REGEXP :pattern', { pattern: sequencedLabelSql })
-      .orderBy('j.id', 'DESC')
-      .limit(1)
-      .getRawOne<{ label: string }>();
-    return raw?.label ?? null;
-  },
-
-  /**
-   * The digits of the highest label under the prefix, compared as text (length, then value) so that
-   * no number is ever rounded; call after lockSequences.
-   */
-  async highestLabelDigits(m: EntityManager, prefix: string): Promise<string | null> {
-    const digits = `TRIM(LEADING '0' FROM SUBSTRING(j.label, ${prefix.length + 1}))`;
-    const raw = await m
-      .createQueryBuilder(Jar, 'j')
-      .select(digits, 'digits')
-      .where('j.label LIKE :start', { start: likePrefix(prefix) })
-      .andWhere('j.label REGEXP :pattern', { pattern: `^${prefix}[0-9]+$` })
-      .orderBy(`CHAR_LENGTH(${digits})`, 'DESC')
-      .addOrderBy(digits, 'DESC')
-      .limit(1)
-      .getRawOne<{ digits: string }>();
-    return raw ? raw.digits || '0' : null;
   },
 
   /** Call after lockSequences. */

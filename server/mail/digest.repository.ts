@@ -3,47 +3,35 @@ import { dataSource } from '../db/data-source';
 import { Grain } from '../grain/grain.entity';
 import { Jar } from '../jars/jar.entity';
 import { DigestRun } from './digest-run.entity';
-import { liveIncidentJarsSubquery } from '../incidents/live-incidents';
+import {
+  jarOutcomeCounts,
+  selectJarOutcomeCounts,
+  type JarOutcomeCounts,
+  type JarOutcomeRaw,
+} from '../incidents/jar-outcome-counts';
 
-export interface WeekGrainCount {
+export interface WeekGrainCount extends JarOutcomeCounts {
   week: string;
   grain: string;
-  jars: number;
-  contaminated: number;
-  incubating: number;
 }
-
-const contaminatedJars = `(${liveIncidentJarsSubquery()})`;
 
 const weekLabel = (yw: number) => `${Math.floor(yw / 100)}-W${String(yw % 100).padStart(2, '0')}`;
 
 export const digestRepository = {
   /** Jars per ISO week (mode 3 of YEARWEEK is ISO-8601) and grain, counted in the database. */
   async weeklyCounts(from: string, to: string, incubatingAfter: string): Promise<WeekGrainCount[]> {
-    const rows = await dataSource.manager
+    const byWeekAndGrain = dataSource.manager
       .createQueryBuilder(Jar, 'j')
       .innerJoin(Grain, 'g', 'g.id = j.grainId')
-      .leftJoin(contaminatedJars, 'cj', 'cj.jarId = j.id')
-      .select([
-        'YEARWEEK(j.inoculatedOn, 3) AS yw',
-        'g.name AS grain',
-        'COUNT(*) AS jars',
-        'SUM(CASE WHEN cj.jarId IS NOT NULL THEN 1 ELSE 0 END) AS contaminated',
-        'SUM(CASE WHEN cj.jarId IS NULL AND j.inoculatedOn > :incubatingAfter THEN 1 ELSE 0 END) AS incubating',
-      ])
-      .where('j.inoculatedOn BETWEEN :from AND :to', { from, to, incubatingAfter })
+      .select(['YEARWEEK(j.inoculatedOn, 3) AS yw', 'g.name AS grain']);
+    const rows = await selectJarOutcomeCounts(byWeekAndGrain, incubatingAfter)
+      .where('j.inoculatedOn BETWEEN :from AND :to', { from, to })
       .groupBy('yw')
       .addGroupBy('g.name')
       .orderBy('yw', 'ASC')
       .addOrderBy('g.name', 'ASC')
-      .getRawMany<{ yw: string | number; grain: string; jars: string; contaminated: string; incubating: string }>();
-    return rows.map((r) => ({
-      week: weekLabel(Number(r.yw)),
-      grain: r.grain,
-      jars: Number(r.jars),
-      contaminated: Number(r.contaminated),
-      incubating: Number(r.incubating),
-    }));
+      .getRawMany<JarOutcomeRaw & { yw: string | number; grain: string }>();
+    return rows.map((r) => ({ week: weekLabel(Number(r.yw)), grain: r.grain, ...jarOutcomeCounts(r) }));
   },
 
   findRun: (isoWeek: string) => dataSource.manager.findOneBy(DigestRun, { isoWeek }),

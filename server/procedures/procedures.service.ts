@@ -12,9 +12,13 @@ import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service
 import { conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
 import { dataSource } from '../db/data-source';
+import type { ProcedureStep } from './procedure-step.entity';
 import type { ProcedureVersion } from './procedure-version.entity';
 import { proceduresRepository } from './procedures.repository';
 import { toProcedureDto, toStepDto, toVersionSummaryDto } from './procedures.mapper';
+
+/** A step of a procedure version, as the sessions module reads it for a checklist. */
+export type ProcedureStepRecord = ProcedureStep;
 
 export async function listProcedures(q: PageQuery): Promise<Page<ProcedureDto>> {
   const [rows, total] = await proceduresRepository.list(q);
@@ -148,6 +152,8 @@ export async function publishVersion(
 }
 
 /** For other modules (training, seed): the version a person should be trained on now. */
+export const findProcedureByCode = (code: string) => proceduresRepository.findByCode(code);
+
 export async function currentVersionOf(procedureId: number): Promise<ProcedureVersion | undefined> {
   return (await proceduresRepository.currentVersions([procedureId])).get(procedureId);
 }

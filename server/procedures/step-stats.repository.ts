@@ -4,15 +4,14 @@ import { Incident } from '../incidents/incident.entity';
 import { Jar } from '../jars/jar.entity';
 import { SessionStepCheck } from '../sessions/session-step-check.entity';
 import { IncidentStepLink } from './incident-step-link.entity';
-import { liveIncidentJarsSubquery } from '../incidents/live-incidents';
+import {
+  jarOutcomeCounts,
+  selectJarOutcomeCounts,
+  type JarOutcomeCounts,
+  type JarOutcomeRaw,
+} from '../incidents/jar-outcome-counts';
 
-export interface GroupCounts {
-  jars: number;
-  contaminated: number;
-  incubating: number;
-}
-
-const contaminatedJars = `(${liveIncidentJarsSubquery()})`;
+export type GroupCounts = JarOutcomeCounts;
 
 export const stepStatsRepository = {
   /**
@@ -25,33 +24,18 @@ export const stepStatsRepository = {
     from?: string,
     to?: string,
   ): Promise<{ ticked: GroupCounts; notTicked: GroupCounts }> {
-    const qb = dataSource.manager
+    const byTick = dataSource.manager
       .createQueryBuilder(SessionStepCheck, 'c')
       .innerJoin(Jar, 'j', 'j.sessionId = c.sessionId')
-      .leftJoin(contaminatedJars, 'cj', 'cj.jarId = j.id')
-      .select([
-        'c.done AS done',
-        'COUNT(*) AS jars',
-        'SUM(CASE WHEN cj.jarId IS NOT NULL THEN 1 ELSE 0 END) AS contaminated',
-        'SUM(CASE WHEN cj.jarId IS NULL AND j.inoculatedOn > :incubatingAfter THEN 1 ELSE 0 END) AS incubating',
-      ])
-      .where('c.stepId = :stepId', { stepId, incubatingAfter })
+      .select('c.done', 'done');
+    const qb = selectJarOutcomeCounts(byTick, incubatingAfter)
+      .where('c.stepId = :stepId', { stepId })
       .groupBy('c.done');
     whereDateRange(qb, 'j.inoculatedOn', { from, to });
-    const rows = await qb.getRawMany<{
-      done: number | string;
-      jars: string;
-      contaminated: string;
-      incubating: string;
-    }>();
-    const empty = (): GroupCounts => ({ jars: 0, contaminated: 0, incubating: 0 });
-    const out = { ticked: empty(), notTicked: empty() };
-    for (const r of rows) {
-      const group = Number(r.done) === 1 ? out.ticked : out.notTicked;
-      group.jars = Number(r.jars);
-      group.contaminated = Number(r.contaminated);
-      group.incubating = Number(r.incubating);
-    }
+    const rows = await qb.getRawMany<JarOutcomeRaw & { done: number | string }>();
+    const empty: GroupCounts = { jars: 0, contaminated: 0, incubating: 0 };
+    const out = { ticked: empty, notTicked: empty };
+    for (const r of rows) out[Number(r.done) === 1 ? 'ticked' : 'notTicked'] = jarOutcomeCounts(r);
     return out;
   },
 

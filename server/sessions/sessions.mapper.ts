@@ -1,5 +1,5 @@
 import { workspaceLabels, type ChecklistRowDto, type SessionDto } from '../../shared/schemas/sessions';
-import type { ProcedureStep } from '../procedures/procedure-step.entity';
+import type { ProcedureStepRecord } from '../procedures/procedures.service';
 import type { InoculationSession } from './inoculation-session.entity';
 import type { SessionStepCheck } from './session-step-check.entity';
 
@@ -17,7 +17,7 @@ export const toSessionDto = (s: InoculationSession): SessionDto => ({
 });
 
 /** Every step of the version, ticked or not, in the version's order. */
-export function toChecklist(steps: ProcedureStep[], checks: SessionStepCheck[]): ChecklistRowDto[] {
+export function toChecklist(steps: ProcedureStepRecord[], checks: SessionStepCheck[]): ChecklistRowDto[] {
   const done = new Map(checks.map((c) => [c.stepId, c.done]));
   return steps.map((s) => ({
     stepId: s.id,

@@ -37,6 +37,9 @@ export const sessionsRepository = {
     }),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<InoculationSession>[]) =>
     insertMany(m, InoculationSession, rows),
+  save: (m: EntityManager, session: InoculationSession) => m.save(session),
+  updateByCode: (m: EntityManager, code: string, fields: Partial<InoculationSession>) =>
+    m.update(InoculationSession, { code }, fields),
   findVersion: (id: number, m: EntityManager = dataSource.manager) => m.findOneBy(ProcedureVersion, { id }),
   steps: (versionId: number, m: EntityManager = dataSource.manager) =>
     m.find(ProcedureStep, { where: { versionId }, order: { position: 'ASC' } }),

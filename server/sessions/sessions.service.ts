@@ -7,7 +7,7 @@ import type {
   SessionListQuery,
   UpdateSessionInput,
 } from '../../shared/schemas/sessions';
-import { patchWithAudit, recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
+import { patchWithAudit, recordCreated, type Actor, type AuditEntry } from '../audit/audit.service';
 import { suggestCode } from '../core/code-suggestion';
 import { badRequest, conflict, notFound } from '../core/errors';
 import { pageResult } from '../core/paging';
@@ -136,20 +136,23 @@ export async function insertSessions(
   for (const [i, input] of inputs.entries()) {
     if (input.checklist?.length) await sessionsRepository.replaceChecks(m, ids[i]!, input.checklist);
   }
-  await recordAudit(
+  await recordCreated(
     m,
     actor,
-    rows.map((r, i) => ({
-      action: 'create',
-      recordType: 'session',
-      recordId: ids[i]!,
-      newValue: { code: r.code, heldOn: r.heldOn, operator: r.operatorName },
-    })),
+    'session',
+    rows.map((r, i) => ({ id: ids[i]!, newValue: { code: r.code, heldOn: r.heldOn, operator: r.operatorName } })),
   );
   return ids;
 }
 
 /** The sessions already recorded under any of the codes (compared as the column's collation does). */
+/** Inside the caller's transaction (the demo loader's): what a history file leaves out about a session. */
+export const setSessionDetails = (
+  m: EntityManager,
+  code: string,
+  details: Pick<InoculationSession, 'startedAt' | 'workspace'>,
+) => sessionsRepository.updateByCode(m, code, details);
+
 export const sessionsByCodes = (m: EntityManager, codes: string[]) => sessionsRepository.findByCodes(m, codes);
 
 export async function createSession(actor: Actor, input: CreateSessionInput): Promise<SessionDetailDto> {
@@ -198,7 +201,7 @@ export async function updateSession(actor: Actor, id: number, input: UpdateSessi
       await sessionsRepository.replaceChecks(m, id, after);
       checklistEntries.push({ ...base, field: 'checklist', oldValue: oldList, newValue: newList });
     }
-    await patchWithAudit(m, actor, session, changes, base, checklistEntries);
+    await patchWithAudit(m, actor, session, changes, sessionsRepository.save, base, checklistEntries);
   });
   return getSession(id);
 }

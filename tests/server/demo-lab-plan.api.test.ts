@@ -4,7 +4,8 @@ import { localDate } from '../../server/core/local-time';
 
 import { addDays, isoWeek, mondayOf } from '../../server/demo-lab/demo-calendar';
 import { planDemoGrain } from '../../server/demo-lab/demo-grain';
-import { demoWeeks, planDemoHistory, type PlanJar } from '../../server/demo-lab/demo-history';
+import { demoWeeks, planDemoHistory } from '../../server/demo-lab/demo-history';
+import type { PlanJar } from '../../server/demo-lab/demo-plan';
 
 import { plantedProblems, sloppyIsoWeek } from '../../server/demo-lab/planted-problems';
 
