@@ -162,7 +162,7 @@ export const analysisRepository = {
     ];
     const { where, params } = periodWhere(f, extra);
     const raw = await run({
-      sql: `${fs.cte} SELECT ${countsSql} FROM jars j ${fs.joins.join(' ')}
+      sql: `SELECT ${countsSql} FROM jars j ${fs.joins.join(' ')}
         LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`,
       params: [f.windowStart, level, ...(settledOnly ? [f.windowStart] : []), ...params],
     });
@@ -191,8 +191,7 @@ export const analysisRepository = {
       ...(only === 'incubating' || only === 'settled' ? [f.windowStart] : []),
       ...params,
     ];
-    const cte = fs.cte || second?.cte || '';
-    // Both factors may need the placed CTE: join it once.
+    // Both factors join the jar's counted row: once.
     const joins = [...new Set([...fs.joins, ...(second?.joins ?? [])])].join(' ');
     const from = `FROM jars j ${joins} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
     // The jar's first live incident, so the list can link it.
@@ -200,13 +199,13 @@ export const analysisRepository = {
         WHERE lij.jarId = j.id AND ${liveIncidentSql('li')})`;
     const [items, total] = await Promise.all([
       dataSource.query<Raw>(
-        `${cte} SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
+        `SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
             (cj.jarId IS NULL AND ${young}) AS incubating, cj.contaminant, cj.foundOn,
             ${incident} AS incidentId
           ${from} ORDER BY j.inoculatedOn, j.label LIMIT ? OFFSET ?`,
         [f.windowStart, ...bound, page.limit, page.offset],
       ),
-      dataSource.query<{ n: string | number }[]>(`${cte} SELECT COUNT(*) AS n ${from}`, bound),
+      dataSource.query<{ n: string | number }[]>(`SELECT COUNT(*) AS n ${from}`, bound),
     ]);
     return {
       items: items.map((r) => ({
