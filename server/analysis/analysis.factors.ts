@@ -54,13 +54,7 @@ export function factorSql(factor: Factor, edges: readonly number[], keyRef: stri
     case 'cookRun':
       return by(cookRunKey, 'cook_runs', 'cr', '@.code');
     case 'cookMinutes':
-      return by(
-        cookRunKey,
-        'cook_runs',
-        'cr',
-        cookBucketSql(edges, '@.minutesAtPressure'),
-        'MIN(@.minutesAtPressure)',
-      );
+      return by(cookRunKey, 'cook_runs', 'cr', cookBucketSql(edges, '@.minutesAtPressure'), 'MIN(@.minutesAtPressure)');
     case 'session':
       return by(sessionKey, 'inoculation_sessions', 's', '@.code');
     case 'operator': {

@@ -37,7 +37,8 @@ export function periodWhere(
 }
 
 /** The counts' primary-key columns up to the jar's keys, in order (see TallyCount). */
-const TALLY_KEY_ORDER = 't.inoculatedOn, t.grainId, t.cookRunId, t.sessionId, t.cultureId, t.prepBatchId, t.room, t.transfers';
+const TALLY_KEY_ORDER =
+  't.inoculatedOn, t.grainId, t.cookRunId, t.sessionId, t.cultureId, t.prepBatchId, t.room, t.transfers';
 
 /**
  * The counts (server/tallies, kept current with every write) summed per key: jars, contaminated jars,

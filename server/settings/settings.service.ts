@@ -44,7 +44,8 @@ export async function updateLabSettings(actor: Actor, input: UpdateLabSettingsIn
     if (!row) throw new Error('lab_settings row 1 is missing: run the migrations');
     const entries = diffEntries({ action: 'update', recordType: 'lab-settings', recordId: 1 }, row, input);
     if (entries.length === 0) return toLabSettingsDto(row);
-    const windowChanged = input.observationWindowDays !== undefined && input.observationWindowDays !== row.observationWindowDays;
+    const windowChanged =
+      input.observationWindowDays !== undefined && input.observationWindowDays !== row.observationWindowDays;
     Object.assign(row, input);
     await settingsRepository.save(m, row);
     await recordAudit(m, actor, entries);

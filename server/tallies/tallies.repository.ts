@@ -15,9 +15,7 @@ function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice) {
 export const talliesRepository = {
   /** Waits for any other recount to commit; held until this transaction ends. */
   lock: (m: EntityManager) =>
-    m.query(
-      `INSERT INTO tally_state (id, rebuiltAt) VALUES (1, NULL) ON DUPLICATE KEY UPDATE id = id`,
-    ),
+    m.query(`INSERT INTO tally_state (id, rebuiltAt) VALUES (1, NULL) ON DUPLICATE KEY UPDATE id = id`),
 
   /** Takes the jars out of the counts and forgets how they were counted. */
   async forget(m: EntityManager, jars: JarChoice) {
