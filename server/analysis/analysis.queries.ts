@@ -52,6 +52,16 @@ export function ratesQuery(by: Factor, f: Frame): SqlQuery {
   };
 }
 
+/** One level's counts: a rates row asked for by name. */
+export function levelCountsQuery(by: Factor, level: string, f: Frame): SqlQuery {
+  const fs = factorSql(by, f.edges, 'k.k1');
+  const inner = groupedJars([fs.key], f);
+  return {
+    sql: `SELECT ${summedSql} FROM (${inner.sql}) k ${fs.joins.join(' ')} WHERE ${fs.level} = ?`,
+    params: [...inner.params, level],
+  };
+}
+
 export function crosstabQuery(rows: Factor, cols: Factor, f: Frame): SqlQuery {
   const r = factorSql(rows, f.edges, 'k.k1', '_r');
   const c = factorSql(cols, f.edges, 'k.k2', '_c');

@@ -7,6 +7,7 @@ import {
   combinationsQuery,
   countsSql,
   crosstabQuery,
+  levelCountsQuery,
   num,
   perJar,
   ratesQuery,
@@ -155,18 +156,9 @@ export const analysisRepository = {
 
   /** Counts of one factor level's jars in a period; `settledOnly` leaves incubating jars out (before/after). */
   async levelCounts(factor: Factor, level: string, f: Frame, settledOnly = false): Promise<CountRow> {
-    const fs = perJar(factor, f);
-    const extra = [
-      `${fs.level} = ?`,
-      ...(settledOnly ? [jarIsSettledSql('j.inoculatedOn', 'cj.jarId IS NOT NULL')] : []),
-    ];
-    const { where, params } = periodWhere(f, extra);
-    const raw = await run({
-      sql: `SELECT ${countsSql} FROM jars j ${fs.joins.join(' ')}
-        LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`,
-      params: [f.windowStart, level, ...(settledOnly ? [f.windowStart] : []), ...params],
-    });
-    return toCounts(raw[0] ?? {});
+    const raw = await run(levelCountsQuery(factor, level, f));
+    const c = toCounts(raw[0] ?? {});
+    return settledOnly ? { jars: num(raw[0]?.settled), contaminated: c.contaminated, incubating: 0 } : c;
   },
 
   async jarsBehind(
