@@ -1,5 +1,4 @@
 import type { Factor } from '../../shared/enums';
-import { jarIsYoungSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
 import { groupedJars, summedSql, type Frame, type SqlQuery } from './grouped-jars';
 import {
@@ -25,9 +24,6 @@ export function perJar(factor: Factor, f: Frame, aliasSuffix = '') {
   return { ...fs, joins: ['JOIN tallied_jars tj ON tj.jarId = j.id', ...fs.joins] };
 }
 
-export const countsSql = `COUNT(*) AS jars,
-  SUM(cj.jarId IS NOT NULL) AS contaminated,
-  SUM(cj.jarId IS NULL AND ${jarIsYoungSql('j.inoculatedOn')}) AS incubating`;
 
 export interface CountRow {
   jars: number;

@@ -5,7 +5,6 @@ import { dateText } from '../core/calendar';
 import { periodWhere, type Frame, type Period, type SqlQuery } from './grouped-jars';
 import {
   combinationsQuery,
-  countsSql,
   crosstabQuery,
   levelCountsQuery,
   num,
