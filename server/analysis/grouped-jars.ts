@@ -1,4 +1,4 @@
-import { keyOn, type JarKey } from './tally-keys';
+import { dayKeys, grainKey, keyOn, levelKeys, type JarKey } from './tally-keys';
 
 export interface Period {
   from?: string | undefined;
@@ -40,13 +40,30 @@ export function periodWhere(
 const TALLY_KEY_ORDER =
   't.inoculatedOn, t.grainId, t.cookRunId, t.sessionId, t.cultureId, t.prepBatchId, t.room, t.transfers';
 
+/** Where a question is answered: the one-factor roll-ups when it asks about one factor (and days), else the counts. */
+function sourceFor(keys: JarKey[]): { table: string; keys: JarKey[]; lost: string; factor: string | null } {
+  const factors = keys.filter((k) => !dayKeys.has(k));
+  const level =
+    factors.length === 0 ? levelKeys.get(grainKey) : factors.length === 1 ? levelKeys.get(factors[0]!) : undefined;
+  if (level) {
+    return {
+      table: 'tally_levels',
+      keys: keys.map((k) => (dayKeys.has(k) ? k : level.key)),
+      lost: 't.contaminated',
+      factor: level.factor,
+    };
+  }
+  return { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null };
+}
+
 /**
  * The counts (server/tallies, kept current with every write) summed per key: jars, contaminated jars,
  * young jars (inoculated after the window start) and the contaminated among them; the caller sums them
  * per level with summedSql: incubating = young − contaminated young, settled = jars − incubating.
- * `detections` lists days:contaminant:jars of the contaminated jars.
+ * A question about one factor reads tally_levels; the rest, and every question `withDetections` or
+ * `byKeyOrder`, read tally_counts. `detections` lists days:contaminant:jars of the contaminated jars.
  *
- * `byKeyOrder` groups in the counts' primary-key order instead, so MariaDB groups while it reads the
+ * `byKeyOrder` groups in tally_counts' primary-key order instead, so MariaDB groups while it reads the
  * key with no temporary table; for keys that are (functions of) those columns the outer query then adds
  * up the finer groups.
  */
@@ -55,19 +72,22 @@ export function groupedJars(
   f: Frame,
   { withDetections = false, byKeyOrder = false }: { withDetections?: boolean; byKeyOrder?: boolean } = {},
 ): SqlQuery {
-  const { where, params } = periodWhere(f, [], 't.inoculatedOn');
-  const select = keys.map((k, i) => `${keyOn(k, 't')} AS k${i + 1}`).join(', ');
+  const source =
+    withDetections || byKeyOrder
+      ? { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null }
+      : sourceFor(keys);
+  const { where, params } = periodWhere(f, source.factor ? ['t.factor = ?'] : [], 't.inoculatedOn');
+  const select = source.keys.map((k, i) => `${keyOn(k, 't')} AS k${i + 1}`).join(', ');
   const groupList = keys.map((_, i) => `k${i + 1}`).join(', ');
-  const lost = 't.contaminated * t.jars';
   const detections = withDetections
     ? `GROUP_CONCAT(IF(t.contaminated = 1 AND t.jars > 0, CONCAT(t.foundAfterDays, ':', t.contaminant, ':', t.jars), NULL))`
     : 'NULL';
   return {
-    sql: `SELECT ${select}, SUM(t.jars) AS jars, SUM(${lost}) AS contaminated,
-        SUM(IF(t.inoculatedOn > ?, t.jars, 0)) AS young, SUM(IF(t.inoculatedOn > ?, ${lost}, 0)) AS contaminatedYoung,
+    sql: `SELECT ${select}, SUM(t.jars) AS jars, SUM(${source.lost}) AS contaminated,
+        SUM(IF(t.inoculatedOn > ?, t.jars, 0)) AS young, SUM(IF(t.inoculatedOn > ?, ${source.lost}, 0)) AS contaminatedYoung,
         ${detections} AS detections
-      FROM tally_counts t ${where} GROUP BY ${byKeyOrder ? TALLY_KEY_ORDER : groupList} HAVING SUM(t.jars) > 0`,
-    params: [f.windowStart, f.windowStart, ...params],
+      FROM ${source.table} t ${where} GROUP BY ${byKeyOrder ? TALLY_KEY_ORDER : groupList} HAVING SUM(t.jars) > 0`,
+    params: [f.windowStart, f.windowStart, ...(source.factor ? [source.factor] : []), ...params],
   };
 }
 

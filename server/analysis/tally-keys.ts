@@ -1,3 +1,5 @@
+import type { TallyLevelFactor } from '../tallies/jar-keys.sql';
+
 /**
  * What the analysis groups on: a column of the counts (server/tallies), written with `@` for the table's
  * alias so one key reads tally_counts (`t`) and a jar's own row in tallied_jars (`tj`) alike. Where a jar
@@ -18,6 +20,23 @@ export const roomKey: JarKey = "NULLIF(@.room, '')";
 export const transfersKey: JarKey = '@.transfers';
 export const dayKey: JarKey = '@.inoculatedOn';
 export const yearWeekKey: JarKey = 'YEARWEEK(@.inoculatedOn, 3)';
+
+/** Keys read off the inoculation day: the same in both tables. */
+export const dayKeys: ReadonlySet<JarKey> = new Set([dayKey, yearWeekKey]);
+
+/**
+ * A key's factor in tally_levels (the counts rolled up per day and one factor), and the key there. Every
+ * jar has a grain, so the grain rows also answer questions about days alone.
+ */
+export const levelKeys: ReadonlyMap<JarKey, { factor: TallyLevelFactor; key: JarKey }> = new Map([
+  [grainKey, { factor: 'grain', key: '@.levelId' }],
+  [cookRunKey, { factor: 'cookRun', key: 'NULLIF(@.levelId, 0)' }],
+  [sessionKey, { factor: 'session', key: 'NULLIF(@.levelId, 0)' }],
+  [cultureKey, { factor: 'culture', key: 'NULLIF(@.levelId, 0)' }],
+  [prepBatchKey, { factor: 'prepBatch', key: 'NULLIF(@.levelId, 0)' }],
+  [roomKey, { factor: 'room', key: "NULLIF(@.room, '')" }],
+  [transfersKey, { factor: 'transfers', key: '@.levelId' }],
+]);
 
 /** `0`, `1`, `2+`: the level names of the transfers factor. */
 export const transfersLevelSql = (ref: string) =>

@@ -5,7 +5,7 @@ import { config } from '../core/config';
 import { dataSource } from '../db/data-source';
 import type { LabSettings } from './lab-settings.entity';
 import { settingsRepository } from './settings.repository';
-import { rebuildTallies } from '../tallies/tallies.service';
+import { recountMovedJars } from '../tallies/tallies.service';
 
 /** The settings row is created by the LabDefaults migration, so it always exists. */
 export async function getLabSettings(manager?: EntityManager): Promise<LabSettings> {
@@ -50,7 +50,7 @@ export async function updateLabSettings(actor: Actor, input: UpdateLabSettingsIn
     await settingsRepository.save(m, row);
     await recordAudit(m, actor, entries);
     // A jar's room in the counts is where it stood at the end of its window: a new window moves jars.
-    if (windowChanged) await rebuildTallies(m);
+    if (windowChanged) await recountMovedJars(m);
     return toLabSettingsDto(await getLabSettings(m));
   });
 }

@@ -18,6 +18,31 @@ export const tallyKeyColumns = [
   'contaminant',
 ] as const;
 
+/** The one-factor roll-ups kept in tally_levels: the factor's name there, and its column of tallied_jars. */
+export const tallyLevelFactors = [
+  ['grain', 'grainId'],
+  ['cookRun', 'cookRunId'],
+  ['session', 'sessionId'],
+  ['culture', 'cultureId'],
+  ['prepBatch', 'prepBatchId'],
+  ['room', 'room'],
+  ['transfers', 'transfers'],
+] as const;
+
+export type TallyLevelFactor = (typeof tallyLevelFactors)[number][0];
+
+/** tallied_jars rows (those `where` chooses) summed per day and factor level, as tally_levels rows times `sign`. */
+export function levelRollupSql(sign: 1 | -1, where: string): string {
+  return tallyLevelFactors
+    .map(
+      ([factor, column]) =>
+        `SELECT '${factor}', inoculatedOn, ${column === 'room' ? '0' : column}, ${column === 'room' ? 'room' : "''"},
+          ${sign} * COUNT(*), ${sign} * SUM(contaminated)
+        FROM tallied_jars WHERE ${where} GROUP BY inoculatedOn, ${column}`,
+    )
+    .join(' UNION ALL ');
+}
+
 export const tallyKeyList = tallyKeyColumns.map((c) => `\`${c}\``).join(', ');
 
 export interface JarChoice {

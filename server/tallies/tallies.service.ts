@@ -25,7 +25,15 @@ export async function recountJars(m: EntityManager, jarIds: Iterable<number>): P
   }
 }
 
-/** Recomputes every count from the records: `npm run tallies:rebuild`, a settings change, the demo lab. */
+/**
+ * After a change of observation window: a clean jar's room in the counts is where it stood at the end of
+ * its window, so only jars that have moved can count elsewhere now.
+ */
+export async function recountMovedJars(m: EntityManager): Promise<void> {
+  await recountJars(m, await talliesRepository.movedJarIds(m));
+}
+
+/** Recomputes every count from the records: `npm run tallies:rebuild`, the demo lab. */
 export async function rebuildTallies(m?: EntityManager): Promise<void> {
   if (!m) return dataSource.transaction((t) => rebuildTallies(t));
   const windowDays = await committedWindowDays(m);

@@ -100,3 +100,29 @@ export class TallyState {
   @Column({ type: 'datetime', nullable: true })
   rebuiltAt: Date | null;
 }
+
+/**
+ * The counts rolled up per day and one factor's key, for questions about one factor (rates, a factor by
+ * week, the weekly table): far fewer rows than tally_counts. `levelId` is the grain, cook run, session,
+ * culture or prep batch id (0 when not recorded) or the transfers; `room` is used by the room factor only.
+ */
+@Entity('tally_levels')
+export class TallyLevel {
+  @PrimaryColumn({ type: 'varchar', length: 12 })
+  factor: string;
+
+  @PrimaryColumn({ type: 'date' })
+  inoculatedOn: string;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  levelId: number;
+
+  @PrimaryColumn({ type: 'varchar', length: 40 })
+  room: string;
+
+  @Column({ type: 'int' })
+  jars: number;
+
+  @Column({ type: 'int' })
+  contaminated: number;
+}
