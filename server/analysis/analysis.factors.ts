@@ -1,12 +1,20 @@
 import type { Factor } from '../../shared/enums';
 import { cookBucketLabels } from '../../shared/schemas/settings';
-import { cultureKey, roomKey, transfersKey, transfersLevelSql, type JarKey } from './lineage-and-place';
+import {
+  cookRunKey,
+  cultureKey,
+  dayKey,
+  grainKey,
+  prepBatchKey,
+  roomKey,
+  sessionKey,
+  transfersKey,
+  transfersLevelSql,
+  type JarKey,
+} from './tally-keys';
 
 export interface FactorSql {
-  /**
-   * What the jars are grouped on first: a column (or date) of the jar itself, read from the analysis
-   * index, corrected for transferred and moved jars where the factor needs it (lineage-and-place.ts).
-   */
+  /** What the counts are grouped on first (tally-keys.ts). */
   key: JarKey;
   /** Joins from the grouped key to the names, made on the grouped rows rather than on every jar. */
   joins: string[];
@@ -42,23 +50,17 @@ export function factorSql(factor: Factor, edges: readonly number[], keyRef: stri
   });
   switch (factor) {
     case 'grain':
-      return by({ raw: 'j.grainId' }, 'grains', 'g', '@.name');
+      return by(grainKey, 'grains', 'g', '@.name');
     case 'cookRun':
-      return by({ raw: 'j.cookRunId' }, 'cook_runs', 'cr', '@.code');
+      return by(cookRunKey, 'cook_runs', 'cr', '@.code');
     case 'cookMinutes':
-      return by(
-        { raw: 'j.cookRunId' },
-        'cook_runs',
-        'cr',
-        cookBucketSql(edges, '@.minutesAtPressure'),
-        'MIN(@.minutesAtPressure)',
-      );
+      return by(cookRunKey, 'cook_runs', 'cr', cookBucketSql(edges, '@.minutesAtPressure'), 'MIN(@.minutesAtPressure)');
     case 'session':
-      return by({ raw: 'j.sessionId' }, 'inoculation_sessions', 's', '@.code');
+      return by(sessionKey, 'inoculation_sessions', 's', '@.code');
     case 'operator': {
       const level = `NULLIF(COALESCE(s${p}.operatorName, ou${p}.displayName), '')`;
       return {
-        key: { raw: 'j.sessionId' },
+        key: sessionKey,
         joins: [
           `LEFT JOIN inoculation_sessions s${p} ON s${p}.id = ${keyRef}`,
           `LEFT JOIN users ou${p} ON ou${p}.id = s${p}.operatorId`,
@@ -70,14 +72,14 @@ export function factorSql(factor: Factor, edges: readonly number[], keyRef: stri
     case 'culture':
       return by(cultureKey, 'cultures', 'c', '@.code');
     case 'week':
-      return { key: { raw: 'j.inoculatedOn' }, joins: [], level: isoWeekOf(keyRef), order: isoWeekOf(keyRef) };
+      return { key: dayKey, joins: [], level: isoWeekOf(keyRef), order: isoWeekOf(keyRef) };
     case 'transfers':
       return { key: transfersKey, joins: [], level: transfersLevelSql(keyRef), order: keyRef };
     case 'prepBatch':
-      return by({ raw: 'j.prepBatchId' }, 'prep_batches', 'pb', '@.code');
+      return by(prepBatchKey, 'prep_batches', 'pb', '@.code');
     case 'workspace':
-      return by({ raw: 'j.sessionId' }, 'inoculation_sessions', 's', '@.workspace');
+      return by(sessionKey, 'inoculation_sessions', 's', '@.workspace');
     case 'room':
-      return { key: roomKey, joins: [], level: `NULLIF(${keyRef}, '')`, order: `NULLIF(${keyRef}, '')` };
+      return { key: roomKey, joins: [], level: keyRef, order: keyRef };
   }
 }

@@ -1,28 +1,29 @@
 import type { Factor } from '../../shared/enums';
-import { jarIsYoungSql } from '../incidents/live-incidents';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
 import { groupedJars, summedSql, type Frame, type SqlQuery } from './grouped-jars';
-import { cultureKey, keyOf, placedJarsCte, roomKey, transfersKey, transfersLevelSql } from './lineage-and-place';
+import {
+  cookRunKey,
+  cultureKey,
+  grainKey,
+  keyOn,
+  prepBatchKey,
+  roomKey,
+  sessionKey,
+  transfersKey,
+  transfersLevelSql,
+  yearWeekKey,
+} from './tally-keys';
 
 export const num = (v: unknown) => Number(v ?? 0);
 export const str = (v: unknown): string | null =>
   v === null || v === undefined ? null : typeof v === 'string' ? v : JSON.stringify(v);
 
-/** A factor's level read off each jar (joined LEFT to placed sp where needed), for one level's jars. */
+/** A factor's level read off each jar's own row in the counts (tallied_jars tj), for one level's jars. */
 export function perJar(factor: Factor, f: Frame, aliasSuffix = '') {
-  const key = factorSql(factor, f.edges, '').key;
-  const fs = factorSql(factor, f.edges, keyOf(key), aliasSuffix);
-  const placed = key.placed !== undefined;
-  return {
-    ...fs,
-    cte: placed ? placedJarsCte(f.windowDays) : '',
-    joins: [...(placed ? ['LEFT JOIN placed sp ON sp.jarId = j.id'] : []), ...fs.joins],
-  };
+  const fs = factorSql(factor, f.edges, keyOn(factorSql(factor, f.edges, '').key, 'tj'), aliasSuffix);
+  return { ...fs, joins: ['JOIN tallied_jars tj ON tj.jarId = j.id', ...fs.joins] };
 }
 
-export const countsSql = `COUNT(*) AS jars,
-  SUM(cj.jarId IS NOT NULL) AS contaminated,
-  SUM(cj.jarId IS NULL AND ${jarIsYoungSql('j.inoculatedOn')}) AS incubating`;
 
 export interface CountRow {
   jars: number;
@@ -40,10 +41,20 @@ export function ratesQuery(by: Factor, f: Frame): SqlQuery {
   const fs = factorSql(by, f.edges, 'k.k1');
   const inner = groupedJars([fs.key], f);
   return {
-    sql: `${inner.cte} SELECT ${fs.level} AS level, ${fs.order} AS sortKey, ${summedSql}
+    sql: `SELECT ${fs.level} AS level, ${fs.order} AS sortKey, ${summedSql}
       FROM (${inner.sql}) k ${fs.joins.join(' ')}
       GROUP BY level HAVING SUM(k.jars) > 0 ORDER BY sortKey`,
     params: inner.params,
+  };
+}
+
+/** One level's counts: a rates row asked for by name. */
+export function levelCountsQuery(by: Factor, level: string, f: Frame): SqlQuery {
+  const fs = factorSql(by, f.edges, 'k.k1');
+  const inner = groupedJars([fs.key], f);
+  return {
+    sql: `SELECT ${summedSql} FROM (${inner.sql}) k ${fs.joins.join(' ')} WHERE ${fs.level} = ?`,
+    params: [...inner.params, level],
   };
 }
 
@@ -52,16 +63,12 @@ export function crosstabQuery(rows: Factor, cols: Factor, f: Frame): SqlQuery {
   const c = factorSql(cols, f.edges, 'k.k2', '_c');
   const inner = groupedJars([r.key, c.key], f);
   return {
-    sql: `${inner.cte} SELECT ${r.level} AS rowLevel, ${c.level} AS colLevel, ${r.order} AS rowOrder, ${c.order} AS colOrder, ${summedSql}
+    sql: `SELECT ${r.level} AS rowLevel, ${c.level} AS colLevel, ${r.order} AS rowOrder, ${c.order} AS colOrder, ${summedSql}
       FROM (${inner.sql}) k ${r.joins.join(' ')} ${c.joins.join(' ')}
       GROUP BY rowLevel, colLevel HAVING rowLevel IS NOT NULL AND colLevel IS NOT NULL AND SUM(k.jars) > 0`,
     params: inner.params,
   };
 }
-
-/** IDX_jars_analysis's columns in its order: the causes keys are these or functions of them. */
-const ANALYSIS_INDEX_COLUMNS =
-  'j.inoculatedOn, j.grainId, j.cookRunId, j.sessionId, j.cultureId, j.prepBatchId, j.room';
 
 /**
  * The causes query: jars grouped by the combination of every factor's key, so each row is a level
@@ -69,25 +76,16 @@ const ANALYSIS_INDEX_COLUMNS =
  */
 export function combinationsQuery(f: Frame): SqlQuery {
   const inner = groupedJars(
-    [
-      { raw: 'j.grainId' },
-      { raw: 'j.cookRunId' },
-      { raw: 'j.sessionId' },
-      cultureKey,
-      { raw: 'j.prepBatchId' },
-      roomKey,
-      { raw: 'YEARWEEK(j.inoculatedOn, 3)' },
-      transfersKey,
-    ],
+    [grainKey, cookRunKey, sessionKey, cultureKey, prepBatchKey, roomKey, yearWeekKey, transfersKey],
     f,
-    { withDetections: true, jarGroupBy: ANALYSIS_INDEX_COLUMNS },
+    { withDetections: true, byKeyOrder: true },
   );
   // Summed per combination first, then named: the joins run once per combination, not once per part.
   return {
-    sql: `${inner.cte} SELECT g.name AS grain, cr.code AS cookRun, ${cookBucketSql(f.edges, 'cr.minutesAtPressure')} AS cookMinutes,
+    sql: `SELECT g.name AS grain, cr.code AS cookRun, ${cookBucketSql(f.edges, 'cr.minutesAtPressure')} AS cookMinutes,
         s.code AS session, NULLIF(COALESCE(s.operatorName, ou.displayName), '') AS operator, c.code AS culture,
         ${isoWeekFromYearWeek('t.k7')} AS week, ${transfersLevelSql('t.k8')} AS transfers, pb.code AS prepBatch,
-        s.workspace AS workspace, NULLIF(t.k6, '') AS room,
+        s.workspace AS workspace, t.k6 AS room,
         t.jars, t.contaminated, t.incubating, t.settled, t.detections
       FROM (SELECT k.k1, k.k2, k.k3, k.k4, k.k5, k.k6, k.k7, k.k8, ${summedSql}, GROUP_CONCAT(k.detections) AS detections
         FROM (${inner.sql}) k
@@ -103,9 +101,9 @@ export function combinationsQuery(f: Frame): SqlQuery {
 }
 
 export function weeklyQuery(f: Frame): SqlQuery {
-  const inner = groupedJars([{ raw: 'YEARWEEK(j.inoculatedOn, 3)' }, { raw: 'j.grainId' }], f);
+  const inner = groupedJars([yearWeekKey, grainKey], f);
   return {
-    sql: `${inner.cte} SELECT ${isoWeekFromYearWeek('k.k1')} AS week, g.name AS grain, ${summedSql}
+    sql: `SELECT ${isoWeekFromYearWeek('k.k1')} AS week, g.name AS grain, ${summedSql}
       FROM (${inner.sql}) k JOIN grains g ON g.id = k.k2
       GROUP BY k.k1, k.k2 ORDER BY k.k1, g.name`,
     params: inner.params,

@@ -5,8 +5,8 @@ import { dateText } from '../core/calendar';
 import { periodWhere, type Frame, type Period, type SqlQuery } from './grouped-jars';
 import {
   combinationsQuery,
-  countsSql,
   crosstabQuery,
+  levelCountsQuery,
   num,
   perJar,
   ratesQuery,
@@ -155,18 +155,9 @@ export const analysisRepository = {
 
   /** Counts of one factor level's jars in a period; `settledOnly` leaves incubating jars out (before/after). */
   async levelCounts(factor: Factor, level: string, f: Frame, settledOnly = false): Promise<CountRow> {
-    const fs = perJar(factor, f);
-    const extra = [
-      `${fs.level} = ?`,
-      ...(settledOnly ? [jarIsSettledSql('j.inoculatedOn', 'cj.jarId IS NOT NULL')] : []),
-    ];
-    const { where, params } = periodWhere(f, extra);
-    const raw = await run({
-      sql: `${fs.cte} SELECT ${countsSql} FROM jars j ${fs.joins.join(' ')}
-        LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`,
-      params: [f.windowStart, level, ...(settledOnly ? [f.windowStart] : []), ...params],
-    });
-    return toCounts(raw[0] ?? {});
+    const raw = await run(levelCountsQuery(factor, level, f));
+    const c = toCounts(raw[0] ?? {});
+    return settledOnly ? { jars: num(raw[0]?.settled), contaminated: c.contaminated, incubating: 0 } : c;
   },
 
   async jarsBehind(
@@ -191,8 +182,7 @@ export const analysisRepository = {
       ...(only === 'incubating' || only === 'settled' ? [f.windowStart] : []),
       ...params,
     ];
-    const cte = fs.cte || second?.cte || '';
-    // Both factors may need the placed CTE: join it once.
+    // Both factors join the jar's counted row: once.
     const joins = [...new Set([...fs.joins, ...(second?.joins ?? [])])].join(' ');
     const from = `FROM jars j ${joins} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
     // The jar's first live incident, so the list can link it.
@@ -200,13 +190,13 @@ export const analysisRepository = {
         WHERE lij.jarId = j.id AND ${liveIncidentSql('li')})`;
     const [items, total] = await Promise.all([
       dataSource.query<Raw>(
-        `${cte} SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
+        `SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
             (cj.jarId IS NULL AND ${young}) AS incubating, cj.contaminant, cj.foundOn,
             ${incident} AS incidentId
           ${from} ORDER BY j.inoculatedOn, j.label LIMIT ? OFFSET ?`,
         [f.windowStart, ...bound, page.limit, page.offset],
       ),
-      dataSource.query<{ n: string | number }[]>(`${cte} SELECT COUNT(*) AS n ${from}`, bound),
+      dataSource.query<{ n: string | number }[]>(`SELECT COUNT(*) AS n ${from}`, bound),
     ]);
     return {
       items: items.map((r) => ({

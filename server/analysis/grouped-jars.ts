@@ -1,5 +1,4 @@
-import { contaminatedJarsSql, jarIsYoungSql } from '../incidents/live-incidents';
-import { keyOf, placedJarsCte, type JarKey } from './lineage-and-place';
+import { dayKeys, grainKey, keyOn, levelKeys, type JarKey } from './tally-keys';
 
 export interface Period {
   from?: string | undefined;
@@ -19,75 +18,80 @@ export interface SqlQuery {
   params: unknown[];
 }
 
-/** A query over grouped jars: `cte` (no parameters) must open the statement that wraps `sql`. */
-export interface GroupedQuery extends SqlQuery {
-  cte: string;
-}
-
-export function periodWhere(p: Period, extra: string[] = []): { where: string; params: string[] } {
+export function periodWhere(
+  p: Period,
+  extra: string[] = [],
+  column = 'j.inoculatedOn',
+): { where: string; params: string[] } {
   const clauses = [...extra];
   const params: string[] = [];
   if (p.from) {
-    clauses.push('j.inoculatedOn >= ?');
+    clauses.push(`${column} >= ?`);
     params.push(p.from);
   }
   if (p.to) {
-    clauses.push('j.inoculatedOn <= ?');
+    clauses.push(`${column} <= ?`);
     params.push(p.to);
   }
   return { where: clauses.length ? `WHERE ${clauses.join(' AND ')}` : '', params };
 }
 
+/** The counts' primary-key columns up to the jar's keys, in order (see TallyCount). */
+const TALLY_KEY_ORDER =
+  't.inoculatedOn, t.grainId, t.cookRunId, t.sessionId, t.cultureId, t.prepBatchId, t.room, t.transfers';
+
+/** Where a question is answered: the one-factor roll-ups when it asks about one factor (and days), else the counts. */
+function sourceFor(keys: JarKey[]): { table: string; keys: JarKey[]; lost: string; factor: string | null } {
+  const factors = keys.filter((k) => !dayKeys.has(k));
+  const level =
+    factors.length === 0 ? levelKeys.get(grainKey) : factors.length === 1 ? levelKeys.get(factors[0]!) : undefined;
+  if (level) {
+    return {
+      table: 'tally_levels',
+      keys: keys.map((k) => (dayKeys.has(k) ? k : level.key)),
+      lost: 't.contaminated',
+      factor: level.factor,
+    };
+  }
+  return { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null };
+}
+
 /**
- * Jars grouped on their own key columns in set-based parts: every jar (read from the covering analysis
- * index, never the rows), the transferred and moved jars taken out of their own columns' groups and put
- * into their corrected ones (only when a key needs it), and the few contaminated jars, grouped on their
- * corrected keys at once. The caller sums the parts per level: incubating = young − contaminated young,
- * settled = jars − incubating. `detections` lists days:contaminant of contaminated jars.
+ * The counts (server/tallies, kept current with every write) summed per key: jars, contaminated jars,
+ * young jars (inoculated after the window start) and the contaminated among them; the caller sums them
+ * per level with summedSql: incubating = young − contaminated young, settled = jars − incubating.
+ * A question about one factor reads tally_levels; the rest, and every question `withDetections` or
+ * `byKeyOrder`, read tally_counts. `detections` lists days:contaminant:jars of the contaminated jars.
  *
- * `jarGroupBy` replaces the grouping of the every-jar part: columns in the analysis index's own order
- * let MariaDB group while it reads the index, with no temporary table, when the keys are (functions
- * of) exactly those columns; the outer query then adds up the finer groups.
+ * `byKeyOrder` groups in tally_counts' primary-key order instead, so MariaDB groups while it reads the
+ * key with no temporary table; for keys that are (functions of) those columns the outer query then adds
+ * up the finer groups.
  */
 export function groupedJars(
   keys: JarKey[],
   f: Frame,
-  { withDetections = false, jarGroupBy }: { withDetections?: boolean; jarGroupBy?: string } = {},
-): GroupedQuery {
-  const { where, params } = periodWhere(f);
-  const placed = keys.some((k) => k.placed);
-  const select = (expr: (k: JarKey) => string) => keys.map((k, i) => `${expr(k)} AS k${i + 1}`).join(', ');
+  { withDetections = false, byKeyOrder = false }: { withDetections?: boolean; byKeyOrder?: boolean } = {},
+): SqlQuery {
+  const source =
+    withDetections || byKeyOrder
+      ? { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null }
+      : sourceFor(keys);
+  const { where, params } = periodWhere(f, source.factor ? ['t.factor = ?'] : [], 't.inoculatedOn');
+  const select = source.keys.map((k, i) => `${keyOn(k, 't')} AS k${i + 1}`).join(', ');
   const groupList = keys.map((_, i) => `k${i + 1}`).join(', ');
-  const young = `SUM(${jarIsYoungSql('j.inoculatedOn')})`;
-  const bound = [f.windowStart, ...params];
   const detections = withDetections
-    ? "GROUP_CONCAT(CONCAT(DATEDIFF(cj.foundOn, j.inoculatedOn), ':', cj.contaminant))"
+    ? `GROUP_CONCAT(IF(t.contaminated = 1 AND t.jars > 0, CONCAT(t.foundAfterDays, ':', t.contaminant, ':', t.jars), NULL))`
     : 'NULL';
-  const parts = [
-    `SELECT ${select((k) => k.raw)}, COUNT(*) AS jars, 0 AS contaminated, ${young} AS young,
-        0 AS contaminatedYoung, NULL AS detections
-      FROM jars j FORCE INDEX (IDX_jars_analysis) ${where} GROUP BY ${jarGroupBy ?? groupList}`,
-  ];
-  const partParams: unknown[] = [...bound];
-  if (placed) {
-    parts.push(
-      `SELECT ${select((k) => k.raw)}, -COUNT(*), 0, -${young}, 0, NULL
-        FROM placed sp JOIN jars j ON j.id = sp.jarId ${where} GROUP BY ${groupList}`,
-      `SELECT ${select((k) => k.placed ?? k.raw)}, COUNT(*), 0, ${young}, 0, NULL
-        FROM placed sp JOIN jars j ON j.id = sp.jarId ${where} GROUP BY ${groupList}`,
-    );
-    partParams.push(...bound, ...bound);
-  }
-  parts.push(
-    `SELECT ${select(keyOf)}, 0, COUNT(*), 0, ${young}, ${detections}
-      FROM (${contaminatedJarsSql}) cj JOIN jars j ON j.id = cj.jarId
-      ${placed ? 'LEFT JOIN placed sp ON sp.jarId = j.id' : ''} ${where} GROUP BY ${groupList}`,
-  );
-  partParams.push(...bound);
-  return { cte: placed ? placedJarsCte(f.windowDays) : '', sql: parts.join('\n UNION ALL\n '), params: partParams };
+  return {
+    sql: `SELECT ${select}, SUM(t.jars) AS jars, SUM(${source.lost}) AS contaminated,
+        SUM(IF(t.inoculatedOn > ?, t.jars, 0)) AS young, SUM(IF(t.inoculatedOn > ?, ${source.lost}, 0)) AS contaminatedYoung,
+        ${detections} AS detections
+      FROM ${source.table} t ${where} GROUP BY ${byKeyOrder ? TALLY_KEY_ORDER : groupList} HAVING SUM(t.jars) > 0`,
+    params: [f.windowStart, f.windowStart, ...(source.factor ? [source.factor] : []), ...params],
+  };
 }
 
-/** Sums of the parts per outer group. */
+/** Sums of the grouped counts per outer group. */
 export const summedSql = `SUM(k.jars) AS jars, SUM(k.contaminated) AS contaminated,
   SUM(k.young) - SUM(k.contaminatedYoung) AS incubating,
   SUM(k.jars) - SUM(k.young) + SUM(k.contaminatedYoung) AS settled`;

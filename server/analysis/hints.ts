@@ -131,10 +131,13 @@ const UNKNOWN = contaminants.indexOf('unknown');
  */
 export function readDetections(text: string | null, add: (days: number, contaminant: number) => void): void {
   if (!text) return;
+  // Tokens are days:contaminant:jars (server/analysis/grouped-jars.ts).
   for (const token of text.split(',')) {
-    const colon = token.indexOf(':');
-    const n = Number(token.slice(0, colon));
-    if (colon < 0 || !Number.isFinite(n)) continue;
-    add(n, contaminantIndex.get(token.slice(colon + 1)) ?? UNKNOWN);
+    const [daysText, name, jarsText] = token.split(':');
+    const days = Number(daysText);
+    const jars = Number(jarsText);
+    if (name === undefined || !Number.isFinite(days) || !Number.isInteger(jars)) continue;
+    const code = contaminantIndex.get(name) ?? UNKNOWN;
+    for (let i = 0; i < jars; i += 1) add(days, code);
   }
 }

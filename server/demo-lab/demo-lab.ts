@@ -1,6 +1,7 @@
 import type { Actor } from '../audit/audit.service';
 import { config } from '../core/config';
 import { localDate } from '../core/local-time';
+import { rebuildTallies } from '../tallies/tallies.service';
 import { dataSource } from '../db/data-source';
 import { importHistory } from '../imports/imports.service';
 import { anyJarStored } from '../jars/jar-details.service';
@@ -50,6 +51,8 @@ async function loadDemoProduction(log: (line: string) => void, today: string): P
     }
     await addPlanDetails(m, plan, timeZone, today);
     await addDemoGrain(m, actor, grain);
+    // The details above set batches and parent jars on imported rows directly: count the lab afresh.
+    await rebuildTallies(m);
     return outcome.result.imported;
   });
   log(

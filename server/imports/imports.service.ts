@@ -10,6 +10,7 @@ import { insertCookRuns } from '../cook-runs/cook-runs.service';
 import { insertCultures } from '../cultures/cultures.service';
 import { insertHistoryIncidents, type HistoryIncident } from '../incidents/history-incidents';
 import { insertHistoryJars, type HistoryJar } from '../jars/history-jars';
+import { recountJars } from '../tallies/tallies.service';
 import { insertSessions } from '../sessions/sessions.service';
 import { getLabSettings } from '../settings/settings.service';
 import { staffForNames } from '../staff/staff.service';
@@ -222,6 +223,8 @@ async function writeRows(
     };
   });
   await insertHistoryIncidents(m, incidents);
+  // Counted once both the jars and their incidents are in.
+  await recountJars(m, jarIds.values());
   return {
     jars: jars.length,
     incidents: incidents.length,

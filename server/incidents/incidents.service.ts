@@ -26,6 +26,7 @@ import { canEditDescriptive, checkFoundAt, loadForChange } from './incident-rule
 import { incidentsRepository } from './incidents.repository';
 import { toActionDto, toHistoryEntry, toIncidentDetail, toIncidentListItem } from './incidents.mapper';
 import { syncJarStatuses } from './jar-contamination';
+import { recountJars } from '../tallies/tallies.service';
 import { pageResult } from '../core/paging';
 
 async function resolveJars(
@@ -190,6 +191,8 @@ export async function updateIncident(
     Object.assign(incident, changes, changes.foundAt ? { foundOn: localDate(changes.foundAt) } : {});
     await incidentsRepository.save(m, incident);
     await recordAudit(m, user, entries);
+    // When and what was found are counted (days to finding, contaminant, the room at that moment).
+    if (changes.foundAt || changes.contaminant) await recountJars(m, await incidentsRepository.jarIdsOf(m, id));
   });
   return getIncident(id);
 }

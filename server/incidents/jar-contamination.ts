@@ -2,6 +2,7 @@ import type { EntityManager } from 'typeorm';
 import { jarStatuses, type JarStatus } from '../../shared/enums';
 import { recordAudit, type Actor, type AuditEntry } from '../audit/audit.service';
 import { localDate } from '../core/local-time';
+import { recountJars } from '../tallies/tallies.service';
 import {
   contaminatedJarIds,
   type JarEventRecord,
@@ -44,6 +45,7 @@ export function statusBeforeContamination(jar: Pick<JarRecord, 'colonisedOn'>, e
  * Brings each jar's status in line with its live incidents, inside the caller's transaction:
  * a jar with a live incident becomes contaminated; one whose last live incident was voided or
  * ruled out gets back the status it had before. Each change is a jar event and an audit event.
+ * The analysis counts follow in the same transaction.
  */
 export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: number[], why: string): Promise<void> {
   if (jarIds.length === 0) return;
@@ -84,4 +86,5 @@ export async function syncJarStatuses(m: EntityManager, actor: Actor, jarIds: nu
     });
   }
   await recordAudit(m, actor, audit);
+  await recountJars(m, jarIds);
 }

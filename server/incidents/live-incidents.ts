@@ -37,10 +37,15 @@ export function liveIncidentJarsSubquery(): string {
  * One row per contaminated jar with the day (and moment) it was first found and that incident's
  * contaminant (`jarId`, `foundOn`, `foundAt`, `contaminant`): the earliest live incident gives them.
  */
-export const contaminatedJarsSql = `SELECT live_ij.jarId, MIN(live_i.foundOn) AS foundOn, MIN(live_i.foundAt) AS foundAt,
+export const contaminatedJarsSql = contaminatedJarsAmong('');
+
+/** contaminatedJarsSql for some jars only: `jarFilter` is a condition on live_ij.jarId, e.g. `live_ij.jarId IN (?, ?)`. */
+export function contaminatedJarsAmong(jarFilter: string): string {
+  return `SELECT live_ij.jarId, MIN(live_i.foundOn) AS foundOn, MIN(live_i.foundAt) AS foundAt,
     SUBSTRING(MIN(CONCAT(live_i.foundOn, live_i.contaminant)), 11) AS contaminant
   FROM incident_jars live_ij JOIN incidents live_i ON live_i.id = live_ij.incidentId
-  WHERE ${liveIncidentSql('live_i')} GROUP BY live_ij.jarId`;
+  WHERE ${liveIncidentSql('live_i')} ${jarFilter ? `AND ${jarFilter}` : ''} GROUP BY live_ij.jarId`;
+}
 
 /** `EXISTS (…)` for one jar, e.g. jarIsContaminatedSql('j.id'); pass a column expression, never user input. */
 export function jarIsContaminatedSql(jarIdColumn: string): string {

@@ -12,6 +12,7 @@ import type { Jar } from './jar.entity';
 import { statusAfter } from './jar-life';
 import { jarsRepository } from './jars.repository';
 import { toJarRow } from './jars.mapper';
+import { recountJars } from '../tallies/tallies.service';
 
 export interface EventActor extends Actor {
   role: Role;
@@ -124,6 +125,8 @@ export async function applyEvent(
 
   await jarsRepository.insertEvents(m, [event]);
   if (Object.keys(changes).length > 0) await jarsRepository.updateJar(m, jar.id, changes);
+  // The counts key a jar on the room it stood in at finding or at the end of its window.
+  if (event.type === 'moved') await recountJars(m, [jar.id]);
   Object.assign(jar, changes);
   return entries;
 }

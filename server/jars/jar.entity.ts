@@ -18,8 +18,6 @@ import { jarStatuses, type JarStatus } from '../../shared/enums';
 
 @Entity({ name: 'jars' })
 @Index(['room', 'shelf'])
-/** Covers every analysis GROUP BY: the counting reads this index only, never the jar rows (see server/analysis). */
-@Index('IDX_jars_analysis', ['inoculatedOn', 'grainId', 'cookRunId', 'sessionId', 'cultureId', 'prepBatchId', 'room'])
 export class Jar {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;

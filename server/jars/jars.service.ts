@@ -19,6 +19,7 @@ import { nextJarLabels } from './jar-labels.service';
 import { jarsRepository } from './jars.repository';
 import { dateOnly } from '../core/raw-values';
 import { toJarRow } from './jars.mapper';
+import { recountJars } from '../tallies/tallies.service';
 
 const missing = (path: string, what: string) =>
   unprocessable(`${path}: no such ${what}`, [{ path, message: `no such ${what}` }]);
@@ -116,6 +117,10 @@ export async function createJarBatch(actor: Actor, input: CreateJarBatchInput): 
       inoculatedOn,
     }));
     const jars = await jarsRepository.insertJars(m, rows);
+    await recountJars(
+      m,
+      jars.map((j) => j.id),
+    );
     await recordAudit(
       m,
       actor,

@@ -5,6 +5,7 @@ import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, uniqueName } from '../setup/factories';
 import { jarFixtures } from './jars.fixtures';
+import { rebuildTallies } from '../../server/tallies/tallies.service';
 
 const app = createTestApp();
 // A month no other test plants in, so the period holds these jars alone.
@@ -31,6 +32,7 @@ beforeAll(async () => {
       })),
     ),
   );
+  await rebuildTallies();
 });
 
 describe('analysis answers a page of levels', () => {

@@ -1,4 +1,5 @@
 import { dataSource } from '../../server/db/data-source';
+import { rebuildTallies } from '../../server/tallies/tallies.service';
 
 /** Rows written straight to the tables, so each analysis sees exactly the jars a published example holds. */
 export async function grainId(name: string): Promise<number> {
@@ -34,6 +35,8 @@ export async function insertJars(jars: JarSeed[]): Promise<number[]> {
     );
     ids.push(Number(res.insertId));
   }
+  // Written beside the jars module, so counted here as the module would.
+  await rebuildTallies();
   return ids;
 }
 
@@ -49,6 +52,7 @@ export async function insertIncident(
   );
   for (const jarId of jarIds)
     await dataSource.query('INSERT INTO incident_jars (incidentId, jarId) VALUES (?, ?)', [res.insertId, jarId]);
+  await rebuildTallies();
   return Number(res.insertId);
 }
 

@@ -8,6 +8,7 @@ import { JarEvent } from '../../server/jars/jar-event.entity';
 import { Jar } from '../../server/jars/jar.entity';
 import { InoculationSession } from '../../server/sessions/inoculation-session.entity';
 import { addDays, isoWeekLabel } from './analysis-planted.fixture';
+import { rebuildTallies } from '../../server/tallies/tallies.service';
 
 /** What the analysis should see of one jar, worked out here independently of the server's SQL. */
 export interface PlantedJar {
@@ -193,5 +194,7 @@ export async function plantLineageHistory(): Promise<PlantedJar[]> {
       }
     }
   }
+  // Planted beside the modules' write paths (moves and lineage by hand), so counted afresh here.
+  await rebuildTallies();
   return planted;
 }

@@ -2,6 +2,9 @@ import { dataSource } from '../../server/db/data-source';
 
 /** Production record and incident register, each table after every table that points at it. */
 const productionTables = [
+  'tally_counts',
+  'tally_levels',
+  'tallied_jars',
   'incident_jars',
   'incident_photos',
   'incident_step_links',

@@ -1,0 +1,53 @@
+import type { EntityManager } from 'typeorm';
+import { jarKeysSql, levelRollupSql, tallyKeyList, tallyLevelFactors, type JarChoice } from './jar-keys.sql';
+
+/** The jars' rows as last counted, summed per key and added to tally_counts and tally_levels with `sign`. */
+async function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice) {
+  await m.query(
+    `INSERT INTO tally_levels (factor, inoculatedOn, levelId, room, jars, contaminated)
+      ${levelRollupSql(sign, jars.on('jarId') || '1')}
+      ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars), contaminated = contaminated + VALUES(contaminated)`,
+    tallyLevelFactors.flatMap(() => jars.params),
+  );
+  await m.query(
+    `INSERT INTO tally_counts (${tallyKeyList}, jars)
+      SELECT ${tallyKeyList}, ${sign} * COUNT(*) FROM tallied_jars WHERE ${jars.on('jarId') || '1'}
+      GROUP BY ${tallyKeyList} ORDER BY ${tallyKeyList}
+      ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars)`,
+    jars.params,
+  );
+}
+
+export const talliesRepository = {
+  /** Waits for any other recount to commit; held until this transaction ends. */
+  lock: (m: EntityManager) =>
+    m.query(`INSERT INTO tally_state (id, rebuiltAt) VALUES (1, NULL) ON DUPLICATE KEY UPDATE id = id`),
+
+  /** Takes the jars out of the counts and forgets how they were counted. */
+  async forget(m: EntityManager, jars: JarChoice) {
+    await addLedgerToCounts(m, -1, jars);
+    await m.query(`DELETE FROM tallied_jars WHERE ${jars.on('jarId') || '1'}`, jars.params);
+  },
+
+  /** Reads the jars' keys afresh (a locking read: committed changes of others are seen) and counts them. */
+  async count(m: EntityManager, jars: JarChoice, windowDays: number) {
+    const keys = jarKeysSql(windowDays, jars);
+    await m.query(`INSERT INTO tallied_jars (jarId, ${tallyKeyList}) ${keys.sql}`, keys.params);
+    await addLedgerToCounts(m, 1, jars);
+  },
+
+  /** A rebuild starts from nothing, so no row is left at zero. */
+  clear: async (m: EntityManager) => {
+    await m.query('DELETE FROM tally_counts');
+    await m.query('DELETE FROM tally_levels');
+    await m.query('DELETE FROM tallied_jars');
+  },
+
+  /** Jars that have moved: the only ones whose room in the counts depends on the observation window. */
+  movedJarIds: async (m: EntityManager) =>
+    (await m.query<{ jarId: number }[]>("SELECT DISTINCT jarId FROM jar_events WHERE type = 'moved'")).map((r) =>
+      Number(r.jarId),
+    ),
+
+  markRebuilt: (m: EntityManager) => m.query('UPDATE tally_state SET rebuiltAt = NOW() WHERE id = 1'),
+};

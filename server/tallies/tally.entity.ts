@@ -1,0 +1,128 @@
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+
+/**
+ * The analysis counts, kept current in the same transaction as every write that can change a jar's
+ * place in them (server/tallies/tallies.service.ts): jars per inoculation day and per combination of the
+ * keys every factor is read from. A key the jar does not record is 0 (ids) or '' (room), never NULL,
+ * so the primary key can find the row to add to. Clean jars have contaminated 0, foundAfterDays 0 and
+ * contaminant ''. Rows may fall to 0 jars when jars move between combinations; readers skip them and a
+ * rebuild drops them.
+ */
+@Entity('tally_counts')
+export class TallyCount {
+  @PrimaryColumn({ type: 'date' })
+  inoculatedOn: string;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  cookRunId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  sessionId: number;
+
+  /** The culture at the root of the jar's lineage (DESIGN.md §3). */
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  cultureId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  prepBatchId: number;
+
+  /** Where the jar stood when found contaminated, or at the end of its observation window. */
+  @PrimaryColumn({ type: 'varchar', length: 40 })
+  room: string;
+
+  /** Grain-to-grain steps from the root culture, capped at 2. */
+  @PrimaryColumn({ type: 'tinyint', unsigned: true })
+  transfers: number;
+
+  @PrimaryColumn({ type: 'tinyint', unsigned: true })
+  contaminated: number;
+
+  /** Days from inoculation to the first live incident (contaminated jars). */
+  @PrimaryColumn({ type: 'smallint' })
+  foundAfterDays: number;
+
+  @PrimaryColumn({ type: 'varchar', length: 40 })
+  contaminant: string;
+
+  @Column({ type: 'int' })
+  jars: number;
+}
+
+/** Each jar's row in tally_counts as last counted: what a recount takes away before it adds the jar again. */
+@Entity('tallied_jars')
+export class TalliedJar {
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  jarId: number;
+
+  @Column({ type: 'date' })
+  inoculatedOn: string;
+
+  @Column({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  cookRunId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  sessionId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  cultureId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  prepBatchId: number;
+
+  @Column({ type: 'varchar', length: 40 })
+  room: string;
+
+  @Column({ type: 'tinyint', unsigned: true })
+  transfers: number;
+
+  @Column({ type: 'tinyint', unsigned: true })
+  contaminated: number;
+
+  @Column({ type: 'smallint' })
+  foundAfterDays: number;
+
+  @Column({ type: 'varchar', length: 40 })
+  contaminant: string;
+}
+
+/** One row (id 1): recounts lock it, so two writers never recount the same rows in different orders. */
+@Entity('tally_state')
+export class TallyState {
+  @PrimaryColumn({ type: 'tinyint', unsigned: true })
+  id: number;
+
+  @Column({ type: 'datetime', nullable: true })
+  rebuiltAt: Date | null;
+}
+
+/**
+ * The counts rolled up per day and one factor's key, for questions about one factor (rates, a factor by
+ * week, the weekly table): far fewer rows than tally_counts. `levelId` is the grain, cook run, session,
+ * culture or prep batch id (0 when not recorded) or the transfers; `room` is used by the room factor only.
+ */
+@Entity('tally_levels')
+export class TallyLevel {
+  @PrimaryColumn({ type: 'varchar', length: 12 })
+  factor: string;
+
+  @PrimaryColumn({ type: 'date' })
+  inoculatedOn: string;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  levelId: number;
+
+  @PrimaryColumn({ type: 'varchar', length: 40 })
+  room: string;
+
+  @Column({ type: 'int' })
+  jars: number;
+
+  @Column({ type: 'int' })
+  contaminated: number;
+}
