@@ -51,7 +51,7 @@ async function loadDemoProduction(log: (line: string) => void, today: string): P
     }
     await addPlanDetails(m, plan, timeZone, today);
     await addDemoGrain(m, actor, grain);
-    // The details above set batches and parent jars on imported rows directly: count the lab afresh.
+    // Parent jars set above change their descendants' root culture too: count the lab afresh.
     await rebuildTallies(m);
     return outcome.result.imported;
   });
