@@ -40,20 +40,31 @@ export function periodWhere(
 const TALLY_KEY_ORDER =
   't.inoculatedOn, t.grainId, t.cookRunId, t.sessionId, t.cultureId, t.prepBatchId, t.room, t.transfers';
 
+interface Source {
+  table: string;
+  keys: JarKey[];
+  lost: string;
+  factor: string | null;
+  /** A GROUP BY in the table's key order, when the question allows one. */
+  keyOrder: string | null;
+}
+
 /** Where a question is answered: the one-factor roll-ups when it asks about one factor (and days), else the counts. */
-function sourceFor(keys: JarKey[]): { table: string; keys: JarKey[]; lost: string; factor: string | null } {
+function sourceFor(keys: JarKey[], byKeyOrder: boolean, withDetections: boolean): Source {
+  const counts = { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null };
+  if (withDetections || byKeyOrder) return { ...counts, keyOrder: byKeyOrder ? TALLY_KEY_ORDER : null };
   const factors = keys.filter((k) => !dayKeys.has(k));
   const level =
     factors.length === 0 ? levelKeys.get(grainKey) : factors.length === 1 ? levelKeys.get(factors[0]!) : undefined;
-  if (level) {
-    return {
-      table: 'tally_levels',
-      keys: keys.map((k) => (dayKeys.has(k) ? k : level.key)),
-      lost: 't.contaminated',
-      factor: level.factor,
-    };
-  }
-  return { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null };
+  if (!level) return { ...counts, keyOrder: null };
+  return {
+    table: 'tally_levels',
+    keys: keys.map((k) => (dayKeys.has(k) ? k : level.key)),
+    lost: 't.contaminated',
+    factor: level.factor,
+    // Levels alone: read level by level in the key's order (factor, levelId, room, day).
+    keyOrder: factors.length === keys.length ? 't.levelId, t.room' : null,
+  };
 }
 
 /**
@@ -72,10 +83,7 @@ export function groupedJars(
   f: Frame,
   { withDetections = false, byKeyOrder = false }: { withDetections?: boolean; byKeyOrder?: boolean } = {},
 ): SqlQuery {
-  const source =
-    withDetections || byKeyOrder
-      ? { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null }
-      : sourceFor(keys);
+  const source = sourceFor(keys, byKeyOrder, withDetections);
   const { where, params } = periodWhere(f, source.factor ? ['t.factor = ?'] : [], 't.inoculatedOn');
   const select = source.keys.map((k, i) => `${keyOn(k, 't')} AS k${i + 1}`).join(', ');
   const groupList = keys.map((_, i) => `k${i + 1}`).join(', ');
@@ -86,7 +94,7 @@ export function groupedJars(
     sql: `SELECT ${select}, SUM(t.jars) AS jars, SUM(${source.lost}) AS contaminated,
         SUM(IF(t.inoculatedOn > ?, t.jars, 0)) AS young, SUM(IF(t.inoculatedOn > ?, ${source.lost}, 0)) AS contaminatedYoung,
         ${detections} AS detections
-      FROM ${source.table} t ${where} GROUP BY ${byKeyOrder ? TALLY_KEY_ORDER : groupList} HAVING SUM(t.jars) > 0`,
+      FROM ${source.table} t ${where} GROUP BY ${source.keyOrder ?? groupList} HAVING SUM(t.jars) > 0`,
     params: [f.windowStart, f.windowStart, ...(source.factor ? [source.factor] : []), ...params],
   };
 }

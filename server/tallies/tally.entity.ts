@@ -111,14 +111,15 @@ export class TallyLevel {
   @PrimaryColumn({ type: 'varchar', length: 12 })
   factor: string;
 
-  @PrimaryColumn({ type: 'date' })
-  inoculatedOn: string;
-
   @PrimaryColumn({ type: 'int', unsigned: true })
   levelId: number;
 
   @PrimaryColumn({ type: 'varchar', length: 40 })
   room: string;
+
+  /** Last in the key: a factor's rows are read level by level, so rates group them with no temporary table. */
+  @PrimaryColumn({ type: 'date' })
+  inoculatedOn: string;
 
   @Column({ type: 'int' })
   jars: number;

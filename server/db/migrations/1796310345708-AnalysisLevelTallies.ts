@@ -7,7 +7,7 @@ export class AnalysisLevelTallies1796310345708 implements MigrationInterface {
 
   public async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(
-      `CREATE TABLE \`tally_levels\` (\`factor\` varchar(12) NOT NULL, \`inoculatedOn\` date NOT NULL, \`levelId\` int UNSIGNED NOT NULL, \`room\` varchar(40) NOT NULL, \`jars\` int NOT NULL, \`contaminated\` int NOT NULL, PRIMARY KEY (\`factor\`, \`inoculatedOn\`, \`levelId\`, \`room\`)) ENGINE=InnoDB`,
+      `CREATE TABLE \`tally_levels\` (\`factor\` varchar(12) NOT NULL, \`levelId\` int UNSIGNED NOT NULL, \`room\` varchar(40) NOT NULL, \`inoculatedOn\` date NOT NULL, \`jars\` int NOT NULL, \`contaminated\` int NOT NULL, PRIMARY KEY (\`factor\`, \`levelId\`, \`room\`, \`inoculatedOn\`)) ENGINE=InnoDB`,
     );
     await queryRunner.query(
       `INSERT INTO tally_levels (factor, inoculatedOn, levelId, room, jars, contaminated) ${levelRollupSql(1, '1')}`,
