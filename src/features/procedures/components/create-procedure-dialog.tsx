@@ -1,7 +1,7 @@
 import { useNavigate } from 'react-router';
 import { createProcedureSchema } from '../../../../shared/schemas/procedures';
 import { FormDialog } from '../../../components/ui/form-dialog';
-import { TextInput } from '../../../components/ui/text-input';
+import { TextField } from '../../../components/ui/form-fields';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { useCreateProcedure } from '../api/use-create-procedure';
@@ -32,20 +32,15 @@ export function CreateProcedureDialog({ open, onClose }: { open: boolean; onClos
         void navigate(paths.procedure.to(created.id));
       }}
     >
-      {({ register, control, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput
-            label="Code"
-            hint="Short and unique, such as STERILE-INOC."
-            error={errors.code?.message}
-            {...register('code')}
-          />
-          <TextInput label="Title" error={errors.title?.message} {...register('title')} />
-          <TextInput label="Note" optional error={errors.changeNote?.message} {...register('changeNote')} />
+          <TextField form={form} name="code" label="Code" hint="Short and unique, such as STERILE-INOC." />
+          <TextField form={form} name="title" label="Title" />
+          <TextField form={form} name="changeNote" label="Note" optional />
           <StepsEditor
-            control={control as unknown as EditorProps['control']}
-            register={register as unknown as EditorProps['register']}
-            errors={errors}
+            control={form.control as unknown as EditorProps['control']}
+            register={form.register as unknown as EditorProps['register']}
+            errors={form.formState.errors}
           />
         </>
       )}

@@ -1,7 +1,7 @@
 import { useNavigate } from 'react-router';
 import { publishVersionSchema, type ProcedureVersionDto } from '../../../../shared/schemas/procedures';
 import { FormDialog } from '../../../components/ui/form-dialog';
-import { TextInput } from '../../../components/ui/text-input';
+import { TextField } from '../../../components/ui/form-fields';
 import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { usePublishVersion } from '../api/use-publish-version';
@@ -46,14 +46,14 @@ export function PublishVersionDialog({
         void navigate(paths.procedureVersion.to(version.id));
       }}
     >
-      {({ register, control, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput label="Title" error={errors.title?.message} {...register('title')} />
-          <TextInput label="What changed and why" error={errors.changeNote?.message} {...register('changeNote')} />
+          <TextField form={form} name="title" label="Title" />
+          <TextField form={form} name="changeNote" label="What changed and why" />
           <StepsEditor
-            control={control as unknown as EditorProps['control']}
-            register={register as unknown as EditorProps['register']}
-            errors={errors}
+            control={form.control as unknown as EditorProps['control']}
+            register={form.register as unknown as EditorProps['register']}
+            errors={form.formState.errors}
           />
         </>
       )}

@@ -1,7 +1,6 @@
 import { createUserSchema } from '../../../../shared/schemas/users';
 import { FormDialog } from '../../../components/ui/form-dialog';
-import { Select } from '../../../components/ui/select';
-import { TextInput } from '../../../components/ui/text-input';
+import { PasswordField, SelectField, TextField, UsernameField } from '../../../components/ui/form-fields';
 import { useToast } from '../../../components/ui/toast';
 import { useCreateUser } from '../api/use-create-user';
 import { roleOptions } from './role-options';
@@ -28,42 +27,37 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
         onClose();
       }}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput
+          <TextField
+            form={form}
+            name="displayName"
             label="Name"
             hint="As colleagues know them; shown on records they make."
             autoComplete="off"
-            error={errors.displayName?.message}
-            {...register('displayName')}
           />
-          <TextInput
-            label="Username"
+          <UsernameField
+            form={form}
+            name="username"
             hint="Lower-case letters, digits, dot, dash or underscore. It cannot be changed later."
-            autoCapitalize="none"
-            autoCorrect="off"
-            spellCheck={false}
             autoComplete="off"
-            error={errors.username?.message}
-            {...register('username')}
           />
-          <TextInput
+          <TextField
+            form={form}
+            name="email"
             label="E-mail"
             type="email"
             optional
             hint="Needed for alerts and digests."
             autoComplete="off"
-            error={errors.email?.message}
-            {...register('email')}
           />
-          <Select label="Role" options={roleOptions} error={errors.role?.message} {...register('role')} />
-          <TextInput
+          <SelectField form={form} name="role" label="Role" options={roleOptions} />
+          <PasswordField
+            form={form}
+            name="password"
             label="First password"
-            type="password"
             autoComplete="new-password"
             hint="At least 10 characters. Give it to them in person and ask them to change it from Account."
-            error={errors.password?.message}
-            {...register('password')}
           />
         </>
       )}
