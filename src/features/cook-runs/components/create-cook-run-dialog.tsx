@@ -3,11 +3,10 @@ import { useId } from 'react';
 import { useNavigate } from 'react-router';
 import { createCookRunSchema, defaultGaugeKPa, type CreateCookRunInput } from '../../../../shared/schemas/cook-runs';
 import { kPaToPsi } from '../../../../shared/stats/steam';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { OperatorChoice } from '../../../components/ui/operator-choice';
 import { NumberField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { SuggestedCodeInput } from '../../../components/ui/suggested-code-input';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { localInstantOrNull } from '../../../lib/form-values';
 import { cookRunsQueries } from '../api/cook-runs-queries';
@@ -40,7 +39,6 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
   const listId = useId();
   const createRun = useCreateCookRun();
   const nextCode = useQuery({ ...cookRunsQueries.nextCode(), enabled: open });
-  const toast = useToast();
   const navigate = useNavigate();
   const defaults: CreateCookRunInput = {
     code: '',
@@ -53,10 +51,10 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
   };
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createRun.isPending}
+      mutation={createRun}
       title="New cook run"
       description="One load through the cooker or autoclave. Minutes at pressure mean little without the container, so both are required."
       submitLabel="Record cook run"
@@ -65,12 +63,8 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
       schema={createCookRunSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        const run = await createRun.mutateAsync(values);
-        toast.success(`Cook run ${run.code} recorded.`);
-        onClose();
-        void navigate(paths.cookRun.to(run.id));
-      }}
+      saved={(run) => `Cook run ${run.code} recorded.`}
+      then={(run) => void navigate(paths.cookRun.to(run.id))}
     >
       {(form) => {
         const { register, watch, setValue, formState } = form;
@@ -159,6 +153,6 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
           </>
         );
       }}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -1,8 +1,7 @@
 import { createAgarTestSchema } from '../../../../shared/schemas/cultures';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { NumberField, SelectField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { Notice } from '../../../components/ui/notice';
-import { useToast } from '../../../components/ui/toast';
 import { cautionFootnote } from '../../../config/cautions';
 import { useAddAgarTest } from '../api/use-add-agar-test';
 import { agarResults } from '../../../../shared/enums';
@@ -19,23 +18,18 @@ export function AgarTestDialog({
   onClose: () => void;
 }) {
   const addTest = useAddAgarTest(cultureId);
-  const toast = useToast();
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={addTest.isPending}
+      mutation={addTest}
       title="Record an agar test"
       submitLabel="Save test"
       schema={createAgarTestSchema}
       options={{ defaultValues: { testedOn: new Date().toISOString().slice(0, 10), result: 'clean', notes: '' } }}
       serverFields={['testedOn', 'result', 'notes', 'photoId']}
-      onSubmit={async (values) => {
-        await addTest.mutateAsync(values);
-        toast.success('Agar test recorded.');
-        onClose();
-      }}
+      saved={() => 'Agar test recorded.'}
     >
       {(form) => (
         <>
@@ -59,6 +53,6 @@ export function AgarTestDialog({
           )}
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

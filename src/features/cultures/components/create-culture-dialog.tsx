@@ -1,8 +1,7 @@
 import { useNavigate } from 'react-router';
 import { createCultureSchema, type CreateCultureInput } from '../../../../shared/schemas/cultures';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { NumberField, TextAreaField, TextField } from '../../../components/ui/form-fields';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { textOrNull } from '../../../lib/form-values';
 import { useCreateCulture } from '../api/use-create-culture';
@@ -27,7 +26,6 @@ interface Props {
 
 export function CreateCultureDialog({ open, onClose, parent }: Props) {
   const createCulture = useCreateCulture();
-  const toast = useToast();
   const navigate = useNavigate();
   const defaults: CreateCultureInput = {
     code: '',
@@ -37,10 +35,10 @@ export function CreateCultureDialog({ open, onClose, parent }: Props) {
   };
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createCulture.isPending}
+      mutation={createCulture}
       title={parent ? `New culture from ${parent.code}` : 'New culture'}
       description="A new culture starts quarantined. A supervisor releases it once an agar test comes back clean."
       submitLabel="Record culture"
@@ -48,12 +46,8 @@ export function CreateCultureDialog({ open, onClose, parent }: Props) {
       schema={createCultureSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        const culture = await createCulture.mutateAsync(values);
-        toast.success(`Culture ${culture.code} recorded, quarantined.`);
-        onClose();
-        void navigate(paths.culture.to(culture.id));
-      }}
+      saved={(culture) => `Culture ${culture.code} recorded, quarantined.`}
+      then={(culture) => void navigate(paths.culture.to(culture.id))}
     >
       {(form) => (
         <>
@@ -75,6 +69,6 @@ export function CreateCultureDialog({ open, onClose, parent }: Props) {
           <TextAreaField form={form} name="notes" label="Notes" optional />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -1,8 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { createGrainLotSchema, createGrainSchema, createPrepBatchSchema } from '../../../../shared/schemas/grain';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { NumberField, SelectField, TextAreaField, TextField } from '../../../components/ui/form-fields';
-import { useToast } from '../../../components/ui/toast';
 import { grainQueries } from '../api/grain-queries';
 import { useCreateGrain } from '../api/use-create-grain';
 import { useCreateGrainLot } from '../api/use-create-grain-lot';
@@ -17,12 +16,11 @@ interface DialogProps {
 
 export function AddGrainDialog({ open, onClose }: DialogProps) {
   const create = useCreateGrain();
-  const toast = useToast();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       size="sm"
       title="Add a grain to the list"
       submitLabel="Add grain"
@@ -30,32 +28,27 @@ export function AddGrainDialog({ open, onClose }: DialogProps) {
       schema={createGrainSchema}
       options={{ defaultValues: { name: '' } }}
       serverFields={['name']}
-      onSubmit={async (values) => {
-        const grain = await create.mutateAsync(values);
-        toast.success(`${grain.name} added to the grain list.`);
-        onClose();
-      }}
+      saved={(grain) => `${grain.name} added to the grain list.`}
     >
       {(form) => (
         <TextField form={form} name="name" label="Name" hint="Imports match grain names case-insensitively." />
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }
 
 export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
   const grains = useQuery({ ...grainQueries.grains(), enabled: open });
   const create = useCreateGrainLot();
-  const toast = useToast();
   const options = [
     { value: '', label: 'Choose a grain' },
     ...(grains.data ?? []).filter((g) => g.active).map((g) => ({ value: String(g.id), label: g.name })),
   ];
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       title="New grain lot"
       description="A delivery of grain, as the supplier labels it."
       submitLabel="Record lot"
@@ -63,11 +56,7 @@ export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
       schema={createGrainLotSchema}
       options={{ defaultValues: { supplierLotCode: '', receivedOn: todayIso(), notes: '' } }}
       serverFields={['grainId', 'supplierLotCode', 'receivedOn', 'notes']}
-      onSubmit={async (values) => {
-        const lot = await create.mutateAsync(values);
-        toast.success(`Lot ${lot.supplierLotCode} of ${lot.grain} recorded.`);
-        onClose();
-      }}
+      saved={(lot) => `Lot ${lot.supplierLotCode} of ${lot.grain} recorded.`}
     >
       {(form) => (
         <>
@@ -77,14 +66,13 @@ export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
           <TextAreaField form={form} name="notes" label="Notes" optional rows={2} />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }
 
 export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { lotId?: number }) {
   const lots = useQuery({ ...grainQueries.lotOptions(), enabled: open });
   const create = useCreatePrepBatch();
-  const toast = useToast();
   const options = [
     { value: '', label: 'Choose a grain lot' },
     ...(lots.data?.items ?? []).map((l) => ({
@@ -93,10 +81,10 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
     })),
   ];
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       title="New prep batch"
       description="Grain soaked and simmered together. Wetness varies batch to batch, so jars point at their batch."
       submitLabel="Record batch"
@@ -104,11 +92,7 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
       schema={createPrepBatchSchema}
       options={{ defaultValues: { code: '', grainLotId: lotId, preparedOn: todayIso(), notes: '' } }}
       serverFields={['code', 'grainLotId', 'preparedOn', 'soakHours', 'simmerMinutes', 'drainMinutes', 'notes']}
-      onSubmit={async (values) => {
-        const created = await create.mutateAsync(values);
-        toast.success(`Prep batch ${created.code} recorded.`);
-        onClose();
-      }}
+      saved={(created) => `Prep batch ${created.code} recorded.`}
     >
       {(form) => (
         <>
@@ -145,6 +129,6 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
           />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -2,10 +2,9 @@ import { contaminantNames, contaminants, stagesFound, incidentSeverities } from 
 import { updateIncidentSchema } from '../../../../shared/schemas/incidents';
 import type { IncidentDetailDto } from '../../../../shared/schemas/incident-detail';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
 import { useUpdateIncident } from '../api/use-incident-mutations';
 import { severityLabels, stageLabels } from '../labels';
 import { NotesField } from './notes-field';
@@ -36,13 +35,12 @@ export function EditIncidentDialog({
   onClose: () => void;
 }) {
   const update = useUpdateIncident(incident.id);
-  const toast = useToast();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
       title={`Edit incident ${incident.id}`}
-      pending={update.isPending}
+      mutation={update}
       submitLabel="Save changes"
       formKey={`${incident.version}-${String(open)}`}
       serverFields={fields}
@@ -61,11 +59,7 @@ export function EditIncidentDialog({
           notes: incident.notes,
         },
       }}
-      onSubmit={async (values) => {
-        await update.mutateAsync(values);
-        toast.success(`Incident ${incident.id} updated.`);
-        onClose();
-      }}
+      saved={() => `Incident ${incident.id} updated.`}
     >
       {({ register, formState: { errors } }) => (
         <>
@@ -123,6 +117,6 @@ export function EditIncidentDialog({
           />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

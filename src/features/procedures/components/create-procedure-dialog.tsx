@@ -1,8 +1,7 @@
 import { useNavigate } from 'react-router';
 import { createProcedureSchema } from '../../../../shared/schemas/procedures';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { TextField } from '../../../components/ui/form-fields';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { useCreateProcedure } from '../api/use-create-procedure';
 import { StepsEditor } from './steps-editor';
@@ -11,13 +10,12 @@ type EditorProps = Parameters<typeof StepsEditor>[0];
 
 export function CreateProcedureDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const create = useCreateProcedure();
-  const toast = useToast();
   const navigate = useNavigate();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       title="New procedure"
       description="Publishing makes this version 1. Later changes are published as new versions; this one stays as written."
       submitLabel="Publish version 1"
@@ -25,12 +23,8 @@ export function CreateProcedureDialog({ open, onClose }: { open: boolean; onClos
       schema={createProcedureSchema}
       options={{ defaultValues: { code: '', title: '', changeNote: '', steps: [{ text: '', caution: '' }] } }}
       serverFields={['code', 'title', 'changeNote', 'steps']}
-      onSubmit={async (values) => {
-        const created = await create.mutateAsync(values);
-        toast.success(`Procedure ${created.code} published.`);
-        onClose();
-        void navigate(paths.procedure.to(created.id));
-      }}
+      saved={(created) => `Procedure ${created.code} published.`}
+      then={(created) => void navigate(paths.procedure.to(created.id))}
     >
       {(form) => (
         <>
@@ -44,6 +38,6 @@ export function CreateProcedureDialog({ open, onClose }: { open: boolean; onClos
           />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

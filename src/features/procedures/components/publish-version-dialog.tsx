@@ -1,8 +1,7 @@
 import { useNavigate } from 'react-router';
 import { publishVersionSchema, type ProcedureVersionDto } from '../../../../shared/schemas/procedures';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { TextField } from '../../../components/ui/form-fields';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { usePublishVersion } from '../api/use-publish-version';
 import { StepsEditor } from './steps-editor';
@@ -20,13 +19,12 @@ export function PublishVersionDialog({
   onClose: () => void;
 }) {
   const publish = usePublishVersion(current.procedureId);
-  const toast = useToast();
   const navigate = useNavigate();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={publish.isPending}
+      mutation={publish}
       title={`Publish version ${current.version + 1}`}
       description={`Version ${current.version} stays readable and unchanged. Staff trained on it will show as not trained on the new version.`}
       submitLabel="Publish"
@@ -39,12 +37,8 @@ export function PublishVersionDialog({
         },
       }}
       serverFields={['title', 'changeNote', 'steps']}
-      onSubmit={async (values) => {
-        const version = await publish.mutateAsync(values);
-        toast.success(`Version ${version.version} published.`);
-        onClose();
-        void navigate(paths.procedureVersion.to(version.id));
-      }}
+      saved={(version) => `Version ${version.version} published.`}
+      then={(version) => void navigate(paths.procedureVersion.to(version.id))}
     >
       {(form) => (
         <>
@@ -57,6 +51,6 @@ export function PublishVersionDialog({
           />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

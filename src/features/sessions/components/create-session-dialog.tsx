@@ -4,12 +4,11 @@ import { useNavigate } from 'react-router';
 import { workspaces } from '../../../../shared/enums';
 import { createSessionSchema, workspaceLabels, type CreateSessionInput } from '../../../../shared/schemas/sessions';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { OperatorChoice } from '../../../components/ui/operator-choice';
 import type { FormMethods } from '../../../components/ui/form';
 import { SelectField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { SuggestedCodeInput } from '../../../components/ui/suggested-code-input';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { sessionsQueries } from '../api/sessions-queries';
 import { useCreateSession } from '../api/use-create-session';
@@ -72,7 +71,6 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
   const createSession = useCreateSession();
   const nextCode = useQuery({ ...sessionsQueries.nextCode(), enabled: open });
   const procedures = useQuery({ ...sessionsQueries.procedureOptions(), enabled: open });
-  const toast = useToast();
   const navigate = useNavigate();
   const procedureOptions = [
     { value: '', label: 'None' },
@@ -91,10 +89,10 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
   };
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createSession.isPending}
+      mutation={createSession}
       title="New inoculation session"
       submitLabel="Record session"
       submitIcon="plus"
@@ -102,12 +100,8 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
       schema={createSessionSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        const session = await createSession.mutateAsync(values);
-        toast.success(`Session ${session.code} recorded.`);
-        onClose();
-        void navigate(paths.session.to(session.id));
-      }}
+      saved={(session) => `Session ${session.code} recorded.`}
+      then={(session) => void navigate(paths.session.to(session.id))}
     >
       {(form) => {
         const {
@@ -171,6 +165,6 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
           </>
         );
       }}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -1,19 +1,17 @@
 import { createUserSchema } from '../../../../shared/schemas/users';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { PasswordField, SelectField, TextField, UsernameField } from '../../../components/ui/form-fields';
-import { useToast } from '../../../components/ui/toast';
 import { useCreateUser } from '../api/use-create-user';
 import { roleOptions } from './role-options';
 
 export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const createUser = useCreateUser();
-  const toast = useToast();
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createUser.isPending}
+      mutation={createUser}
       title="New user"
       description="They sign in with this username and the first password you set here."
       submitLabel="Create user"
@@ -21,11 +19,7 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
       schema={createUserSchema}
       options={{ defaultValues: { username: '', displayName: '', email: '', role: 'technician', password: '' } }}
       serverFields={['username', 'displayName', 'email', 'role', 'password']}
-      onSubmit={async (values) => {
-        const user = await createUser.mutateAsync(values);
-        toast.success(`Account ${user.username} created.`);
-        onClose();
-      }}
+      saved={(user) => `Account ${user.username} created.`}
     >
       {(form) => (
         <>
@@ -61,6 +55,6 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
           />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }
