@@ -1,5 +1,5 @@
-import type { ChangeEvent } from 'react';
 import { clearedPatch, hasAnyFilter } from '../../lib/list-params';
+import type { ChangeEvent, ComponentProps } from 'react';
 import { Select, type SelectOption } from './select';
 import { TextInput } from './text-input';
 
@@ -48,6 +48,12 @@ export function filterBinding<K extends string>(filters: FilterValues<K>, onChan
   return {
     /** A drop-down or date box: the filter changes as soon as the field does. */
     value: (key: K) => ({ value: filters[key], onChange: (value: string | undefined) => set(key, value) }),
+    /** The SearchForm holding the text boxes of these keys. */
+    search: <N extends K>(names: readonly N[]) => ({
+      names,
+      values: filters as FilterValues<N>,
+      onSearch: onChange as (patch: FilterPatch<N>) => void,
+    }),
     /** A text box inside a SearchForm: read when the search is sent. */
     text: (key: K) => ({ name: key, defaultValue: filters[key] ?? '' }),
     /** A tick box kept in the URL as "true". */
@@ -61,4 +67,12 @@ export function filterBinding<K extends string>(filters: FilterValues<K>, onChan
       onClear: () => onChange(clearedPatch(keys)),
     }),
   };
+}
+
+/** The free-text box of a SearchForm; it takes the room the other boxes leave. */
+export function SearchText({
+  label = 'Search',
+  ...props
+}: Omit<ComponentProps<typeof TextInput>, 'label'> & { label?: string }) {
+  return <TextInput label={label} type="search" className="flex-1" {...props} />;
 }

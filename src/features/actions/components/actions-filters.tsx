@@ -1,7 +1,7 @@
 import { factorNames, factors } from '../../../../shared/enums';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { filterBinding, SelectFilter } from '../../../components/ui/filter-fields';
+import { filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
 import { hasAnyFilter } from '../../../lib/list-params';
 import type { ActionListFilters } from '../api/actions-queries';
@@ -52,7 +52,7 @@ export function ActionsFilters({ filters, onChange }: Props) {
           {...bind.text('level')}
         />
         <TextInput label="Incident" placeholder="#12" className="w-24" {...bind.text('incidentId')} />
-        <TextInput label="Search" type="search" placeholder="What, owner" className="flex-1" {...bind.text('q')} />
+        <SearchText placeholder="What, owner" {...bind.text('q')} />
       </SearchForm>
       <Checkbox label="Only mine" {...bind.flag('mine')} />
       <ClearFilters {...bind.clear(actionFilterKeys)} />

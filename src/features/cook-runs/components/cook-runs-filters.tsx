@@ -1,6 +1,6 @@
 import { Checkbox } from '../../../components/ui/checkbox';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { DateFilter, filterBinding } from '../../../components/ui/filter-fields';
+import { DateFilter, filterBinding, SearchText } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
 import { hasAnyFilter } from '../../../lib/list-params';
 import type { CookRunListFilters } from '../api/cook-runs-queries';
@@ -19,19 +19,8 @@ export function CookRunsFilters({ filters, onChange }: CookRunsFiltersProps) {
   const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-4">
-      <SearchForm
-        names={['q', 'container']}
-        values={filters}
-        onSearch={onChange}
-        className="flex items-end gap-2 md:col-span-2"
-      >
-        <TextInput
-          label="Search"
-          type="search"
-          placeholder="Code, vessel, operator"
-          className="flex-1"
-          {...bind.text('q')}
-        />
+      <SearchForm {...bind.search(['q', 'container'])} className="flex items-end gap-2 md:col-span-2">
+        <SearchText placeholder="Code, vessel, operator" {...bind.text('q')} />
         <TextInput label="Container" placeholder="1 L jar" className="w-36" {...bind.text('container')} />
       </SearchForm>
       <DateFilter label="From" {...bind.value('from')} />

@@ -1,7 +1,7 @@
 import { contaminantNames, contaminants, incidentStatuses, verdicts } from '../../../../shared/enums';
 import { Button } from '../../../components/ui/button';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { DateFilter, filterBinding, SelectFilter } from '../../../components/ui/filter-fields';
+import { DateFilter, filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
 import { incidentFilterKeys, type IncidentFilterKey, type IncidentListFilters } from '../api/incidents-queries';
 import { statusLabels, verdictLabels } from '../labels';
@@ -30,19 +30,8 @@ export function IncidentsFilters({ filters, onChange }: IncidentsFiltersProps) {
   const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="sm:grid-cols-2 lg:grid-cols-4">
-      <SearchForm
-        names={['jar', 'operator']}
-        values={filters}
-        onSearch={onChange}
-        className="flex items-end gap-2 sm:col-span-2"
-      >
-        <TextInput
-          label="Jar label"
-          type="search"
-          placeholder="Starts with…"
-          className="flex-1"
-          {...bind.text('jar')}
-        />
+      <SearchForm {...bind.search(['jar', 'operator'])} className="flex items-end gap-2 sm:col-span-2">
+        <SearchText label="Jar label" placeholder="Starts with…" {...bind.text('jar')} />
         <TextInput label="Operator" placeholder="Who inoculated" className="flex-1" {...bind.text('operator')} />
       </SearchForm>
       <SelectFilter label="Status" options={statusOptions} {...bind.value('status')} />

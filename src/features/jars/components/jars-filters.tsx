@@ -37,9 +37,7 @@ export function JarsFilters({ filters, onChange }: JarsFiltersProps) {
   return (
     <FilterBar className="md:grid-cols-4">
       <SearchForm
-        names={['q', 'room', 'shelf']}
-        values={filters}
-        onSearch={onChange}
+        {...bind.search(['q', 'room', 'shelf'])}
         className="grid gap-2 sm:grid-cols-[1fr_1fr_1fr_auto] sm:items-end md:col-span-4"
         wordOnPhones
       >

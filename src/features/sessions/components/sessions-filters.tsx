@@ -1,7 +1,7 @@
 import { workspaces } from '../../../../shared/enums';
 import { workspaceLabels } from '../../../../shared/schemas/sessions';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { DateFilter, filterBinding, SelectFilter } from '../../../components/ui/filter-fields';
+import { DateFilter, filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
 import { hasAnyFilter } from '../../../lib/list-params';
 import type { SessionListFilters } from '../api/sessions-queries';
@@ -24,19 +24,8 @@ export function SessionsFilters({ filters, onChange }: SessionsFiltersProps) {
   const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-4">
-      <SearchForm
-        names={['q', 'operator']}
-        values={filters}
-        onSearch={onChange}
-        className="flex items-end gap-2 md:col-span-2"
-      >
-        <TextInput
-          label="Search"
-          type="search"
-          placeholder="Code, operator, notes"
-          className="flex-1"
-          {...bind.text('q')}
-        />
+      <SearchForm {...bind.search(['q', 'operator'])} className="flex items-end gap-2 md:col-span-2">
+        <SearchText placeholder="Code, operator, notes" {...bind.text('q')} />
         <TextInput label="Operator" className="w-40" {...bind.text('operator')} />
       </SearchForm>
       <DateFilter label="From" {...bind.value('from')} />

@@ -1,6 +1,5 @@
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { filterBinding, SelectFilter } from '../../../components/ui/filter-fields';
-import { TextInput } from '../../../components/ui/text-input';
+import { filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import type { UserFilters } from '../api/users-queries';
 import { roleOptions } from './role-options';
 
@@ -23,15 +22,8 @@ export function UsersFilters({ filters, onChange }: UsersFiltersProps) {
   const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-[2fr_1fr_1fr]">
-      <SearchForm names={['q']} values={filters} onSearch={onChange}>
-        <TextInput
-          label="Search"
-          type="search"
-          placeholder="Name or username"
-          maxLength={64}
-          className="flex-1"
-          {...bind.text('q')}
-        />
+      <SearchForm {...bind.search(['q'])}>
+        <SearchText placeholder="Name or username" maxLength={64} {...bind.text('q')} />
       </SearchForm>
       <SelectFilter label="Role" options={roleFilterOptions} {...bind.value('role')} />
       <SelectFilter label="Status" options={statusOptions} {...bind.value('active')} />
