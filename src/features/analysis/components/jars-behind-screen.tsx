@@ -17,6 +17,8 @@ const onlyLabels: Record<JarsOnly, string> = {
   incubating: 'Incubating jars',
 };
 
+const headings = ['Jar', 'Inoculated', 'Status', 'Contaminant', 'Found', 'Incident'];
+
 /** The jars behind a number on the analysis screens, each linking to its own page. */
 export function JarsBehindScreen() {
   const [params, setParams] = useSearchParams();
@@ -33,6 +35,7 @@ export function JarsBehindScreen() {
   const jars = useQuery({ ...analysisQueries.jars(factor, level, only, period, page, and), enabled: level !== '' });
   const data = jars.data;
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
+  const goToPage = (to: number) => setParams(patchParams(params, { page: to }));
 
   return (
     <>
@@ -65,24 +68,11 @@ export function JarsBehindScreen() {
             <Table caption="Jars behind the number">
               <thead>
                 <tr>
-                  <th scope="col" className={th}>
-                    Jar
-                  </th>
-                  <th scope="col" className={th}>
-                    Inoculated
-                  </th>
-                  <th scope="col" className={th}>
-                    Status
-                  </th>
-                  <th scope="col" className={th}>
-                    Contaminant
-                  </th>
-                  <th scope="col" className={th}>
-                    Found
-                  </th>
-                  <th scope="col" className={th}>
-                    Incident
-                  </th>
+                  {headings.map((heading) => (
+                    <th key={heading} scope="col" className={th}>
+                      {heading}
+                    </th>
+                  ))}
                 </tr>
               </thead>
               <tbody>
@@ -122,21 +112,13 @@ export function JarsBehindScreen() {
             </Table>
             {pages > 1 && (
               <div className="no-print mt-4 flex items-center gap-3">
-                <Button
-                  variant="secondary"
-                  disabled={page <= 1}
-                  onClick={() => setParams(patchParams(params, { page: page - 1 }))}
-                >
+                <Button variant="secondary" disabled={page <= 1} onClick={() => goToPage(page - 1)}>
                   Previous
                 </Button>
                 <span>
                   Page {page} of {pages}
                 </span>
-                <Button
-                  variant="secondary"
-                  disabled={page >= pages}
-                  onClick={() => setParams(patchParams(params, { page: page + 1 }))}
-                >
+                <Button variant="secondary" disabled={page >= pages} onClick={() => goToPage(page + 1)}>
                   Next
                 </Button>
               </div>
