@@ -6,8 +6,6 @@ import { paths } from '../../../config/paths';
 import { useCreateProcedure } from '../api/use-create-procedure';
 import { StepsEditor } from './steps-editor';
 
-type EditorProps = Parameters<typeof StepsEditor>[0];
-
 export function CreateProcedureDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const create = useCreateProcedure();
   const navigate = useNavigate();
@@ -31,11 +29,7 @@ export function CreateProcedureDialog({ open, onClose }: { open: boolean; onClos
           <TextField form={form} name="code" label="Code" hint="Short and unique, such as STERILE-INOC." />
           <TextField form={form} name="title" label="Title" />
           <TextField form={form} name="changeNote" label="Note" optional />
-          <StepsEditor
-            control={form.control as unknown as EditorProps['control']}
-            register={form.register as unknown as EditorProps['register']}
-            errors={form.formState.errors}
-          />
+          <StepsEditor form={form} />
         </>
       )}
     </SaveDialog>

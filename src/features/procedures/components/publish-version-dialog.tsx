@@ -6,8 +6,6 @@ import { paths } from '../../../config/paths';
 import { usePublishVersion } from '../api/use-publish-version';
 import { StepsEditor } from './steps-editor';
 
-type EditorProps = Parameters<typeof StepsEditor>[0];
-
 /** Starts from the current version's steps; publishing writes new rows and leaves that version as it was. */
 export function PublishVersionDialog({
   current,
@@ -44,11 +42,7 @@ export function PublishVersionDialog({
         <>
           <TextField form={form} name="title" label="Title" />
           <TextField form={form} name="changeNote" label="What changed and why" />
-          <StepsEditor
-            control={form.control as unknown as EditorProps['control']}
-            register={form.register as unknown as EditorProps['register']}
-            errors={form.formState.errors}
-          />
+          <StepsEditor form={form} />
         </>
       )}
     </SaveDialog>
