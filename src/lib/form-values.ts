@@ -17,3 +17,6 @@ export const textOrUndefined = (v: unknown) => (v === '' ? undefined : v);
 // datetime-local has no zone; the browser's own zone is the lab floor's, so it is read as local time.
 /** A datetime-local box: empty → null, else the instant as ISO. */
 export const localInstantOrNull = (v: unknown) => (typeof v === 'string' && v ? new Date(v).toISOString() : null);
+
+/** A text box whose field is left out when only blanks were typed; what was typed is sent trimmed. */
+export const trimmedOrUndefined = (v: unknown) => (typeof v === 'string' ? v.trim() || undefined : v);
