@@ -50,3 +50,16 @@ export function SkeletonRows({ rows, columns }: { rows: number; columns: number 
     </>
   );
 }
+
+/** The head of a plain, unsorted table: one column heading per label. */
+export function PlainTableHead({ headings, cellClassName }: { headings: readonly string[]; cellClassName: string }) {
+  return (
+    <tr>
+      {headings.map((heading) => (
+        <th key={heading} scope="col" className={cellClassName}>
+          {heading}
+        </th>
+      ))}
+    </tr>
+  );
+}

@@ -4,6 +4,7 @@ import { contaminantNames, type Contaminant } from '../../../../shared/enums';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 import { paths } from '../../../config/paths';
 import { patchParams } from '../../../lib/list-params';
 import { analysisQueries, readFactor, readPeriod, type JarsOnly } from '../api/analysis-queries';
@@ -67,13 +68,7 @@ export function JarsBehindScreen() {
             <p className="mb-3 text-muted">{data.total} jars.</p>
             <Table caption="Jars behind the number">
               <thead>
-                <tr>
-                  {headings.map((heading) => (
-                    <th key={heading} scope="col" className={th}>
-                      {heading}
-                    </th>
-                  ))}
-                </tr>
+                <PlainTableHead headings={headings} cellClassName={th} />
               </thead>
               <tbody>
                 {data.items.map((j) => (
