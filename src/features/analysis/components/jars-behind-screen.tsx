@@ -57,9 +57,8 @@ export function JarsBehindScreen() {
         ))}
       </div>
       <LoadState
-        isPending={level !== '' && jars.isPending}
-        error={jars.error}
-        onRetry={() => void jars.refetch()}
+        query={jars}
+        asked={level !== ''}
         isEmpty={!data || data.items.length === 0}
         emptyTitle="No jars match."
       >

@@ -59,13 +59,7 @@ export function LethalityScreen() {
         </Notice>
       )}
       <PeriodPicker period={period} />
-      <LoadState
-        isPending={lethality.isPending}
-        error={lethality.error}
-        onRetry={() => void lethality.refetch()}
-        isEmpty={!data || data.runs.length === 0}
-        emptyTitle="No cook runs in this period."
-      >
+      <LoadState query={lethality} isEmpty={!data || data.runs.length === 0} emptyTitle="No cook runs in this period.">
         {data && (
           <>
             <p className="mb-3">
