@@ -1,9 +1,15 @@
-import type { ReactNode } from 'react';
+import type { ComponentProps, ReactNode } from 'react';
+import type { ParamPatch, TableState } from '../../lib/list-params';
 import { buttonClasses } from '../ui/button';
 import { PageHeader } from '../ui/page-header';
+import { RegisterEmpty } from '../ui/register-empty';
 import { QueryTable, type QueryTableProps } from '../ui/table/query-table';
 
-interface RegisterScreenProps<T> extends Omit<QueryTableProps<T>, 'caption'> {
+interface RegisterScreenProps<T> extends Omit<QueryTableProps<T>, 'caption' | 'state' | 'onChange' | 'empty'> {
+  /** The filters, paging and sorting read from the URL, and the one way to change them. */
+  params: { filters: TableState; update: (patch: ParamPatch) => void };
+  /** What the table says when it has no row, with and without filters. */
+  empty: ComponentProps<typeof RegisterEmpty>;
   /** Also names the table for screen readers. */
   title: string;
   description: ReactNode;
@@ -17,7 +23,7 @@ interface RegisterScreenProps<T> extends Omit<QueryTableProps<T>, 'caption'> {
 
 /** A register: header with export and actions, the filter bar, then the server-paged table. */
 export function RegisterScreen<T extends { id: number }>(props: RegisterScreenProps<T>) {
-  const { title, description, exportHref, actions, filters, children, ...table } = props;
+  const { title, description, exportHref, actions, filters, children, params, empty, ...table } = props;
   return (
     <>
       <PageHeader
@@ -37,7 +43,13 @@ export function RegisterScreen<T extends { id: number }>(props: RegisterScreenPr
         }
       />
       {filters}
-      <QueryTable caption={title} {...table} />
+      <QueryTable
+        caption={title}
+        state={params.filters}
+        onChange={params.update}
+        empty={<RegisterEmpty {...empty} />}
+        {...table}
+      />
       {children}
     </>
   );

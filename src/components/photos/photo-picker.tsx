@@ -1,9 +1,9 @@
 import { useEffect, useRef, useState } from 'react';
-import { photoAcceptedTypes, photoMaxBytes, type PhotoDto } from '../../../shared/schemas/photos';
+import { photoMaxBytes, type PhotoDto } from '../../../shared/schemas/photos';
 import { Button } from '../ui/button';
-import { Icon } from '../ui/icon';
 import { errorMessage } from '../../lib/api-client';
-import { cx } from '../../lib/cx';
+import { PhotoFileInput } from './photo-file-input';
+import { usePreviewUrls } from './use-preview-urls';
 import { useUploadPhoto } from './use-upload-photo';
 
 interface Item {
@@ -31,7 +31,7 @@ const megabytes = photoMaxBytes / 1024 / 1024;
 export function PhotoPicker({ onChange, onBusyChange, label = 'Take or add photos', max = 6 }: PhotoPickerProps) {
   const [items, setItems] = useState<Item[]>([]);
   const nextKey = useRef(1);
-  const input = useRef<HTMLInputElement>(null);
+  const previews = usePreviewUrls();
   const uploadPhoto = useUploadPhoto();
 
   const update = (key: number, patch: Partial<Item>) =>
@@ -53,21 +53,17 @@ export function PhotoPicker({ onChange, onBusyChange, label = 'Take or add photo
   }, [items]);
   useEffect(
     () => () => {
-      for (const i of itemsRef.current) {
-        i.abort.abort();
-        URL.revokeObjectURL(i.preview);
-      }
+      for (const i of itemsRef.current) i.abort.abort();
     },
     [],
   );
 
-  const add = (files: FileList | null) => {
-    const picked = Array.from(files ?? []).slice(0, Math.max(0, max - items.length));
-    for (const file of picked) {
+  const add = (files: File[]) => {
+    for (const file of files.slice(0, Math.max(0, max - items.length))) {
       const item: Item = {
         key: nextKey.current++,
         file,
-        preview: URL.createObjectURL(file),
+        preview: previews.make(file),
         progress: 0,
         abort: new AbortController(),
       };
@@ -83,36 +79,17 @@ export function PhotoPicker({ onChange, onBusyChange, label = 'Take or add photo
           if (!item.abort.signal.aborted) update(item.key, { error: errorMessage(error) });
         });
     }
-    if (input.current) input.current.value = '';
   };
 
   const remove = (item: Item) => {
     item.abort.abort();
-    URL.revokeObjectURL(item.preview);
+    previews.release(item.preview);
     setItems((all) => all.filter((i) => i.key !== item.key));
   };
 
   return (
     <div className="flex flex-col gap-3">
-      <label
-        className={cx(
-          'flex min-h-touch cursor-pointer items-center justify-center gap-2 rounded-md border-2 border-dashed border-line-strong px-4 py-4 font-semibold text-accent',
-          items.length >= max && 'pointer-events-none opacity-60',
-        )}
-      >
-        <Icon name="plus" size={22} />
-        {label}
-        <input
-          ref={input}
-          type="file"
-          accept={photoAcceptedTypes.join(',')}
-          capture="environment"
-          multiple
-          className="sr-only"
-          disabled={items.length >= max}
-          onChange={(e) => add(e.target.files)}
-        />
-      </label>
+      <PhotoFileInput label={label} full={items.length >= max} className="min-h-touch py-4" onPick={add} />
       <p className="text-sm text-muted">
         JPEG, PNG or WebP, up to {megabytes} MB each, at most {max}. On iPhone choose the “Most Compatible” camera
         format.

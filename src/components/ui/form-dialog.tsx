@@ -5,10 +5,11 @@ import { Button, type ButtonVariant } from './button';
 import { Dialog } from './dialog';
 import { applyServerErrors, Form, type FormMethods } from './form';
 import type { IconName } from './icon';
+import { useToast } from './toast';
 
 type Schema = z.ZodType<FieldValues, FieldValues>;
 
-interface FormDialogProps<S extends Schema> {
+export interface FormDialogProps<S extends Schema> {
   open: boolean;
   onClose: () => void;
   title: string;
@@ -79,5 +80,31 @@ export function FormDialog<S extends Schema>(props: FormDialogProps<S>) {
         {props.children}
       </Form>
     </Dialog>
+  );
+}
+
+interface SaveDialogProps<S extends Schema, R> extends Omit<FormDialogProps<S>, 'pending' | 'onSubmit'> {
+  /** Where the form's values go; its pending state holds the buttons. */
+  mutation: { isPending: boolean; mutateAsync: (values: z.output<S>) => Promise<R> };
+  /** The toast once the server has the record. */
+  saved: (result: R) => string;
+  /** Runs after the dialog has closed, such as opening the new record's page. */
+  then?: (result: R) => void;
+}
+
+/** A form dialog that sends its values to one mutation, then says so, closes and moves on. */
+export function SaveDialog<S extends Schema, R>({ mutation, saved, then, ...dialog }: SaveDialogProps<S, R>) {
+  const toast = useToast();
+  return (
+    <FormDialog
+      {...dialog}
+      pending={mutation.isPending}
+      onSubmit={async (values) => {
+        const result = await mutation.mutateAsync(values);
+        toast.success(saved(result));
+        dialog.onClose();
+        then?.(result);
+      }}
+    />
   );
 }

@@ -50,3 +50,30 @@ export function SkeletonRows({ rows, columns }: { rows: number; columns: number 
     </>
   );
 }
+
+/** A column heading, with its own classes where it differs from the others (such as a number column). */
+export type PlainHeading = string | { label: string; className: string };
+
+interface PlainTableHeadProps {
+  headings: readonly PlainHeading[];
+  /** The classes of every heading that does not bring its own. */
+  cellClassName: string;
+  rowClassName?: string;
+}
+
+/** The head row of a plain, unsorted table: one column heading per label. */
+export function PlainTableHead({ headings, cellClassName, rowClassName }: PlainTableHeadProps) {
+  return (
+    <tr className={rowClassName}>
+      {headings.map((heading) => {
+        const { label, className } =
+          typeof heading === 'string' ? { label: heading, className: cellClassName } : heading;
+        return (
+          <th key={label} scope="col" className={className}>
+            {label}
+          </th>
+        );
+      })}
+    </tr>
+  );
+}

@@ -1,9 +1,9 @@
 import { factorNames, factors } from '../../../../shared/enums';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { SelectFilter } from '../../../components/ui/filter-fields';
+import { filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
-import { clearedPatch, hasAnyFilter } from '../../../lib/list-params';
+import { hasAnyFilter } from '../../../lib/list-params';
 import type { ActionListFilters } from '../api/actions-queries';
 
 type FilterKey = 'state' | 'mine' | 'incidentId' | 'factor' | 'level' | 'q';
@@ -28,14 +28,10 @@ interface Props {
 }
 
 export function ActionsFilters({ filters, onChange }: Props) {
+  const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-4">
-      <SelectFilter
-        label="State"
-        options={stateOptions}
-        value={filters.state}
-        onChange={(state) => onChange({ state })}
-      />
+      <SelectFilter label="State" options={stateOptions} {...bind.value('state')} />
       <SelectFilter
         label="Factor"
         options={factorOptions}
@@ -50,34 +46,16 @@ export function ActionsFilters({ filters, onChange }: Props) {
       >
         <TextInput
           label="Level"
-          name="level"
-          defaultValue={filters.level ?? ''}
           placeholder="CR-2614"
           disabled={!filters.factor}
           className="w-32"
+          {...bind.text('level')}
         />
-        <TextInput
-          label="Incident"
-          name="incidentId"
-          defaultValue={filters.incidentId ?? ''}
-          placeholder="#12"
-          className="w-24"
-        />
-        <TextInput
-          label="Search"
-          name="q"
-          type="search"
-          defaultValue={filters.q ?? ''}
-          placeholder="What, owner"
-          className="flex-1"
-        />
+        <TextInput label="Incident" placeholder="#12" className="w-24" {...bind.text('incidentId')} />
+        <SearchText placeholder="What, owner" {...bind.text('q')} />
       </SearchForm>
-      <Checkbox
-        label="Only mine"
-        checked={filters.mine === 'true'}
-        onChange={(e) => onChange({ mine: e.target.checked ? 'true' : undefined })}
-      />
-      <ClearFilters shown={isActionFiltered(filters)} onClear={() => onChange(clearedPatch(actionFilterKeys))} />
+      <Checkbox label="Only mine" {...bind.flag('mine')} />
+      <ClearFilters {...bind.clear(actionFilterKeys)} />
     </FilterBar>
   );
 }

@@ -1,6 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { useListParams } from '../../../lib/use-list-params';
 import { actionsQueries, readActionFilters } from '../api/actions-queries';
 import { actionColumns } from './actions-columns';
@@ -8,7 +7,8 @@ import { ActionsFilters, isActionFiltered } from './actions-filters';
 
 /** Every corrective action of the lab, with who answers for it and by when. */
 export function ActionsScreen() {
-  const { filters, update } = useListParams(readActionFilters);
+  const params = useListParams(readActionFilters);
+  const { filters, update } = params;
   const list = useQuery(actionsQueries.list(filters));
   return (
     <RegisterScreen
@@ -17,15 +17,12 @@ export function ActionsScreen() {
       filters={<ActionsFilters filters={filters} onChange={update} />}
       columns={actionColumns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={isActionFiltered(filters)}
-          none="No corrective actions yet. A supervisor adds them on an incident’s page."
-          noMatch="No corrective actions match these filters."
-        />
-      }
+      params={params}
+      empty={{
+        filtered: isActionFiltered(filters),
+        none: 'No corrective actions yet. A supervisor adds them on an incident’s page.',
+        noMatch: 'No corrective actions match these filters.',
+      }}
     />
   );
 }

@@ -26,13 +26,7 @@ export function ActionVerdictsScreen() {
         description="Each corrective action’s factor level: its rate in equal periods before and after the day it was done, over settled jars."
       />
       <AnalysisTabs />
-      <LoadState
-        isPending={actions.isPending}
-        error={actions.error}
-        onRetry={() => void actions.refetch()}
-        isEmpty={!data || data.total === 0}
-        emptyTitle="No corrective actions yet."
-      >
+      <LoadState query={actions} isEmpty={!data || data.total === 0} emptyTitle="No corrective actions yet.">
         <ul className="grid gap-3">
           {data?.items.map((a) => (
             <li key={a.id} className="rounded border border-line p-3" data-testid="action-verdict">

@@ -95,17 +95,19 @@ export function LeadNotProof() {
 }
 
 interface LoadStateProps {
-  isPending: boolean;
-  error: unknown;
-  onRetry: () => void;
+  /** The screen's figures: its pending state, error and retry drive what is shown. */
+  query: { isPending: boolean; error: unknown; refetch: () => Promise<unknown> };
+  /** False while the query waits for a choice and is not sent: no spinner then. */
+  asked?: boolean;
   isEmpty: boolean;
   emptyTitle: string;
   children: ReactNode;
 }
 
 /** Loading, failure and empty states shared by every analysis screen. */
-export function LoadState({ isPending, error, onRetry, isEmpty, emptyTitle, children }: LoadStateProps) {
-  if (isPending)
+export function LoadState({ query, asked = true, isEmpty, emptyTitle, children }: LoadStateProps) {
+  const { error } = query;
+  if (asked && query.isPending)
     return (
       <div className="flex justify-center py-16 text-accent">
         <Spinner label="Counting jars" size={32} />
@@ -115,7 +117,7 @@ export function LoadState({ isPending, error, onRetry, isEmpty, emptyTitle, chil
     return (
       <Notice tone="danger" title="The figures could not be loaded">
         <p role="alert">{errorMessage(error)}</p>
-        <button type="button" className={cx(buttonClasses('secondary'), 'mt-3')} onClick={onRetry}>
+        <button type="button" className={cx(buttonClasses('secondary'), 'mt-3')} onClick={() => void query.refetch()}>
           Try again
         </button>
       </Notice>

@@ -74,9 +74,7 @@ export function CausesScreen({ windowDays }: { windowDays?: number | undefined }
         />
       </PeriodPicker>
       <LoadState
-        isPending={causes.isPending}
-        error={causes.error}
-        onRetry={() => void causes.refetch()}
+        query={causes}
         isEmpty={!data || data.total === 0}
         emptyTitle="No level has settled jars on both sides in this period."
       >

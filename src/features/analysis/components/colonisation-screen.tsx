@@ -25,9 +25,7 @@ export function ColonisationScreen() {
       <AnalysisTabs />
       <PeriodPicker period={period} />
       <LoadState
-        isPending={km.isPending}
-        error={km.error}
-        onRetry={() => void km.refetch()}
+        query={km}
         isEmpty={curves.length === 0}
         emptyTitle="No jars with a known colonisation day in this period."
       >

@@ -57,9 +57,7 @@ export function CrosstabScreen() {
         />
       </PeriodPicker>
       <LoadState
-        isPending={table.isPending}
-        error={table.error}
-        onRetry={() => void table.refetch()}
+        query={table}
         isEmpty={!data || (data.rowPage.total === 0 && data.colPage.total === 0)}
         emptyTitle="No jars in this period record both factors."
       >

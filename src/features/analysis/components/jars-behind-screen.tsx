@@ -4,6 +4,7 @@ import { contaminantNames, type Contaminant } from '../../../../shared/enums';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 import { paths } from '../../../config/paths';
 import { patchParams } from '../../../lib/list-params';
 import { analysisQueries, readFactor, readPeriod, type JarsOnly } from '../api/analysis-queries';
@@ -16,6 +17,8 @@ const onlyLabels: Record<JarsOnly, string> = {
   contaminated: 'Contaminated jars',
   incubating: 'Incubating jars',
 };
+
+const headings = ['Jar', 'Inoculated', 'Status', 'Contaminant', 'Found', 'Incident'];
 
 /** The jars behind a number on the analysis screens, each linking to its own page. */
 export function JarsBehindScreen() {
@@ -33,6 +36,7 @@ export function JarsBehindScreen() {
   const jars = useQuery({ ...analysisQueries.jars(factor, level, only, period, page, and), enabled: level !== '' });
   const data = jars.data;
   const pages = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
+  const goToPage = (to: number) => setParams(patchParams(params, { page: to }));
 
   return (
     <>
@@ -53,9 +57,8 @@ export function JarsBehindScreen() {
         ))}
       </div>
       <LoadState
-        isPending={level !== '' && jars.isPending}
-        error={jars.error}
-        onRetry={() => void jars.refetch()}
+        query={jars}
+        asked={level !== ''}
         isEmpty={!data || data.items.length === 0}
         emptyTitle="No jars match."
       >
@@ -64,26 +67,7 @@ export function JarsBehindScreen() {
             <p className="mb-3 text-muted">{data.total} jars.</p>
             <Table caption="Jars behind the number">
               <thead>
-                <tr>
-                  <th scope="col" className={th}>
-                    Jar
-                  </th>
-                  <th scope="col" className={th}>
-                    Inoculated
-                  </th>
-                  <th scope="col" className={th}>
-                    Status
-                  </th>
-                  <th scope="col" className={th}>
-                    Contaminant
-                  </th>
-                  <th scope="col" className={th}>
-                    Found
-                  </th>
-                  <th scope="col" className={th}>
-                    Incident
-                  </th>
-                </tr>
+                <PlainTableHead headings={headings} cellClassName={th} />
               </thead>
               <tbody>
                 {data.items.map((j) => (
@@ -122,21 +106,13 @@ export function JarsBehindScreen() {
             </Table>
             {pages > 1 && (
               <div className="no-print mt-4 flex items-center gap-3">
-                <Button
-                  variant="secondary"
-                  disabled={page <= 1}
-                  onClick={() => setParams(patchParams(params, { page: page - 1 }))}
-                >
+                <Button variant="secondary" disabled={page <= 1} onClick={() => goToPage(page - 1)}>
                   Previous
                 </Button>
                 <span>
                   Page {page} of {pages}
                 </span>
-                <Button
-                  variant="secondary"
-                  disabled={page >= pages}
-                  onClick={() => setParams(patchParams(params, { page: page + 1 }))}
-                >
+                <Button variant="secondary" disabled={page >= pages} onClick={() => goToPage(page + 1)}>
                   Next
                 </Button>
               </div>

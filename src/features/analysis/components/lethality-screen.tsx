@@ -8,6 +8,7 @@ import { cautionFootnote, cautions } from '../../../config/cautions';
 import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
 import { percent } from './labels';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
 function source(r: LethalityRow): string {
   if (r.f0Source === 'log')
@@ -22,6 +23,18 @@ function judgement(r: LethalityRow): string {
   if (r.judgedBy === 'minutes') return `minutes against ${r.minimumMinutes} min for the container`;
   return 'not judged: no minimum for this container';
 }
+
+const numberHeading = (label: string) => ({ label, className: `${th} ${num}` });
+const runHeadings = [
+  'Cook run',
+  'Cooked on',
+  'Container',
+  numberHeading('Minutes at pressure'),
+  numberHeading('F0 (min)'),
+  'From',
+  'Judged by',
+  numberHeading('Contaminated'),
+];
 
 /** Cook runs with their F0, low ones flagged against the lab's target. */
 export function LethalityScreen() {
@@ -46,13 +59,7 @@ export function LethalityScreen() {
         </Notice>
       )}
       <PeriodPicker period={period} />
-      <LoadState
-        isPending={lethality.isPending}
-        error={lethality.error}
-        onRetry={() => void lethality.refetch()}
-        isEmpty={!data || data.runs.length === 0}
-        emptyTitle="No cook runs in this period."
-      >
+      <LoadState query={lethality} isEmpty={!data || data.runs.length === 0} emptyTitle="No cook runs in this period.">
         {data && (
           <>
             <p className="mb-3">
@@ -66,32 +73,7 @@ export function LethalityScreen() {
             </p>
             <Table caption="Cook runs with F0">
               <thead>
-                <tr>
-                  <th scope="col" className={th}>
-                    Cook run
-                  </th>
-                  <th scope="col" className={th}>
-                    Cooked on
-                  </th>
-                  <th scope="col" className={th}>
-                    Container
-                  </th>
-                  <th scope="col" className={`${th} ${num}`}>
-                    Minutes at pressure
-                  </th>
-                  <th scope="col" className={`${th} ${num}`}>
-                    F0 (min)
-                  </th>
-                  <th scope="col" className={th}>
-                    From
-                  </th>
-                  <th scope="col" className={th}>
-                    Judged by
-                  </th>
-                  <th scope="col" className={`${th} ${num}`}>
-                    Contaminated
-                  </th>
-                </tr>
+                <PlainTableHead headings={runHeadings} cellClassName={th} />
               </thead>
               <tbody>
                 {data.runs.map((r) => (

@@ -45,9 +45,7 @@ export function RatesScreen() {
         />
       </PeriodPicker>
       <LoadState
-        isPending={rates.isPending}
-        error={rates.error}
-        onRetry={() => void rates.refetch()}
+        query={rates}
         isEmpty={!data || data.total === 0}
         emptyTitle={`No jars in this period record a ${factorNames[by]}.`}
       >

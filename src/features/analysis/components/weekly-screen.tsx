@@ -68,9 +68,7 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
         </>
       )}
       <LoadState
-        isPending={weekly.isPending}
-        error={weekly.error}
-        onRetry={() => void weekly.refetch()}
+        query={weekly}
         isEmpty={!data || data.weeks.length === 0}
         emptyTitle="No jars were inoculated in these weeks."
       >

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { changePasswordSchema } from '../../../../shared/schemas/auth';
 import { Button } from '../../../components/ui/button';
 import { applyServerErrors, Form } from '../../../components/ui/form';
-import { TextInput } from '../../../components/ui/text-input';
+import { PasswordField } from '../../../components/ui/form-fields';
 import { useToast } from '../../../components/ui/toast';
 import { useChangePassword } from '../api/use-change-password';
 
@@ -45,30 +45,17 @@ export function ChangePasswordForm({ currentLabel = 'Current password', onChange
         }
       }}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput
-            label={currentLabel}
-            type="password"
-            autoComplete="current-password"
-            error={errors.currentPassword?.message}
-            {...register('currentPassword')}
-          />
-          <TextInput
+          <PasswordField form={form} name="currentPassword" label={currentLabel} autoComplete="current-password" />
+          <PasswordField
+            form={form}
+            name="newPassword"
             label="New password"
-            type="password"
             autoComplete="new-password"
             hint="At least 10 characters. A short sentence is easier to type with gloves than a jumble of symbols."
-            error={errors.newPassword?.message}
-            {...register('newPassword')}
           />
-          <TextInput
-            label="New password again"
-            type="password"
-            autoComplete="new-password"
-            error={errors.confirmPassword?.message}
-            {...register('confirmPassword')}
-          />
+          <PasswordField form={form} name="confirmPassword" label="New password again" autoComplete="new-password" />
           <div>
             <Button type="submit" pending={changePassword.isPending}>
               Change password

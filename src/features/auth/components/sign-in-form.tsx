@@ -2,7 +2,7 @@ import type { MeDto } from '../../../../shared/schemas/auth';
 import { loginSchema } from '../../../../shared/schemas/auth';
 import { Button } from '../../../components/ui/button';
 import { applyServerErrors, Form } from '../../../components/ui/form';
-import { TextInput } from '../../../components/ui/text-input';
+import { PasswordField, UsernameField } from '../../../components/ui/form-fields';
 import { isApiError } from '../../../lib/api-client';
 import { useSignIn } from '../api/use-sign-in';
 
@@ -33,24 +33,10 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (me: MeDto) => void }) 
         }
       }}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput
-            label="Username"
-            autoComplete="username"
-            autoCapitalize="none"
-            autoCorrect="off"
-            spellCheck={false}
-            error={errors.username?.message}
-            {...register('username')}
-          />
-          <TextInput
-            label="Password"
-            type="password"
-            autoComplete="current-password"
-            error={errors.password?.message}
-            {...register('password')}
-          />
+          <UsernameField form={form} name="username" autoComplete="username" />
+          <PasswordField form={form} name="password" label="Password" autoComplete="current-password" />
           <Button type="submit" pending={signIn.isPending} className="w-full">
             Sign in
           </Button>

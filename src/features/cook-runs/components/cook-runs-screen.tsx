@@ -2,7 +2,6 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { Button } from '../../../components/ui/button';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { useListParams } from '../../../lib/use-list-params';
 import { cookRunsExportUrl, cookRunsQueries, readCookRunFilters } from '../api/cook-runs-queries';
 import { cookRunColumns } from './cook-runs-columns';
@@ -15,7 +14,8 @@ interface Props {
 }
 
 export function CookRunsScreen({ canWrite, me }: Props) {
-  const { filters, update } = useListParams(readCookRunFilters);
+  const params = useListParams(readCookRunFilters);
+  const { filters, update } = params;
   const list = useQuery(cookRunsQueries.list(filters));
   const [creating, setCreating] = useState(false);
 
@@ -34,15 +34,12 @@ export function CookRunsScreen({ canWrite, me }: Props) {
       filters={<CookRunsFilters filters={filters} onChange={update} />}
       columns={cookRunColumns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={isCookRunFiltered(filters)}
-          none="No cook runs recorded yet."
-          noMatch="No cook runs match these filters."
-        />
-      }
+      params={params}
+      empty={{
+        filtered: isCookRunFiltered(filters),
+        none: 'No cook runs recorded yet.',
+        noMatch: 'No cook runs match these filters.',
+      }}
     >
       {canWrite && <CreateCookRunDialog open={creating} onClose={() => setCreating(false)} me={me} />}
     </RegisterScreen>

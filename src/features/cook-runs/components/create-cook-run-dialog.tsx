@@ -3,13 +3,12 @@ import { useId } from 'react';
 import { useNavigate } from 'react-router';
 import { createCookRunSchema, defaultGaugeKPa, type CreateCookRunInput } from '../../../../shared/schemas/cook-runs';
 import { kPaToPsi } from '../../../../shared/stats/steam';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { OperatorChoice } from '../../../components/ui/operator-choice';
-import { controlClasses, Field } from '../../../components/ui/field';
+import { NumberField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { SuggestedCodeInput } from '../../../components/ui/suggested-code-input';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
+import { localInstantOrNull } from '../../../lib/form-values';
 import { cookRunsQueries } from '../api/cook-runs-queries';
 import { useCreateCookRun } from '../api/use-create-cook-run';
 import { PressureCaution } from './pressure-caution';
@@ -30,11 +29,6 @@ const fields = [
   'notes',
 ] as const;
 
-const number = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
-const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
-// datetime-local has no zone; the browser's own zone is the lab floor's, so it is read as local time.
-const localDateTime = (v: unknown) => (typeof v === 'string' && v ? new Date(v).toISOString() : null);
-
 interface Props {
   open: boolean;
   onClose: () => void;
@@ -45,7 +39,6 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
   const listId = useId();
   const createRun = useCreateCookRun();
   const nextCode = useQuery({ ...cookRunsQueries.nextCode(), enabled: open });
-  const toast = useToast();
   const navigate = useNavigate();
   const defaults: CreateCookRunInput = {
     code: '',
@@ -58,10 +51,10 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
   };
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createRun.isPending}
+      mutation={createRun}
       title="New cook run"
       description="One load through the cooker or autoclave. Minutes at pressure mean little without the container, so both are required."
       submitLabel="Record cook run"
@@ -70,14 +63,11 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
       schema={createCookRunSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        const run = await createRun.mutateAsync(values);
-        toast.success(`Cook run ${run.code} recorded.`);
-        onClose();
-        void navigate(paths.cookRun.to(run.id));
-      }}
+      saved={(run) => `Cook run ${run.code} recorded.`}
+      then={(run) => void navigate(paths.cookRun.to(run.id))}
     >
-      {({ register, watch, setValue, formState: { errors, dirtyFields } }) => {
+      {(form) => {
+        const { register, watch, setValue, formState } = form;
         const gauge = watch('gaugeKPa');
         const byUser = watch('operatorId') === me.id;
         return (
@@ -85,89 +75,66 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
             <div className="grid gap-4 sm:grid-cols-2">
               <SuggestedCodeInput
                 suggestion={nextCode.data?.code}
-                edited={Boolean(dirtyFields.code)}
+                edited={Boolean(formState.dirtyFields.code)}
                 onSuggestion={(code) => setValue('code', code)}
-                error={errors.code?.message}
+                error={formState.errors.code?.message}
                 {...register('code')}
               />
-              <TextInput
-                label="Vessel"
-                optional
-                placeholder="Cooker A"
-                error={errors.vessel?.message}
-                {...register('vessel')}
-              />
-              <TextInput
+              <TextField form={form} name="vessel" label="Vessel" optional placeholder="Cooker A" />
+              <TextField
+                form={form}
+                name="cookedOn"
                 label="Date"
                 type="date"
                 hint="Or give the start time."
-                error={errors.cookedOn?.message}
-                {...register('cookedOn', { setValueAs: (v: unknown) => v || null })}
+                setValueAs={(v) => v || null}
               />
-              <TextInput
+              <TextField
+                form={form}
+                name="startedAt"
                 label="Start time"
                 type="datetime-local"
                 optional
-                error={errors.startedAt?.message}
-                {...register('startedAt', { setValueAs: localDateTime })}
+                setValueAs={localInstantOrNull}
               />
-              <TextInput
+              <TextField
+                form={form}
+                name="container"
                 label="Container"
                 list={listId}
                 hint="1 L jar, 2 L jar, 3 kg bag…"
-                error={errors.container?.message}
-                {...register('container')}
               />
               <datalist id={listId}>
                 <option value="1 L jar" />
                 <option value="2 L jar" />
                 <option value="3 kg bag" />
               </datalist>
-              <TextInput
-                label="Load count"
-                type="number"
-                inputMode="numeric"
-                optional
-                error={errors.loadCount?.message}
-                {...register('loadCount', { setValueAs: optionalNumber })}
-              />
-              <TextInput
-                label="Minutes at pressure"
-                type="number"
-                inputMode="numeric"
-                error={errors.minutesAtPressure?.message}
-                {...register('minutesAtPressure', { setValueAs: number })}
-              />
-              <TextInput
+              <NumberField form={form} name="loadCount" label="Load count" optional />
+              <NumberField form={form} name="minutesAtPressure" label="Minutes at pressure" />
+              <NumberField
+                form={form}
+                name="gaugeKPa"
                 label="Gauge pressure (kPa)"
-                type="number"
                 step="0.1"
-                inputMode="decimal"
                 optional
                 hint={
                   typeof gauge === 'number' && !Number.isNaN(gauge)
                     ? `${kPaToPsi(gauge).toFixed(2)} psi`
                     : 'Left empty, 103.4 kPa (15 psi) is assumed.'
                 }
-                error={errors.gaugeKPa?.message}
-                {...register('gaugeKPa', { setValueAs: optionalNumber })}
               />
-              <TextInput
+              <NumberField
+                form={form}
+                name="ventingMinutes"
                 label="Venting minutes"
-                type="number"
-                inputMode="numeric"
                 optional
                 hint="Steam flowing before the vent was closed."
-                error={errors.ventingMinutes?.message}
-                {...register('ventingMinutes', { setValueAs: optionalNumber })}
               />
-              <TextInput
+              <NumberField
+                form={form}
+                name="altitudeM"
                 label="Site altitude (m)"
-                type="number"
-                inputMode="numeric"
                 hint="Lower air pressure lowers the steam temperature at the same gauge reading."
-                error={errors.altitudeM?.message}
-                {...register('altitudeM', { setValueAs: number })}
               />
             </div>
             <OperatorChoice
@@ -180,14 +147,12 @@ export function CreateCookRunDialog({ open, onClose, me }: Props) {
               }}
               onChooseOther={() => setValue('operatorId', undefined)}
               staffName={register('operatorName')}
-              error={errors.operatorName?.message}
+              error={formState.errors.operatorName?.message}
             />
-            <Field label="Notes" optional error={errors.notes?.message}>
-              {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-            </Field>
+            <TextAreaField form={form} name="notes" label="Notes" optional />
           </>
         );
       }}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -15,6 +15,7 @@ import { ApiError, errorMessage } from '../../../lib/api-client';
 import { cookRunsQueries } from '../api/cook-runs-queries';
 import { useRemoveReadings } from '../api/use-remove-readings';
 import { useUploadReadings } from '../api/use-upload-readings';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
 const shownRows = 40;
 const placementOptions = [
@@ -122,17 +123,11 @@ export function ReadingsPanel({ run, canWrite }: { run: CookRunDetailDto; canWri
           <table className="w-full max-w-md border-collapse text-left text-sm tabular-nums">
             <caption className="sr-only">Readings</caption>
             <thead>
-              <tr className="border-b border-line">
-                <th scope="col" className="py-1 pr-4">
-                  Minute
-                </th>
-                <th scope="col" className="py-1 pr-4">
-                  °C
-                </th>
-                <th scope="col" className="py-1">
-                  Lethal rate
-                </th>
-              </tr>
+              <PlainTableHead
+                headings={['Minute', '°C', { label: 'Lethal rate', className: 'py-1' }]}
+                cellClassName="py-1 pr-4"
+                rowClassName="border-b border-line"
+              />
             </thead>
             <tbody>
               {(showAll ? rows : rows.slice(0, shownRows)).map((r) => (

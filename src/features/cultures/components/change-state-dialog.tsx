@@ -1,7 +1,7 @@
 import type { CultureState } from '../../../../shared/enums';
 import { changeCultureStateSchema } from '../../../../shared/schemas/cultures';
+import { TextAreaField } from '../../../components/ui/form-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';
-import { controlClasses, Field } from '../../../components/ui/field';
 import { Notice } from '../../../components/ui/notice';
 import { useToast } from '../../../components/ui/toast';
 import { useChangeCultureState } from '../api/use-change-culture-state';
@@ -47,7 +47,7 @@ export function ChangeStateDialog({ culture, target, onClose }: Props) {
         close();
       }}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
           {target === 'released' && culture.lastAgarResult !== 'clean' && (
             <Notice tone="warn">
@@ -58,9 +58,7 @@ export function ChangeStateDialog({ culture, target, onClose }: Props) {
             </Notice>
           )}
           {target === 'retired' && <p>A retired culture cannot be released again.</p>}
-          <Field label="Reason" hint="Kept in the audit trail." error={errors.reason?.message}>
-            {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('reason')} />}
-          </Field>
+          <TextAreaField form={form} name="reason" label="Reason" hint="Kept in the audit trail." />
         </>
       )}
     </FormDialog>

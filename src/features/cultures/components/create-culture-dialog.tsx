@@ -1,10 +1,9 @@
 import { useNavigate } from 'react-router';
 import { createCultureSchema, type CreateCultureInput } from '../../../../shared/schemas/cultures';
-import { FormDialog } from '../../../components/ui/form-dialog';
-import { controlClasses, Field } from '../../../components/ui/field';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
+import { SaveDialog } from '../../../components/ui/form-dialog';
+import { NumberField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { paths } from '../../../config/paths';
+import { textOrNull } from '../../../lib/form-values';
 import { useCreateCulture } from '../api/use-create-culture';
 
 const fields = [
@@ -17,8 +16,6 @@ const fields = [
   'parentCultureId',
   'notes',
 ] as const;
-const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
-const optionalText = (v: unknown) => (v === '' ? null : v);
 
 interface Props {
   open: boolean;
@@ -29,7 +26,6 @@ interface Props {
 
 export function CreateCultureDialog({ open, onClose, parent }: Props) {
   const createCulture = useCreateCulture();
-  const toast = useToast();
   const navigate = useNavigate();
   const defaults: CreateCultureInput = {
     code: '',
@@ -39,10 +35,10 @@ export function CreateCultureDialog({ open, onClose, parent }: Props) {
   };
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createCulture.isPending}
+      mutation={createCulture}
       title={parent ? `New culture from ${parent.code}` : 'New culture'}
       description="A new culture starts quarantined. A supervisor releases it once an agar test comes back clean."
       submitLabel="Record culture"
@@ -50,61 +46,29 @@ export function CreateCultureDialog({ open, onClose, parent }: Props) {
       schema={createCultureSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        const culture = await createCulture.mutateAsync(values);
-        toast.success(`Culture ${culture.code} recorded, quarantined.`);
-        onClose();
-        void navigate(paths.culture.to(culture.id));
-      }}
+      saved={(culture) => `Culture ${culture.code} recorded, quarantined.`}
+      then={(culture) => void navigate(paths.culture.to(culture.id))}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
           <div className="grid gap-4 sm:grid-cols-2">
-            <TextInput
-              label="Code"
-              autoComplete="off"
-              placeholder="LC-…"
-              error={errors.code?.message}
-              {...register('code')}
-            />
-            <TextInput
-              label="Prepared on"
-              type="date"
-              optional
-              error={errors.preparedOn?.message}
-              {...register('preparedOn', { setValueAs: optionalText })}
-            />
-            <TextInput
-              label="Species"
-              optional
-              error={errors.species?.message}
-              {...register('species', { setValueAs: optionalText })}
-            />
-            <TextInput label="Strain label" optional error={errors.strain?.message} {...register('strain')} />
-            <TextInput
+            <TextField form={form} name="code" label="Code" autoComplete="off" placeholder="LC-…" />
+            <TextField form={form} name="preparedOn" label="Prepared on" type="date" optional setValueAs={textOrNull} />
+            <TextField form={form} name="species" label="Species" optional setValueAs={textOrNull} />
+            <TextField form={form} name="strain" label="Strain label" optional />
+            <NumberField
+              form={form}
+              name="generation"
               label="Generation"
-              type="number"
-              inputMode="numeric"
               optional
               hint={parent ? 'Left empty, one more than the parent.' : undefined}
-              error={errors.generation?.message}
-              {...register('generation', { setValueAs: optionalNumber })}
             />
-            <TextInput
-              label="Volume (ml)"
-              type="number"
-              inputMode="decimal"
-              optional
-              error={errors.volumeMl?.message}
-              {...register('volumeMl', { setValueAs: optionalNumber })}
-            />
+            <NumberField form={form} name="volumeMl" label="Volume (ml)" inputMode="decimal" optional />
           </div>
           {parent ? <p className="text-muted">Parent culture: {parent.code}</p> : null}
-          <Field label="Notes" optional error={errors.notes?.message}>
-            {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-          </Field>
+          <TextAreaField form={form} name="notes" label="Notes" optional />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -1,7 +1,6 @@
 import { cultureStates } from '../../../../shared/enums';
 import { FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { SelectFilter } from '../../../components/ui/filter-fields';
-import { TextInput } from '../../../components/ui/text-input';
+import { filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import type { CultureListFilters } from '../api/cultures-queries';
 import { cultureStateLabels } from './culture-state-badge';
 
@@ -16,24 +15,13 @@ const stateOptions = [
 ];
 
 export function CulturesFilters({ filters, onChange }: CulturesFiltersProps) {
+  const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-[2fr_1fr]">
-      <SearchForm names={['q']} values={filters} onSearch={onChange}>
-        <TextInput
-          label="Search"
-          name="q"
-          type="search"
-          defaultValue={filters.q ?? ''}
-          placeholder="Code, species or strain"
-          className="flex-1"
-        />
+      <SearchForm {...bind.search(['q'])}>
+        <SearchText placeholder="Code, species or strain" {...bind.text('q')} />
       </SearchForm>
-      <SelectFilter
-        label="State"
-        value={filters.state}
-        options={stateOptions}
-        onChange={(state) => onChange({ state })}
-      />
+      <SelectFilter label="State" options={stateOptions} {...bind.value('state')} />
     </FilterBar>
   );
 }

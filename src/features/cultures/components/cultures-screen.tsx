@@ -2,7 +2,6 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { Button } from '../../../components/ui/button';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { useListParams } from '../../../lib/use-list-params';
 import { culturesExportUrl, culturesQueries, readCultureFilters } from '../api/cultures-queries';
 import { CreateCultureDialog } from './create-culture-dialog';
@@ -10,7 +9,8 @@ import { cultureColumns } from './cultures-columns';
 import { CulturesFilters } from './cultures-filters';
 
 export function CulturesScreen({ canWrite }: { canWrite: boolean }) {
-  const { filters, update } = useListParams(readCultureFilters);
+  const params = useListParams(readCultureFilters);
+  const { filters, update } = params;
   const list = useQuery(culturesQueries.list(filters));
   const [creating, setCreating] = useState(false);
 
@@ -29,16 +29,13 @@ export function CulturesScreen({ canWrite }: { canWrite: boolean }) {
       filters={<CulturesFilters filters={filters} onChange={update} />}
       columns={cultureColumns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={Boolean(filters.q || filters.state)}
-          none="No cultures recorded yet."
-          noMatch="No cultures match these filters."
-          onClear={() => update({ q: undefined, state: undefined })}
-        />
-      }
+      params={params}
+      empty={{
+        filtered: Boolean(filters.q || filters.state),
+        none: 'No cultures recorded yet.',
+        noMatch: 'No cultures match these filters.',
+        onClear: () => update({ q: undefined, state: undefined }),
+      }}
     >
       {canWrite && <CreateCultureDialog open={creating} onClose={() => setCreating(false)} />}
     </RegisterScreen>

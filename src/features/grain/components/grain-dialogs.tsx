@@ -1,18 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { createGrainLotSchema, createGrainSchema, createPrepBatchSchema } from '../../../../shared/schemas/grain';
-import { FormDialog } from '../../../components/ui/form-dialog';
-import { controlClasses, Field } from '../../../components/ui/field';
-import { Select } from '../../../components/ui/select';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
+import { SaveDialog } from '../../../components/ui/form-dialog';
+import { NumberField, SelectField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { grainQueries } from '../api/grain-queries';
 import { useCreateGrain } from '../api/use-create-grain';
 import { useCreateGrainLot } from '../api/use-create-grain-lot';
 import { useCreatePrepBatch } from '../api/use-create-prep-batch';
 import { todayIso } from '../../../lib/format';
-
-const optionalNumber = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
-const requiredId = (v: unknown) => (v === '' || v === undefined ? undefined : Number(v));
+import { numberOrUndefined } from '../../../lib/form-values';
 
 interface DialogProps {
   open: boolean;
@@ -21,12 +16,11 @@ interface DialogProps {
 
 export function AddGrainDialog({ open, onClose }: DialogProps) {
   const create = useCreateGrain();
-  const toast = useToast();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       size="sm"
       title="Add a grain to the list"
       submitLabel="Add grain"
@@ -34,37 +28,27 @@ export function AddGrainDialog({ open, onClose }: DialogProps) {
       schema={createGrainSchema}
       options={{ defaultValues: { name: '' } }}
       serverFields={['name']}
-      onSubmit={async (values) => {
-        const grain = await create.mutateAsync(values);
-        toast.success(`${grain.name} added to the grain list.`);
-        onClose();
-      }}
+      saved={(grain) => `${grain.name} added to the grain list.`}
     >
-      {({ register, formState: { errors } }) => (
-        <TextInput
-          label="Name"
-          hint="Imports match grain names case-insensitively."
-          error={errors.name?.message}
-          {...register('name')}
-        />
+      {(form) => (
+        <TextField form={form} name="name" label="Name" hint="Imports match grain names case-insensitively." />
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }
 
 export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
   const grains = useQuery({ ...grainQueries.grains(), enabled: open });
   const create = useCreateGrainLot();
-  const toast = useToast();
   const options = [
     { value: '', label: 'Choose a grain' },
     ...(grains.data ?? []).filter((g) => g.active).map((g) => ({ value: String(g.id), label: g.name })),
   ];
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       title="New grain lot"
       description="A delivery of grain, as the supplier labels it."
       submitLabel="Record lot"
@@ -72,39 +56,23 @@ export function CreateGrainLotDialog({ open, onClose }: DialogProps) {
       schema={createGrainLotSchema}
       options={{ defaultValues: { supplierLotCode: '', receivedOn: todayIso(), notes: '' } }}
       serverFields={['grainId', 'supplierLotCode', 'receivedOn', 'notes']}
-      onSubmit={async (values) => {
-        const lot = await create.mutateAsync(values);
-        toast.success(`Lot ${lot.supplierLotCode} of ${lot.grain} recorded.`);
-        onClose();
-      }}
+      saved={(lot) => `Lot ${lot.supplierLotCode} of ${lot.grain} recorded.`}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <Select
-            label="Grain"
-            options={options}
-            error={errors.grainId?.message}
-            {...register('grainId', { setValueAs: requiredId })}
-          />
-          <TextInput
-            label="Supplier lot code"
-            error={errors.supplierLotCode?.message}
-            {...register('supplierLotCode')}
-          />
-          <TextInput label="Received on" type="date" error={errors.receivedOn?.message} {...register('receivedOn')} />
-          <Field label="Notes" optional error={errors.notes?.message}>
-            {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('notes')} />}
-          </Field>
+          <SelectField form={form} name="grainId" label="Grain" options={options} setValueAs={numberOrUndefined} />
+          <TextField form={form} name="supplierLotCode" label="Supplier lot code" />
+          <TextField form={form} name="receivedOn" label="Received on" type="date" />
+          <TextAreaField form={form} name="notes" label="Notes" optional rows={2} />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }
 
 export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { lotId?: number }) {
   const lots = useQuery({ ...grainQueries.lotOptions(), enabled: open });
   const create = useCreatePrepBatch();
-  const toast = useToast();
   const options = [
     { value: '', label: 'Choose a grain lot' },
     ...(lots.data?.items ?? []).map((l) => ({
@@ -113,10 +81,10 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
     })),
   ];
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={create.isPending}
+      mutation={create}
       title="New prep batch"
       description="Grain soaked and simmered together. Wetness varies batch to batch, so jars point at their batch."
       submitLabel="Record batch"
@@ -124,58 +92,43 @@ export function CreatePrepBatchDialog({ open, onClose, lotId }: DialogProps & { 
       schema={createPrepBatchSchema}
       options={{ defaultValues: { code: '', grainLotId: lotId, preparedOn: todayIso(), notes: '' } }}
       serverFields={['code', 'grainLotId', 'preparedOn', 'soakHours', 'simmerMinutes', 'drainMinutes', 'notes']}
-      onSubmit={async (values) => {
-        const created = await create.mutateAsync(values);
-        toast.success(`Prep batch ${created.code} recorded.`);
-        onClose();
-      }}
+      saved={(created) => `Prep batch ${created.code} recorded.`}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
           <div className="grid gap-4 sm:grid-cols-2">
-            <TextInput label="Code" autoComplete="off" error={errors.code?.message} {...register('code')} />
-            <TextInput label="Prepared on" type="date" error={errors.preparedOn?.message} {...register('preparedOn')} />
+            <TextField form={form} name="code" label="Code" autoComplete="off" />
+            <TextField form={form} name="preparedOn" label="Prepared on" type="date" />
           </div>
-          <Select
+          <SelectField
+            form={form}
+            name="grainLotId"
             label="Grain lot"
             options={options}
-            error={errors.grainLotId?.message}
-            {...register('grainLotId', { setValueAs: requiredId })}
+            setValueAs={numberOrUndefined}
           />
           <div className="grid gap-4 sm:grid-cols-3">
-            <TextInput
+            <NumberField
+              form={form}
+              name="soakHours"
               label="Soak (hours)"
-              type="number"
               step="0.5"
-              inputMode="decimal"
               optional
               hint="Usually 12–24 h."
-              error={errors.soakHours?.message}
-              {...register('soakHours', { setValueAs: optionalNumber })}
             />
-            <TextInput
-              label="Simmer (min)"
-              type="number"
-              inputMode="numeric"
-              optional
-              hint="Usually 10–15 min."
-              error={errors.simmerMinutes?.message}
-              {...register('simmerMinutes', { setValueAs: optionalNumber })}
-            />
-            <TextInput
-              label="Drain / dry (min)"
-              type="number"
-              inputMode="numeric"
-              optional
-              error={errors.drainMinutes?.message}
-              {...register('drainMinutes', { setValueAs: optionalNumber })}
-            />
+            <NumberField form={form} name="simmerMinutes" label="Simmer (min)" optional hint="Usually 10–15 min." />
+            <NumberField form={form} name="drainMinutes" label="Drain / dry (min)" optional />
           </div>
-          <Field label="Notes" optional hint="How wet or burst the grain looked." error={errors.notes?.message}>
-            {(control) => <textarea rows={2} className={controlClasses} {...control} {...register('notes')} />}
-          </Field>
+          <TextAreaField
+            form={form}
+            name="notes"
+            label="Notes"
+            optional
+            hint="How wet or burst the grain looked."
+            rows={2}
+          />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -1,5 +1,6 @@
 import { contaminantNames, contaminants } from '../../../../shared/enums';
 import { historyColumns, optionalHistoryColumns, type HistoryColumn } from '../../../../shared/schemas/imports';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
 const meaning: Record<HistoryColumn, string> = {
   jar_label: 'The jar or bag label. Unique: a label already in Asepta, or twice in the file, is refused.',
@@ -63,17 +64,11 @@ export function HistoryColumns() {
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Columns of the history file</caption>
           <thead>
-            <tr className="border-b border-line">
-              <th scope="col" className="py-2 pr-4">
-                Column
-              </th>
-              <th scope="col" className="py-2 pr-4">
-                What goes in it
-              </th>
-              <th scope="col" className="py-2">
-                Example
-              </th>
-            </tr>
+            <PlainTableHead
+              headings={['Column', 'What goes in it', { label: 'Example', className: 'py-2' }]}
+              cellClassName="py-2 pr-4"
+              rowClassName="border-b border-line"
+            />
           </thead>
           <tbody>
             {historyColumns.map((c) => (

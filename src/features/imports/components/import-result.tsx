@@ -2,6 +2,7 @@ import type { ImportError } from '../../../../shared/schemas/imports';
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import type { HistoryImportAnswer } from '../api/send-history';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
 /** A browser table of tens of thousands of rows helps no one; the rest go into the download. */
 const shownErrors = 500;
@@ -64,17 +65,11 @@ export function ImportResult({ answer, fileName }: { answer: HistoryImportAnswer
         <table className="w-full border-collapse text-left text-sm">
           <caption className="sr-only">Problems found in the file, by line and column</caption>
           <thead>
-            <tr className="border-b border-line bg-surface-sunken">
-              <th scope="col" className="px-3 py-2 text-right">
-                Line
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Column
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Problem
-              </th>
-            </tr>
+            <PlainTableHead
+              headings={[{ label: 'Line', className: 'px-3 py-2 text-right' }, 'Column', 'Problem']}
+              cellClassName="px-3 py-2"
+              rowClassName="border-b border-line bg-surface-sunken"
+            />
           </thead>
           <tbody>
             {errors.slice(0, shownErrors).map((e, i) => (

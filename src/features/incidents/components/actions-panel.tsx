@@ -9,8 +9,9 @@ import { Badge } from '../../../components/ui/badge';
 import type { PersonDto } from '../../../../shared/schemas/users';
 import { Button } from '../../../components/ui/button';
 import { Select } from '../../../components/ui/select';
+import { TextField } from '../../../components/ui/form-fields';
+import { trimmedOrUndefined } from '../../../lib/form-values';
 import { applyServerErrors, Form } from '../../../components/ui/form';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { formatDate, todayIso } from '../../../lib/format';
 import { useCreateAction, useUpdateAction } from '../api/use-incident-mutations';
@@ -40,31 +41,37 @@ function CompleteForm({
           .then(onDone, (error: unknown) => applyServerErrors(error, setError, ['doneOn', 'verification']))
       }
     >
-      {({ register, watch, formState: { errors, isSubmitting } }) => (
-        <>
-          <TextInput label="Done on" type="date" error={errors.doneOn?.message} {...register('doneOn')} />
-          {closing?.(action, watch('doneOn') ?? '')}
-          <NotesField
-            label="How was the fix verified?"
-            hint="For example: gauge checked against a reference; next three runs clean."
-            error={errors.verification?.message}
-            {...register('verification')}
-          />
-          <div className="flex gap-2">
-            <Button type="submit" pending={isSubmitting}>
-              Mark done
-            </Button>
-            <Button variant="secondary" onClick={onDone}>
-              Cancel
-            </Button>
-          </div>
-        </>
-      )}
+      {(form) => {
+        const {
+          register,
+          watch,
+          formState: { errors, isSubmitting },
+        } = form;
+        return (
+          <>
+            <TextField form={form} name="doneOn" label="Done on" type="date" />
+            {closing?.(action, watch('doneOn') ?? '')}
+            <NotesField
+              label="How was the fix verified?"
+              hint="For example: gauge checked against a reference; next three runs clean."
+              error={errors.verification?.message}
+              {...register('verification')}
+            />
+            <div className="flex gap-2">
+              <Button type="submit" pending={isSubmitting}>
+                Mark done
+              </Button>
+              <Button variant="secondary" onClick={onDone}>
+                Cancel
+              </Button>
+            </div>
+          </>
+        );
+      }}
     </Form>
   );
 }
 
-const blankToUndefined = (v: string) => v.trim() || undefined;
 const STAFF = 'staff';
 
 function AddActionForm({ incidentId, people }: { incidentId: number; people: PersonDto[] }) {
@@ -93,51 +100,55 @@ function AddActionForm({ incidentId, people }: { incidentId: number; people: Per
         )
       }
     >
-      {({ register, setValue, formState: { errors, isSubmitting } }) => (
-        <>
-          <NotesField label="What will be done" error={errors.what?.message} {...register('what')} />
-          <div className="grid gap-3 sm:grid-cols-2">
-            <Select
-              label="Owner"
-              options={ownerOptions}
-              value={ownerChoice}
-              error={errors.ownerName?.message ?? errors.ownerId?.message}
-              onChange={(e) => {
-                const v = e.target.value;
-                setOwnerChoice(v);
-                setValue('ownerId', v && v !== STAFF ? Number(v) : undefined);
-                if (v !== STAFF) {
-                  setValue('ownerName', undefined);
-                  setValue('ownerEmail', undefined);
-                }
-              }}
-            />
-            <TextInput label="Due on" type="date" error={errors.dueOn?.message} {...register('dueOn')} />
-            {ownerChoice === STAFF && (
-              <>
-                <TextInput
-                  label="Owner’s name"
-                  error={errors.ownerName?.message}
-                  {...register('ownerName', { setValueAs: blankToUndefined })}
-                />
-                <TextInput
-                  label="Owner’s e-mail"
-                  optional
-                  type="email"
-                  hint="Without one, nobody is told."
-                  error={errors.ownerEmail?.message}
-                  {...register('ownerEmail', { setValueAs: blankToUndefined })}
-                />
-              </>
-            )}
-          </div>
-          <div>
-            <Button type="submit" variant="secondary" icon="plus" pending={isSubmitting}>
-              Add action
-            </Button>
-          </div>
-        </>
-      )}
+      {(form) => {
+        const {
+          register,
+          setValue,
+          formState: { errors, isSubmitting },
+        } = form;
+        return (
+          <>
+            <NotesField label="What will be done" error={errors.what?.message} {...register('what')} />
+            <div className="grid gap-3 sm:grid-cols-2">
+              <Select
+                label="Owner"
+                options={ownerOptions}
+                value={ownerChoice}
+                error={errors.ownerName?.message ?? errors.ownerId?.message}
+                onChange={(e) => {
+                  const v = e.target.value;
+                  setOwnerChoice(v);
+                  setValue('ownerId', v && v !== STAFF ? Number(v) : undefined);
+                  if (v !== STAFF) {
+                    setValue('ownerName', undefined);
+                    setValue('ownerEmail', undefined);
+                  }
+                }}
+              />
+              <TextField form={form} name="dueOn" label="Due on" type="date" />
+              {ownerChoice === STAFF && (
+                <>
+                  <TextField form={form} name="ownerName" label="Owner’s name" setValueAs={trimmedOrUndefined} />
+                  <TextField
+                    form={form}
+                    name="ownerEmail"
+                    label="Owner’s e-mail"
+                    optional
+                    type="email"
+                    hint="Without one, nobody is told."
+                    setValueAs={trimmedOrUndefined}
+                  />
+                </>
+              )}
+            </div>
+            <div>
+              <Button type="submit" variant="secondary" icon="plus" pending={isSubmitting}>
+                Add action
+              </Button>
+            </div>
+          </>
+        );
+      }}
     </Form>
   );
 }

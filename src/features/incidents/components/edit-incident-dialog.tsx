@@ -1,11 +1,11 @@
 import { contaminantNames, contaminants, stagesFound, incidentSeverities } from '../../../../shared/enums';
 import { updateIncidentSchema } from '../../../../shared/schemas/incidents';
 import type { IncidentDetailDto } from '../../../../shared/schemas/incident-detail';
+import { SelectField, TextField } from '../../../components/ui/form-fields';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { Select } from '../../../components/ui/select';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
+import { trimmedOrUndefined } from '../../../lib/form-values';
 import { useUpdateIncident } from '../api/use-incident-mutations';
 import { severityLabels, stageLabels } from '../labels';
 import { NotesField } from './notes-field';
@@ -23,7 +23,7 @@ const fields = [
   'reason',
   'version',
 ] as const;
-const blankToNull = (v: string) => (v.trim() === '' ? null : v);
+const blankToNull = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? null : v);
 
 /** Descriptive fields only; status and verdict belong to the review. Each change is audited with the reason. */
 export function EditIncidentDialog({
@@ -36,13 +36,12 @@ export function EditIncidentDialog({
   onClose: () => void;
 }) {
   const update = useUpdateIncident(incident.id);
-  const toast = useToast();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
       title={`Edit incident ${incident.id}`}
-      pending={update.isPending}
+      mutation={update}
       submitLabel="Save changes"
       formKey={`${incident.version}-${String(open)}`}
       serverFields={fields}
@@ -61,68 +60,44 @@ export function EditIncidentDialog({
           notes: incident.notes,
         },
       }}
-      onSubmit={async (values) => {
-        await update.mutateAsync(values);
-        toast.success(`Incident ${incident.id} updated.`);
-        onClose();
-      }}
+      saved={() => `Incident ${incident.id} updated.`}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <Select
+          <SelectField
+            form={form}
+            name="contaminant"
             label="Contaminant"
             options={contaminants.map((c) => ({ value: c, label: contaminantNames[c] }))}
-            error={errors.contaminant?.message}
-            {...register('contaminant')}
           />
           <div className="grid gap-4 sm:grid-cols-2">
             <Select
               label="Severity"
               options={incidentSeverities.map((s) => ({ value: s, label: severityLabels[s] }))}
-              {...register('severity')}
+              {...form.register('severity')}
             />
             <Select
               label="Stage found"
               options={stagesFound.map((s) => ({ value: s, label: stageLabels[s] }))}
-              {...register('stage')}
+              {...form.register('stage')}
             />
           </div>
           <div className="grid gap-4 sm:grid-cols-3">
-            <TextInput
-              label="Colour"
-              optional
-              error={errors.signColour?.message}
-              {...register('signColour', { setValueAs: blankToNull })}
-            />
-            <TextInput
-              label="Smell"
-              optional
-              error={errors.signSmell?.message}
-              {...register('signSmell', { setValueAs: blankToNull })}
-            />
-            <TextInput
-              label="Texture"
-              optional
-              error={errors.signTexture?.message}
-              {...register('signTexture', { setValueAs: blankToNull })}
-            />
+            <TextField form={form} name="signColour" label="Colour" optional setValueAs={blankToNull} />
+            <TextField form={form} name="signSmell" label="Smell" optional setValueAs={blankToNull} />
+            <TextField form={form} name="signTexture" label="Texture" optional setValueAs={blankToNull} />
           </div>
-          <Checkbox label="Sealed" {...register('sealed')} />
-          <Checkbox label="Sterilised before disposal" {...register('sterilisedBeforeDisposal')} />
+          <Checkbox label="Sealed" {...form.register('sealed')} />
+          <Checkbox label="Sterilised before disposal" {...form.register('sterilisedBeforeDisposal')} />
           <NotesField
             label="Notes"
             optional
-            error={errors.notes?.message}
-            {...register('notes', { setValueAs: blankToNull })}
+            error={form.formState.errors.notes?.message}
+            {...form.register('notes', { setValueAs: blankToNull })}
           />
-          <TextInput
-            label="Reason for the change"
-            optional
-            error={errors.reason?.message}
-            {...register('reason', { setValueAs: (v: string) => v.trim() || undefined })}
-          />
+          <TextField form={form} name="reason" label="Reason for the change" optional setValueAs={trimmedOrUndefined} />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

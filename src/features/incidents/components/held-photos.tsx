@@ -1,8 +1,7 @@
-import { useEffect, useRef } from 'react';
-import { photoAcceptedTypes } from '../../../../shared/schemas/photos';
+import { useRef } from 'react';
+import { PhotoFileInput } from '../../../components/photos/photo-file-input';
+import { usePreviewUrls } from '../../../components/photos/use-preview-urls';
 import { Button } from '../../../components/ui/button';
-import { Icon } from '../../../components/ui/icon';
-import { cx } from '../../../lib/cx';
 import { uploadEarly } from '../../../lib/outbox/early-uploads';
 import { newKey } from '../../../lib/outbox/outbox-items';
 import { photoRefusal } from '../../../lib/photo-bytes';
@@ -31,26 +30,19 @@ export function HeldPhotos({ photos, onChange, max = 6 }: Props) {
   const nextKey = useRef(1);
   const input = useRef<HTMLInputElement>(null);
   const replacing = useRef<number | null>(null);
+  const previews = usePreviewUrls();
 
-  const latest = useRef(photos);
-  useEffect(() => {
-    latest.current = photos;
-  });
-  useEffect(() => () => latest.current.forEach((p) => URL.revokeObjectURL(p.preview)), []);
-
-  const add = (files: FileList | null) => {
+  const add = (files: File[]) => {
     const replace = replacing.current;
     replacing.current = null;
     const room = replace === null ? Math.max(0, max - photos.length) : 1;
-    const picked = Array.from(files ?? [])
-      .slice(0, room)
-      .map((file) => ({
-        key: nextKey.current++,
-        uploadKey: newKey(),
-        file,
-        preview: URL.createObjectURL(file),
-        refusal: undefined,
-      }));
+    const picked = files.slice(0, room).map((file) => ({
+      key: nextKey.current++,
+      uploadKey: newKey(),
+      file,
+      preview: previews.make(file),
+      refusal: undefined,
+    }));
     onChange((all) => {
       const kept = replace === null ? all : all.filter((p) => p.key !== replace);
       return [...kept, ...picked];
@@ -61,35 +53,22 @@ export function HeldPhotos({ photos, onChange, max = 6 }: Props) {
         if (!refusal) uploadEarly(p.uploadKey, p.file);
       });
     }
-    if (input.current) input.current.value = '';
   };
 
   const remove = (photo: HeldPhoto) => {
-    URL.revokeObjectURL(photo.preview);
+    previews.release(photo.preview);
     onChange((all) => all.filter((p) => p.key !== photo.key));
   };
 
   return (
     <div className="flex flex-col gap-2">
-      <label
-        className={cx(
-          'flex min-h-14 cursor-pointer items-center justify-center gap-2 rounded-md border-2 border-dashed border-line-strong px-4 font-semibold text-accent',
-          photos.length >= max && 'pointer-events-none opacity-60',
-        )}
-      >
-        <Icon name="plus" size={22} />
-        {photos.length ? 'Add another photo' : 'Take a photo'}
-        <input
-          ref={input}
-          type="file"
-          accept={photoAcceptedTypes.join(',')}
-          capture="environment"
-          multiple
-          className="sr-only"
-          disabled={photos.length >= max}
-          onChange={(e) => add(e.target.files)}
-        />
-      </label>
+      <PhotoFileInput
+        label={photos.length ? 'Add another photo' : 'Take a photo'}
+        full={photos.length >= max}
+        className="min-h-14"
+        inputRef={input}
+        onPick={add}
+      />
       {photos.length > 0 && (
         <ul className="grid grid-cols-3 gap-2" aria-label="Photos">
           {photos.map((p) => (

@@ -1,15 +1,9 @@
 import { contaminantNames, contaminants, incidentStatuses, verdicts } from '../../../../shared/enums';
 import { Button } from '../../../components/ui/button';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { DateFilter, SelectFilter } from '../../../components/ui/filter-fields';
+import { DateFilter, filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
-import { clearedPatch } from '../../../lib/list-params';
-import {
-  hasIncidentFilters,
-  incidentFilterKeys,
-  type IncidentFilterKey,
-  type IncidentListFilters,
-} from '../api/incidents-queries';
+import { incidentFilterKeys, type IncidentFilterKey, type IncidentListFilters } from '../api/incidents-queries';
 import { statusLabels, verdictLabels } from '../labels';
 
 interface IncidentsFiltersProps {
@@ -33,56 +27,19 @@ const linked: { key: 'cookRunId' | 'cultureId' | 'sessionId'; label: string }[] 
 ];
 
 export function IncidentsFilters({ filters, onChange }: IncidentsFiltersProps) {
+  const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="sm:grid-cols-2 lg:grid-cols-4">
-      <SearchForm
-        names={['jar', 'operator']}
-        values={filters}
-        onSearch={onChange}
-        className="flex items-end gap-2 sm:col-span-2"
-      >
-        <TextInput
-          label="Jar label"
-          name="jar"
-          type="search"
-          defaultValue={filters.jar ?? ''}
-          placeholder="Starts with…"
-          className="flex-1"
-        />
-        <TextInput
-          label="Operator"
-          name="operator"
-          defaultValue={filters.operator ?? ''}
-          placeholder="Who inoculated"
-          className="flex-1"
-        />
+      <SearchForm {...bind.search(['jar', 'operator'])} className="flex items-end gap-2 sm:col-span-2">
+        <SearchText label="Jar label" placeholder="Starts with…" {...bind.text('jar')} />
+        <TextInput label="Operator" placeholder="Who inoculated" className="flex-1" {...bind.text('operator')} />
       </SearchForm>
-      <SelectFilter
-        label="Status"
-        value={filters.status}
-        onChange={(status) => onChange({ status })}
-        options={statusOptions}
-      />
-      <SelectFilter
-        label="Verdict"
-        value={filters.verdict}
-        onChange={(verdict) => onChange({ verdict })}
-        options={verdictOptions}
-      />
-      <SelectFilter
-        label="Contaminant"
-        value={filters.contaminant}
-        onChange={(contaminant) => onChange({ contaminant })}
-        options={contaminantOptions}
-      />
-      <SelectFilter
-        label="Voided"
-        value={filters.voided}
-        onChange={(voided) => onChange({ voided })}
-        options={voidedOptions}
-      />
-      <DateFilter label="Found from" value={filters.from} onChange={(from) => onChange({ from })} />
-      <DateFilter label="Found to" value={filters.to} onChange={(to) => onChange({ to })} />
+      <SelectFilter label="Status" options={statusOptions} {...bind.value('status')} />
+      <SelectFilter label="Verdict" options={verdictOptions} {...bind.value('verdict')} />
+      <SelectFilter label="Contaminant" options={contaminantOptions} {...bind.value('contaminant')} />
+      <SelectFilter label="Voided" options={voidedOptions} {...bind.value('voided')} />
+      <DateFilter label="Found from" {...bind.value('from')} />
+      <DateFilter label="Found to" {...bind.value('to')} />
       {linked.some((l) => filters[l.key]) && (
         <div className="flex flex-wrap items-end gap-2 sm:col-span-2 lg:col-span-4">
           {linked.map(
@@ -95,11 +52,7 @@ export function IncidentsFilters({ filters, onChange }: IncidentsFiltersProps) {
           )}
         </div>
       )}
-      <ClearFilters
-        shown={hasIncidentFilters(filters)}
-        onClear={() => onChange(clearedPatch(incidentFilterKeys))}
-        className="flex items-end"
-      />
+      <ClearFilters className="flex items-end" {...bind.clear(incidentFilterKeys)} />
     </FilterBar>
   );
 }

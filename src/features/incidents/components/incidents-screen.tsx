@@ -2,7 +2,6 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { buttonClasses } from '../../../components/ui/button';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { paths } from '../../../config/paths';
 import { useListParams } from '../../../lib/use-list-params';
 import {
@@ -15,7 +14,8 @@ import { incidentColumns } from './incidents-columns';
 import { IncidentsFilters } from './incidents-filters';
 
 export function IncidentsScreen({ canFlag }: { canFlag: boolean }) {
-  const { filters, update } = useListParams(readIncidentFilters);
+  const params = useListParams(readIncidentFilters);
+  const { filters, update } = params;
   const list = useQuery(incidentsQueries.list(filters));
 
   return (
@@ -33,15 +33,12 @@ export function IncidentsScreen({ canFlag }: { canFlag: boolean }) {
       filters={<IncidentsFilters filters={filters} onChange={update} />}
       columns={incidentColumns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={hasIncidentFilters(filters)}
-          none="No incidents recorded yet."
-          noMatch="No incidents match these filters."
-        />
-      }
+      params={params}
+      empty={{
+        filtered: hasIncidentFilters(filters),
+        none: 'No incidents recorded yet.',
+        noMatch: 'No incidents match these filters.',
+      }}
     />
   );
 }

@@ -2,9 +2,9 @@ import { causeCategories, verdicts, type IncidentStatus } from '../../../../shar
 import { reviewIncidentSchema } from '../../../../shared/schemas/incidents';
 import type { IncidentDetailDto } from '../../../../shared/schemas/incident-detail';
 import { Button } from '../../../components/ui/button';
+import { SelectField, TextField } from '../../../components/ui/form-fields';
+import { textOrNull, trimmedOrUndefined } from '../../../lib/form-values';
 import { applyServerErrors, Form } from '../../../components/ui/form';
-import { Select } from '../../../components/ui/select';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { useReviewIncident } from '../api/use-incident-mutations';
 import { causeLabels, statusLabels, verdictLabels } from '../labels';
@@ -51,7 +51,15 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
         )
       }
     >
-      {({ register, watch, setValue, getValues, setError, formState: { errors, isSubmitting } }) => {
+      {(form) => {
+        const {
+          register,
+          watch,
+          setValue,
+          getValues,
+          setError,
+          formState: { errors, isSubmitting },
+        } = form;
         const move = (to: IncidentStatus) => {
           const { reason, version, ...rest } = getValues();
           // A closed incident only reopens; otherwise the move saves together with what is chosen below.
@@ -91,11 +99,12 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
                   onChange={(v) => v && setValue('verdict', v)}
                   error={errors.verdict?.message}
                 />
-                <Select
+                <SelectField
+                  form={form}
+                  name="causeCategory"
                   label="Cause category"
                   hint="Ishikawa’s six Ms. A lead from the register is a hint, not a diagnosis."
                   optional
-                  error={errors.causeCategory?.message}
                   options={[
                     { value: '', label: 'Not decided' },
                     ...causeCategories.map((c) => ({
@@ -103,7 +112,7 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
                       label: `${causeLabels[c].label} — ${causeLabels[c].hint}`,
                     })),
                   ]}
-                  {...register('causeCategory', { setValueAs: (v: string) => (v === '' ? null : v) })}
+                  setValueAs={textOrNull}
                 />
                 <NotesField
                   label="Root-cause notes"
@@ -113,11 +122,12 @@ export function ReviewPanel({ incident }: { incident: IncidentDetailDto }) {
                 />
               </>
             )}
-            <TextInput
+            <TextField
+              form={form}
+              name="reason"
               label="Reason for the change"
               optional
-              error={errors.reason?.message}
-              {...register('reason', { setValueAs: (v: string) => v.trim() || undefined })}
+              setValueAs={trimmedOrUndefined}
             />
             {!closed && (
               <div>

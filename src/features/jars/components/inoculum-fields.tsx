@@ -3,14 +3,13 @@ import { useState } from 'react';
 import type { createJarBatchSchema } from '../../../../shared/schemas/jars';
 import { Button } from '../../../components/ui/button';
 import type { FormMethods } from '../../../components/ui/form';
-import { Select } from '../../../components/ui/select';
+import { SelectField, TextField } from '../../../components/ui/form-fields';
 import { TextInput } from '../../../components/ui/text-input';
 import { errorMessage } from '../../../lib/api-client';
+import { numberOrUndefined, textOrUndefined } from '../../../lib/form-values';
 import { jarsQueries } from '../api/jars-queries';
 import { cultureOptions, cultureWarning, type CultureChoice } from '../culture-choice';
 
-const blankToUndefined = (v: unknown) => (v === '' ? undefined : v);
-const idOrUndefined = (v: unknown) => (v === '' || v === undefined ? undefined : Number(v));
 const pick = (items: { id: number; label: string }[], none: string) => [
   { value: '', label: none },
   ...items.map((i) => ({ value: String(i.id), label: i.label })),
@@ -61,7 +60,7 @@ export function InoculumFields({ methods, cultures }: Props) {
       </div>
       {fromJar ? (
         <>
-          <input type="hidden" {...register('parentJarId', { setValueAs: idOrUndefined })} />
+          <input type="hidden" {...register('parentJarId', { setValueAs: numberOrUndefined })} />
           <TextInput
             label="Parent jar label"
             autoComplete="off"
@@ -81,7 +80,9 @@ export function InoculumFields({ methods, cultures }: Props) {
           />
         </>
       ) : (
-        <Select
+        <SelectField
+          form={methods}
+          name="cultureId"
           label="Culture"
           options={pick(cultureOptions(cultures), 'Choose a culture')}
           hint={
@@ -94,18 +95,18 @@ export function InoculumFields({ methods, cultures }: Props) {
               'Retired cultures are not offered.'
             )
           }
-          error={errors.cultureId?.message}
-          {...register('cultureId', { setValueAs: idOrUndefined })}
+          setValueAs={numberOrUndefined}
         />
       )}
-      <TextInput
+      <TextField
+        form={methods}
+        name="inoculumMl"
         label="Inoculum per jar (ml)"
         type="number"
         inputMode="decimal"
         step="0.1"
         optional
-        error={errors.inoculumMl?.message}
-        {...register('inoculumMl', { setValueAs: blankToUndefined })}
+        setValueAs={textOrUndefined}
       />
     </fieldset>
   );

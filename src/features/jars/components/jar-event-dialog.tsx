@@ -4,11 +4,10 @@ import {
   type JarEventFields,
   type JarEventInputType,
 } from '../../../../shared/schemas/jar-events';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { controlClasses, Field } from '../../../components/ui/field';
 import { Select } from '../../../components/ui/select';
 import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
 import { useRecordJarEvent } from '../api/use-record-jar-event';
 import { DiscardCaution } from './discard-caution';
 import { eventActions } from './jar-event-actions';
@@ -27,7 +26,6 @@ interface Props {
 
 export function JarEventDialog({ jar, type, onClose }: Props) {
   const record = useRecordJarEvent(jar.id);
-  const toast = useToast();
   if (!type) return null;
   const action = eventActions[type];
   const defaults = {
@@ -38,21 +36,17 @@ export function JarEventDialog({ jar, type, onClose }: Props) {
   } as unknown as JarEventFields;
 
   return (
-    <FormDialog
+    <SaveDialog
       open
       onClose={onClose}
-      pending={record.isPending}
+      mutation={record}
       title={`${action.title} — ${jar.label}`}
       submitLabel={action.label}
       submitVariant={type === 'discarded' ? 'danger' : 'primary'}
       schema={jarEventInputSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        await record.mutateAsync(values);
-        toast.success(action.done);
-        onClose();
-      }}
+      saved={() => action.done}
     >
       {({ register, formState }) => {
         const errors = formState.errors as FieldErrors<Record<(typeof fields)[number], string>>;
@@ -102,6 +96,6 @@ export function JarEventDialog({ jar, type, onClose }: Props) {
           </>
         );
       }}
-    </FormDialog>
+    </SaveDialog>
   );
 }

@@ -1,8 +1,8 @@
 import { jarStatuses } from '../../../../shared/enums';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { DateFilter, SelectFilter } from '../../../components/ui/filter-fields';
+import { DateFilter, filterBinding, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
-import { clearedPatch, hasAnyFilter } from '../../../lib/list-params';
+import { hasAnyFilter } from '../../../lib/list-params';
 import type { JarListFilters } from '../api/jars-queries';
 import { jarStatusLabels } from './jar-status-badge';
 
@@ -33,38 +33,22 @@ const statusOptions = [
 export const isFiltered = (f: JarListFilters) => hasAnyFilter(f, filterKeys);
 
 export function JarsFilters({ filters, onChange }: JarsFiltersProps) {
+  const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-4">
       <SearchForm
-        names={['q', 'room', 'shelf']}
-        values={filters}
-        onSearch={onChange}
+        {...bind.search(['q', 'room', 'shelf'])}
         className="grid gap-2 sm:grid-cols-[1fr_1fr_1fr_auto] sm:items-end md:col-span-4"
         wordOnPhones
       >
-        <TextInput
-          label="Label starts with"
-          name="q"
-          type="search"
-          defaultValue={filters.q ?? ''}
-          placeholder="J-0001"
-        />
-        <TextInput label="Room" name="room" defaultValue={filters.room ?? ''} />
-        <TextInput label="Shelf" name="shelf" defaultValue={filters.shelf ?? ''} />
+        <TextInput label="Label starts with" type="search" placeholder="J-0001" {...bind.text('q')} />
+        <TextInput label="Room" {...bind.text('room')} />
+        <TextInput label="Shelf" {...bind.text('shelf')} />
       </SearchForm>
-      <SelectFilter
-        label="Status"
-        options={statusOptions}
-        value={filters.status}
-        onChange={(status) => onChange({ status })}
-      />
-      <DateFilter label="Inoculated from" value={filters.from} onChange={(from) => onChange({ from })} />
-      <DateFilter label="Inoculated to" value={filters.to} onChange={(to) => onChange({ to })} />
-      <ClearFilters
-        shown={isFiltered(filters)}
-        onClear={() => onChange(clearedPatch(filterKeys))}
-        className="flex items-end"
-      />
+      <SelectFilter label="Status" options={statusOptions} {...bind.value('status')} />
+      <DateFilter label="Inoculated from" {...bind.value('from')} />
+      <DateFilter label="Inoculated to" {...bind.value('to')} />
+      <ClearFilters className="flex items-end" {...bind.clear(filterKeys)} />
     </FilterBar>
   );
 }

@@ -2,7 +2,6 @@ import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { buttonClasses } from '../../../components/ui/button';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { paths } from '../../../config/paths';
 import { useListParams } from '../../../lib/use-list-params';
 import { jarsExportUrl, jarsQueries, readJarFilters } from '../api/jars-queries';
@@ -10,7 +9,8 @@ import { jarColumns } from './jars-columns';
 import { isFiltered, JarsFilters } from './jars-filters';
 
 export function JarsScreen({ canWrite }: { canWrite: boolean }) {
-  const { filters, update } = useListParams(readJarFilters);
+  const params = useListParams(readJarFilters);
+  const { filters, update } = params;
   const list = useQuery(jarsQueries.list(filters));
 
   return (
@@ -33,15 +33,12 @@ export function JarsScreen({ canWrite }: { canWrite: boolean }) {
       filters={<JarsFilters filters={filters} onChange={update} />}
       columns={jarColumns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={isFiltered(filters)}
-          none="No jars recorded yet."
-          noMatch="No jars match these filters."
-        />
-      }
+      params={params}
+      empty={{
+        filtered: isFiltered(filters),
+        none: 'No jars recorded yet.',
+        noMatch: 'No jars match these filters.',
+      }}
     />
   );
 }

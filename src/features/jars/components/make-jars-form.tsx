@@ -8,11 +8,11 @@ import {
 } from '../../../../shared/schemas/jars';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { applyServerErrors, Form } from '../../../components/ui/form';
+import { NumberField, SelectField, TextField } from '../../../components/ui/form-fields';
+import { numberOrUndefined, textOrUndefined } from '../../../lib/form-values';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
-import { Select } from '../../../components/ui/select';
 import { Spinner } from '../../../components/ui/spinner';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { cautions, cautionFootnote } from '../../../config/cautions';
 import { paths } from '../../../config/paths';
@@ -34,8 +34,6 @@ const fields = [
   'shelf',
   'inoculatedAt',
 ] as const;
-const blankToUndefined = (v: unknown) => (v === '' ? undefined : v);
-const idOrUndefined = (v: unknown) => (v === '' || v === undefined ? undefined : Number(v));
 /** The input's wall-clock value as an instant with the browser's offset; the server takes no other form. */
 const instantOfLocal = (v: unknown) => {
   if (typeof v !== 'string' || !v) return undefined;
@@ -134,32 +132,23 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
         }}
       >
         {(methods) => {
-          const {
-            register,
-            formState: { errors },
-          } = methods;
           return (
             <>
               <div className="grid gap-4 sm:grid-cols-2">
-                <Select
+                <SelectField
+                  form={methods}
+                  name="sessionId"
                   label="Session"
                   options={pick(
                     o.sessions.map((s) => ({ id: s.id, label: `${s.code} · ${s.heldOn}` })),
                     'Choose a session',
                   )}
-                  error={errors.sessionId?.message}
-                  {...register('sessionId', { setValueAs: idOrUndefined })}
+                  setValueAs={numberOrUndefined}
                 />
-                <TextInput
-                  label="Number of jars"
-                  type="number"
-                  inputMode="numeric"
-                  min={1}
-                  max={200}
-                  error={errors.count?.message}
-                  {...register('count', { setValueAs: idOrUndefined })}
-                />
-                <Select
+                <NumberField form={methods} name="count" label="Number of jars" min={1} max={200} />
+                <SelectField
+                  form={methods}
+                  name="prepBatchId"
                   label="Prep batch"
                   optional
                   hint="The grain comes from the batch when one is chosen."
@@ -167,52 +156,44 @@ export function MakeJarsForm({ sessionId }: { sessionId: number | undefined }) {
                     o.prepBatches.map((b) => ({ id: b.id, label: `${b.code} · ${b.grain} · ${b.preparedOn}` })),
                     'No batch recorded',
                   )}
-                  error={errors.prepBatchId?.message}
-                  {...register('prepBatchId', { setValueAs: idOrUndefined })}
+                  setValueAs={numberOrUndefined}
                 />
-                <Select
+                <SelectField
+                  form={methods}
+                  name="grainId"
                   label="Grain"
                   optional
                   options={pick(
                     o.grains.filter((g) => g.active).map((g) => ({ id: g.id, label: g.name })),
                     'From the prep batch',
                   )}
-                  error={errors.grainId?.message}
-                  {...register('grainId', { setValueAs: idOrUndefined })}
+                  setValueAs={numberOrUndefined}
                 />
-                <Select
+                <SelectField
+                  form={methods}
+                  name="cookRunId"
                   label="Cook run"
                   optional
                   options={pick(
                     o.cookRuns.map((c) => ({ id: c.id, label: `${c.code}${c.cookedOn ? ` · ${c.cookedOn}` : ''}` })),
                     'No cook run recorded',
                   )}
-                  error={errors.cookRunId?.message}
-                  {...register('cookRunId', { setValueAs: idOrUndefined })}
+                  setValueAs={numberOrUndefined}
                 />
-                <TextInput
+                <TextField
+                  form={methods}
+                  name="inoculatedAt"
                   label="Inoculated at"
                   type="datetime-local"
-                  error={errors.inoculatedAt?.message}
                   // Not in defaultValues: react-hook-form reads it from the input through setValueAs.
                   defaultValue={nowLocal()}
-                  {...register('inoculatedAt', { setValueAs: instantOfLocal })}
+                  setValueAs={instantOfLocal}
                 />
               </div>
               <InoculumFields methods={methods} cultures={o.cultures} />
               <div className="grid gap-4 sm:grid-cols-2">
-                <TextInput
-                  label="Incubation room"
-                  optional
-                  error={errors.room?.message}
-                  {...register('room', { setValueAs: blankToUndefined })}
-                />
-                <TextInput
-                  label="Shelf"
-                  optional
-                  error={errors.shelf?.message}
-                  {...register('shelf', { setValueAs: blankToUndefined })}
-                />
+                <TextField form={methods} name="room" label="Incubation room" optional setValueAs={textOrUndefined} />
+                <TextField form={methods} name="shelf" label="Shelf" optional setValueAs={textOrUndefined} />
               </div>
               <Button type="submit" pending={create.isPending} className="min-h-14 text-lg sm:self-start">
                 Make jars

@@ -15,6 +15,7 @@ import { patchParams, readTableState } from '../../../lib/list-params';
 import { mailQueries } from '../api/mail-queries';
 import { useSendDigest } from '../api/use-mail-mutations';
 import { formatDateTime } from '../../../lib/format';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
 function SentMailDialog({ id, onClose }: { id: number | null; onClose: () => void }) {
   const detail = useQuery({ ...mailQueries.sentDetail(id ?? 0), enabled: id !== null });
@@ -66,13 +67,7 @@ export function SentMailScreen() {
           <table className="w-full text-left">
             <caption className="sr-only">Sent mail</caption>
             <thead className="border-b border-line text-muted">
-              <tr>
-                {['When', 'To', 'Subject', 'Status'].map((h) => (
-                  <th key={h} scope="col" className="px-3 py-2 font-medium">
-                    {h}
-                  </th>
-                ))}
-              </tr>
+              <PlainTableHead headings={['When', 'To', 'Subject', 'Status']} cellClassName="px-3 py-2 font-medium" />
             </thead>
             <tbody>
               {sent.data.items.map((m) => (

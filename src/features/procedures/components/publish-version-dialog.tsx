@@ -1,13 +1,10 @@
 import { useNavigate } from 'react-router';
 import { publishVersionSchema, type ProcedureVersionDto } from '../../../../shared/schemas/procedures';
-import { FormDialog } from '../../../components/ui/form-dialog';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
+import { SaveDialog } from '../../../components/ui/form-dialog';
+import { TextField } from '../../../components/ui/form-fields';
 import { paths } from '../../../config/paths';
 import { usePublishVersion } from '../api/use-publish-version';
 import { StepsEditor } from './steps-editor';
-
-type EditorProps = Parameters<typeof StepsEditor>[0];
 
 /** Starts from the current version's steps; publishing writes new rows and leaves that version as it was. */
 export function PublishVersionDialog({
@@ -20,13 +17,12 @@ export function PublishVersionDialog({
   onClose: () => void;
 }) {
   const publish = usePublishVersion(current.procedureId);
-  const toast = useToast();
   const navigate = useNavigate();
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={publish.isPending}
+      mutation={publish}
       title={`Publish version ${current.version + 1}`}
       description={`Version ${current.version} stays readable and unchanged. Staff trained on it will show as not trained on the new version.`}
       submitLabel="Publish"
@@ -39,24 +35,16 @@ export function PublishVersionDialog({
         },
       }}
       serverFields={['title', 'changeNote', 'steps']}
-      onSubmit={async (values) => {
-        const version = await publish.mutateAsync(values);
-        toast.success(`Version ${version.version} published.`);
-        onClose();
-        void navigate(paths.procedureVersion.to(version.id));
-      }}
+      saved={(version) => `Version ${version.version} published.`}
+      then={(version) => void navigate(paths.procedureVersion.to(version.id))}
     >
-      {({ register, control, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput label="Title" error={errors.title?.message} {...register('title')} />
-          <TextInput label="What changed and why" error={errors.changeNote?.message} {...register('changeNote')} />
-          <StepsEditor
-            control={control as unknown as EditorProps['control']}
-            register={register as unknown as EditorProps['register']}
-            errors={errors}
-          />
+          <TextField form={form} name="title" label="Title" />
+          <TextField form={form} name="changeNote" label="What changed and why" />
+          <StepsEditor form={form} />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

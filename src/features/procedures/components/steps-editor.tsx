@@ -1,4 +1,4 @@
-import { useFieldArray, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
+import { useFieldArray, type FieldValues, type UseFormReturn } from 'react-hook-form';
 import { Button } from '../../../components/ui/button';
 import { TextInput } from '../../../components/ui/text-input';
 
@@ -6,15 +6,17 @@ interface StepsForm {
   steps: { text: string; caution?: string | null }[];
 }
 
-interface StepsEditorProps {
-  // react-hook-form's types are invariant in the form shape; every form using this holds `steps`.
-  control: Control<StepsForm, unknown, StepsForm>;
-  register: UseFormRegister<StepsForm>;
-  errors: FieldErrors<StepsForm>;
-}
+type StepsMethods = Pick<UseFormReturn<StepsForm, unknown, StepsForm>, 'control' | 'register' | 'formState'>;
 
 /** Ordered steps, each with an optional caution; the order here is the order published. */
-export function StepsEditor({ control, register, errors }: StepsEditorProps) {
+export function StepsEditor<T extends StepsForm & FieldValues>({
+  form,
+}: {
+  form: Pick<UseFormReturn<T>, keyof StepsMethods>;
+}) {
+  // react-hook-form's types are invariant in the form shape; the constraint above makes sure it holds `steps`.
+  const { control, register, formState } = form as unknown as StepsMethods;
+  const errors = formState.errors;
   const { fields, append, remove, move } = useFieldArray({ control, name: 'steps' });
   return (
     <fieldset className="flex flex-col gap-4">

@@ -23,12 +23,32 @@ const alertNoun: Record<QueueClusterAlert['dimension'], string> = {
   session: 'session',
 };
 
-function ActionItems({ actions }: { actions: QueueAction[] }) {
-  return actions.map((a) => (
-    <QueueItem key={a.id} to={actionTo(a)} aside={`${a.ownerName} · due ${formatDate(a.dueOn)}`}>
-      {a.what}
-    </QueueItem>
-  ));
+const actionTitles = { overdue: 'Corrective actions overdue', 'due-soon': 'Corrective actions due this week' };
+
+interface ActionsSectionProps {
+  id: string;
+  /** The state the actions register is filtered to by "See all". */
+  state: keyof typeof actionTitles;
+  list: { total: number; items: QueueAction[] };
+  empty: string;
+}
+
+function ActionsSection({ id, state, list, empty }: ActionsSectionProps) {
+  return (
+    <QueueSection
+      id={id}
+      title={actionTitles[state]}
+      total={list.total}
+      allTo={paths.actions.to({ state })}
+      empty={empty}
+    >
+      {list.items.map((a) => (
+        <QueueItem key={a.id} to={actionTo(a)} aside={`${a.ownerName} · due ${formatDate(a.dueOn)}`}>
+          {a.what}
+        </QueueItem>
+      ))}
+    </QueueSection>
+  );
 }
 
 /** What waits for the supervisor, each item a link to its record. */
@@ -60,24 +80,13 @@ export function SupervisorQueue() {
             </QueueItem>
           ))}
         </QueueSection>
-        <QueueSection
-          id="queue-overdue"
-          title="Corrective actions overdue"
-          total={q.actionsOverdue.total}
-          allTo={paths.actions.to({ state: 'overdue' })}
-          empty="No action is overdue."
-        >
-          <ActionItems actions={q.actionsOverdue.items} />
-        </QueueSection>
-        <QueueSection
+        <ActionsSection id="queue-overdue" state="overdue" list={q.actionsOverdue} empty="No action is overdue." />
+        <ActionsSection
           id="queue-due"
-          title="Corrective actions due this week"
-          total={q.actionsDueSoon.total}
-          allTo={paths.actions.to({ state: 'due-soon' })}
+          state="due-soon"
+          list={q.actionsDueSoon}
           empty="None due in the next seven days."
-        >
-          <ActionItems actions={q.actionsDueSoon.items} />
-        </QueueSection>
+        />
         <QueueSection
           id="queue-weeks"
           title={`Weeks out of control or above ${percent(q.target)}`}

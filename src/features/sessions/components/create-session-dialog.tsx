@@ -4,19 +4,17 @@ import { useNavigate } from 'react-router';
 import { workspaces } from '../../../../shared/enums';
 import { createSessionSchema, workspaceLabels, type CreateSessionInput } from '../../../../shared/schemas/sessions';
 import { Checkbox } from '../../../components/ui/checkbox';
-import { FormDialog } from '../../../components/ui/form-dialog';
+import { SaveDialog } from '../../../components/ui/form-dialog';
 import { OperatorChoice } from '../../../components/ui/operator-choice';
-import { controlClasses, Field } from '../../../components/ui/field';
 import type { FormMethods } from '../../../components/ui/form';
-import { Select } from '../../../components/ui/select';
+import { SelectField, TextAreaField, TextField } from '../../../components/ui/form-fields';
 import { SuggestedCodeInput } from '../../../components/ui/suggested-code-input';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
 import { paths } from '../../../config/paths';
 import { sessionsQueries } from '../api/sessions-queries';
 import { useCreateSession } from '../api/use-create-session';
 import { FlameCaution } from './flame-caution';
 import { todayIso } from '../../../lib/format';
+import { localInstantOrNull, numberOrNull } from '../../../lib/form-values';
 
 const fields = [
   'code',
@@ -30,8 +28,6 @@ const fields = [
   'notes',
 ] as const;
 const workspaceOptions = workspaces.map((w) => ({ value: w, label: workspaceLabels[w] }));
-const localDateTime = (v: unknown) => (typeof v === 'string' && v ? new Date(v).toISOString() : null);
-const optionalId = (v: unknown) => (v === '' || v === null || v === undefined ? null : Number(v));
 
 type Methods = FormMethods<typeof createSessionSchema>;
 
@@ -75,7 +71,6 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
   const createSession = useCreateSession();
   const nextCode = useQuery({ ...sessionsQueries.nextCode(), enabled: open });
   const procedures = useQuery({ ...sessionsQueries.procedureOptions(), enabled: open });
-  const toast = useToast();
   const navigate = useNavigate();
   const procedureOptions = [
     { value: '', label: 'None' },
@@ -94,10 +89,10 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
   };
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createSession.isPending}
+      mutation={createSession}
       title="New inoculation session"
       submitLabel="Record session"
       submitIcon="plus"
@@ -105,20 +100,16 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
       schema={createSessionSchema}
       options={{ defaultValues: defaults }}
       serverFields={fields}
-      onSubmit={async (values) => {
-        const session = await createSession.mutateAsync(values);
-        toast.success(`Session ${session.code} recorded.`);
-        onClose();
-        void navigate(paths.session.to(session.id));
-      }}
+      saved={(session) => `Session ${session.code} recorded.`}
+      then={(session) => void navigate(paths.session.to(session.id))}
     >
-      {(methods) => {
+      {(form) => {
         const {
           register,
           watch,
           setValue,
           formState: { errors, dirtyFields },
-        } = methods;
+        } = form;
         const byUser = watch('operatorId') === me.id;
         const versionId = watch('procedureVersionId');
         return (
@@ -131,20 +122,16 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
                 error={errors.code?.message}
                 {...register('code')}
               />
-              <TextInput label="Date" type="date" error={errors.heldOn?.message} {...register('heldOn')} />
-              <TextInput
+              <TextField form={form} name="heldOn" label="Date" type="date" />
+              <TextField
+                form={form}
+                name="startedAt"
                 label="Start time"
                 type="datetime-local"
                 optional
-                error={errors.startedAt?.message}
-                {...register('startedAt', { setValueAs: localDateTime })}
+                setValueAs={localInstantOrNull}
               />
-              <Select
-                label="Workspace"
-                options={workspaceOptions}
-                error={errors.workspace?.message}
-                {...register('workspace')}
-              />
+              <SelectField form={form} name="workspace" label="Workspace" options={workspaceOptions} />
             </div>
             <OperatorChoice
               selfLabel="I inoculated"
@@ -158,7 +145,9 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
               staffName={register('operatorName')}
               error={errors.operatorName?.message ?? errors.operatorId?.message}
             />
-            <Select
+            <SelectField
+              form={form}
+              name="procedureVersionId"
               label="Procedure followed"
               optional
               options={procedureOptions}
@@ -167,22 +156,15 @@ export function CreateSessionDialog({ open, onClose, me }: Props) {
                   ? 'The procedure list could not be loaded.'
                   : 'Its current version; the checklist follows its steps.'
               }
-              error={errors.procedureVersionId?.message}
-              {...register('procedureVersionId', {
-                setValueAs: optionalId,
-                onChange: () => setValue('checklist', []),
-              })}
+              setValueAs={numberOrNull}
+              onValueChange={() => setValue('checklist', [])}
             />
-            {typeof versionId === 'number' && (
-              <ChecklistFields key={versionId} versionId={versionId} methods={methods} />
-            )}
+            {typeof versionId === 'number' && <ChecklistFields key={versionId} versionId={versionId} methods={form} />}
             {errors.checklist?.message && <p className="text-sm font-medium text-danger">{errors.checklist.message}</p>}
-            <Field label="Notes" optional error={errors.notes?.message}>
-              {(control) => <textarea rows={3} className={controlClasses} {...control} {...register('notes')} />}
-            </Field>
+            <TextAreaField form={form} name="notes" label="Notes" optional />
           </>
         );
       }}
-    </FormDialog>
+    </SaveDialog>
   );
 }

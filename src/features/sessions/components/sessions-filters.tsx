@@ -1,9 +1,9 @@
 import { workspaces } from '../../../../shared/enums';
 import { workspaceLabels } from '../../../../shared/schemas/sessions';
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { DateFilter, SelectFilter } from '../../../components/ui/filter-fields';
+import { DateFilter, filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import { TextInput } from '../../../components/ui/text-input';
-import { clearedPatch, hasAnyFilter } from '../../../lib/list-params';
+import { hasAnyFilter } from '../../../lib/list-params';
 import type { SessionListFilters } from '../api/sessions-queries';
 
 type FilterKey = 'q' | 'operator' | 'from' | 'to' | 'workspace';
@@ -21,37 +21,17 @@ const filterKeys = ['q', 'operator', 'from', 'to', 'workspace'] as const satisfi
 export const isSessionFiltered = (filters: SessionListFilters) => hasAnyFilter(filters, filterKeys);
 
 export function SessionsFilters({ filters, onChange }: SessionsFiltersProps) {
+  const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-4">
-      <SearchForm
-        names={['q', 'operator']}
-        values={filters}
-        onSearch={onChange}
-        className="flex items-end gap-2 md:col-span-2"
-      >
-        <TextInput
-          label="Search"
-          name="q"
-          type="search"
-          defaultValue={filters.q ?? ''}
-          placeholder="Code, operator, notes"
-          className="flex-1"
-        />
-        <TextInput label="Operator" name="operator" defaultValue={filters.operator ?? ''} className="w-40" />
+      <SearchForm {...bind.search(['q', 'operator'])} className="flex items-end gap-2 md:col-span-2">
+        <SearchText placeholder="Code, operator, notes" {...bind.text('q')} />
+        <TextInput label="Operator" className="w-40" {...bind.text('operator')} />
       </SearchForm>
-      <DateFilter label="From" value={filters.from} onChange={(from) => onChange({ from })} />
-      <DateFilter label="To" value={filters.to} onChange={(to) => onChange({ to })} />
-      <SelectFilter
-        label="Workspace"
-        value={filters.workspace}
-        options={workspaceOptions}
-        onChange={(workspace) => onChange({ workspace })}
-      />
-      <ClearFilters
-        shown={isSessionFiltered(filters)}
-        onClear={() => onChange(clearedPatch(filterKeys))}
-        className="flex items-end"
-      />
+      <DateFilter label="From" {...bind.value('from')} />
+      <DateFilter label="To" {...bind.value('to')} />
+      <SelectFilter label="Workspace" options={workspaceOptions} {...bind.value('workspace')} />
+      <ClearFilters className="flex items-end" {...bind.clear(filterKeys)} />
     </FilterBar>
   );
 }

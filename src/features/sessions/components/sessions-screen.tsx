@@ -2,7 +2,6 @@ import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { Button } from '../../../components/ui/button';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { useListParams } from '../../../lib/use-list-params';
 import { readSessionFilters, sessionsExportUrl, sessionsQueries } from '../api/sessions-queries';
 import { CreateSessionDialog } from './create-session-dialog';
@@ -15,7 +14,8 @@ interface Props {
 }
 
 export function SessionsScreen({ canWrite, me }: Props) {
-  const { filters, update } = useListParams(readSessionFilters);
+  const params = useListParams(readSessionFilters);
+  const { filters, update } = params;
   const list = useQuery(sessionsQueries.list(filters));
   const [creating, setCreating] = useState(false);
 
@@ -34,15 +34,12 @@ export function SessionsScreen({ canWrite, me }: Props) {
       filters={<SessionsFilters filters={filters} onChange={update} />}
       columns={sessionColumns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={isSessionFiltered(filters)}
-          none="No sessions recorded yet."
-          noMatch="No sessions match these filters."
-        />
-      }
+      params={params}
+      empty={{
+        filtered: isSessionFiltered(filters),
+        none: 'No sessions recorded yet.',
+        noMatch: 'No sessions match these filters.',
+      }}
     >
       {canWrite && <CreateSessionDialog open={creating} onClose={() => setCreating(false)} me={me} />}
     </RegisterScreen>

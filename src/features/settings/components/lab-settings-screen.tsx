@@ -8,11 +8,11 @@ import {
   type LabSettingsDto,
 } from '../../../../shared/schemas/settings';
 import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/form-fields';
 import { applyServerErrors, Form } from '../../../components/ui/form';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { FullPageSpinner } from '../../../components/ui/spinner';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { errorMessage } from '../../../lib/api-client';
 import { settingsQueries, useUpdateLabSettings } from '../api/settings-queries';
@@ -72,6 +72,46 @@ const fields = [
   'clusterDays',
 ] as const;
 
+type FieldName = (typeof fields)[number];
+
+const thresholdFields: { name: FieldName; label: string; hint: string; inputMode?: 'decimal' | 'numeric' }[] = [
+  {
+    name: 'lethalityTarget',
+    label: 'Lethality target (F0, minutes)',
+    hint: 'Applies only to a temperature log from a probe at the jar centre: a chamber log or an estimate overstates what the grain received.',
+    inputMode: 'decimal',
+  },
+  {
+    name: 'containerMinutes',
+    label: 'Least minutes at pressure per container',
+    hint: 'Runs without a jar-centre log are judged by these, at about 103 kPa (15 psi) gauge. Defaults are common practice (1 L jar 90, 2 L jar 120, 3 kg bag 150); set your own from your own validation.',
+  },
+  {
+    name: 'contaminationTarget',
+    label: 'Accepted contamination rate (%)',
+    hint: 'Settled weeks above this are marked even when they are in control. 5 % is a common choice; common practice varies, and no published benchmark exists.',
+    inputMode: 'decimal',
+  },
+  {
+    name: 'observationWindowDays',
+    label: 'Observation window (days)',
+    hint: 'A clean jar younger than this is still incubating; weeks holding such jars are provisional.',
+    inputMode: 'numeric',
+  },
+  {
+    name: 'clusterIncidents',
+    label: 'Cluster alert: incidents',
+    hint: 'This many incidents on one cook run, culture or session…',
+    inputMode: 'numeric',
+  },
+  {
+    name: 'clusterDays',
+    label: 'Cluster alert: within days',
+    hint: '…found within this many days sends an alert.',
+    inputMode: 'numeric',
+  },
+];
+
 function SettingsForm({ settings }: { settings: LabSettingsDto }) {
   const update = useUpdateLabSettings();
   const toast = useToast();
@@ -99,61 +139,23 @@ function SettingsForm({ settings }: { settings: LabSettingsDto }) {
         })
       }
     >
-      {({ register, formState, watch }) => {
-        const preview = edgesText.safeParse(watch('cookBucketEdges'));
+      {(form) => {
+        const preview = edgesText.safeParse(form.watch('cookBucketEdges'));
         return (
           <>
-            <TextInput
+            <TextField
+              form={form}
+              name="cookBucketEdges"
               label="Cook-duration bucket edges (whole minutes at pressure)"
               hint={
                 preview.success
                   ? `Buckets: ${cookBucketLabels(preview.data).join(', ')}`
                   : 'Rising whole minutes, separated by commas.'
               }
-              error={formState.errors.cookBucketEdges?.message}
-              {...register('cookBucketEdges')}
             />
-            <TextInput
-              label="Lethality target (F0, minutes)"
-              hint="Applies only to a temperature log from a probe at the jar centre: a chamber log or an estimate overstates what the grain received."
-              inputMode="decimal"
-              error={formState.errors.lethalityTarget?.message}
-              {...register('lethalityTarget')}
-            />
-            <TextInput
-              label="Least minutes at pressure per container"
-              hint="Runs without a jar-centre log are judged by these, at about 103 kPa (15 psi) gauge. Defaults are common practice (1 L jar 90, 2 L jar 120, 3 kg bag 150); set your own from your own validation."
-              error={formState.errors.containerMinutes?.message}
-              {...register('containerMinutes')}
-            />
-            <TextInput
-              label="Accepted contamination rate (%)"
-              hint="Settled weeks above this are marked even when they are in control. 5 % is a common choice; common practice varies, and no published benchmark exists."
-              inputMode="decimal"
-              error={formState.errors.contaminationTarget?.message}
-              {...register('contaminationTarget')}
-            />
-            <TextInput
-              label="Observation window (days)"
-              hint="A clean jar younger than this is still incubating; weeks holding such jars are provisional."
-              inputMode="numeric"
-              error={formState.errors.observationWindowDays?.message}
-              {...register('observationWindowDays')}
-            />
-            <TextInput
-              label="Cluster alert: incidents"
-              hint="This many incidents on one cook run, culture or session…"
-              inputMode="numeric"
-              error={formState.errors.clusterIncidents?.message}
-              {...register('clusterIncidents')}
-            />
-            <TextInput
-              label="Cluster alert: within days"
-              hint="…found within this many days sends an alert."
-              inputMode="numeric"
-              error={formState.errors.clusterDays?.message}
-              {...register('clusterDays')}
-            />
+            {thresholdFields.map((field) => (
+              <TextField key={field.name} form={form} {...field} />
+            ))}
             <div>
               <Button type="submit" pending={update.isPending}>
                 Save settings

@@ -4,8 +4,8 @@ import {
   trainingRecordFieldsSchema,
   type OperatorRowDto,
 } from '../../../../shared/schemas/training';
+import { TextField } from '../../../components/ui/form-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { useRecordTraining } from '../api/use-record-training';
 import { useRequestRetraining } from '../api/use-request-retraining';
@@ -42,10 +42,10 @@ export function RecordTrainingDialog({ person, versionId, version, onClose }: Pe
         onClose();
       }}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput label="Trained on" type="date" error={errors.trainedOn?.message} {...register('trainedOn')} />
-          <TextInput label="Notes" optional error={errors.notes?.message} {...register('notes')} />
+          <TextField form={form} name="trainedOn" label="Trained on" type="date" />
+          <TextField form={form} name="notes" label="Notes" optional />
         </>
       )}
     </FormDialog>
@@ -89,9 +89,7 @@ export function RetrainDialog({ person, versionId, version, onClose }: PersonDia
         onClose();
       }}
     >
-      {({ register, formState: { errors } }) => (
-        <TextInput label="Reason" error={errors.reason?.message} {...register('reason')} />
-      )}
+      {(form) => <TextField form={form} name="reason" label="Reason" />}
     </FormDialog>
   );
 }

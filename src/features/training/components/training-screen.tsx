@@ -12,6 +12,7 @@ import { errorMessage } from '../../../lib/api-client';
 import { formatDate } from '../../../lib/format';
 import { trainingQueries } from '../api/training-queries';
 import { RecordTrainingDialog, RetrainDialog } from './person-dialogs';
+import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
 const recorders: readonly Role[] = ['trainer', 'admin'];
 const requesters: readonly Role[] = ['trainer', 'supervisor', 'admin'];
@@ -41,13 +42,10 @@ export function TrainingScreen({ role, procedureId }: { role: Role; procedureId:
           <table className="w-full text-left">
             <caption className="sr-only">Operators and their training</caption>
             <thead className="border-b border-line text-muted">
-              <tr>
-                {['Person', 'Sessions', 'Jars', 'Incidents', 'Trained on', ''].map((h) => (
-                  <th key={h} scope="col" className="px-3 py-2 font-medium">
-                    {h}
-                  </th>
-                ))}
-              </tr>
+              <PlainTableHead
+                headings={['Person', 'Sessions', 'Jars', 'Incidents', 'Trained on', '']}
+                cellClassName="px-3 py-2 font-medium"
+              />
             </thead>
             <tbody>
               {operators.data.operators.map((o) => (

@@ -1,20 +1,17 @@
 import { createUserSchema } from '../../../../shared/schemas/users';
-import { FormDialog } from '../../../components/ui/form-dialog';
-import { Select } from '../../../components/ui/select';
-import { TextInput } from '../../../components/ui/text-input';
-import { useToast } from '../../../components/ui/toast';
+import { SaveDialog } from '../../../components/ui/form-dialog';
+import { PasswordField, SelectField, TextField, UsernameField } from '../../../components/ui/form-fields';
 import { useCreateUser } from '../api/use-create-user';
 import { roleOptions } from './role-options';
 
 export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
   const createUser = useCreateUser();
-  const toast = useToast();
 
   return (
-    <FormDialog
+    <SaveDialog
       open={open}
       onClose={onClose}
-      pending={createUser.isPending}
+      mutation={createUser}
       title="New user"
       description="They sign in with this username and the first password you set here."
       submitLabel="Create user"
@@ -22,51 +19,42 @@ export function CreateUserDialog({ open, onClose }: { open: boolean; onClose: ()
       schema={createUserSchema}
       options={{ defaultValues: { username: '', displayName: '', email: '', role: 'technician', password: '' } }}
       serverFields={['username', 'displayName', 'email', 'role', 'password']}
-      onSubmit={async (values) => {
-        const user = await createUser.mutateAsync(values);
-        toast.success(`Account ${user.username} created.`);
-        onClose();
-      }}
+      saved={(user) => `Account ${user.username} created.`}
     >
-      {({ register, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput
+          <TextField
+            form={form}
+            name="displayName"
             label="Name"
             hint="As colleagues know them; shown on records they make."
             autoComplete="off"
-            error={errors.displayName?.message}
-            {...register('displayName')}
           />
-          <TextInput
-            label="Username"
+          <UsernameField
+            form={form}
+            name="username"
             hint="Lower-case letters, digits, dot, dash or underscore. It cannot be changed later."
-            autoCapitalize="none"
-            autoCorrect="off"
-            spellCheck={false}
             autoComplete="off"
-            error={errors.username?.message}
-            {...register('username')}
           />
-          <TextInput
+          <TextField
+            form={form}
+            name="email"
             label="E-mail"
             type="email"
             optional
             hint="Needed for alerts and digests."
             autoComplete="off"
-            error={errors.email?.message}
-            {...register('email')}
           />
-          <Select label="Role" options={roleOptions} error={errors.role?.message} {...register('role')} />
-          <TextInput
+          <SelectField form={form} name="role" label="Role" options={roleOptions} />
+          <PasswordField
+            form={form}
+            name="password"
             label="First password"
-            type="password"
             autoComplete="new-password"
             hint="At least 10 characters. Give it to them in person and ask them to change it from Account."
-            error={errors.password?.message}
-            {...register('password')}
           />
         </>
       )}
-    </FormDialog>
+    </SaveDialog>
   );
 }

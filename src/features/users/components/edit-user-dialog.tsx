@@ -1,10 +1,9 @@
 import { z } from 'zod';
 import { roleSchema } from '../../../../shared/enums';
 import type { UserDto } from '../../../../shared/schemas/users';
+import { SelectField, TextField } from '../../../components/ui/form-fields';
 import { FormDialog } from '../../../components/ui/form-dialog';
 import { Notice } from '../../../components/ui/notice';
-import { Select } from '../../../components/ui/select';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { useUpdateUser } from '../api/use-update-user';
 import { roleOptions } from './role-options';
@@ -40,19 +39,19 @@ export function EditUserDialog({ user, onClose }: { user: UserDto | undefined; o
         onClose();
       }}
     >
-      {({ register, watch, formState: { errors } }) => (
+      {(form) => (
         <>
-          <TextInput label="Name" autoComplete="off" error={errors.displayName?.message} {...register('displayName')} />
-          <TextInput
+          <TextField form={form} name="displayName" label="Name" autoComplete="off" />
+          <TextField
+            form={form}
+            name="email"
             label="E-mail"
             type="email"
             autoComplete="off"
             hint="Where mail for this person goes: actions they own, alerts, retraining. Leave empty for none."
-            error={errors.email?.message}
-            {...register('email')}
           />
-          <Select label="Role" options={roleOptions} {...register('role')} />
-          {watch('role') === 'admin' && user?.role !== 'admin' && (
+          <SelectField form={form} name="role" label="Role" options={roleOptions} />
+          {form.watch('role') === 'admin' && user?.role !== 'admin' && (
             <Notice tone="warn">
               Administrators manage every account and the lab’s settings. Give this role only to people who need it.
             </Notice>

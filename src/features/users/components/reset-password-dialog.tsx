@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { resetPasswordSchema, type UserDto } from '../../../../shared/schemas/users';
+import { TextField } from '../../../components/ui/form-fields';
 import { Button } from '../../../components/ui/button';
 import { Dialog } from '../../../components/ui/dialog';
 import { FormDialog } from '../../../components/ui/form-dialog';
-import { TextInput } from '../../../components/ui/text-input';
 import { useToast } from '../../../components/ui/toast';
 import { useResetPassword } from '../api/use-reset-password';
 
@@ -68,14 +68,13 @@ export function ResetPasswordDialog({ user, onClose }: Props) {
         else toast.success(`${user.displayName} must change the temporary password at next sign-in.`);
       }}
     >
-      {({ register, formState: { errors } }) => (
-        <TextInput
+      {(form) => (
+        <TextField
+          form={form}
+          name="temporaryPassword"
           label="Temporary password (optional)"
-          type="text"
           autoComplete="off"
           hint="At least 10 characters. Leave empty and Asepta makes one for you."
-          error={errors.temporaryPassword?.message}
-          {...register('temporaryPassword')}
         />
       )}
     </FormDialog>

@@ -1,6 +1,5 @@
 import { ClearFilters, FilterBar, SearchForm } from '../../../components/ui/filter-bar';
-import { SelectFilter } from '../../../components/ui/filter-fields';
-import { TextInput } from '../../../components/ui/text-input';
+import { filterBinding, SearchText, SelectFilter } from '../../../components/ui/filter-fields';
 import type { UserFilters } from '../api/users-queries';
 import { roleOptions } from './role-options';
 
@@ -20,31 +19,14 @@ export const usersCleared = { role: undefined, active: undefined, q: undefined }
 export const isUserFiltered = (filters: UserFilters) => Boolean(filters.role || filters.active || filters.q);
 
 export function UsersFilters({ filters, onChange }: UsersFiltersProps) {
+  const bind = filterBinding(filters, onChange);
   return (
     <FilterBar className="md:grid-cols-[2fr_1fr_1fr]">
-      <SearchForm names={['q']} values={filters} onSearch={onChange}>
-        <TextInput
-          label="Search"
-          name="q"
-          type="search"
-          defaultValue={filters.q ?? ''}
-          placeholder="Name or username"
-          maxLength={64}
-          className="flex-1"
-        />
+      <SearchForm {...bind.search(['q'])}>
+        <SearchText placeholder="Name or username" maxLength={64} {...bind.text('q')} />
       </SearchForm>
-      <SelectFilter
-        label="Role"
-        value={filters.role}
-        options={roleFilterOptions}
-        onChange={(role) => onChange({ role })}
-      />
-      <SelectFilter
-        label="Status"
-        value={filters.active}
-        options={statusOptions}
-        onChange={(active) => onChange({ active })}
-      />
+      <SelectFilter label="Role" options={roleFilterOptions} {...bind.value('role')} />
+      <SelectFilter label="Status" options={statusOptions} {...bind.value('active')} />
       <ClearFilters shown={isUserFiltered(filters)} onClear={() => onChange(usersCleared)} className="md:col-span-3" />
     </FilterBar>
   );

@@ -3,7 +3,6 @@ import { useCallback, useState } from 'react';
 import type { UserDto } from '../../../../shared/schemas/users';
 import { RegisterScreen } from '../../../components/layouts/register-screen';
 import { Button } from '../../../components/ui/button';
-import { RegisterEmpty } from '../../../components/ui/register-empty';
 import { useListParams } from '../../../lib/use-list-params';
 import { readUserFilters, usersQueries } from '../api/users-queries';
 import { CreateUserDialog } from './create-user-dialog';
@@ -16,7 +15,8 @@ import { isUserFiltered, UsersFilters, usersCleared } from './users-filters';
 type OpenDialog = { kind: 'create' } | { kind: 'edit' | 'reset' | 'active'; userId: number } | null;
 
 export function UsersScreen({ currentUserId }: { currentUserId: number }) {
-  const { filters, update } = useListParams(readUserFilters);
+  const params = useListParams(readUserFilters);
+  const { filters, update } = params;
   const list = useQuery(usersQueries.list(filters));
   const [dialog, setDialog] = useState<OpenDialog>(null);
 
@@ -40,16 +40,13 @@ export function UsersScreen({ currentUserId }: { currentUserId: number }) {
       filters={<UsersFilters filters={filters} onChange={update} />}
       columns={columns}
       query={list}
-      state={filters}
-      onChange={update}
-      empty={
-        <RegisterEmpty
-          filtered={isUserFiltered(filters)}
-          none="No users yet."
-          noMatch="No users match these filters."
-          onClear={() => update(usersCleared)}
-        />
-      }
+      params={params}
+      empty={{
+        filtered: isUserFiltered(filters),
+        none: 'No users yet.',
+        noMatch: 'No users match these filters.',
+        onClear: () => update(usersCleared),
+      }}
     >
       <CreateUserDialog open={dialog?.kind === 'create'} onClose={close} />
       <EditUserDialog user={dialog?.kind === 'edit' ? selected : undefined} onClose={close} />
