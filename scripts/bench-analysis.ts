@@ -16,7 +16,7 @@ import os, { tmpdir } from 'node:os';
 import path from 'node:path';
 import mysql from 'mysql2/promise';
 import { freePort } from './free-port';
-import { startMariaDb } from './mariadb';
+import { appDbEnv, startMariaDb } from './mariadb';
 import { INCIDENTS, JARS, MAX_JARS, RUNS, SIZES, USERS, database, dbUser, loadAverage, log } from './bench-config';
 import { benchConcurrent, benchRegisters, type Get } from './bench-registers';
 import { seed } from './bench-seed';
@@ -44,11 +44,7 @@ async function main() {
   const db = await startMariaDb({ dataDir, port: await freePort(), database, ...dbUser, fast: true });
   Object.assign(process.env, {
     NODE_ENV: 'test',
-    DB_HOST: '127.0.0.1',
-    DB_PORT: String(db.port),
-    DB_NAME: database,
-    DB_USER: dbUser.user,
-    DB_PASSWORD: dbUser.password,
+    ...appDbEnv(db, database, dbUser),
     PASSWORD_HASH_ROUNDS: '4',
     // Errors only: a failed request's cause reaches the output beside the table.
     LOG_LEVEL: process.env.BENCH_LOG_LEVEL ?? 'error',
@@ -63,9 +59,8 @@ async function main() {
   const { createUser } = await import('../server/users/users.service');
   const { todayLocal } = await import('../server/core/local-time');
   const { frameFor } = await import('../server/analysis/analysis.service');
-  const { ratesQuery, crosstabQuery, combinationsQuery, weeklyQuery } = await import(
-    '../server/analysis/analysis.queries'
-  );
+  const { ratesQuery, crosstabQuery, combinationsQuery, weeklyQuery } =
+    await import('../server/analysis/analysis.queries');
   const { rebuildTallies } = await import('../server/tallies/tallies.service');
 
   const store = createSessionStore();

@@ -8,50 +8,21 @@ import 'reflect-metadata';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { historyColumns } from '../shared/schemas/imports';
 import { database, dbUser, loadAverage, log } from './bench-config';
 import { median } from './bench-table';
 import { freePort } from './free-port';
-import { startMariaDb } from './mariadb';
+import { historyFile } from './history-file';
+import { appDbEnv, startMariaDb } from './mariadb';
 
 const ROWS = Number(process.env.BENCH_IMPORT_ROWS ?? 50_000);
 const RUNS = Number(process.env.BENCH_IMPORT_RUNS ?? 3);
-
-/** Every 25th jar contaminated; runs, sessions and cultures shared by many rows, as a lab's history has them. */
-function historyFile(tag: string, rows: number): Buffer {
-  const lines = [historyColumns.join(',')];
-  for (let i = 0; i < rows; i += 1) {
-    const day = String(1 + (i % 28)).padStart(2, '0');
-    const bad = i % 25 === 0;
-    lines.push(
-      [
-        `${tag}-${i}`,
-        'rye',
-        `${tag}-CR${i % 200}`,
-        '90',
-        `2026-02-${day}`,
-        `${tag}-S${i % 28}-${Math.floor(i / 2000)}`,
-        'Orla Vance',
-        `${tag}-LC${i % 7}`,
-        bad ? 'contaminated' : 'clean',
-        bad ? 'yeast' : '',
-        bad ? '2026-03-03' : '',
-      ].join(','),
-    );
-  }
-  return Buffer.from(lines.join('\n'));
-}
 
 async function main() {
   const dataDir = mkdtempSync(path.join(tmpdir(), 'asepta-bench-import-'));
   const db = await startMariaDb({ dataDir, port: await freePort(), database, ...dbUser, fast: true });
   Object.assign(process.env, {
     NODE_ENV: 'test',
-    DB_HOST: '127.0.0.1',
-    DB_PORT: String(db.port),
-    DB_NAME: database,
-    DB_USER: dbUser.user,
-    DB_PASSWORD: dbUser.password,
+    ...appDbEnv(db, database, dbUser),
     LOG_LEVEL: 'error',
     SESSION_SECRET: 'bench-session-secret-0123456789',
   });

@@ -3,7 +3,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { freePort } from './free-port';
-import { startMariaDb } from './mariadb';
+import { appDbEnv, startMariaDb } from './mariadb';
 import { malformedRequests } from './fuzz-cases';
 import type { Probe } from './fuzz-routes';
 import { signInOverHttp, type HttpSession } from './http-session';
@@ -23,11 +23,7 @@ async function main() {
     NODE_ENV: 'test',
     HOST: '127.0.0.1',
     PORT: '0',
-    DB_HOST: '127.0.0.1',
-    DB_PORT: String(db.port),
-    DB_NAME: database,
-    DB_USER: dbUser.user,
-    DB_PASSWORD: dbUser.password,
+    ...appDbEnv(db, database, dbUser),
     PASSWORD_HASH_ROUNDS: '4',
     LOG_LEVEL: 'silent',
     SESSION_SECRET: 'fuzz-session-secret-0123456789',

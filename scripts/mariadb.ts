@@ -83,6 +83,17 @@ async function waitForServer(child: ChildProcess, port: number, timeoutMs = 60_0
 }
 
 /** Starts a private mariadbd on loopback: never a server that merely happens to be running. */
+/** The app's DB_* settings for a database this script started: set them before the app's config is read. */
+export function appDbEnv(db: Pick<MariaDbHandle, 'port'>, database: string, user: { user: string; password: string }) {
+  return {
+    DB_HOST: '127.0.0.1',
+    DB_PORT: String(db.port),
+    DB_NAME: database,
+    DB_USER: user.user,
+    DB_PASSWORD: user.password,
+  };
+}
+
 export async function startMariaDb(opts: MariaDbOptions): Promise<MariaDbHandle> {
   const dataDir = path.resolve(opts.dataDir);
   await initialise(dataDir);

@@ -24,7 +24,6 @@ export function perJar(factor: Factor, f: Frame, aliasSuffix = '') {
   return { ...fs, joins: ['JOIN tallied_jars tj ON tj.jarId = j.id', ...fs.joins] };
 }
 
-
 export interface CountRow {
   jars: number;
   contaminated: number;

@@ -1,5 +1,6 @@
-import type { Factor, LogPlacement } from '../../shared/enums';
+import type { Factor } from '../../shared/enums';
 import type { ActionSummary } from '../../shared/schemas/analysis-actions';
+import type { LethalityRow } from '../../shared/schemas/analysis-lethality';
 import { dateText } from '../core/calendar';
 import { num, str, type CountRow } from './analysis.queries';
 
@@ -17,19 +18,11 @@ export interface ColonisationRow {
   jars: number;
 }
 
-export interface LethalityRawRow {
-  code: string;
-  cookedOn: string | null;
-  container: string | null;
-  minutesAtPressure: number;
-  gaugeKPa: number | null;
-  altitudeM: number;
-  f0: number | null;
-  f0Source: 'log' | 'estimate' | null;
-  logPlacement: LogPlacement | null;
-  jars: number;
-  contaminated: number;
-}
+/** A cook run's row as read, before it is judged: the fields the answer shares, named as stored. */
+export type LethalityRawRow = Pick<
+  LethalityRow,
+  'cookedOn' | 'container' | 'minutesAtPressure' | 'gaugeKPa' | 'altitudeM' | 'f0' | 'f0Source' | 'logPlacement'
+> & { code: string; jars: number; contaminated: number };
 
 export interface ActionRow {
   id: number;

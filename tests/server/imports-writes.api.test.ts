@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { historyColumns } from '../../shared/schemas/imports';
+import { historyFile } from '../../scripts/history-file';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { CookRun } from '../../server/cook-runs/cook-run.entity';
 import { Culture } from '../../server/cultures/culture.entity';
@@ -148,27 +148,7 @@ describe('POST /api/imports/history — what is written', () => {
   it('imports a file of 50,000 rows with their 2,000 incidents in one go', { timeout: 600_000 }, async () => {
     const sup = await supervisor();
     const tag = uniqueName('Z');
-    const lines = [historyColumns.join(',')];
-    for (let i = 0; i < 50_000; i += 1) {
-      const day = String(1 + (i % 28)).padStart(2, '0');
-      const bad = i % 25 === 0;
-      lines.push(
-        [
-          `${tag}-${i}`,
-          'rye',
-          `${tag}-CR${i % 200}`,
-          '90',
-          `2026-02-${day}`,
-          `${tag}-S${i % 28}-${Math.floor(i / 2000)}`,
-          'Orla Vance',
-          `${tag}-LC${i % 7}`,
-          bad ? 'contaminated' : 'clean',
-          bad ? 'yeast' : '',
-          bad ? '2026-03-03' : '',
-        ].join(','),
-      );
-    }
-    const res = await sup.post(lines.join('\n'));
+    const res = await sup.post(historyFile(tag, 50_000));
     expect(res.status).toBe(200);
     expect(resultOf(res).imported).toEqual({ jars: 50_000, incidents: 2_000 });
   });

@@ -112,7 +112,7 @@ describe('the analysis counts kept with every write', () => {
         sterilisedBeforeDisposal: false,
         foundAt: foundAt.toISOString(),
       });
-      expect({ status: res.status, body: res.body }).toMatchObject({ status: 201 });
+      expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 201 });
       const body = res.body as { id: number; version: number };
       incidents.push({ id: body.id, version: body.version, jarIds: chosen.map((j) => j.id) });
       done.flag += 1;
@@ -127,7 +127,7 @@ describe('the analysis counts kept with every write', () => {
         foundAt: new Date(latest + next() * (Date.now() - latest)).toISOString(),
         reason: 'looked again',
       });
-      expect({ status: res.status, body: res.body }).toMatchObject({ status: 200 });
+      expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
       incident.version = (res.body as { version: number }).version;
       done.edit += 1;
     };
@@ -136,7 +136,7 @@ describe('the analysis counts kept with every write', () => {
       const res = await send(sup, 'post', `/api/incidents/${incident.id}/review`, {
         verdict: pick(['ruled-out', 'confirmed'] as const),
       });
-      expect({ status: res.status, body: res.body }).toMatchObject({ status: 200 });
+      expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
       incident.version = (res.body as { version: number }).version;
       done.review += 1;
     };
@@ -147,7 +147,7 @@ describe('the analysis counts kept with every write', () => {
         version: incident.version,
         reason: 'filed against the wrong jar',
       });
-      expect({ status: res.status, body: res.body }).toMatchObject({ status: 200 });
+      expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
       done.void += 1;
     };
     const importSome = async () => {
@@ -156,12 +156,12 @@ describe('the analysis counts kept with every write', () => {
         row(tag, n, n === 1 ? { outcome: 'contaminated', contaminant: 'trichoderma', found_on: '2026-03-09' } : {}),
       );
       const res = await (await importingSupervisor(app)).post(csv(rows));
-      expect({ status: res.status, body: res.body }).toMatchObject({ status: 200 });
+      expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
       done.import += 1;
     };
     const changeWindow = async () => {
       const res = await send(admin, 'patch', '/api/settings', { observationWindowDays: pick([14, 21, 28]) });
-      expect({ status: res.status, body: res.body }).toMatchObject({ status: 200 });
+      expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
       done.window += 1;
     };
 
