@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { mkdir, rename, rm, stat, writeFile } from 'node:fs/promises';
 import path from 'node:path';
@@ -26,7 +27,8 @@ export class LocalDiskStorage implements PhotoStorage {
   async put(key: string, bytes: Buffer): Promise<void> {
     const target = this.file(key);
     await mkdir(path.dirname(target), { recursive: true });
-    const temp = `${target}.${process.pid}.${Date.now()}.part`;
+    // Unique per call: two uploads of the same photo in the same millisecond must not share a part file.
+    const temp = `${target}.${randomUUID()}.part`;
     await writeFile(temp, bytes);
     await rename(temp, target);
   }

@@ -5,14 +5,19 @@ import { reason } from './jar-fields';
 export const holdSchema = z.object({ reason });
 export type HoldInput = z.infer<typeof holdSchema>;
 
+/** A jar as a node of its lineage or of another jar's ancestry. */
+export const jarNodeFields = {
+  kind: z.literal('jar'),
+  id: z.number().int(),
+  label: z.string(),
+  status: jarStatusSchema,
+  inoculatedOn: z.string(),
+};
+
 export const lineageNodeSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('culture'), id: z.number().int(), code: z.string(), state: z.string() }),
   z.object({
-    kind: z.literal('jar'),
-    id: z.number().int(),
-    label: z.string(),
-    status: jarStatusSchema,
-    inoculatedOn: z.string(),
+    ...jarNodeFields,
     releasedTo: releasedToSchema.nullable(),
     releasedToWho: z.string().nullable(),
     releasedOn: z.string().nullable(),

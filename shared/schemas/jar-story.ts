@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { f0Sources, jarStatusSchema } from '../enums';
+import { f0Sources } from '../enums';
 import { jarEventSchema } from './jar-events';
+import { jarNodeFields } from './jar-lineage';
 import { jarRowSchema } from './jars';
 
 const cultureSummary = z.object({
@@ -15,13 +16,7 @@ const cultureSummary = z.object({
 export type CultureSummaryDto = z.infer<typeof cultureSummary>;
 
 export const ancestorSchema = z.discriminatedUnion('kind', [
-  z.object({
-    kind: z.literal('jar'),
-    id: z.number().int(),
-    label: z.string(),
-    status: jarStatusSchema,
-    inoculatedOn: z.string(),
-  }),
+  z.object(jarNodeFields),
   z.object({ kind: z.literal('culture'), ...cultureSummary.shape }),
 ]);
 export type AncestorDto = z.infer<typeof ancestorSchema>;

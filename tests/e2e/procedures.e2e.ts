@@ -53,7 +53,10 @@ describe('procedures in the browser', () => {
     await linked.getByRole('button', { name: `Unlink #${incidentId}` }).click();
     await page.getByRole('button', { name: 'Unlink', exact: true }).click();
     await expect.poll(async () => Number(await count.innerText()), { timeout: 10_000 }).toBe(before);
-    expect(await step.getByRole('link', { name: `Incident #${incidentId}` }).count()).toBe(0);
+    // The count and the list are two answers: wait for the list too, not just the count.
+    await expect
+      .poll(() => step.getByRole('link', { name: `Incident #${incidentId}` }).count(), { timeout: 10_000 })
+      .toBe(0);
     await context.close();
   });
 

@@ -1,12 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { historyColumns } from '../../shared/schemas/imports';
 import { AuditEvent } from '../../server/audit/audit-event.entity';
 import { CookRun } from '../../server/cook-runs/cook-run.entity';
 import { dataSource } from '../../server/db/data-source';
 import { createTestApp } from '../setup/test-app';
 import { postCsvAs, sendAs, signedIn, uniqueName } from '../setup/factories';
 import { runOf } from './cook-runs.fixtures';
-import { rejectionOf } from './imports.fixtures';
+import { csv, rejectionOf, row } from './imports.fixtures';
 
 // The history import writes through the cook-runs module's own insert, so the rules a run made on the
 // screen obeys hold for an imported one too: the F0 estimate from its minutes and its audit row.
@@ -23,22 +22,8 @@ const screenRun = (code: string, minutesAtPressure: number) => ({
   loadCount: 7,
 });
 
-const historyFile = (tag: string, minutes: string) => {
-  const row: Record<(typeof historyColumns)[number], string> = {
-    jar_label: `${tag}-J1`,
-    grain: 'rye',
-    cook_run: `${tag}-CR`,
-    cook_minutes: minutes,
-    inoculated_on: '2026-03-02',
-    session: `${tag}-S`,
-    operator: 'Orla Vance',
-    culture: `${tag}-LC`,
-    outcome: 'clean',
-    contaminant: '',
-    found_on: '',
-  };
-  return `${historyColumns.join(',')}\n${historyColumns.map((c) => row[c]).join(',')}\n`;
-};
+/** One clean jar whose cook run took `minutes` at pressure. */
+const historyFile = (tag: string, minutes: string) => csv([row(tag, 1, { cook_minutes: minutes })]);
 
 describe('history import through the cook-runs module', () => {
   it('gives an imported run the same F0 estimate as a run of the same minutes made on the screen', async () => {
