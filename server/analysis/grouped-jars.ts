@@ -43,7 +43,6 @@ const TALLY_KEY_ORDER =
 interface Source {
   table: string;
   keys: JarKey[];
-  lost: string;
   factor: string | null;
   /** A GROUP BY in the table's key order, when the question allows one. */
   keyOrder: string | null;
@@ -51,16 +50,15 @@ interface Source {
 
 /** Where a question is answered: the one-factor roll-ups when it asks about one factor (and days), else the counts. */
 function sourceFor(keys: JarKey[], byKeyOrder: boolean, withDetections: boolean): Source {
-  const counts = { table: 'tally_counts', keys, lost: 't.contaminated * t.jars', factor: null };
-  if (withDetections || byKeyOrder) return { ...counts, keyOrder: byKeyOrder ? TALLY_KEY_ORDER : null };
+  const counts = { table: 'tally_counts', keys, factor: null, keyOrder: byKeyOrder ? TALLY_KEY_ORDER : null };
   const factors = keys.filter((k) => !dayKeys.has(k));
   const level =
     factors.length === 0 ? levelKeys.get(grainKey) : factors.length === 1 ? levelKeys.get(factors[0]!) : undefined;
-  if (!level) return { ...counts, keyOrder: null };
+  // Detections are kept per combination only, beside tally_counts.
+  if (byKeyOrder || withDetections || !level) return counts;
   return {
     table: 'tally_levels',
     keys: keys.map((k) => (dayKeys.has(k) ? k : level.key)),
-    lost: 't.contaminated',
     factor: level.factor,
     // Levels alone: read level by level in the key's order (factor, levelId, room, day).
     keyOrder: factors.length === keys.length ? 't.levelId, t.room' : null,
@@ -71,8 +69,9 @@ function sourceFor(keys: JarKey[], byKeyOrder: boolean, withDetections: boolean)
  * The counts (server/tallies, kept current with every write) summed per key: jars, contaminated jars,
  * young jars (inoculated after the window start) and the contaminated among them; the caller sums them
  * per level with summedSql: incubating = young − contaminated young, settled = jars − incubating.
- * A question about one factor reads tally_levels; the rest, and every question `withDetections` or
- * `byKeyOrder`, read tally_counts. `detections` lists days:contaminant:jars of the contaminated jars.
+ * A question about one factor reads tally_levels; the rest, and every question `byKeyOrder`, read
+ * tally_counts. `withDetections` adds rows from tally_detections whose `detections` list
+ * days:contaminant:jars of the contaminated jars (and count nothing else), for the caller to concatenate.
  *
  * `byKeyOrder` groups in tally_counts' primary-key order instead, so MariaDB groups while it reads the
  * key with no temporary table; for keys that are (functions of) those columns the outer query then adds
@@ -86,16 +85,20 @@ export function groupedJars(
   const source = sourceFor(keys, byKeyOrder, withDetections);
   const { where, params } = periodWhere(f, source.factor ? ['t.factor = ?'] : [], 't.inoculatedOn');
   const select = source.keys.map((k, i) => `${keyOn(k, 't')} AS k${i + 1}`).join(', ');
-  const groupList = keys.map((_, i) => `k${i + 1}`).join(', ');
-  const detections = withDetections
-    ? `GROUP_CONCAT(IF(t.contaminated = 1 AND t.jars > 0, CONCAT(t.foundAfterDays, ':', t.contaminant, ':', t.jars), NULL))`
-    : 'NULL';
+  const groupBy = source.keyOrder ?? keys.map((_, i) => `k${i + 1}`).join(', ');
+  const counted = `SELECT ${select}, SUM(t.jars) AS jars, SUM(t.contaminated) AS contaminated,
+        SUM(IF(t.inoculatedOn > ?, t.jars, 0)) AS young, SUM(IF(t.inoculatedOn > ?, t.contaminated, 0)) AS contaminatedYoung,
+        NULL AS detections
+      FROM ${source.table} t ${where} GROUP BY ${groupBy} HAVING SUM(t.jars) > 0`;
+  const countedParams = [f.windowStart, f.windowStart, ...(source.factor ? [source.factor] : []), ...params];
+  if (!withDetections) return { sql: counted, params: countedParams };
+  const found = periodWhere(f, ['t.jars > 0'], 't.inoculatedOn');
   return {
-    sql: `SELECT ${select}, SUM(t.jars) AS jars, SUM(${source.lost}) AS contaminated,
-        SUM(IF(t.inoculatedOn > ?, t.jars, 0)) AS young, SUM(IF(t.inoculatedOn > ?, ${source.lost}, 0)) AS contaminatedYoung,
-        ${detections} AS detections
-      FROM ${source.table} t ${where} GROUP BY ${source.keyOrder ?? groupList} HAVING SUM(t.jars) > 0`,
-    params: [f.windowStart, f.windowStart, ...(source.factor ? [source.factor] : []), ...params],
+    sql: `${counted}
+      UNION ALL
+      SELECT ${select}, 0, 0, 0, 0, GROUP_CONCAT(CONCAT(t.foundAfterDays, ':', t.contaminant, ':', t.jars))
+      FROM tally_detections t ${found.where} GROUP BY ${groupBy}`,
+    params: [...countedParams, ...found.params],
   };
 }
 

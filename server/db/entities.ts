@@ -28,7 +28,7 @@ import { StaffMember } from '../staff/staff-member.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
 import { SessionStepCheck } from '../sessions/session-step-check.entity';
 import { LabSettings } from '../settings/lab-settings.entity';
-import { TallyCount, TalliedJar, TallyLevel, TallyState } from '../tallies/tally.entity';
+import { TallyCount, TallyDetection, TalliedJar, TallyLevel, TallyState } from '../tallies/tally.entity';
 import { RetrainRequest } from '../training/retrain-request.entity';
 import { TrainingRecord } from '../training/training-record.entity';
 import { User } from '../users/user.entity';
@@ -36,6 +36,7 @@ import { User } from '../users/user.entity';
 /** Listed as classes, not globs: Vitest and tsx both load them the same way. */
 export const entities = [
   TallyCount,
+  TallyDetection,
   TallyLevel,
   TalliedJar,
   TallyState,

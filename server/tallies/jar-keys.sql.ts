@@ -3,7 +3,7 @@ import { contaminatedJarsAmong } from '../incidents/live-incidents';
 /** Deeper lineages than this are cut off: a guard against a cycle, far beyond any real transfer chain. */
 const MAX_TRANSFERS = 64;
 
-/** The columns a jar is counted under, in tally_counts' primary-key order. */
+/** The columns a jar is counted under (tallied_jars): tally_counts' primary key, then how it was found. */
 export const tallyKeyColumns = [
   'inoculatedOn',
   'grainId',
@@ -43,7 +43,15 @@ export function levelRollupSql(sign: 1 | -1, where: string): string {
     .join(' UNION ALL ');
 }
 
-export const tallyKeyList = tallyKeyColumns.map((c) => `\`${c}\``).join(', ');
+const listOf = (columns: readonly string[]) => columns.map((c) => `\`${c}\``).join(', ');
+
+export const tallyKeyList = listOf(tallyKeyColumns);
+
+/** tally_counts' primary key: the combination of every factor's key, per day. */
+export const comboKeyList = listOf(tallyKeyColumns.slice(0, 8));
+
+/** tally_detections' primary key: the combination, then days to finding and the contaminant. */
+export const detectionKeyList = listOf([...tallyKeyColumns.slice(0, 8), 'foundAfterDays', 'contaminant']);
 
 export interface JarChoice {
   /** A condition on a jar-id column, or '' for every jar. */

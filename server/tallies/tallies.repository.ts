@@ -1,7 +1,15 @@
 import type { EntityManager } from 'typeorm';
-import { jarKeysSql, levelRollupSql, tallyKeyList, tallyLevelFactors, type JarChoice } from './jar-keys.sql';
+import {
+  comboKeyList,
+  detectionKeyList,
+  jarKeysSql,
+  levelRollupSql,
+  tallyKeyList,
+  tallyLevelFactors,
+  type JarChoice,
+} from './jar-keys.sql';
 
-/** The jars' rows as last counted, summed per key and added to tally_counts and tally_levels with `sign`. */
+/** The jars' rows as last counted, summed per key and added to tally_counts, tally_detections and tally_levels with `sign`. */
 async function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice) {
   await m.query(
     `INSERT INTO tally_levels (factor, inoculatedOn, levelId, room, jars, contaminated)
@@ -10,9 +18,17 @@ async function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice
     tallyLevelFactors.flatMap(() => jars.params),
   );
   await m.query(
-    `INSERT INTO tally_counts (${tallyKeyList}, jars)
-      SELECT ${tallyKeyList}, ${sign} * COUNT(*) FROM tallied_jars WHERE ${jars.on('jarId') || '1'}
-      GROUP BY ${tallyKeyList} ORDER BY ${tallyKeyList}
+    `INSERT INTO tally_counts (${comboKeyList}, jars, contaminated)
+      SELECT ${comboKeyList}, ${sign} * COUNT(*), ${sign} * SUM(contaminated) FROM tallied_jars WHERE ${jars.on('jarId') || '1'}
+      GROUP BY ${comboKeyList} ORDER BY ${comboKeyList}
+      ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars), contaminated = contaminated + VALUES(contaminated)`,
+    jars.params,
+  );
+  await m.query(
+    `INSERT INTO tally_detections (${detectionKeyList}, jars)
+      SELECT ${detectionKeyList}, ${sign} * COUNT(*) FROM tallied_jars
+      WHERE contaminated = 1 AND ${jars.on('jarId') || '1'}
+      GROUP BY ${detectionKeyList} ORDER BY ${detectionKeyList}
       ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars)`,
     jars.params,
   );
@@ -39,6 +55,7 @@ export const talliesRepository = {
   /** A rebuild starts from nothing, so no row is left at zero. */
   clear: async (m: EntityManager) => {
     await m.query('DELETE FROM tally_counts');
+    await m.query('DELETE FROM tally_detections');
     await m.query('DELETE FROM tally_levels');
     await m.query('DELETE FROM tallied_jars');
   },

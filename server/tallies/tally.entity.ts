@@ -4,8 +4,7 @@ import { Column, Entity, PrimaryColumn } from 'typeorm';
  * The analysis counts, kept current in the same transaction as every write that can change a jar's
  * place in them (server/tallies/tallies.service.ts): jars per inoculation day and per combination of the
  * keys every factor is read from. A key the jar does not record is 0 (ids) or '' (room), never NULL,
- * so the primary key can find the row to add to. Clean jars have contaminated 0, foundAfterDays 0 and
- * contaminant ''. Rows may fall to 0 jars when jars move between combinations; readers skip them and a
+ * so the primary key can find the row to add to. Rows may fall to 0 jars when jars move between combinations; readers skip them and a
  * rebuild drops them.
  */
 @Entity('tally_counts')
@@ -37,10 +36,41 @@ export class TallyCount {
   @PrimaryColumn({ type: 'tinyint', unsigned: true })
   transfers: number;
 
-  @PrimaryColumn({ type: 'tinyint', unsigned: true })
-  contaminated: number;
+  @Column({ type: 'int' })
+  jars: number;
 
-  /** Days from inoculation to the first live incident (contaminated jars). */
+  @Column({ type: 'int' })
+  contaminated: number;
+}
+
+/** The contaminated jars of each combination of tally_counts, by days to finding and contaminant (likely causes' hints). */
+@Entity('tally_detections')
+export class TallyDetection {
+  @PrimaryColumn({ type: 'date' })
+  inoculatedOn: string;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  cookRunId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  sessionId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  cultureId: number;
+
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  prepBatchId: number;
+
+  @PrimaryColumn({ type: 'varchar', length: 40 })
+  room: string;
+
+  @PrimaryColumn({ type: 'tinyint', unsigned: true })
+  transfers: number;
+
+  /** Days from inoculation to the first live incident. */
   @PrimaryColumn({ type: 'smallint' })
   foundAfterDays: number;
 

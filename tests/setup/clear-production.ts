@@ -3,6 +3,7 @@ import { dataSource } from '../../server/db/data-source';
 /** Production record and incident register, each table after every table that points at it. */
 const productionTables = [
   'tally_counts',
+  'tally_detections',
   'tally_levels',
   'tallied_jars',
   'incident_jars',

@@ -1,5 +1,5 @@
 import type { MigrationInterface, QueryRunner } from 'typeorm';
-import { everyJar, jarKeysSql, tallyKeyList } from '../../tallies/jar-keys.sql';
+import { comboKeyList, detectionKeyList, everyJar, jarKeysSql, tallyKeyList } from '../../tallies/jar-keys.sql';
 
 /**
  * The analysis counts and each jar's row in them, filled from the records already held. The fill uses
@@ -11,7 +11,10 @@ export class AnalysisTallies1796307275333 implements MigrationInterface {
 
   public async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(
-      `CREATE TABLE \`tally_counts\` (\`inoculatedOn\` date NOT NULL, \`grainId\` int UNSIGNED NOT NULL, \`cookRunId\` int UNSIGNED NOT NULL, \`sessionId\` int UNSIGNED NOT NULL, \`cultureId\` int UNSIGNED NOT NULL, \`prepBatchId\` int UNSIGNED NOT NULL, \`room\` varchar(40) NOT NULL, \`transfers\` tinyint UNSIGNED NOT NULL, \`contaminated\` tinyint UNSIGNED NOT NULL, \`foundAfterDays\` smallint NOT NULL, \`contaminant\` varchar(40) NOT NULL, \`jars\` int NOT NULL, PRIMARY KEY (\`inoculatedOn\`, \`grainId\`, \`cookRunId\`, \`sessionId\`, \`cultureId\`, \`prepBatchId\`, \`room\`, \`transfers\`, \`contaminated\`, \`foundAfterDays\`, \`contaminant\`)) ENGINE=InnoDB`,
+      `CREATE TABLE \`tally_counts\` (\`inoculatedOn\` date NOT NULL, \`grainId\` int UNSIGNED NOT NULL, \`cookRunId\` int UNSIGNED NOT NULL, \`sessionId\` int UNSIGNED NOT NULL, \`cultureId\` int UNSIGNED NOT NULL, \`prepBatchId\` int UNSIGNED NOT NULL, \`room\` varchar(40) NOT NULL, \`transfers\` tinyint UNSIGNED NOT NULL, \`jars\` int NOT NULL, \`contaminated\` int NOT NULL, PRIMARY KEY (\`inoculatedOn\`, \`grainId\`, \`cookRunId\`, \`sessionId\`, \`cultureId\`, \`prepBatchId\`, \`room\`, \`transfers\`)) ENGINE=InnoDB`,
+    );
+    await queryRunner.query(
+      `CREATE TABLE \`tally_detections\` (\`inoculatedOn\` date NOT NULL, \`grainId\` int UNSIGNED NOT NULL, \`cookRunId\` int UNSIGNED NOT NULL, \`sessionId\` int UNSIGNED NOT NULL, \`cultureId\` int UNSIGNED NOT NULL, \`prepBatchId\` int UNSIGNED NOT NULL, \`room\` varchar(40) NOT NULL, \`transfers\` tinyint UNSIGNED NOT NULL, \`foundAfterDays\` smallint NOT NULL, \`contaminant\` varchar(40) NOT NULL, \`jars\` int NOT NULL, PRIMARY KEY (\`inoculatedOn\`, \`grainId\`, \`cookRunId\`, \`sessionId\`, \`cultureId\`, \`prepBatchId\`, \`room\`, \`transfers\`, \`foundAfterDays\`, \`contaminant\`)) ENGINE=InnoDB`,
     );
     await queryRunner.query(
       `CREATE TABLE \`tallied_jars\` (\`jarId\` int UNSIGNED NOT NULL, \`inoculatedOn\` date NOT NULL, \`grainId\` int UNSIGNED NOT NULL, \`cookRunId\` int UNSIGNED NOT NULL, \`sessionId\` int UNSIGNED NOT NULL, \`cultureId\` int UNSIGNED NOT NULL, \`prepBatchId\` int UNSIGNED NOT NULL, \`room\` varchar(40) NOT NULL, \`transfers\` tinyint UNSIGNED NOT NULL, \`contaminated\` tinyint UNSIGNED NOT NULL, \`foundAfterDays\` smallint NOT NULL, \`contaminant\` varchar(40) NOT NULL, PRIMARY KEY (\`jarId\`)) ENGINE=InnoDB`,
@@ -28,14 +31,19 @@ export class AnalysisTallies1796307275333 implements MigrationInterface {
     const keys = jarKeysSql(Number(settings?.observationWindowDays ?? 0), everyJar);
     await queryRunner.query(`INSERT INTO tallied_jars (jarId, ${tallyKeyList}) ${keys.sql}`, keys.params);
     await queryRunner.query(
-      `INSERT INTO tally_counts (${tallyKeyList}, jars)
-        SELECT ${tallyKeyList}, COUNT(*) FROM tallied_jars GROUP BY ${tallyKeyList}`,
+      `INSERT INTO tally_counts (${comboKeyList}, jars, contaminated)
+        SELECT ${comboKeyList}, COUNT(*), SUM(contaminated) FROM tallied_jars GROUP BY ${comboKeyList}`,
+    );
+    await queryRunner.query(
+      `INSERT INTO tally_detections (${detectionKeyList}, jars)
+        SELECT ${detectionKeyList}, COUNT(*) FROM tallied_jars WHERE contaminated = 1 GROUP BY ${detectionKeyList}`,
     );
   }
 
   public async down(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query('DROP TABLE `tally_state`');
     await queryRunner.query('DROP TABLE `tallied_jars`');
+    await queryRunner.query('DROP TABLE `tally_detections`');
     await queryRunner.query('DROP TABLE `tally_counts`');
     await queryRunner.query(
       'CREATE INDEX `IDX_jars_analysis` ON `jars` (`inoculatedOn`, `grainId`, `cookRunId`, `sessionId`, `cultureId`, `prepBatchId`, `room`)',
