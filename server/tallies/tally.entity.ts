@@ -1,14 +1,10 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
 /**
- * The analysis counts, kept current in the same transaction as every write that can change a jar's
- * place in them (server/tallies/tallies.service.ts): jars per inoculation day and per combination of the
- * keys every factor is read from. A key the jar does not record is 0 (ids) or '' (room), never NULL,
- * so the primary key can find the row to add to. Rows may fall to 0 jars when jars move between combinations; readers skip them and a
- * rebuild drops them.
+ * A day and a combination of the keys every factor is read from. A key the jar does not record is 0 (ids)
+ * or '' (room), never NULL, so the primary key can find the row to add to.
  */
-@Entity('tally_counts')
-export class TallyCount {
+abstract class Combination {
   @PrimaryColumn({ type: 'date' })
   inoculatedOn: string;
 
@@ -35,7 +31,15 @@ export class TallyCount {
   /** Grain-to-grain steps from the root culture, capped at 2. */
   @PrimaryColumn({ type: 'tinyint', unsigned: true })
   transfers: number;
+}
 
+/**
+ * The analysis counts, kept current in the same transaction as every write that can change a jar's
+ * place in them (server/tallies/tallies.service.ts): jars, and contaminated jars, per combination. Rows
+ * may fall to 0 jars when jars move between combinations; readers skip them and a rebuild drops them.
+ */
+@Entity('tally_counts')
+export class TallyCount extends Combination {
   @Column({ type: 'int' })
   jars: number;
 
@@ -43,33 +47,9 @@ export class TallyCount {
   contaminated: number;
 }
 
-/** The contaminated jars of each combination of tally_counts, by days to finding and contaminant (likely causes' hints). */
+/** The contaminated jars of each combination, by days to finding and contaminant (likely causes' hints). */
 @Entity('tally_detections')
-export class TallyDetection {
-  @PrimaryColumn({ type: 'date' })
-  inoculatedOn: string;
-
-  @PrimaryColumn({ type: 'int', unsigned: true })
-  grainId: number;
-
-  @PrimaryColumn({ type: 'int', unsigned: true })
-  cookRunId: number;
-
-  @PrimaryColumn({ type: 'int', unsigned: true })
-  sessionId: number;
-
-  @PrimaryColumn({ type: 'int', unsigned: true })
-  cultureId: number;
-
-  @PrimaryColumn({ type: 'int', unsigned: true })
-  prepBatchId: number;
-
-  @PrimaryColumn({ type: 'varchar', length: 40 })
-  room: string;
-
-  @PrimaryColumn({ type: 'tinyint', unsigned: true })
-  transfers: number;
-
+export class TallyDetection extends Combination {
   /** Days from inoculation to the first live incident. */
   @PrimaryColumn({ type: 'smallint' })
   foundAfterDays: number;
