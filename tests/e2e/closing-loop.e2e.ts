@@ -6,6 +6,7 @@ import type { WeeklyDto } from '../../shared/schemas/analysis-weekly';
 import { plantedProblems, weekBefore } from '../../server/demo-lab/planted-problems';
 import { mailsTo } from '../setup/mail-sink';
 import { desktop, newPage, shotsDir, signIn, useBrowser } from './support/browser';
+import { countOf } from '../../src/lib/count-text';
 
 const browser = useBrowser();
 const daysFrom = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
@@ -87,7 +88,7 @@ describe('closing the loop', () => {
     await page.goto('/analysis/weekly');
     const weekly = (await (await page.request.get('/api/analysis/weekly')).json()) as WeeklyDto;
     const week = weekly.weeks.find((w) => !w.provisional && w.contaminated > 0)!;
-    await page.getByRole('link', { name: `${week.contaminated} contaminated jars of ${week.week}` }).click();
+    await page.getByRole('link', { name: `${countOf(week.contaminated, 'contaminated jar')} of ${week.week}` }).click();
     await page.getByRole('heading', { name: new RegExp(`^Contaminated jars: .*${week.week}`) }).waitFor();
     const incidentLink = page.getByRole('link', { name: /^#\d+$/ }).first();
     await incidentLink.waitFor();

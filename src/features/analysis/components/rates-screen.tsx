@@ -10,6 +10,7 @@ import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis
 import { JarsLink } from './jars-link';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
 import { factorLabels, factorOptions, interval, percent } from './labels';
+import { countOf } from '../../../lib/count-text';
 
 const MAX_BARS = 40;
 
@@ -100,7 +101,12 @@ export function RatesScreen() {
                       {r.level}
                     </th>
                     <td className={`${td} ${num}`}>
-                      <JarsLink factor={by} level={r.level} period={period} label={`${r.jars} jars of ${r.level}`}>
+                      <JarsLink
+                        factor={by}
+                        level={r.level}
+                        period={period}
+                        label={`${countOf(r.jars, 'jar')} of ${r.level}`}
+                      >
                         {r.jars}
                       </JarsLink>
                     </td>
@@ -110,7 +116,7 @@ export function RatesScreen() {
                         level={r.level}
                         only="contaminated"
                         period={period}
-                        label={`${r.contaminated} contaminated jars of ${r.level}`}
+                        label={`${countOf(r.contaminated, 'contaminated jar')} of ${r.level}`}
                       >
                         {r.contaminated}
                       </JarsLink>

@@ -9,6 +9,7 @@ import { percent } from './labels';
 import { JarsLink, jarsBehindPath } from './jars-link';
 import { WeeklyChart } from './weekly-chart';
 import './weekly-print.css';
+import { countOf } from '../../../lib/count-text';
 
 // Tighter cells than the other analysis tables: a week row with every grain must fit a 1366 px screen.
 const thw = th.replace('px-3', 'px-1.5');
@@ -142,7 +143,12 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                       {w.week}
                     </th>
                     <td className={`${tdw} ${num}`}>
-                      <JarsLink factor="week" level={w.week} period={shown} label={`${w.jars} jars of ${w.week}`}>
+                      <JarsLink
+                        factor="week"
+                        level={w.week}
+                        period={shown}
+                        label={`${countOf(w.jars, 'jar')} of ${w.week}`}
+                      >
                         {w.jars}
                       </JarsLink>
                     </td>
@@ -152,7 +158,7 @@ export function WeeklyScreen({ compact = false }: { compact?: boolean }) {
                         level={w.week}
                         only="contaminated"
                         period={shown}
-                        label={`${w.contaminated} contaminated jars of ${w.week}`}
+                        label={`${countOf(w.contaminated, 'contaminated jar')} of ${w.week}`}
                       >
                         {w.contaminated}
                       </JarsLink>
