@@ -3,8 +3,8 @@ import { contaminatedJarsAmong } from '../incidents/live-incidents';
 /** Deeper lineages than this are cut off: a guard against a cycle, far beyond any real transfer chain. */
 const MAX_TRANSFERS = 64;
 
-/** The columns a jar is counted under (tallied_jars): tally_counts' primary key, then how it was found. */
-export const tallyKeyColumns = [
+/** The combination a jar is counted under: tally_counts' primary key. */
+const comboKeyColumns = [
   'inoculatedOn',
   'grainId',
   'cookRunId',
@@ -13,10 +13,10 @@ export const tallyKeyColumns = [
   'prepBatchId',
   'room',
   'transfers',
-  'contaminated',
-  'foundAfterDays',
-  'contaminant',
 ] as const;
+
+/** The columns a jar is counted under (tallied_jars): its combination, then how it was found. */
+const tallyKeyColumns = [...comboKeyColumns, 'contaminated', 'foundAfterDays', 'contaminant'] as const;
 
 /** The one-factor roll-ups kept in tally_levels: the factor's name there, and its column of tallied_jars. */
 export const tallyLevelFactors = [
@@ -48,19 +48,19 @@ const listOf = (columns: readonly string[]) => columns.map((c) => `\`${c}\``).jo
 export const tallyKeyList = listOf(tallyKeyColumns);
 
 /** tally_counts' primary key: the combination of every factor's key, per day. */
-export const comboKeyList = listOf(tallyKeyColumns.slice(0, 8));
+export const comboKeyList = listOf(comboKeyColumns);
 
 /** tally_detections' primary key: the combination, then days to finding and the contaminant. */
-export const detectionKeyList = listOf([...tallyKeyColumns.slice(0, 8), 'foundAfterDays', 'contaminant']);
+export const detectionKeyList = listOf([...comboKeyColumns, 'foundAfterDays', 'contaminant']);
 
 export interface JarChoice {
-  /** A condition on a jar-id column, or '' for every jar. */
+  /** A condition on a jar-id column (`1` for every jar). */
   on: (column: string) => string;
   /** Its parameters, bound once per use of `on`. */
   params: unknown[];
 }
 
-export const everyJar: JarChoice = { on: () => '', params: [] };
+export const everyJar: JarChoice = { on: () => '1', params: [] };
 
 export function theseJars(ids: readonly number[]): JarChoice {
   // An empty list would read as every jar.
@@ -83,9 +83,8 @@ export function theseJars(ids: readonly number[]): JarChoice {
  */
 export function jarKeysSql(windowDays: number, jars: JarChoice): { sql: string; params: unknown[] } {
   if (!Number.isInteger(windowDays) || windowDays < 0) throw new Error('windowDays must be a whole number');
-  const where = (column: string, lead: 'WHERE' | 'AND') => (jars.params.length ? `${lead} ${jars.on(column)}` : '');
   const sql = `WITH RECURSIVE lineage (jarId, ancestorId, depth) AS (
-      SELECT id, parentJarId, 1 FROM jars WHERE parentJarId IS NOT NULL ${where('id', 'AND')}
+      SELECT id, parentJarId, 1 FROM jars WHERE parentJarId IS NOT NULL AND ${jars.on('id')}
       UNION ALL
       SELECT l.jarId, p.parentJarId, l.depth + 1 FROM lineage l JOIN jars p ON p.id = l.ancestorId
       WHERE p.parentJarId IS NOT NULL AND l.depth < ${MAX_TRANSFERS}
@@ -109,8 +108,8 @@ export function jarKeysSql(windowDays: number, jars: JarChoice): { sql: string; 
       COALESCE(cj.contaminant, '')
     FROM jars j
     LEFT JOIN roots r ON r.jarId = j.id
-    LEFT JOIN (${contaminatedJarsAmong(jars.params.length ? jars.on('live_ij.jarId') : '')}) cj ON cj.jarId = j.id
-    ${where('j.id', 'WHERE')}`;
-  const p = jars.params;
-  return { sql, params: p.length ? [...p, ...p, ...p] : [] };
+    LEFT JOIN (${contaminatedJarsAmong(jars.on('live_ij.jarId'))}) cj ON cj.jarId = j.id
+    WHERE ${jars.on('j.id')}`;
+  // `on` is used three times above: in the lineage, the contaminated jars and the jars themselves.
+  return { sql, params: [...jars.params, ...jars.params, ...jars.params] };
 }

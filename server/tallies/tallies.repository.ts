@@ -13,13 +13,13 @@ import {
 async function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice) {
   await m.query(
     `INSERT INTO tally_levels (factor, inoculatedOn, levelId, room, jars, contaminated)
-      ${levelRollupSql(sign, jars.on('jarId') || '1')}
+      ${levelRollupSql(sign, jars.on('jarId'))}
       ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars), contaminated = contaminated + VALUES(contaminated)`,
     tallyLevelFactors.flatMap(() => jars.params),
   );
   await m.query(
     `INSERT INTO tally_counts (${comboKeyList}, jars, contaminated)
-      SELECT ${comboKeyList}, ${sign} * COUNT(*), ${sign} * SUM(contaminated) FROM tallied_jars WHERE ${jars.on('jarId') || '1'}
+      SELECT ${comboKeyList}, ${sign} * COUNT(*), ${sign} * SUM(contaminated) FROM tallied_jars WHERE ${jars.on('jarId')}
       GROUP BY ${comboKeyList} ORDER BY ${comboKeyList}
       ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars), contaminated = contaminated + VALUES(contaminated)`,
     jars.params,
@@ -27,7 +27,7 @@ async function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice
   await m.query(
     `INSERT INTO tally_detections (${detectionKeyList}, jars)
       SELECT ${detectionKeyList}, ${sign} * COUNT(*) FROM tallied_jars
-      WHERE contaminated = 1 AND ${jars.on('jarId') || '1'}
+      WHERE contaminated = 1 AND ${jars.on('jarId')}
       GROUP BY ${detectionKeyList} ORDER BY ${detectionKeyList}
       ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars)`,
     jars.params,
@@ -42,7 +42,7 @@ export const talliesRepository = {
   /** Takes the jars out of the counts and forgets how they were counted. */
   async forget(m: EntityManager, jars: JarChoice) {
     await addLedgerToCounts(m, -1, jars);
-    await m.query(`DELETE FROM tallied_jars WHERE ${jars.on('jarId') || '1'}`, jars.params);
+    await m.query(`DELETE FROM tallied_jars WHERE ${jars.on('jarId')}`, jars.params);
   },
 
   /** Reads the jars' keys afresh (a locking read: committed changes of others are seen) and counts them. */
