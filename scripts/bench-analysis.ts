@@ -7,7 +7,7 @@
  * how each figure grew (default 200000 alone, about ten minutes; BENCH_SIZES=200000,1000000 takes an hour
  * or more on two cores). Incidents are 4 % of jars unless BENCH_INCIDENTS says otherwise. BENCH_DATA_DIR
  * keeps each size's seeded database there and reuses it next time (migrations still run).
- * BENCH_RUNS (20), BENCH_USERS (20), BENCH_CAUSES_WHOLE=0 skips the every-row causes answer.
+ * BENCH_RUNS (20), BENCH_USERS (20), BENCH_CAUSES_WHOLE=0 skips the every-row causes CSV.
  */
 import 'reflect-metadata';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -20,6 +20,7 @@ import { appDbEnv, startMariaDb } from './mariadb';
 import { INCIDENTS, JARS, MAX_JARS, RUNS, SIZES, USERS, database, dbUser, loadAverage, log } from './bench-config';
 import { benchConcurrent, benchRegisters, type Get } from './bench-registers';
 import { seed } from './bench-seed';
+import { exportCases, screenCases, type BenchCase } from './bench-cases';
 import { runSizes } from './bench-sizes';
 import { signIn } from './bench-sign-in';
 import { formatTable, median, percentile } from './bench-table';
@@ -35,6 +36,43 @@ function dataDirFor(size: number): { dir: string; keep: boolean } {
   const root = process.env.BENCH_DATA_DIR;
   if (root) return { dir: path.resolve(root, `jars-${size}`), keep: true };
   return { dir: mkdtempSync(path.join(tmpdir(), 'asepta-bench-db-')), keep: false };
+}
+
+/** Each case's route and bare SQL, alternately, RUNS times after two warm-ups; a row of the table per case. */
+async function measure(
+  cases: BenchCase[],
+  get: Get,
+  conn: mysql.Connection,
+  figures: Record<string, string>,
+): Promise<string[][]> {
+  const rows: string[][] = [];
+  for (const c of cases) {
+    let size = 0;
+    const route: number[] = [];
+    const bare: number[] = [];
+    for (let i = 0; i < RUNS + 2; i++) {
+      // Alternate the two so that drift on the machine falls on both alike; the first two runs warm caches.
+      const r = await time(async () => {
+        size = (await get(c.url)).size;
+      });
+      const b = c.sql ? await time(() => conn.query(c.sql!.sql, c.sql!.params)) : NaN;
+      if (i >= 2) {
+        route.push(r);
+        bare.push(b);
+      }
+    }
+    const [m, s] = [median(route), median(bare)];
+    figures[c.name] = m.toFixed(1);
+    rows.push([
+      c.name,
+      m.toFixed(1),
+      percentile(route, 95).toFixed(1),
+      c.sql ? s.toFixed(1) : '-',
+      c.sql ? (m / s).toFixed(2) : '-',
+      `${(size / 1024).toFixed(0)} KiB`,
+    ]);
+  }
+  return rows;
 }
 
 async function main() {
@@ -59,8 +97,6 @@ async function main() {
   const { createUser } = await import('../server/users/users.service');
   const { todayLocal } = await import('../server/core/local-time');
   const { frameFor } = await import('../server/analysis/analysis.service');
-  const { ratesQuery, crosstabQuery, combinationsQuery, weeklyQuery } =
-    await import('../server/analysis/analysis.queries');
   const { rebuildTallies } = await import('../server/tallies/tallies.service');
 
   const store = createSessionStore();
@@ -119,80 +155,24 @@ async function main() {
     };
 
     const frame = await frameFor({}, today);
-    const cases = [
-      { name: 'rates (by=grain)', url: '/api/analysis/rates?by=grain', sql: ratesQuery('grain', frame) },
-      { name: 'rates (by=operator)', url: '/api/analysis/rates?by=operator', sql: ratesQuery('operator', frame) },
-      { name: 'rates (by=session)', url: '/api/analysis/rates?by=session', sql: ratesQuery('session', frame) },
-      {
-        name: 'crosstab (grain × cookMinutes)',
-        url: '/api/analysis/crosstab?rows=grain&cols=cookMinutes',
-        sql: crosstabQuery('grain', 'cookMinutes', frame),
-      },
-      {
-        name: 'crosstab (operator × week)',
-        url: '/api/analysis/crosstab?rows=operator&cols=week',
-        sql: crosstabQuery('operator', 'week', frame),
-      },
-      {
-        name: 'rates (by=session), a page (as the screen asks)',
-        url: '/api/analysis/rates?by=session&page=1&pageSize=25',
-        sql: ratesQuery('session', frame),
-      },
-      {
-        name: 'crosstab (operator × week), a window (as the screen asks)',
-        url: '/api/analysis/crosstab?rows=operator&cols=week&page=1&pageSize=25&colPage=1&colPageSize=20',
-        sql: crosstabQuery('operator', 'week', frame),
-      },
-      { name: 'weekly table', url: '/api/analysis/weekly', sql: weeklyQuery(frame) },
-      {
-        name: 'causes, a page (as the screen asks)',
-        url: '/api/analysis/causes?page=1&pageSize=25&order=standing',
-        sql: combinationsQuery(frame),
-      },
-      ...(process.env.BENCH_CAUSES_WHOLE === '0'
-        ? []
-        : [{ name: 'causes, every row (CSV-sized)', url: '/api/analysis/causes', sql: combinationsQuery(frame) }]),
-    ];
-
-    const rows: string[][] = [];
+    const queries = await import('../server/analysis/analysis.queries');
     const figures: Record<string, string> = {};
     const loadBefore = loadAverage();
-    for (const c of cases) {
-      let size = 0;
-      const route: number[] = [];
-      const bare: number[] = [];
-      for (let i = 0; i < RUNS + 2; i++) {
-        // Alternate the two so that drift on the machine falls on both alike; the first two runs warm caches.
-        const r = await time(async () => {
-          size = (await get(c.url)).size;
-        });
-        const b = c.sql ? await time(() => conn.query(c.sql.sql, c.sql.params)) : NaN;
-        if (i >= 2) {
-          route.push(r);
-          bare.push(b);
-        }
-      }
-      const [m, s] = [median(route), median(bare)];
-      figures[c.name] = m.toFixed(1);
-      rows.push([
-        c.name,
-        m.toFixed(1),
-        percentile(route, 95).toFixed(1),
-        c.sql ? s.toFixed(1) : '-',
-        c.sql ? (m / s).toFixed(2) : '-',
-        `${(size / 1024).toFixed(0)} KiB`,
-      ]);
-    }
+    const answers = await measure(screenCases(queries, frame), get, conn, figures);
+    const files = await measure(exportCases(queries, frame), get, conn, figures);
     log('');
     log(
-      `${RUNS} runs each (after 2 warm-up runs); targets at 1,000,000 jars: rates, crosstab and weekly < 150 ms, every answer < 300 kB`,
+      `${RUNS} runs each (after 2 warm-up runs); targets at 1,000,000 jars: rates, crosstab and weekly < 150 ms, causes < 1.5 s, every answer < 300 kB`,
     );
     log(
       `jars: ${JARS}; incidents: ${INCIDENTS}; load average (1, 5, 15 min) before: ${loadBefore}; after: ${loadAverage()}; cores: ${os.cpus().length}`,
     );
     log('tally SQL: the same question asked of the analysis counts directly (the SQL behind the route)');
     const header = ['endpoint', 'route median ms', 'route p95 ms', 'tally SQL median ms', 'ratio', 'answer size'];
-    for (const l of formatTable({ header, rows })) log(l);
+    for (const l of formatTable({ header, rows: answers })) log(l);
+    log('');
+    log('CSV exports: every level or row, a file to download (no page)');
+    for (const l of formatTable({ header, rows: files })) log(l);
 
     const registers = await benchRegisters(get, RUNS);
     for (const r of registers.rows) figures[r[0]!] = r[3]!;

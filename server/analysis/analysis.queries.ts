@@ -1,6 +1,14 @@
 import type { Factor } from '../../shared/enums';
 import { cookBucketSql, factorSql, isoWeekFromYearWeek } from './analysis.factors';
-import { groupedJars, summedSql, type Frame, type SqlQuery } from './grouped-jars';
+import {
+  groupedJars,
+  periodClauses,
+  periodWhere,
+  summedSql,
+  type Frame,
+  type Period,
+  type SqlQuery,
+} from './grouped-jars';
 import {
   cookRunKey,
   cultureKey,
@@ -106,5 +114,27 @@ export function weeklyQuery(f: Frame): SqlQuery {
       FROM (${inner.sql}) k JOIN grains g ON g.id = k.k2
       GROUP BY k.k1, k.k2 ORDER BY k.k1, g.name`,
     params: inner.params,
+  };
+}
+
+/**
+ * Cook runs that have jars inoculated in the period, or were cooked in it, newest first, with their jars.
+ * The jars come from the counts per cook run and day (tally_levels), so the answer does not re-read every jar.
+ */
+export function lethalityQuery(p: Period): SqlQuery {
+  const inPeriod = periodWhere(p, ["t.factor = 'cookRun'"], 't.inoculatedOn');
+  const cooked = periodClauses(p, 'cr.cookedOn');
+  const where = cooked.clauses.length ? `WHERE counted.jars > 0 OR (${cooked.clauses.join(' AND ')})` : '';
+  return {
+    sql: `SELECT cr.code, cr.cookedOn, cr.container, cr.minutesAtPressure, cr.gaugeKPa, cr.altitudeM, cr.f0, cr.f0Source,
+        cr.logPlacement, COALESCE(counted.jars, 0) AS jars, COALESCE(counted.contaminated, 0) AS contaminated
+      FROM cook_runs cr
+      LEFT JOIN (
+        SELECT t.levelId, SUM(t.jars) AS jars, SUM(t.contaminated) AS contaminated
+        FROM tally_levels t ${inPeriod.where} GROUP BY t.levelId
+      ) counted ON counted.levelId = cr.id
+      ${where}
+      ORDER BY cr.cookedOn IS NULL, cr.cookedOn DESC, cr.code DESC`,
+    params: [...inPeriod.params, ...cooked.params],
   };
 }

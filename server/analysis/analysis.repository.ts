@@ -6,6 +6,7 @@ import { periodWhere, type Frame, type Period, type SqlQuery } from './grouped-j
 import {
   combinationsQuery,
   crosstabQuery,
+  lethalityQuery,
   levelCountsQuery,
   num,
   perJar,
@@ -94,33 +95,9 @@ export const analysisRepository = {
     }));
   },
 
-  /** Cook runs that have jars inoculated in the period, or were cooked in it. */
+  /** Cook runs that have jars inoculated in the period, or were cooked in it, newest first. */
   async lethality(p: Period): Promise<LethalityRawRow[]> {
-    const on: string[] = [];
-    const onParams: string[] = [];
-    const cooked: string[] = [];
-    if (p.from) {
-      on.push('j.inoculatedOn >= ?');
-      onParams.push(p.from);
-      cooked.push('cr.cookedOn >= ?');
-    }
-    if (p.to) {
-      on.push('j.inoculatedOn <= ?');
-      onParams.push(p.to);
-      cooked.push('cr.cookedOn <= ?');
-    }
-    const jarFilter = on.length ? `AND ${on.join(' AND ')}` : '';
-    const having = on.length ? `HAVING COUNT(j.id) > 0 OR (${cooked.join(' AND ')})` : '';
-    const raw = await dataSource.query<Raw>(
-      `SELECT cr.code, cr.cookedOn, cr.container, cr.minutesAtPressure, cr.gaugeKPa, cr.altitudeM, cr.f0, cr.f0Source, cr.logPlacement,
-          COUNT(j.id) AS jars, SUM(cj.jarId IS NOT NULL) AS contaminated
-        FROM cook_runs cr
-        LEFT JOIN jars j ON j.cookRunId = cr.id ${jarFilter}
-        LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id
-        GROUP BY cr.id ${having}
-        ORDER BY cr.cookedOn IS NULL, cr.cookedOn, cr.code`,
-      [...onParams, ...onParams],
-    );
+    const raw = await run(lethalityQuery(p));
     return raw.map((r) => ({
       code: String(r.code),
       cookedOn: dateText(r.cookedOn),

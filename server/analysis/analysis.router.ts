@@ -5,6 +5,7 @@ import {
   causesQuerySchema,
   crosstabQuerySchema,
   jarsBehindQuerySchema,
+  lethalityQuerySchema,
   periodQuerySchema,
   ratesQuerySchema,
   type ActionVerdictsQuery,
@@ -12,6 +13,7 @@ import {
   type CausesQuery,
   type CrosstabQuery,
   type JarsBehindQuery,
+  type LethalityQuery,
   type PeriodQuery,
   type RatesQuery,
 } from '../../shared/schemas/analysis';
@@ -68,8 +70,8 @@ analysisRouter.get('/colonisation', validate({ query: periodQuerySchema }), asyn
   answer(res, q.format, await colonisation(q), csv.colonisationCsv);
 });
 
-analysisRouter.get('/lethality', validate({ query: periodQuerySchema }), async (req, res) => {
-  const q = query<PeriodQuery>(req);
+analysisRouter.get('/lethality', validate({ query: lethalityQuerySchema }), async (req, res) => {
+  const q = query<LethalityQuery>(req);
   answer(res, q.format, await lethality(q), csv.lethalityCsv);
 });
 

@@ -18,12 +18,9 @@ export interface SqlQuery {
   params: unknown[];
 }
 
-export function periodWhere(
-  p: Period,
-  extra: string[] = [],
-  column = 'j.inoculatedOn',
-): { where: string; params: string[] } {
-  const clauses = [...extra];
+/** The period as conditions on a date column, joined by AND (none when the period is open). */
+export function periodClauses(p: Period, column: string): { clauses: string[]; params: string[] } {
+  const clauses: string[] = [];
   const params: string[] = [];
   if (p.from) {
     clauses.push(`${column} >= ?`);
@@ -33,7 +30,17 @@ export function periodWhere(
     clauses.push(`${column} <= ?`);
     params.push(p.to);
   }
-  return { where: clauses.length ? `WHERE ${clauses.join(' AND ')}` : '', params };
+  return { clauses, params };
+}
+
+export function periodWhere(
+  p: Period,
+  extra: string[] = [],
+  column = 'j.inoculatedOn',
+): { where: string; params: string[] } {
+  const { clauses, params } = periodClauses(p, column);
+  const all = [...extra, ...clauses];
+  return { where: all.length ? `WHERE ${all.join(' AND ')}` : '', params };
 }
 
 /** The counts' primary-key columns up to the jar's keys, in order (see TallyCount). */

@@ -1,15 +1,15 @@
 import type { CrosstabDto, CrosstabPageDto, RatesDto, RatesPageDto } from '../../shared/schemas/analysis-rates';
 import type { LevelPage } from '../../shared/schemas/analysis';
 
-/** Levels of one page, or all of them when no page is asked for (the CSV keeps every level). */
-function slice<T>(all: T[], page: number | undefined, pageSize: number): [T[], LevelPage] {
+/** Rows of one page, or all of them when no page is asked for (the CSV keeps every row). */
+export function pageOf<T>(all: T[], page: number | undefined, pageSize: number): [T[], LevelPage] {
   if (page === undefined) return [all, { total: all.length, page: null, pageSize: null }];
   return [all.slice((page - 1) * pageSize, page * pageSize), { total: all.length, page, pageSize }];
 }
 
 /** One page of a rates answer's levels; `overall` and `notRecorded` still speak of every jar. */
 export function ratesPage(dto: RatesDto, q: { page?: number | undefined; pageSize: number }): RatesPageDto {
-  const [rows, at] = slice(dto.rows, q.page, q.pageSize);
+  const [rows, at] = pageOf(dto.rows, q.page, q.pageSize);
   return { ...dto, rows, ...at };
 }
 
@@ -18,8 +18,8 @@ export function crosstabPage(
   dto: CrosstabDto,
   q: { page?: number | undefined; pageSize: number; colPage?: number | undefined; colPageSize: number },
 ): CrosstabPageDto {
-  const [rows, rowPage] = slice(dto.rows, q.page, q.pageSize);
-  const [cols, colPage] = slice(dto.cols, q.colPage, q.colPageSize);
+  const [rows, rowPage] = pageOf(dto.rows, q.page, q.pageSize);
+  const [cols, colPage] = pageOf(dto.cols, q.colPage, q.colPageSize);
   const [keepRows, keepCols] = [new Set(rows), new Set(cols)];
   const cells = dto.cells.filter((c) => keepRows.has(c.row) && keepCols.has(c.col));
   return { ...dto, rows, cols, cells, rowPage, colPage };

@@ -1,4 +1,5 @@
 import type { LogPlacement } from '../enums';
+import type { LevelPage } from './analysis';
 import type { CookJudgedBy } from '../stats/cook-verdict';
 
 export interface LethalityRow {
@@ -26,10 +27,15 @@ export interface LethalityRow {
   rate: number | null;
 }
 
-export interface LethalityDto {
+/** A page of the period's cook runs (`total` counts those `only` keeps), newest first. */
+export interface LethalityDto extends LevelPage {
   from: string | null;
   to: string | null;
   target: number;
   containerMinutes: Record<string, number>;
+  only: 'all' | 'below';
+  /** Every cook run of the period, and those below their target, whatever the page and `only`. */
+  runsInPeriod: number;
+  belowTarget: number;
   runs: LethalityRow[];
 }

@@ -13,15 +13,24 @@ const orderIssue = { path: ['to'], message: 'must not be before from' };
 export const periodQuerySchema = periodBase.refine((q) => inOrder(q), orderIssue);
 export type PeriodQuery = z.infer<typeof periodQuerySchema>;
 
-/** A page of levels: without page, every level (the CSV); with page (pageSize default 25, at most 200), that page. */
+/** A page of levels (pageSize default 25, at most 200). */
 const levelPage = {
   page: z.coerce.number().int().min(1).optional(),
   pageSize: z.coerce.number().int().min(1).max(200).default(25),
 };
 
+/**
+ * A JSON answer is always a page, the first unless another is asked for, so that no answer grows with the lab;
+ * the CSV download (format=csv) is the one answer that holds every level.
+ */
+function pagedUnlessCsv<Q extends { format: 'json' | 'csv'; page?: number | undefined }>(q: Q): Q {
+  return q.format === 'csv' ? { ...q, page: undefined } : { ...q, page: q.page ?? 1 };
+}
+
 export const ratesQuerySchema = periodBase
   .extend({ by: factorSchema, ...levelPage })
-  .refine((q) => inOrder(q), orderIssue);
+  .refine((q) => inOrder(q), orderIssue)
+  .transform(pagedUnlessCsv);
 export type RatesQuery = z.infer<typeof ratesQuerySchema>;
 
 export const crosstabQuerySchema = periodBase
@@ -34,20 +43,35 @@ export const crosstabQuerySchema = periodBase
     colPageSize: z.coerce.number().int().min(1).max(100).default(20),
   })
   .refine((q) => inOrder(q), orderIssue)
-  .refine((q) => q.rows !== q.cols, { path: ['cols'], message: 'must be a different factor from rows' });
+  .refine((q) => q.rows !== q.cols, { path: ['cols'], message: 'must be a different factor from rows' })
+  .transform((q) => {
+    const paged = pagedUnlessCsv(q);
+    return { ...paged, colPage: paged.page === undefined ? undefined : (q.colPage ?? 1) };
+  });
 export type CrosstabQuery = z.infer<typeof crosstabQuerySchema>;
 
 export const causesQuerySchema = periodBase
   .extend({
     minJars: z.coerce.number().int().min(1).max(1_000_000).default(1),
-    /** Without page, every row; with page (and pageSize, default 25, at most 200), that page. */
+    /** A page of rows (pageSize default 25, at most 200); see pagedUnlessCsv. */
     page: z.coerce.number().int().min(1).optional(),
     pageSize: z.coerce.number().int().min(1).max(200).default(25),
     /** rank: the order of DESIGN.md §5; standing: leads and their same-jars levels, then elevated, explained, not elevated. */
     order: z.enum(['rank', 'standing']).default('rank'),
   })
-  .refine((q) => inOrder(q), orderIssue);
+  .refine((q) => inOrder(q), orderIssue)
+  .transform(pagedUnlessCsv);
 export type CausesQuery = z.infer<typeof causesQuerySchema>;
+
+export const lethalityQuerySchema = periodBase
+  .extend({
+    /** below: only the runs that fall below their target. */
+    only: z.enum(['all', 'below']).default('all'),
+    ...levelPage,
+  })
+  .refine((q) => inOrder(q), orderIssue)
+  .transform(pagedUnlessCsv);
+export type LethalityQuery = z.infer<typeof lethalityQuerySchema>;
 
 export const beforeAfterQuerySchema = z.object({
   actionId: idSchema,

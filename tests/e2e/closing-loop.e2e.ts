@@ -104,10 +104,15 @@ describe('closing the loop', () => {
     await signIn(page, 'supervisor');
     await page.getByRole('heading', { name: 'Waiting for you' }).waitFor();
     const code = plantedProblems.shortCookRun.code;
-    const lethalityRes = await page.request.get('/api/analysis/lethality');
+    const lethalityRes = await page.request.get('/api/analysis/lethality?only=below');
     expect(lethalityRes.status()).toBe(200);
     const lethality = (await lethalityRes.json()) as LethalityDto;
     expect(lethality.runs.find((r) => r.cookRun === code)).toMatchObject({ belowTarget: true, judgedBy: 'minutes' });
+    // The screen pages the runs newest first; its filter brings the low ones together.
+    await page.goto('/analysis/lethality');
+    await page.getByLabel('Show').selectOption('below');
+    await page.getByRole('rowheader', { name: code }).waitFor();
+    expect(await page.getByRole('rowheader').allTextContents()).toEqual(lethality.runs.map((r) => r.cookRun));
     await page.goto('/cook-runs?belowTarget=true');
     await page.getByRole('link', { name: code }).waitFor();
     await page.goto('/analysis/weekly');

@@ -1,8 +1,9 @@
 import padjust from '@stdlib/stats-padjust';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { factors, type Factor } from '../../shared/enums';
-import type { CauseRow, CausesDto } from '../../shared/schemas/analysis-causes';
+import type { CauseRow } from '../../shared/schemas/analysis-causes';
 import { createTestApp } from '../setup/test-app';
+import { everyCause } from '../setup/analysis-pages';
 import { signedIn } from '../setup/factories';
 import { addDays, isoWeekLabel, planted } from './analysis-planted.fixture';
 import {
@@ -28,9 +29,7 @@ beforeAll(async () => {
 describe('GET /api/analysis/causes', () => {
   let causes: CauseRow[];
   beforeAll(async () => {
-    const res = await reader.agent.get('/api/analysis/causes');
-    if (res.status !== 200) throw new Error(`causes answered ${res.status}`);
-    causes = (res.body as CausesDto).causes;
+    causes = (await everyCause(reader.agent)).causes;
   });
 
   // DESIGN.md §3 (revised for issue 9): likely causes count settled jars only; incubating ones are reported beside.
@@ -153,9 +152,7 @@ describe('GET /api/analysis/causes', () => {
   });
 
   it('skips levels smaller than minJars', async () => {
-    const res = await reader.agent.get('/api/analysis/causes?minJars=20');
-    expect(res.status).toBe(200);
-    const body = res.body as CausesDto;
+    const body = await everyCause(reader.agent, { minJars: 20 });
     expect(body.causes.every((c) => c.jars >= 20)).toBe(true);
     expect(body.causes.some((c) => c.factor === 'session')).toBe(false);
     const q = padjust(

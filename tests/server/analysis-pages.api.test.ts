@@ -37,8 +37,9 @@ beforeAll(async () => {
 
 describe('analysis answers a page of levels', () => {
   it('pages rates by session, the overall figures still over every jar', async () => {
+    // A JSON answer is always a page: without one asked for, the first page of 25.
     const whole = (await client.agent.get(`/api/analysis/rates?by=session&${period}`)).body as RatesPageDto;
-    expect(whole).toMatchObject({ total: 3, page: null, pageSize: null });
+    expect(whole).toMatchObject({ total: 3, page: 1, pageSize: 25 });
     expect(whole.rows).toHaveLength(3);
     const res = await client.agent.get(`/api/analysis/rates?by=session&${period}&page=2&pageSize=1`);
     expect(res.status).toBe(200);
@@ -52,7 +53,8 @@ describe('analysis answers a page of levels', () => {
   it('windows a crosstab on both axes and keeps only the cells inside', async () => {
     const whole = (await client.agent.get(`/api/analysis/crosstab?rows=session&cols=grain&${period}`))
       .body as CrosstabPageDto;
-    expect(whole.rowPage).toEqual({ total: 3, page: null, pageSize: null });
+    expect(whole.rowPage).toEqual({ total: 3, page: 1, pageSize: 25 });
+    expect(whole.colPage).toEqual({ total: 2, page: 1, pageSize: 20 });
     expect(whole.cells).toHaveLength(6);
     const res = await client.agent.get(
       `/api/analysis/crosstab?rows=session&cols=grain&${period}&page=1&pageSize=2&colPage=2&colPageSize=1`,
@@ -65,6 +67,25 @@ describe('analysis answers a page of levels', () => {
     expect(window.cols).toEqual(whole.cols.slice(1, 2));
     expect(window.cells).toEqual(whole.cells.filter((c) => window.rows.includes(c.row) && window.cols.includes(c.col)));
     expect(window.cells).toHaveLength(2);
+  });
+
+  it('caps a JSON answer at its page size even when no page is asked for; the CSV holds every level', async () => {
+    const capped = (await client.agent.get(`/api/analysis/rates?by=session&${period}&pageSize=2`)).body as RatesPageDto;
+    expect(capped).toMatchObject({ total: 3, page: 1, pageSize: 2 });
+    expect(capped.rows).toHaveLength(2);
+    const crosstab = (await client.agent.get(`/api/analysis/crosstab?rows=session&cols=grain&${period}&pageSize=1`))
+      .body as CrosstabPageDto;
+    expect(crosstab.rows).toHaveLength(1);
+    expect(crosstab.cells).toHaveLength(2);
+    const file = await client.agent.get(`/api/analysis/rates?by=session&${period}&pageSize=2&page=1&format=csv`);
+    expect(file.status).toBe(200);
+    // A header, one line per session and the all-jars line: the export ignores paging.
+    expect(
+      file.text
+        .replace(/^\uFEFF/, '')
+        .trim()
+        .split('\r\n'),
+    ).toHaveLength(1 + 3 + 1);
   });
 
   it('refuses a page size past the most a screen asks for, naming the field', async () => {

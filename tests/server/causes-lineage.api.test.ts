@@ -5,6 +5,7 @@ import type { CauseRow, CausesDto } from '../../shared/schemas/analysis-causes';
 import type { FactorLevel } from '../../shared/schemas/analysis';
 import { signedIn, type Client } from '../setup/factories';
 import { createTestApp } from '../setup/test-app';
+import { everyCause } from '../setup/analysis-pages';
 import { clearProduction } from './analysis-planted.fixture';
 import { lineagePlan, plantLineageHistory, type PlantedJar } from './causes-lineage.fixture';
 
@@ -81,9 +82,7 @@ beforeAll(async () => {
   await clearProduction();
   jars = await plantLineageHistory();
   reader = await signedIn(app, 'supervisor');
-  const res = await reader.agent.get('/api/analysis/causes');
-  if (res.status !== 200) throw new Error(`causes answered ${res.status}: ${JSON.stringify(res.body)}`);
-  body = res.body as CausesDto;
+  body = await everyCause(reader.agent);
 });
 
 describe('GET /api/analysis/causes on a planted history with lineage, moves and a confounded operator', () => {

@@ -1,8 +1,7 @@
 import { IsNull, Not } from 'typeorm';
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { CausesDto } from '../../shared/schemas/analysis-causes';
 import type { LethalityDto } from '../../shared/schemas/analysis-lethality';
-import type { RatesDto } from '../../shared/schemas/analysis-rates';
+import type { RatesPageDto } from '../../shared/schemas/analysis-rates';
 import type { WeeklyDto } from '../../shared/schemas/analysis-weekly';
 
 import { dataSource } from '../../server/db/data-source';
@@ -18,6 +17,7 @@ import { plantedProblems, weekBefore } from '../../server/demo-lab/planted-probl
 import { clearProduction } from '../setup/clear-production';
 import { signedIn } from '../setup/factories';
 import { createTestApp } from '../setup/test-app';
+import { everyCause } from '../setup/analysis-pages';
 import { runPageSchema } from './cook-runs.fixtures';
 import { bodyOf } from '../setup/bodies';
 
@@ -93,9 +93,10 @@ describe('loadDemoLab', () => {
     const supervisor = await signedIn(app, 'supervisor');
     const res = await supervisor.agent
       .get('/api/analysis/rates')
-      .query({ by: 'prepBatch', from: firstDay, to: LOADED_ON });
+      .query({ by: 'prepBatch', from: firstDay, to: LOADED_ON, pageSize: 200 });
     expect(res.status).toBe(200);
-    const rates = res.body as RatesDto;
+    const rates = res.body as RatesPageDto;
+    expect(rates.total).toBe(EXPECTED_BATCHES);
     expect(rates.rows).toHaveLength(EXPECTED_BATCHES);
     expect(rates.rows.reduce((s, r) => s + r.jars, 0)).toBe(EXPECTED_JARS);
   });
@@ -104,9 +105,7 @@ describe('loadDemoLab', () => {
     // Ranked by Fisher's exact test (Fisher, The Design of Experiments, 1935) with Benjamini–Hochberg q-values (1995),
     // both checked number for number in analysis.api.test.ts; this checks only the demo's order.
     const supervisor = await signedIn(app, 'supervisor');
-    const res = await supervisor.agent.get('/api/analysis/causes').query({ from: firstDay, to: LOADED_ON });
-    expect(res.status).toBe(200);
-    const causes = (res.body as CausesDto).causes;
+    const { causes } = await everyCause(supervisor.agent, { from: firstDay, to: LOADED_ON });
     const firstOf = (factor: string) => causes.find((c) => c.factor === factor)?.level;
     expect(firstOf('cookRun')).toBe(plantedProblems.shortCookRun.code);
     expect(firstOf('culture')).toBe(plantedProblems.badCulture.code);
@@ -126,12 +125,17 @@ describe('loadDemoLab', () => {
   it('lists the short cook run below its cook target although its estimated F0 passes 15 (DESIGN §4.6)', async () => {
     const supervisor = await signedIn(app, 'supervisor');
     const code = plantedProblems.shortCookRun.code;
-    const lethality = await supervisor.agent.get('/api/analysis/lethality').query({ from: firstDay, to: LOADED_ON });
-    const short = (lethality.body as LethalityDto).runs.find((r) => r.cookRun === code)!;
+    const lethality = await supervisor.agent
+      .get('/api/analysis/lethality')
+      .query({ from: firstDay, to: LOADED_ON, only: 'below' });
+    const below = lethality.body as LethalityDto;
+    const short = below.runs.find((r) => r.cookRun === code)!;
     // 45 min at the steam temperature gives an upper-bound F0 near 42; 1 L jars need 90 min (TRADE.md §1, common practice).
     expect(short.f0!).toBeGreaterThan(15);
     expect(short).toMatchObject({ judgedBy: 'minutes', minimumMinutes: 90, f0UpperBound: true, belowTarget: true });
-    expect((lethality.body as LethalityDto).runs.filter((r) => r.belowTarget).map((r) => r.cookRun)).toEqual([code]);
+    expect(below.runs.map((r) => r.cookRun)).toEqual([code]);
+    expect(below).toMatchObject({ total: 1, belowTarget: 1, only: 'below' });
+    expect(below.runsInPeriod).toBeGreaterThan(1);
     const list = await supervisor.agent.get('/api/cook-runs').query({ belowTarget: 'true' });
     expect(bodyOf(list, runPageSchema).items.map((r) => r.code)).toEqual([code]);
   });

@@ -41,6 +41,8 @@ export interface CrosstabWindow {
 
 export type JarsOnly = 'all' | 'settled' | 'contaminated' | 'incubating';
 
+export type LethalityOnly = LethalityDto['only'];
+
 /** The address of a table's CSV export: the same route and filters, answered as a file. */
 export const csvUrl = (path: string, query: Record<string, string | number | undefined>) =>
   apiUrl(`/analysis/${path}`, { ...query, format: 'csv' });
@@ -93,10 +95,10 @@ export const analysisQueries = {
       queryFn: ({ signal }) => get<ColonisationDto>('colonisation', { ...p }, signal),
       placeholderData: keepPreviousData,
     }),
-  lethality: (p: Period) =>
+  lethality: (p: Period, only: LethalityOnly, page: number, pageSize: number) =>
     queryOptions({
-      queryKey: [...analysisQueries.all, 'lethality', p] as const,
-      queryFn: ({ signal }) => get<LethalityDto>('lethality', { ...p }, signal),
+      queryKey: [...analysisQueries.all, 'lethality', p, only, page, pageSize] as const,
+      queryFn: ({ signal }) => get<LethalityDto>('lethality', { ...p, only, page, pageSize }, signal),
       placeholderData: keepPreviousData,
     }),
   jars: (

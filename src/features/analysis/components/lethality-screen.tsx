@@ -5,7 +5,10 @@ import { Badge } from '../../../components/ui/badge';
 import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { cautionFootnote, cautions } from '../../../config/cautions';
-import { analysisQueries, csvUrl, readPeriod } from '../api/analysis-queries';
+import { Select } from '../../../components/ui/select';
+import { Pager } from '../../../components/ui/table/pager';
+import { pageSizes, patchParams, readTableState } from '../../../lib/list-params';
+import { analysisQueries, csvUrl, readPeriod, type LethalityOnly } from '../api/analysis-queries';
 import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
 import { percent } from './labels';
 import { PlainTableHead } from '../../../components/ui/table/table-parts';
@@ -36,11 +39,20 @@ const runHeadings = [
   numberHeading('Contaminated'),
 ];
 
-/** Cook runs with their F0, low ones flagged against the lab's target. */
+const onlyOptions = [
+  { value: 'all', label: 'Every cook run' },
+  { value: 'below', label: 'Only runs below their target' },
+];
+
+const readOnly = (params: URLSearchParams): LethalityOnly => (params.get('only') === 'below' ? 'below' : 'all');
+
+/** Cook runs with their F0, newest first and a page at a time, low ones flagged against the lab's target. */
 export function LethalityScreen() {
-  const [params] = useSearchParams();
+  const [params, setParams] = useSearchParams();
   const period = readPeriod(params);
-  const lethality = useQuery(analysisQueries.lethality(period));
+  const only = readOnly(params);
+  const { page, pageSize } = readTableState(params, []);
+  const lethality = useQuery(analysisQueries.lethality(period, only, page, pageSize));
   const data = lethality.data;
   const pressure = cautions.find((c) => c.id === 'pressure');
 
@@ -49,7 +61,7 @@ export function LethalityScreen() {
       <PageHeader
         title="Cook lethality"
         description="F0 of each cook run: minutes at 121.1 °C its cycle is worth (z = 10 °C). Only a log from a probe at the jar centre measures what the grain received; a chamber log or the estimate from the steam temperature is an upper bound, so those runs are judged by their minutes at pressure against the container’s minimum."
-        actions={<CsvLink href={csvUrl('lethality', { ...period })} />}
+        actions={<CsvLink href={csvUrl('lethality', { ...period, only })} />}
       />
       <AnalysisTabs />
       {pressure && (
@@ -58,8 +70,22 @@ export function LethalityScreen() {
           <p className="mt-1 text-sm text-muted">{cautionFootnote}</p>
         </Notice>
       )}
-      <PeriodPicker period={period} />
-      <LoadState query={lethality} isEmpty={!data || data.runs.length === 0} emptyTitle="No cook runs in this period.">
+      <PeriodPicker period={period}>
+        <Select
+          label="Show"
+          options={onlyOptions}
+          value={only}
+          onChange={(e) => setParams(patchParams(params, { only: e.target.value, page: undefined }))}
+          className="w-64"
+        />
+      </PeriodPicker>
+      <LoadState
+        query={lethality}
+        isEmpty={!data || data.total === 0}
+        emptyTitle={
+          only === 'below' ? 'No cook run in this period falls below its target.' : 'No cook runs in this period.'
+        }
+      >
         {data && (
           <>
             <p className="mb-3">
@@ -68,8 +94,7 @@ export function LethalityScreen() {
               {Object.entries(data.containerMinutes)
                 .map(([name, minutes]) => `${name} ${minutes} min`)
                 .join(', ')}
-              ). <strong>{data.runs.filter((r) => r.belowTarget).length}</strong> of {data.runs.length} runs fall below
-              their target.
+              ). <strong>{data.belowTarget}</strong> of {data.runsInPeriod} runs fall below their target.
             </p>
             <Table caption="Cook runs with F0">
               <thead>
@@ -100,6 +125,14 @@ export function LethalityScreen() {
                 ))}
               </tbody>
             </Table>
+            {data.total > pageSizes[0] && (
+              <Pager
+                page={page}
+                pageSize={pageSize}
+                total={data.total}
+                onChange={(patch) => setParams(patchParams(params, patch))}
+              />
+            )}
           </>
         )}
       </LoadState>
