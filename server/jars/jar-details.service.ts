@@ -21,9 +21,9 @@ export async function setJarDetails(m: EntityManager, ids: number[], details: Ja
 
 /**
  * A grain-to-grain jar takes its inoculum from the parent jar, not from a culture. Jars already made from
- * this one count for its root culture too: a caller that re-parents a jar with descendants rebuilds the counts.
+ * this one count for its root culture and their transfers too, so they are counted again with it.
  */
 export async function setParentJar(m: EntityManager, id: number, parentJarId: number): Promise<void> {
   await jarsRepository.updateByIds(m, [id], { parentJarId, cultureId: null });
-  await recountJars(m, [id]);
+  await recountJars(m, await jarsRepository.idsFromJar(m, id));
 }

@@ -90,6 +90,18 @@ export const jarsRepository = {
     ids.length === 0 ? Promise.resolve() : m.update(Jar, { id: In(ids) }, fields),
   insertMany: (m: EntityManager, rows: QueryDeepPartialEntity<Jar>[]) => insertMany(m, Jar, rows),
 
+  /** The jar and every jar made from it, at any depth. */
+  async idsFromJar(m: EntityManager, id: number): Promise<number[]> {
+    const rows: { id: number | string }[] = await m.query(
+      `WITH RECURSIVE below (id) AS (
+        SELECT id FROM jars WHERE id = ?
+        UNION SELECT j.id FROM jars j JOIN below b ON j.parentJarId = b.id
+      ) SELECT id FROM below`,
+      [id],
+    );
+    return rows.map((r) => Number(r.id));
+  },
+
   /**
    * The page's ids from the jar table's own indexes first, then the display columns joined for those
    * ids alone: neither the page nor its capped total joins every jar.

@@ -1,12 +1,13 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/data-source';
 import { rebuildTallies, recountJars } from '../../server/tallies/tallies.service';
+import { setParentJar } from '../../server/jars/jar-details.service';
 import { comboKeyList, detectionKeyList, tallyKeyList } from '../../server/tallies/jar-keys.sql';
 import { contaminants } from '../../shared/enums';
 import { createTestApp } from '../setup/test-app';
 import { signedIn, type Client } from '../setup/factories';
 import { csv, importingSupervisor, row } from './imports.fixtures';
-import { jarEvent, jarFixtures, makeJars, type JarRow } from './jars.fixtures';
+import { batchBody, jarEvent, jarFixtures, makeJars, type JarRow } from './jars.fixtures';
 import { send } from './incidents-review.fixtures';
 
 const app = createTestApp();
@@ -216,6 +217,34 @@ describe('the analysis counts kept with every write', () => {
     expect(keptLedger).toEqual(await ledger());
     expect(keptLevels).toEqual(await levels());
     expect(keptDetections).toEqual(await detections());
+  });
+
+  it('count the jars made from a re-parented jar again, with their new root culture and transfers', async () => {
+    const [first, second] = [await jarFixtures.culture(), await jarFixtures.culture()];
+    const [top] = await makeJars(tech, await batchBody({ count: 1, cultureId: second.id }));
+    const [middle] = await makeJars(tech, await batchBody({ count: 1, cultureId: first.id }));
+    const [child] = await makeJars(
+      tech,
+      await batchBody({
+        count: 1,
+        cultureId: undefined,
+        parentJarId: middle!.id,
+        inoculatedAt: '2026-05-06T10:30:00Z',
+      }),
+    );
+    const childRow = async () =>
+      (
+        await dataSource.query<{ cultureId: number; transfers: number }[]>(
+          'SELECT cultureId, transfers FROM tallied_jars WHERE jarId = ?',
+          [child!.id],
+        )
+      )[0];
+    expect(await childRow()).toMatchObject({ cultureId: first.id, transfers: 1 });
+    await dataSource.transaction((m) => setParentJar(m, middle!.id, top!.id));
+    expect(await childRow()).toMatchObject({ cultureId: second.id, transfers: 2 });
+    const kept = await ledger();
+    await rebuildTallies();
+    expect(kept).toEqual(await ledger());
   });
 
   it('roll back with the write they belong to', async () => {

@@ -41,7 +41,7 @@ const runHeadings = [
 
 const onlyOptions = [
   { value: 'all', label: 'Every cook run' },
-  { value: 'below', label: 'Only runs below their target' },
+  { value: 'below', label: 'Below target only' },
 ];
 
 const readOnly = (params: URLSearchParams): LethalityOnly => (params.get('only') === 'below' ? 'below' : 'all');
@@ -76,7 +76,7 @@ export function LethalityScreen() {
           options={onlyOptions}
           value={only}
           onChange={(e) => setParams(patchParams(params, { only: e.target.value, page: undefined }))}
-          className="w-64"
+          className="w-56"
         />
       </PeriodPicker>
       <LoadState
@@ -103,10 +103,10 @@ export function LethalityScreen() {
               <tbody>
                 {data.runs.map((r) => (
                   <tr key={r.cookRun} className={r.belowTarget ? 'bg-danger-soft' : undefined}>
-                    <th scope="row" className={`${td} font-semibold`}>
+                    <th scope="row" className={`${td} font-semibold whitespace-nowrap`}>
                       {r.cookRun}
                     </th>
-                    <td className={td}>{r.cookedOn ?? '—'}</td>
+                    <td className={`${td} whitespace-nowrap`}>{r.cookedOn ?? '—'}</td>
                     <td className={td}>{r.container ?? '—'}</td>
                     <td className={`${td} ${num}`}>{r.minutesAtPressure}</td>
                     <td className={`${td} ${num}`}>
