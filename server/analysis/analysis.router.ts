@@ -25,7 +25,7 @@ import * as analysis from './analysis.service';
 import { colonisation } from './colonisation';
 import { lethality } from './lethality';
 import { weeklyTable } from './weekly';
-import { crosstabPage, ratesPage } from './level-pages';
+import { crosstabPage } from './level-pages';
 
 export const analysisRouter = Router();
 
@@ -47,7 +47,7 @@ const query = <T>(req: { query: unknown }) => req.query as T;
 
 analysisRouter.get('/rates', validate({ query: ratesQuerySchema }), async (req, res) => {
   const q = query<RatesQuery>(req);
-  answer(res, q.format, ratesPage(await analysis.rates(q.by, q), q), csv.ratesCsv);
+  answer(res, q.format, await analysis.rates(q.by, q), csv.ratesCsv);
 });
 
 analysisRouter.get('/crosstab', validate({ query: crosstabQuerySchema }), async (req, res) => {

@@ -1,26 +1,33 @@
 import type { Factor } from '../../shared/enums';
 import type { CausesDto } from '../../shared/schemas/analysis-causes';
-import type { CrosstabDto, RatesDto } from '../../shared/schemas/analysis-rates';
+import type { CrosstabDto, RatesPageDto } from '../../shared/schemas/analysis-rates';
 import type { JarsBehindDto } from '../../shared/schemas/analysis-jars-behind';
 import type { JarsBehindQuery } from '../../shared/schemas/analysis';
 import { analysisRepository, type Period } from './analysis.repository';
 import { buildCauses, byStanding } from './causes';
+import { pageOf } from './level-pages';
 
 export { compareRates } from './comparison';
 export { frameFor, tally } from './frame';
 import { frameFor, sum, tally } from './frame';
 export { beforeAfter, actionVerdicts } from './before-after';
 
-export async function rates(by: Factor, p: Period): Promise<RatesDto> {
+/** A page of levels (every level without `page`); intervals are worked out for the page's levels alone. */
+export async function rates(
+  by: Factor,
+  p: Period & { page?: number | undefined; pageSize: number },
+): Promise<RatesPageDto> {
   const rows = await analysisRepository.rates(by, await frameFor(p));
   const recorded = rows.filter((r): r is typeof r & { level: string } => r.level !== null);
+  const [shown, at] = pageOf(recorded, p.page, p.pageSize);
   return {
     by,
     from: p.from ?? null,
     to: p.to ?? null,
     overall: tally(sum(rows)),
     notRecorded: sum(rows.filter((r) => r.level === null)).jars,
-    rows: recorded.map((r) => ({ level: r.level, ...tally(r) })),
+    rows: shown.map((r) => ({ level: r.level, ...tally(r) })),
+    ...at,
   };
 }
 

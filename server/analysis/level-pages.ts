@@ -1,16 +1,10 @@
-import type { CrosstabDto, CrosstabPageDto, RatesDto, RatesPageDto } from '../../shared/schemas/analysis-rates';
+import type { CrosstabDto, CrosstabPageDto } from '../../shared/schemas/analysis-rates';
 import type { LevelPage } from '../../shared/schemas/analysis';
 
 /** Rows of one page, or all of them when no page is asked for (the CSV keeps every row). */
 export function pageOf<T>(all: T[], page: number | undefined, pageSize: number): [T[], LevelPage] {
   if (page === undefined) return [all, { total: all.length, page: null, pageSize: null }];
   return [all.slice((page - 1) * pageSize, page * pageSize), { total: all.length, page, pageSize }];
-}
-
-/** One page of a rates answer's levels; `overall` and `notRecorded` still speak of every jar. */
-export function ratesPage(dto: RatesDto, q: { page?: number | undefined; pageSize: number }): RatesPageDto {
-  const [rows, at] = pageOf(dto.rows, q.page, q.pageSize);
-  return { ...dto, rows, ...at };
 }
 
 /** A window of a crosstab: a page of row levels against a page of column levels, and their cells alone. */
