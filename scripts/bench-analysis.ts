@@ -158,7 +158,7 @@ async function main() {
     const queries = await import('../server/analysis/analysis.queries');
     const figures: Record<string, string> = {};
     const loadBefore = loadAverage();
-    const answers = await measure(screenCases(queries, frame), get, conn, figures);
+    const answers = await measure(screenCases(queries, frame, today), get, conn, figures);
     const files = await measure(exportCases(queries, frame), get, conn, figures);
     log('');
     log(

@@ -11,11 +11,11 @@ export interface BenchCase {
 
 type QueryBuilders = Pick<
   typeof Queries,
-  'ratesQuery' | 'crosstabQuery' | 'combinationsQuery' | 'weeklyQuery' | 'lethalityQuery'
+  'ratesQuery' | 'crosstabQuery' | 'combinationsQuery' | 'weeklyQuery' | 'lethalityQuery' | 'colonisationQuery'
 >;
 
 /** JSON answers: each is one page, so its size must not grow with the lab. */
-export function screenCases(q: QueryBuilders, frame: Frame): BenchCase[] {
+export function screenCases(q: QueryBuilders, frame: Frame, today: string): BenchCase[] {
   return [
     { name: 'rates (by=grain)', url: '/api/analysis/rates?by=grain', sql: q.ratesQuery('grain', frame) },
     { name: 'rates (by=operator)', url: '/api/analysis/rates?by=operator', sql: q.ratesQuery('operator', frame) },
@@ -37,7 +37,10 @@ export function screenCases(q: QueryBuilders, frame: Frame): BenchCase[] {
       sql: q.combinationsQuery(frame),
     },
     { name: 'cook lethality', url: '/api/analysis/lethality', sql: q.lethalityQuery(frame) },
-    { name: 'colonisation (reads the jars)', url: '/api/analysis/colonisation' },
+    { name: 'colonisation', url: '/api/analysis/colonisation', sql: q.colonisationQuery(frame, today) },
+    // The jars behind a figure: a page of the records themselves, for a small level and a large one.
+    { name: 'jars behind a session', url: '/api/analysis/jars?factor=session&level=BS-000123' },
+    { name: 'jars behind a grain', url: '/api/analysis/jars?factor=grain&level=rye' },
   ];
 }
 

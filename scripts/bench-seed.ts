@@ -63,16 +63,19 @@ export async function seed(conn: mysql.Connection, today: string, jars: number, 
      SELECT CONCAT('BPB-', LPAD(n, 5, '0')), 1 + n MOD ${GRAIN_LOTS}, DATE_SUB(?, INTERVAL n DIV 10 DAY) FROM ${numbers(prepBatches)}`,
     [today],
   );
-  // Ids start at 1 in the fresh tables, so each jar's attributes follow from its number n.
+  // Ids start at 1 in the fresh tables, so each jar's attributes follow from its number n. A jar colonises 9 to
+  // 16 days after inoculation, so the youngest are still incubating.
+  const inoculatedOn = `DATE_SUB(?, INTERVAL n DIV ${JARS_PER_SESSION * SESSIONS_PER_DAY} DAY)`;
+  const colonisedOn = `DATE_ADD(${inoculatedOn}, INTERVAL 9 + n MOD 8 DAY)`;
   await conn.query(
-    `INSERT INTO jars (label, grainId, prepBatchId, cookRunId, sessionId, cultureId, room, shelf, status, inoculatedAt, inoculatedOn, imported)
+    `INSERT INTO jars (label, grainId, prepBatchId, cookRunId, sessionId, cultureId, room, shelf, status, colonisedOn, inoculatedAt, inoculatedOn, imported)
      SELECT CONCAT('BJ-', LPAD(n, 7, '0')), 1 + (n DIV ${JARS_PER_COOK_RUN}) MOD 7, 1 + n DIV ${JARS_PER_PREP_BATCH},
             1 + n DIV ${JARS_PER_COOK_RUN}, 1 + n DIV ${JARS_PER_SESSION}, 1 + (n DIV ${JARS_PER_SESSION} + n MOD 2) MOD ${CULTURES},
             ELT(1 + (n DIV ${JARS_PER_SESSION}) MOD 4, 'Room A', 'Room B', 'Room C', 'Room D'), CONCAT('S', n MOD 20),
-            'colonised', TIMESTAMP(DATE_SUB(?, INTERVAL n DIV ${JARS_PER_SESSION * SESSIONS_PER_DAY} DAY), '12:00:00'),
-            DATE_SUB(?, INTERVAL n DIV ${JARS_PER_SESSION * SESSIONS_PER_DAY} DAY), 1
+            IF(${colonisedOn} <= ?, 'colonised', 'incubating'), IF(${colonisedOn} <= ?, ${colonisedOn}, NULL),
+            TIMESTAMP(${inoculatedOn}, '12:00:00'), ${inoculatedOn}, 0
      FROM ${numbers(jars)}`,
-    [today, today],
+    [today, today, today, today, today, today, today],
   );
   const step = Math.floor(jars / incidents);
   await conn.query(

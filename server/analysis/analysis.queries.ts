@@ -138,3 +138,23 @@ export function lethalityQuery(p: Period): SqlQuery {
     params: [...inPeriod.params, ...cooked.params],
   };
 }
+
+/**
+ * Jars per grain, outcome and day for the colonisation curves, from the counts of how each jar's time
+ * ends (server/tallies/colonisation-keys.sql.ts): a jar still colonising is censored at today, a jar that
+ * ended uncolonised at its end or today, whichever is sooner.
+ */
+export function colonisationQuery(p: Period, today: string): SqlQuery {
+  const { where, params } = periodWhere(p, ['t.jars <> 0'], 't.inoculatedOn');
+  return {
+    sql: `SELECT g.name AS grain, t.ending = 'colonised' AS colonised,
+        GREATEST(0, CASE t.ending WHEN 'colonised' THEN t.days
+          WHEN 'ended' THEN LEAST(t.days, DATEDIFF(?, t.inoculatedOn))
+          ELSE DATEDIFF(?, t.inoculatedOn) END) AS day,
+        SUM(t.jars) AS jars
+      FROM tally_colonisation t JOIN grains g ON g.id = t.grainId
+      ${where}
+      GROUP BY grain, colonised, day ORDER BY grain, day`,
+    params: [today, today, ...params],
+  };
+}

@@ -5,6 +5,7 @@ import { dateText } from '../core/calendar';
 import { periodWhere, type Frame, type Period, type SqlQuery } from './grouped-jars';
 import {
   combinationsQuery,
+  colonisationQuery,
   crosstabQuery,
   lethalityQuery,
   levelCountsQuery,
@@ -68,25 +69,7 @@ export const analysisRepository = {
 
   /** Days to colonisation per grain; jars that did not colonise are censored at their last known day. */
   async colonisation(p: Period, today: string): Promise<ColonisationRow[]> {
-    // A jar marked colonised or released without a colonisation date (imported history) has no known day.
-    // Imported history has no colonisation days, and its contaminated jars no censoring day worth
-    // trusting: leaving only one kind out would bias the curve, so all imported jars stay out.
-    const { where, params } = periodWhere(p, [
-      'j.imported = 0',
-      "NOT (j.colonisedOn IS NULL AND j.status IN ('colonised', 'released'))",
-    ]);
-    const colonised = 'j.colonisedOn IS NOT NULL AND (cj.foundOn IS NULL OR j.colonisedOn <= cj.foundOn)';
-    const raw = await dataSource.query<Raw>(
-      `SELECT g.name AS grain, (${colonised}) AS colonised,
-          GREATEST(0, CASE WHEN ${colonised} THEN DATEDIFF(j.colonisedOn, j.inoculatedOn)
-            ELSE DATEDIFF(LEAST(COALESCE(cj.foundOn, j.endedOn, ?), ?), j.inoculatedOn) END) AS day,
-          COUNT(*) AS jars
-        FROM jars j JOIN grains g ON g.id = j.grainId
-        LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id
-        ${where}
-        GROUP BY grain, colonised, day ORDER BY grain, day`,
-      [today, today, ...params],
-    );
+    const raw = await run(colonisationQuery(p, today));
     return raw.map((r) => ({
       grain: String(r.grain),
       colonised: num(r.colonised) === 1,

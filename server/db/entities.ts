@@ -28,15 +28,25 @@ import { StaffMember } from '../staff/staff-member.entity';
 import { InoculationSession } from '../sessions/inoculation-session.entity';
 import { SessionStepCheck } from '../sessions/session-step-check.entity';
 import { LabSettings } from '../settings/lab-settings.entity';
-import { TallyCount, TallyDetection, TalliedJar, TallyLevel, TallyState } from '../tallies/tally.entity';
+import {
+  TallyColonisation,
+  TallyCount,
+  TallyDetection,
+  TalliedColonisation,
+  TalliedJar,
+  TallyLevel,
+  TallyState,
+} from '../tallies/tally.entity';
 import { RetrainRequest } from '../training/retrain-request.entity';
 import { TrainingRecord } from '../training/training-record.entity';
 import { User } from '../users/user.entity';
 
 /** Listed as classes, not globs: Vitest and tsx both load them the same way. */
 export const entities = [
+  TallyColonisation,
   TallyCount,
   TallyDetection,
+  TalliedColonisation,
   TallyLevel,
   TalliedJar,
   TallyState,

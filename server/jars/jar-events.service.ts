@@ -125,8 +125,9 @@ export async function applyEvent(
 
   await jarsRepository.insertEvents(m, [event]);
   if (Object.keys(changes).length > 0) await jarsRepository.updateJar(m, jar.id, changes);
-  // The counts key a jar on the room it stood in at finding or at the end of its window.
-  if (event.type === 'moved') await recountJars(m, [jar.id]);
+  // The counts key a jar on the room it stood in at finding or at the end of its window, and its colonisation
+  // time on its status and its colonised and ended days.
+  if (event.type === 'moved' || Object.keys(changes).length > 0) await recountJars(m, [jar.id]);
   Object.assign(jar, changes);
   return entries;
 }
@@ -185,6 +186,11 @@ export async function holdLockedJars(
       newValue: 'on-hold',
       reason,
     })),
+  );
+  // A jar's status decides whether its colonisation time is counted (a colonised jar without a day is not).
+  await recountJars(
+    m,
+    jars.map((j) => j.id),
   );
   return jars.map((j) => j.label);
 }

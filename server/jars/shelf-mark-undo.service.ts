@@ -6,6 +6,7 @@ import { dataSource } from '../db/data-source';
 import { lockClaimed, markUndone } from '../idempotency/idempotency.service';
 import type { EventActor } from './jar-events.service';
 import { jarsRepository } from './jars.repository';
+import { recountJars } from '../tallies/tallies.service';
 import { toJarRow } from './jars.mapper';
 
 const noMark = () => notFound('A shelf mark of yours under that key');
@@ -31,6 +32,7 @@ export async function undoShelfMark(actor: EventActor & { id: number }, input: U
     await jarsRepository.deleteEvent(m, event.id);
     if (event.newStatus === 'colonised') {
       await jarsRepository.updateJar(m, jar.id, { status: 'incubating', colonisedOn: null });
+      await recountJars(m, [jar.id]);
     }
     await recordAudit(m, actor, [
       {

@@ -8,6 +8,15 @@ import {
   tallyLevelFactors,
   type JarChoice,
 } from './jar-keys.sql';
+import { colonisationKeyList, colonisationKeysSql, colonisationRollupSql } from './colonisation-keys.sql';
+
+/** The jars' colonisation rows as last counted, added to tally_colonisation with `sign`. */
+const addColonisationLedger = (m: EntityManager, sign: 1 | -1, jars: JarChoice) =>
+  m.query(
+    `INSERT INTO tally_colonisation (${colonisationKeyList}, jars) ${colonisationRollupSql(sign, jars.on('jarId'))}
+      ON DUPLICATE KEY UPDATE jars = jars + VALUES(jars)`,
+    jars.params,
+  );
 
 /** The jars' rows as last counted, summed per key and added to tally_counts, tally_detections and tally_levels with `sign`. */
 async function addLedgerToCounts(m: EntityManager, sign: 1 | -1, jars: JarChoice) {
@@ -43,6 +52,8 @@ export const talliesRepository = {
   async forget(m: EntityManager, jars: JarChoice) {
     await addLedgerToCounts(m, -1, jars);
     await m.query(`DELETE FROM tallied_jars WHERE ${jars.on('jarId')}`, jars.params);
+    await addColonisationLedger(m, -1, jars);
+    await m.query(`DELETE FROM tallied_colonisation WHERE ${jars.on('jarId')}`, jars.params);
   },
 
   /** Reads the jars' keys afresh (a locking read: committed changes of others are seen) and counts them. */
@@ -50,6 +61,12 @@ export const talliesRepository = {
     const keys = jarKeysSql(windowDays, jars);
     await m.query(`INSERT INTO tallied_jars (jarId, ${tallyKeyList}) ${keys.sql}`, keys.params);
     await addLedgerToCounts(m, 1, jars);
+    const colonisation = colonisationKeysSql(jars);
+    await m.query(
+      `INSERT INTO tallied_colonisation (jarId, ${colonisationKeyList}) ${colonisation.sql}`,
+      colonisation.params,
+    );
+    await addColonisationLedger(m, 1, jars);
   },
 
   /** A rebuild starts from nothing, so no row is left at zero. */
@@ -58,6 +75,8 @@ export const talliesRepository = {
     await m.query('DELETE FROM tally_detections');
     await m.query('DELETE FROM tally_levels');
     await m.query('DELETE FROM tallied_jars');
+    await m.query('DELETE FROM tally_colonisation');
+    await m.query('DELETE FROM tallied_colonisation');
   },
 
   /** Jars that have moved: the only ones whose room in the counts depends on the observation window. */

@@ -137,3 +137,41 @@ export class TallyLevel {
   @Column({ type: 'int' })
   contaminated: number;
 }
+
+/** How each jar's time to colonisation ends, as last counted (see colonisation-keys.sql.ts); eligible jars only. */
+@Entity('tallied_colonisation')
+export class TalliedColonisation {
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  jarId: number;
+
+  @Column({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @Column({ type: 'date' })
+  inoculatedOn: string;
+
+  @Column({ type: 'varchar', length: 9 })
+  ending: string;
+
+  @Column({ type: 'smallint' })
+  days: number;
+}
+
+/** Jars per grain, day and ending of their colonisation time: what the colonisation curves read. */
+@Entity('tally_colonisation')
+export class TallyColonisation {
+  @PrimaryColumn({ type: 'int', unsigned: true })
+  grainId: number;
+
+  @PrimaryColumn({ type: 'date' })
+  inoculatedOn: string;
+
+  @PrimaryColumn({ type: 'varchar', length: 9 })
+  ending: string;
+
+  @PrimaryColumn({ type: 'smallint' })
+  days: number;
+
+  @Column({ type: 'int' })
+  jars: number;
+}

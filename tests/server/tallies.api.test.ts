@@ -1,10 +1,13 @@
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dataSource } from '../../server/db/data-source';
 import { rebuildTallies, recountJars } from '../../server/tallies/tallies.service';
 import { setParentJar } from '../../server/jars/jar-details.service';
 import { comboKeyList, detectionKeyList, tallyKeyList } from '../../server/tallies/jar-keys.sql';
+import { colonisationKeyList } from '../../server/tallies/colonisation-keys.sql';
 import { contaminants } from '../../shared/enums';
 import { createTestApp } from '../setup/test-app';
+import { bodyOf } from '../setup/bodies';
+import { labSettingsSchema } from '../../shared/schemas/settings';
 import { signedIn, type Client } from '../setup/factories';
 import { csv, importingSupervisor, row } from './imports.fixtures';
 import { batchBody, jarEvent, jarFixtures, makeJars, type JarRow } from './jars.fixtures';
@@ -40,6 +43,15 @@ const levels = () =>
     `SELECT factor, inoculatedOn, levelId, room, SUM(jars) AS jars, SUM(contaminated) AS contaminated FROM tally_levels
       GROUP BY factor, inoculatedOn, levelId, room HAVING SUM(jars) <> 0 ORDER BY factor, inoculatedOn, levelId, room`,
   );
+const colonisation = () =>
+  dataSource.query<Record<string, unknown>[]>(
+    `SELECT ${colonisationKeyList}, SUM(jars) AS jars FROM tally_colonisation
+      GROUP BY ${colonisationKeyList} HAVING SUM(jars) <> 0 ORDER BY ${colonisationKeyList}`,
+  );
+const colonisationLedger = () =>
+  dataSource.query<Record<string, unknown>[]>(
+    `SELECT jarId, ${colonisationKeyList} FROM tallied_colonisation ORDER BY jarId`,
+  );
 const ledger = () =>
   dataSource.query<Record<string, unknown>[]>(`SELECT jarId, ${tallyKeyList} FROM tallied_jars ORDER BY jarId`);
 
@@ -53,15 +65,23 @@ describe('the analysis counts kept with every write', () => {
   let tech: Client;
   let sup: Client;
   let admin: Client;
+  let windowBefore: number;
   beforeAll(async () => {
     tech = await signedIn(app, 'technician');
     sup = await signedIn(app, 'supervisor');
     admin = await signedIn(app, 'admin');
     // Other files in this database write rows beside the app (fixtures); start from counts that hold.
     await rebuildTallies();
+    const settings = await admin.agent.get('/api/settings');
+    windowBefore = bodyOf(settings, labSettingsSchema).observationWindowDays;
+  });
+  // The mix changes the observation window; the files that run after this one in its database expect theirs.
+  afterAll(async () => {
+    const res = await send(admin, 'patch', '/api/settings', { observationWindowDays: windowBefore });
+    if (res.status !== 200) throw new Error(`restoring the window answered ${res.status}`);
   });
 
-  it('equal a rebuild from the records after a random mix of jars, moves, incidents, reviews, voids and imports', async () => {
+  it('equal a rebuild from the records after a random mix of jars, moves, incidents, reviews, voids, imports and ends', async () => {
     const next = random(20261203);
     const pick = <T>(xs: readonly T[]): T => xs[Math.floor(next() * xs.length)]!;
     const rooms = ['Incubation A', 'Incubation B', 'Quarantine'];
@@ -71,7 +91,7 @@ describe('the analysis counts kept with every write', () => {
     const cookRuns = [await jarFixtures.cookRun(), await jarFixtures.cookRun()];
     const jars: (JarRow & { inoculatedAt: number })[] = [];
     const incidents: LiveIncident[] = [];
-    const done = { batch: 0, move: 0, flag: 0, edit: 0, review: 0, void: 0, import: 0, window: 0 };
+    const done = { batch: 0, move: 0, flag: 0, edit: 0, review: 0, void: 0, import: 0, life: 0, window: 0 };
     const afterWindow = { ...done };
 
     const makeBatch = async () => {
@@ -165,6 +185,20 @@ describe('the analysis counts kept with every write', () => {
       expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
       done.import += 1;
     };
+    // Colonised, discarded or released: how the jar's colonisation time ends. Refusals (an ended jar, a
+    // contaminated one) write nothing and are not counted.
+    const life = async () => {
+      const jar = pick(jars);
+      const kind = pick(['colonised', 'colonised', 'discarded', 'released'] as const);
+      const body =
+        kind === 'discarded'
+          ? { type: kind, reason: 'cracked lid' }
+          : kind === 'released'
+            ? { type: kind, releasedTo: 'grow-room' }
+            : { type: kind };
+      const res = await jarEvent(tech, jar.id, body);
+      if (res.status === 201 || res.status === 200) done.life += 1;
+    };
     const changeWindow = async () => {
       const res = await send(admin, 'patch', '/api/settings', { observationWindowDays: pick([14, 21, 28]) });
       expect({ status: res.status, body: res.body as unknown }).toMatchObject({ status: 200 });
@@ -173,13 +207,14 @@ describe('the analysis counts kept with every write', () => {
 
     for (let i = 0; i < 4; i += 1) await makeBatch();
     const steps: [number, () => Promise<void>][] = [
-      [0.25, makeBatch],
-      [0.2, move],
-      [0.2, flag],
-      [0.1, edit],
+      [0.22, makeBatch],
+      [0.16, move],
+      [0.18, flag],
+      [0.1, life],
+      [0.08, edit],
       [0.1, review],
       [0.07, voidOne],
-      [0.08, importSome],
+      [0.09, importSome],
     ];
     for (let i = 0; i < 150; i += 1) {
       let r = next();
@@ -209,6 +244,9 @@ describe('the analysis counts kept with every write', () => {
     const keptLedger = await ledger();
     const keptLevels = await levels();
     const keptDetections = await detections();
+    const keptColonisation = await colonisation();
+    const keptColonisationLedger = await colonisationLedger();
+    expect(new Set(keptColonisationLedger.map((r) => r.ending))).toEqual(new Set(['colonised', 'ended', 'open']));
     expect(kept.some((r) => Number(r.contaminated) > 0)).toBe(true);
     expect(keptDetections.length).toBeGreaterThan(0);
     expect(kept.some((r) => Number(r.transfers) > 0)).toBe(true);
@@ -217,6 +255,8 @@ describe('the analysis counts kept with every write', () => {
     expect(keptLedger).toEqual(await ledger());
     expect(keptLevels).toEqual(await levels());
     expect(keptDetections).toEqual(await detections());
+    expect(keptColonisation).toEqual(await colonisation());
+    expect(keptColonisationLedger).toEqual(await colonisationLedger());
   });
 
   it('count the jars made from a re-parented jar again, with their new root culture and transfers', async () => {
