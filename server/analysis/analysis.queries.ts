@@ -13,6 +13,7 @@ import {
   cookRunKey,
   cultureKey,
   grainKey,
+  bareColumnOf,
   keyOn,
   prepBatchKey,
   roomKey,
@@ -26,10 +27,13 @@ export const num = (v: unknown) => Number(v ?? 0);
 export const str = (v: unknown): string | null =>
   v === null || v === undefined ? null : typeof v === 'string' ? v : JSON.stringify(v);
 
-/** A factor's level read off each jar's own row in the counts (tallied_jars tj), for one level's jars. */
+/**
+ * A factor's level read off each jar's own row in the counts (tallied_jars tj), for one level's jars. The
+ * level is matched on the bare column, so that the row's index on it finds the level's jars.
+ */
 export function perJar(factor: Factor, f: Frame, aliasSuffix = '') {
-  const fs = factorSql(factor, f.edges, keyOn(factorSql(factor, f.edges, '').key, 'tj'), aliasSuffix);
-  return { ...fs, joins: ['JOIN tallied_jars tj ON tj.jarId = j.id', ...fs.joins] };
+  const key = factorSql(factor, f.edges, '').key;
+  return factorSql(factor, f.edges, keyOn(bareColumnOf(key), 'tj'), aliasSuffix);
 }
 
 export interface CountRow {

@@ -1,7 +1,7 @@
 import type { Factor, LogPlacement } from '../../shared/enums';
 import { dataSource } from '../db/data-source';
-import { contaminatedJarsSql, jarIsSettledSql, jarIsYoungSql, liveIncidentSql } from '../incidents/live-incidents';
-import { dateText } from '../core/calendar';
+import { jarIsSettledSql, jarIsYoungSql, liveIncidentSql } from '../incidents/live-incidents';
+import { addDays, dateText, mondayOfIsoWeek } from '../core/calendar';
 import { periodWhere, type Frame, type Period, type SqlQuery } from './grouped-jars';
 import {
   combinationsQuery,
@@ -30,6 +30,15 @@ export type { Frame, Period, SqlQuery } from './grouped-jars';
 
 type Raw = Record<string, unknown>[];
 const run = (q: SqlQuery) => dataSource.query<Raw>(q.sql, q.params);
+
+/** A week level names seven days: the period narrowed to them lets the index on the day find the week's jars. */
+function withinWeek(f: Frame, ...levels: ({ factor: Factor; level: string } | undefined)[]): Frame {
+  const week = levels.find((l) => l?.factor === 'week');
+  const monday = week ? mondayOfIsoWeek(week.level) : null;
+  if (!monday) return f;
+  const sunday = addDays(monday, 6);
+  return { ...f, from: f.from && f.from > monday ? f.from : monday, to: f.to && f.to < sunday ? f.to : sunday };
+}
 
 export const analysisRepository = {
   async rates(by: Factor, f: Frame) {
@@ -131,29 +140,33 @@ export const analysisRepository = {
     const fs = perJar(factor, f);
     const second = and ? perJar(and.factor, f, '2') : null;
     const extra = [`${fs.level} = ?`, ...(second ? [`${second.level} = ?`] : [])];
-    const young = jarIsYoungSql('j.inoculatedOn');
-    if (only === 'contaminated') extra.push('cj.jarId IS NOT NULL');
-    if (only === 'incubating') extra.push(`cj.jarId IS NULL AND ${young}`);
-    if (only === 'settled') extra.push(jarIsSettledSql('j.inoculatedOn', 'cj.jarId IS NOT NULL'));
-    const { where, params } = periodWhere(f, extra);
+    // Whether a jar is contaminated, and when and with what it was first found, are on its counted row.
+    const young = jarIsYoungSql('tj.inoculatedOn');
+    if (only === 'contaminated') extra.push('tj.contaminated = 1');
+    if (only === 'incubating') extra.push(`tj.contaminated = 0 AND ${young}`);
+    if (only === 'settled') extra.push(jarIsSettledSql('tj.inoculatedOn', 'tj.contaminated = 1'));
+    const { where, params } = periodWhere(withinWeek(f, { factor, level }, and), extra, 'tj.inoculatedOn');
     const bound = [
       level,
       ...(and ? [and.level] : []),
       ...(only === 'incubating' || only === 'settled' ? [f.windowStart] : []),
       ...params,
     ];
-    // Both factors join the jar's counted row: once.
     const joins = [...new Set([...fs.joins, ...(second?.joins ?? [])])].join(' ');
-    const from = `FROM jars j ${joins} LEFT JOIN (${contaminatedJarsSql}) cj ON cj.jarId = j.id ${where}`;
+    const from = `FROM tallied_jars tj ${joins} ${where}`;
     // The jar's first live incident, so the list can link it.
     const incident = `(SELECT MIN(li.id) FROM incident_jars lij JOIN incidents li ON li.id = lij.incidentId
         WHERE lij.jarId = j.id AND ${liveIncidentSql('li')})`;
     const [items, total] = await Promise.all([
+      // In the order the jars were made, day by day: the counted row's index gives a page without sorting them all.
       dataSource.query<Raw>(
-        `SELECT j.id, j.label, j.inoculatedOn, j.status, cj.jarId IS NOT NULL AS contaminated,
-            (cj.jarId IS NULL AND ${young}) AS incubating, cj.contaminant, cj.foundOn,
+        `SELECT j.id, j.label, j.inoculatedOn, j.status, tj.contaminated,
+            (tj.contaminated = 0 AND ${young}) AS incubating, NULLIF(tj.contaminant, '') AS contaminant,
+            IF(tj.contaminated = 1, DATE_ADD(tj.inoculatedOn, INTERVAL tj.foundAfterDays DAY), NULL) AS foundOn,
             ${incident} AS incidentId
-          ${from} ORDER BY j.inoculatedOn, j.label LIMIT ? OFFSET ?`,
+          FROM (SELECT tj.* ${from} ORDER BY tj.inoculatedOn, tj.jarId LIMIT ? OFFSET ?) tj
+          JOIN jars j ON j.id = tj.jarId
+          ORDER BY tj.inoculatedOn, tj.jarId`,
         [f.windowStart, ...bound, page.limit, page.offset],
       ),
       dataSource.query<{ n: string | number }[]>(`SELECT COUNT(*) AS n ${from}`, bound),

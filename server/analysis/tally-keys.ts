@@ -21,6 +21,20 @@ export const transfersKey: JarKey = '@.transfers';
 export const dayKey: JarKey = '@.inoculatedOn';
 export const yearWeekKey: JarKey = 'YEARWEEK(@.inoculatedOn, 3)';
 
+/**
+ * The bare column behind a key whose missing value (0 or '') reads as NULL. Matched against a level (an id
+ * joined to its table, a room named), the two find the same rows, since no id is 0 and no level is empty;
+ * only the bare column can use an index.
+ */
+const bareColumns: ReadonlyMap<JarKey, JarKey> = new Map([
+  [cookRunKey, '@.cookRunId'],
+  [sessionKey, '@.sessionId'],
+  [cultureKey, '@.cultureId'],
+  [prepBatchKey, '@.prepBatchId'],
+  [roomKey, '@.room'],
+]);
+export const bareColumnOf = (key: JarKey): JarKey => bareColumns.get(key) ?? key;
+
 /** Keys read off the inoculation day: the same in both tables. */
 export const dayKeys: ReadonlySet<JarKey> = new Set([dayKey, yearWeekKey]);
 

@@ -36,6 +36,14 @@ export function isoWeekOf(date: string): string {
   return `${getISOWeekYear(d)}-W${String(getISOWeek(d)).padStart(2, '0')}`;
 }
 
+/** The Monday of an ISO week label such as 2026-W53 (null for anything else): week 1 holds 4 January. */
+export function mondayOfIsoWeek(label: string): string | null {
+  const m = /^(\d{4})-W(\d{2})$/.exec(label);
+  if (!m) return null;
+  const monday = addDays(mondayOf(`${m[1]}-01-04`), 7 * (Number(m[2]) - 1));
+  return isoWeekOf(monday) === label ? monday : null;
+}
+
 /** The `count` week labels ending with the week holding `lastDate`, oldest first. */
 export function weeksEndingAt(lastDate: string, count: number): { week: string; monday: string }[] {
   const lastMonday = mondayOf(lastDate);

@@ -36,10 +36,8 @@ export function liveIncidentJarsSubquery(): string {
 /**
  * One row per contaminated jar with the day (and moment) it was first found and that incident's
  * contaminant (`jarId`, `foundOn`, `foundAt`, `contaminant`): the earliest live incident gives them.
+ * `jarFilter` chooses the jars, a condition on live_ij.jarId such as `live_ij.jarId IN (?, ?)`.
  */
-export const contaminatedJarsSql = contaminatedJarsAmong('');
-
-/** contaminatedJarsSql for some jars only: `jarFilter` is a condition on live_ij.jarId, e.g. `live_ij.jarId IN (?, ?)`. */
 export function contaminatedJarsAmong(jarFilter: string): string {
   return `SELECT live_ij.jarId, MIN(live_i.foundOn) AS foundOn, MIN(live_i.foundAt) AS foundAt,
     SUBSTRING(MIN(CONCAT(live_i.foundOn, live_i.contaminant)), 11) AS contaminant

@@ -1,4 +1,4 @@
-import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { Column, Entity, Index, PrimaryColumn } from 'typeorm';
 
 /**
  * A day and a combination of the keys every factor is read from. A key the jar does not record is 0 (ids)
@@ -61,8 +61,18 @@ export class TallyDetection extends Combination {
   jars: number;
 }
 
-/** Each jar's row in tally_counts as last counted: what a recount takes away before it adds the jar again. */
+/**
+ * Each jar's row in tally_counts as last counted: what a recount takes away before it adds the jar again.
+ * Indexed by each key and day, so that the jars behind a figure are found and paged in the order they were made.
+ */
 @Entity('tallied_jars')
+@Index('IDX_tallied_jars_grain', ['grainId', 'inoculatedOn'])
+@Index('IDX_tallied_jars_cook_run', ['cookRunId', 'inoculatedOn'])
+@Index('IDX_tallied_jars_session', ['sessionId', 'inoculatedOn'])
+@Index('IDX_tallied_jars_culture', ['cultureId', 'inoculatedOn'])
+@Index('IDX_tallied_jars_prep_batch', ['prepBatchId', 'inoculatedOn'])
+@Index('IDX_tallied_jars_room', ['room', 'inoculatedOn'])
+@Index('IDX_tallied_jars_day', ['inoculatedOn'])
 export class TalliedJar {
   @PrimaryColumn({ type: 'int', unsigned: true })
   jarId: number;

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { CrosstabPageDto, RatesPageDto } from '../../shared/schemas/analysis-rates';
+import type { JarsBehindDto } from '../../shared/schemas/analysis-jars-behind';
 import { dataSource } from '../../server/db/data-source';
 import { Jar } from '../../server/jars/jar.entity';
 import { createTestApp } from '../setup/test-app';
@@ -11,13 +12,16 @@ const app = createTestApp();
 // A month no other test plants in, so the period holds these jars alone.
 const period = 'from=2011-03-01&to=2011-03-31';
 let client: Awaited<ReturnType<typeof signedIn>>;
+let prefix: string;
+let sessionCodes: string[];
 
 beforeAll(async () => {
   client = await signedIn(app, 'supervisor');
   const grains = [await jarFixtures.grainId('rye'), await jarFixtures.grainId('millet')];
   const sessions = [];
   for (const day of ['2011-03-02', '2011-03-03', '2011-03-04']) sessions.push(await jarFixtures.session(day));
-  const prefix = uniqueName('LP').toUpperCase();
+  prefix = uniqueName('LP').toUpperCase();
+  sessionCodes = sessions.map((x) => x.code);
   // Two jars per session, one on each grain.
   await dataSource.manager.insert(
     Jar,
@@ -86,6 +90,25 @@ describe('analysis answers a page of levels', () => {
         .trim()
         .split('\r\n'),
     ).toHaveLength(1 + 3 + 1);
+  });
+
+  it('lists the jars behind a week and grain, a session or a room, day by day and a page at a time', async () => {
+    const behind = async (query: string) => {
+      const res = await client.agent.get(`/api/analysis/jars?${query}&${period}`);
+      expect(res.status).toBe(200);
+      return res.body as JarsBehindDto;
+    };
+    // 2 March 2011 is a Wednesday of ISO week 2011-W09 (28 February – 6 March), as are the next two days.
+    const rye = await behind('factor=week&level=2011-W09&factor2=grain&level2=rye');
+    expect(rye.total).toBe(3);
+    expect(rye.items.map((j) => j.label)).toEqual([`${prefix}-00`, `${prefix}-10`, `${prefix}-20`]);
+    expect(rye.items.map((j) => j.inoculatedOn)).toEqual(['2011-03-02', '2011-03-03', '2011-03-04']);
+    expect((await behind('factor=week&level=2011-W10')).total).toBe(0);
+    const session = await behind(`factor=session&level=${sessionCodes[1]}&pageSize=1&page=2`);
+    expect(session).toMatchObject({ total: 2, page: 2, pageSize: 1 });
+    expect(session.items.map((j) => j.label)).toEqual([`${prefix}-11`]);
+    // The planted jars record no room: no level names them.
+    expect((await behind('factor=room&level=Incubation%20A')).total).toBe(0);
   });
 
   it('refuses a page size past the most a screen asks for, naming the field', async () => {
