@@ -14,21 +14,39 @@ export interface KaplanMeier {
   median: number | null;
 }
 
+/** Subjects sharing one time: how many had the event there and how many were censored there. */
+export interface KaplanMeierGroup {
+  time: number;
+  events: number;
+  censored: number;
+}
+
 /** Product-limit estimate. At a tied time, events count before censorings, so the censored are still at risk. */
 export function kaplanMeier(times: number[], events: boolean[]): KaplanMeier {
   if (times.length !== events.length) throw new RangeError('kaplanMeier needs times and events of the same length');
-  for (const t of times) {
-    if (!Number.isFinite(t)) throw new RangeError(`kaplanMeier needs finite times, got ${t}`);
-  }
-  const byTime = new Map<number, { events: number; censored: number }>();
-  times.forEach((t, i) => {
-    const tally = byTime.get(t) ?? { events: 0, censored: 0 };
-    if (events[i]) tally.events++;
-    else tally.censored++;
-    byTime.set(t, tally);
-  });
+  return kaplanMeierOfGroups(
+    times.map((time, i) => ({ time, events: events[i] ? 1 : 0, censored: events[i] ? 0 : 1 })),
+  );
+}
 
-  let atRisk = times.length;
+/**
+ * The same estimate from subjects counted per time (groups may repeat a time), so that a million jars
+ * need not be spread into a million entries first.
+ */
+export function kaplanMeierOfGroups(groups: KaplanMeierGroup[]): KaplanMeier {
+  const byTime = new Map<number, { events: number; censored: number }>();
+  let atRisk = 0;
+  for (const g of groups) {
+    if (!Number.isFinite(g.time)) throw new RangeError(`kaplanMeier needs finite times, got ${g.time}`);
+    if (!(Number.isInteger(g.events) && g.events >= 0 && Number.isInteger(g.censored) && g.censored >= 0))
+      throw new RangeError('kaplanMeier needs whole, non-negative counts');
+    const tally = byTime.get(g.time) ?? { events: 0, censored: 0 };
+    tally.events += g.events;
+    tally.censored += g.censored;
+    byTime.set(g.time, tally);
+    atRisk += g.events + g.censored;
+  }
+
   let survival = 1;
   let median: number | null = null;
   const steps: KaplanMeierStep[] = [];

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { kaplanMeier } from '../../../shared/stats/kaplan-meier';
+import { kaplanMeier, kaplanMeierOfGroups } from '../../../shared/stats/kaplan-meier';
 import { sixMpMedian, sixMpSurvival, sixMpTimes } from './six-mp-example';
 
 describe('kaplanMeier', () => {
@@ -13,6 +13,20 @@ describe('kaplanMeier', () => {
     const at = (t: number) => steps.find((s) => s.time === t)?.survival;
     for (const [time, survival] of sixMpSurvival) expect(at(time)).toBeCloseTo(survival, 4);
     expect(median).toBe(sixMpMedian);
+  });
+
+  it('gives the same curve from subjects counted per time, in any order and with a time split over groups', () => {
+    const groups = [...new Set(times)].reverse().flatMap((time) => {
+      const at = times.flatMap((t, i) => (t === time ? [events[i]] : []));
+      const withEvent = at.filter(Boolean).length;
+      // Each time's subjects in two groups, to show repeats add up.
+      return [
+        { time, events: withEvent, censored: 0 },
+        { time, events: 0, censored: at.length - withEvent },
+      ];
+    });
+    expect(kaplanMeierOfGroups(groups)).toEqual(kaplanMeier(times, events));
+    expect(() => kaplanMeierOfGroups([{ time: 1, events: -1, censored: 0 }])).toThrow(RangeError);
   });
 
   it('counts events before censorings at a tied time and keeps censor-only times as flat steps', () => {
