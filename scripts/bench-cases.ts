@@ -1,5 +1,6 @@
 // The analysis questions the bench asks: as the screens ask them (JSON, a page), then the CSV exports.
 import type { Frame, SqlQuery } from '../server/analysis/grouped-jars';
+import { addDays, isoWeekOf } from '../server/core/calendar';
 import type * as Queries from '../server/analysis/analysis.queries';
 
 export interface BenchCase {
@@ -16,6 +17,8 @@ type QueryBuilders = Pick<
 
 /** JSON answers: each is one page, so its size must not grow with the lab. */
 export function screenCases(q: QueryBuilders, frame: Frame, today: string): BenchCase[] {
+  // Four weeks back: a settled week, as the weekly table's drill-down asks.
+  const week = isoWeekOf(addDays(today, -28));
   return [
     { name: 'rates (by=grain)', url: '/api/analysis/rates?by=grain', sql: q.ratesQuery('grain', frame) },
     { name: 'rates (by=operator)', url: '/api/analysis/rates?by=operator', sql: q.ratesQuery('operator', frame) },
@@ -41,6 +44,10 @@ export function screenCases(q: QueryBuilders, frame: Frame, today: string): Benc
     // The jars behind a figure: a page of the records themselves, for a small level and a large one.
     { name: 'jars behind a session', url: '/api/analysis/jars?factor=session&level=BS-000123' },
     { name: 'jars behind a grain', url: '/api/analysis/jars?factor=grain&level=rye' },
+    {
+      name: "jars behind a week's grain",
+      url: `/api/analysis/jars?factor=week&level=${week}&factor2=grain&level2=rye`,
+    },
   ];
 }
 
