@@ -8,7 +8,8 @@ import { TextInput } from '../../../components/ui/text-input';
 import { paths } from '../../../config/paths';
 import { errorMessage } from '../../../lib/api-client';
 import { cx } from '../../../lib/cx';
-import { patchParams } from '../../../lib/list-params';
+import { Pager } from '../../../components/ui/table/pager';
+import { pageSizes, patchParams } from '../../../lib/list-params';
 import type { Period } from '../api/analysis-queries';
 
 const tabs = [
@@ -156,6 +157,15 @@ export function Table({ caption, children, className, tableClassName }: TablePro
         {children}
       </table>
     </div>
+  );
+}
+
+/** The pager under an analysis table, once there is more than the smallest page; it keeps its place in the URL. */
+export function TablePager({ total, page, pageSize }: { total: number; page: number; pageSize: number }) {
+  const [params, setParams] = useSearchParams();
+  if (total <= pageSizes[0]) return null;
+  return (
+    <Pager page={page} pageSize={pageSize} total={total} onChange={(patch) => setParams(patchParams(params, patch))} />
   );
 }
 

@@ -6,10 +6,9 @@ import { Notice } from '../../../components/ui/notice';
 import { PageHeader } from '../../../components/ui/page-header';
 import { cautionFootnote, cautions } from '../../../config/cautions';
 import { Select } from '../../../components/ui/select';
-import { Pager } from '../../../components/ui/table/pager';
-import { pageSizes, patchParams, readTableState } from '../../../lib/list-params';
+import { patchParams, readTableState } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readPeriod, type LethalityOnly } from '../api/analysis-queries';
-import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
+import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, TablePager, num, td, th } from './analysis-frame';
 import { percent } from './labels';
 import { PlainTableHead } from '../../../components/ui/table/table-parts';
 
@@ -125,14 +124,7 @@ export function LethalityScreen() {
                 ))}
               </tbody>
             </Table>
-            {data.total > pageSizes[0] && (
-              <Pager
-                page={page}
-                pageSize={pageSize}
-                total={data.total}
-                onChange={(patch) => setParams(patchParams(params, patch))}
-              />
-            )}
+            <TablePager total={data.total} page={page} pageSize={pageSize} />
           </>
         )}
       </LoadState>

@@ -4,11 +4,10 @@ import { Bar, BarChart, CartesianGrid, ErrorBar, ResponsiveContainer, Tooltip, X
 import { factorNames } from '../../../../shared/enums';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Select } from '../../../components/ui/select';
-import { Pager } from '../../../components/ui/table/pager';
-import { pageSizes, patchParams, readTableState } from '../../../lib/list-params';
+import { patchParams, readTableState } from '../../../lib/list-params';
 import { analysisQueries, csvUrl, readFactor, readPeriod } from '../api/analysis-queries';
 import { JarsLink } from './jars-link';
-import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, num, td, th } from './analysis-frame';
+import { AnalysisTabs, CsvLink, LoadState, PeriodPicker, Table, TablePager, num, td, th } from './analysis-frame';
 import { factorLabels, factorOptions, interval, percent } from './labels';
 import { countOf } from '../../../lib/count-text';
 
@@ -138,14 +137,7 @@ export function RatesScreen() {
                 </tr>
               </tbody>
             </Table>
-            {data.total > pageSizes[0] && (
-              <Pager
-                page={page}
-                pageSize={pageSize}
-                total={data.total}
-                onChange={(patch) => setParams(patchParams(params, patch))}
-              />
-            )}
+            <TablePager total={data.total} page={page} pageSize={pageSize} />
             {data.notRecorded > 0 && (
               <p className="mt-3 text-sm text-muted">
                 {data.notRecorded} jars in this period do not record a {factorNames[by]} and are left out of the rows
