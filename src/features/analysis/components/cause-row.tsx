@@ -9,6 +9,7 @@ import type { Period } from '../api/analysis-queries';
 import { num } from './analysis-frame';
 import { standingWords } from './cause-words';
 import { factorLabels, formatP, percent, ratio } from './labels';
+import { countOf } from '../../../lib/count-text';
 
 const standingBadge: Record<Standing, { tone: 'danger' | 'warn' | 'neutral' | 'ok'; label: string }> = {
   lead: { tone: 'danger', label: 'Lead' },
@@ -71,9 +72,7 @@ function Hint({ hint, basis, sameJars }: { hint: string; basis: string | null; s
       <summary className="cursor-pointer">
         {first}{' '}
         {sameJars.length > 0 && (
-          <span className="text-sm text-muted">
-            · same jars as {sameJars.length} other {sameJars.length === 1 ? 'level' : 'levels'}{' '}
-          </span>
+          <span className="text-sm text-muted">· same jars as {countOf(sameJars.length, 'other level')} </span>
         )}
         <span className="text-sm text-accent underline group-open:hidden">More</span>
       </summary>

@@ -4,6 +4,7 @@ import { paths } from '../../../config/paths';
 import type { Period } from '../api/analysis-queries';
 import { adjustedWords, crudeWords, levelWords, timesRest } from './cause-words';
 import { factorLabels } from './labels';
+import { countOf } from '../../../lib/count-text';
 
 /** The leads first, each in plain words with its crude and adjusted figures; same-jars levels fold under it. */
 export function LeadCards({ leads, period }: { leads: LeadDto[]; period: Period }) {
@@ -46,7 +47,7 @@ export function LeadCards({ leads, period }: { leads: LeadDto[]; period: Period 
             {lead.sameJars.length > 0 && (
               <details className="mt-2">
                 <summary className="cursor-pointer text-sm">
-                  {lead.sameJars.length} {lead.sameJars.length === 1 ? 'level holds' : 'levels hold'} the same jars
+                  {countOf(lead.sameJars.length, 'level holds', 'levels hold')} the same jars
                 </summary>
                 <p className="mt-1 text-sm">
                   {lead.sameJars.map(levelWords).join('; ')} — the data cannot tell these apart from {levelWords(lead)}.

@@ -3,6 +3,7 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/notice';
 import type { HistoryImportAnswer } from '../api/send-history';
 import { PlainTableHead } from '../../../components/ui/table/table-parts';
+import { countOf } from '../../../lib/count-text';
 
 /** A browser table of tens of thousands of rows helps no one; the rest go into the download. */
 const shownErrors = 500;
@@ -28,7 +29,7 @@ export function ImportResult({ answer, fileName }: { answer: HistoryImportAnswer
     return (
       <Notice
         tone="ok"
-        title={`Imported ${jars} ${jars === 1 ? 'jar' : 'jars'} and ${incidents} ${incidents === 1 ? 'incident' : 'incidents'} from ${fileName}.`}
+        title={`Imported ${countOf(jars, 'jar')} and ${countOf(incidents, 'incident')} from ${fileName}.`}
       >
         <p>
           Contaminated jars are filed as closed incidents with the verdict confirmed. Clean jars inoculated within the
@@ -50,7 +51,7 @@ export function ImportResult({ answer, fileName }: { answer: HistoryImportAnswer
     <div className="space-y-4">
       <Notice
         tone="danger"
-        title={`${fileName} has ${errors.length} ${errors.length === 1 ? 'problem' : 'problems'}. Nothing was imported.`}
+        title={`${fileName} has ${countOf(errors.length, 'problem')}. Nothing was imported.`}
         action={
           errors.length > shownErrors && (
             <Button variant="secondary" onClick={() => downloadErrors(errors, fileName)}>

@@ -7,6 +7,7 @@ import { FullPageSpinner } from '../../../components/ui/spinner';
 import { errorMessage } from '../../../lib/api-client';
 import { cx } from '../../../lib/cx';
 import { jarQrUrl, jarsQueries } from '../api/jars-queries';
+import { countOf } from '../../../lib/count-text';
 
 export type LabelLayout = 'sheet' | 'roll';
 
@@ -39,7 +40,7 @@ export function LabelSheet({ query, layout, onLayout }: Props) {
       <div className="no-print">
         <PageHeader
           title="Jar labels"
-          description={`${items.length} ${items.length === 1 ? 'label' : 'labels'}. Each QR code opens the jar’s page on any phone.`}
+          description={`${countOf(items.length, 'label')}. Each QR code opens the jar’s page on any phone.`}
           actions={
             <>
               <fieldset className="flex gap-2">

@@ -13,6 +13,7 @@ import { errorMessage } from '../../../lib/api-client';
 import { jarsQueries } from '../api/jars-queries';
 import { useHoldLineage } from '../api/use-hold-lineage';
 import { JarStatusBadge } from './jar-status-badge';
+import { countOf } from '../../../lib/count-text';
 
 type JarNode = Extract<LineageTreeDto['node'], { kind: 'jar' }>;
 
@@ -117,11 +118,7 @@ export function LineageView({ kind, id, canHold }: { kind: 'culture' | 'jar'; id
         }
       />
       {result && (
-        <Notice
-          tone="ok"
-          title={`${result.held.length} ${result.held.length === 1 ? 'jar' : 'jars'} put on hold.`}
-          className="mb-6"
-        >
+        <Notice tone="ok" title={`${countOf(result.held.length, 'jar')} put on hold.`} className="mb-6">
           <p className="font-medium">For recall:</p>
           <RecallList rows={result.recall} />
         </Notice>
@@ -133,7 +130,7 @@ export function LineageView({ kind, id, canHold }: { kind: 'culture' | 'jar'; id
         open={confirming}
         onClose={() => setConfirming(false)}
         title={`Hold what was made from ${name}?`}
-        confirmLabel={`Hold ${preview.hold.length} ${preview.hold.length === 1 ? 'jar' : 'jars'}`}
+        confirmLabel={`Hold ${countOf(preview.hold.length, 'jar')}`}
         pending={hold.isPending}
         error={hold.error ? errorMessage(hold.error) : undefined}
         onConfirm={async () => {

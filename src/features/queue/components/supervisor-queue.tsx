@@ -9,6 +9,7 @@ import { paths } from '../../../config/paths';
 import { formatDate } from '../../../lib/format';
 import { queueQueries, useMarkAlertSeen } from '../api/queue-queries';
 import { QueueItem, QueueSection } from './queue-section';
+import { countOf } from '../../../lib/count-text';
 
 const percent = (r: number) => `${(r * 100).toFixed(1)} %`;
 const actionTo = (a: QueueAction) => `${paths.incident.to(a.incidentId)}#action-${a.id}`;
@@ -76,7 +77,7 @@ export function SupervisorQueue() {
         >
           {q.incidentsToReview.items.map((i) => (
             <QueueItem key={i.id} to={paths.incident.to(i.id)} aside={`found ${formatDate(i.foundOn)} · ${i.status}`}>
-              #{i.id} {contaminantNames[i.contaminant]}, {i.jarCount} {i.jarCount === 1 ? 'jar' : 'jars'}
+              #{i.id} {contaminantNames[i.contaminant]}, {countOf(i.jarCount, 'jar')}
             </QueueItem>
           ))}
         </QueueSection>
