@@ -88,9 +88,16 @@ export function LeadNotProof() {
     <Notice tone="info" title="An association is a lead, not proof" className="mb-6">
       <p>
         A level with a high rate and a small q-value is worth checking first; it does not prove that level caused the
-        contamination. Jars from one run or one culture are not independent, so the p- and q-values are too small and
-        rank leads rather than measure certainty. Where two levels hold the same jars the data cannot tell them apart.
+        contamination.
       </p>
+      {/* The rest folds away so that, on a phone, the leads are not pushed below the first screen. */}
+      <details className="mt-1">
+        <summary className="cursor-pointer text-sm text-accent underline">Why the figures overstate certainty</summary>
+        <p className="mt-1">
+          Jars from one run or one culture are not independent, so the p- and q-values are too small and rank leads
+          rather than measure certainty. Where two levels hold the same jars the data cannot tell them apart.
+        </p>
+      </details>
     </Notice>
   );
 }
